@@ -1,0 +1,2 @@
+/** Graph algorithms: orders, ancestry, separation, equivalence classes, orientation rules, latent projection. */
+package dev.touchstone.core.graph.algorithms;

@@ -1,0 +1,84 @@
+package dev.touchstone.harness.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+import java.io.PrintWriter;
+
+/**
+ * The {@code touchstone} command line. Exit status: 0 done, 2 bad input or usage (one line
+ * {@code error: …}), 1 anything else. A stack trace is printed only with {@code --debug}.
+ */
+@Command(name = "touchstone",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionInfo.Provider.class,
+        description = "Benchmark causal-discovery learners against known truth.",
+        subcommands = {CommandLine.HelpCommand.class})
+public final class Main implements Runnable {
+
+    /** Exit status for a finished command (failed runs are counted in the output, not here). */
+    public static final int DONE = 0;
+    /** Exit status for an unexpected failure. */
+    public static final int FAILED = 1;
+    /** Exit status for bad input or usage. */
+    public static final int BAD_INPUT = 2;
+
+    @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
+            description = "Print stack traces for errors.")
+    boolean debug;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    public static void main(String[] args) {
+        System.exit(execute(args, new PrintWriter(System.out, true), new PrintWriter(System.err, true)));
+    }
+
+    /** Runs the command line with these arguments and streams; returns the exit status. */
+    public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+        Main main = new Main();
+        CommandLine cl = new CommandLine(main);
+        cl.setOut(out);
+        cl.setErr(err);
+        cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
+            boolean debug = parseResult.matchedOption("--debug") != null
+                    || hasDebug(parseResult);
+            if (debug) {
+                ex.printStackTrace(err);
+            }
+            if (ex instanceof UsageException) {
+                err.println("error: " + ex.getMessage());
+                return BAD_INPUT;
+            }
+            err.println("error: " + (ex.getMessage() == null ? ex.toString() : ex.getMessage()));
+            return FAILED;
+        });
+        cl.setParameterExceptionHandler((ex, a) -> {
+            err.println("error: " + ex.getMessage());
+            err.println("(see 'touchstone " + commandName(ex.getCommandLine()) + "--help')");
+            return BAD_INPUT;
+        });
+        return cl.execute(args);
+    }
+
+    private static boolean hasDebug(CommandLine.ParseResult pr) {
+        for (CommandLine.ParseResult r = pr; r != null; r = r.subcommand()) {
+            if (r.matchedOption("--debug") != null) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static String commandName(CommandLine cl) {
+        String name = cl.getCommandSpec().qualifiedName(" ");
+        String rest = name.startsWith("touchstone") ? name.substring("touchstone".length()).trim() : name;
+        return rest.isEmpty() ? "" : rest + " ";
+    }
+}

@@ -1,0 +1,74 @@
+package dev.touchstone.harness.cli;
+
+import picocli.CommandLine;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.Properties;
+
+/** The tool's version and the git commit it was built from, recorded at build time. */
+public final class VersionInfo {
+
+    private static final VersionInfo CURRENT = load();
+
+    private final String version;
+    private final String commit;
+    private final boolean dirty;
+
+    private VersionInfo(String version, String commit, boolean dirty) {
+        this.version = version;
+        this.commit = commit;
+        this.dirty = dirty;
+    }
+
+    public static VersionInfo current() {
+        return CURRENT;
+    }
+
+    public String version() {
+        return version;
+    }
+
+    /** The abbreviated commit id, or "unknown" when built outside a git checkout. */
+    public String commit() {
+        return commit;
+    }
+
+    /** Whether the working tree had uncommitted changes when built. */
+    public boolean dirty() {
+        return dirty;
+    }
+
+    @Override
+    public String toString() {
+        return "touchstone " + version + " (commit " + commit + (dirty ? ", with uncommitted changes" : "") + ")";
+    }
+
+    private static VersionInfo load() {
+        Properties p = new Properties();
+        try (InputStream in = VersionInfo.class.getResourceAsStream("/touchstone-version.properties")) {
+            if (in != null) {
+                p.load(in);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return new VersionInfo(clean(p.getProperty("version")), clean(p.getProperty("commit")),
+                "true".equals(p.getProperty("dirty")));
+    }
+
+    private static String clean(String s) {
+        return s == null || s.isBlank() || s.startsWith("${") ? "unknown" : s;
+    }
+
+    /** Supplies {@code --version} to picocli. */
+    public static final class Provider implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {CURRENT.toString(),
+                    "Java " + System.getProperty("java.version") + ", " + System.getProperty("os.name") + " "
+                            + System.getProperty("os.arch")};
+        }
+    }
+}

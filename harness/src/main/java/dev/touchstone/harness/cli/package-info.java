@@ -1,0 +1,2 @@
+/** The touchstone command line: verbs, exit codes and error style. */
+package dev.touchstone.harness.cli;
