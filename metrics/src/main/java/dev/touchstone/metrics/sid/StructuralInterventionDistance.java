@@ -3,7 +3,6 @@ package dev.touchstone.metrics.sid;
 import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.Mark;
-import dev.touchstone.core.graph.algorithms.Ancestry;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -108,17 +107,49 @@ public final class StructuralInterventionDistance {
         if (!trueDag.names().equals(estimate.names())) {
             throw new IllegalArgumentException("SID needs the true DAG and the estimate over the same variables in the same order");
         }
-        if (!trueDag.isFullyDirected() || !Ancestry.isAcyclic(trueDag)) {
-            throw new IllegalArgumentException("SID needs a true DAG (all edges directed, no cycle)");
+        if (!trueDag.isFullyDirected()) {
+            throw new IllegalArgumentException("SID needs a true DAG, but the truth has edges that are not directed");
         }
-        for (Edge e : estimate.edges()) {
-            if (!e.isDirected() && !e.isUndirected()) {
-                throw new IllegalArgumentException("SID is defined for DAG and CPDAG estimates; the edge "
-                        + estimate.name(e.a()) + " " + e.atA().word() + "-" + e.atB().word() + " "
-                        + estimate.name(e.b()) + " is neither directed nor undirected");
+        for (int v = 0; v < estimate.size(); v++) {
+            for (int k = 0; k < estimate.degree(v); k++) {
+                Mark here = estimate.markHere(v, k);
+                Mark there = estimate.markThere(v, k);
+                if (here == Mark.CIRCLE || there == Mark.CIRCLE || here == Mark.ARROW && there == Mark.ARROW) {
+                    Edge e = estimate.edge(v, estimate.neighbour(v, k)).canonical();
+                    throw new IllegalArgumentException("SID is defined for DAG and CPDAG estimates; the edge "
+                            + estimate.name(e.a()) + " " + e.atA().word() + "-" + e.atB().word() + " "
+                            + estimate.name(e.b()) + " is neither directed nor undirected");
+                }
             }
         }
-        return new StructuralInterventionDistance(trueDag).distance(estimate);
+        StructuralInterventionDistance sid = new StructuralInterventionDistance(trueDag);
+        if (!sid.acyclic()) {
+            throw new IllegalArgumentException("SID needs a true DAG, but the truth's directed edges form a cycle");
+        }
+        return sid.distance(estimate);
+    }
+
+    /** Kahn's algorithm over the children lists (Kahn 1962). */
+    private boolean acyclic() {
+        int[] indegree = new int[p];
+        for (int k = 0; k < ch.length; k++) {
+            indegree[ch[k]]++;
+        }
+        int tail = 0;
+        for (int v = 0; v < p; v++) {
+            if (indegree[v] == 0) {
+                queue[tail++] = v;
+            }
+        }
+        for (int head = 0; head < tail; head++) {
+            int v = queue[head];
+            for (int k = chOff[v]; k < chOff[v + 1]; k++) {
+                if (--indegree[ch[k]] == 0) {
+                    queue[tail++] = ch[k];
+                }
+            }
+        }
+        return tail == p;
     }
 
     private SidResult distance(Graph h) {
