@@ -109,6 +109,11 @@ final class NodeWiseModel implements StructuralModel {
         return variables[v];
     }
 
+    /** The mechanism of graph index {@code v} (for tests and inspection in this package). */
+    NodeMechanism mechanism(int v) {
+        return mechanisms[v];
+    }
+
     /** Whether columns are standardised after generation. */
     boolean standardises() {
         return centre != null;
