@@ -6,9 +6,6 @@ import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import org.apache.commons.rng.UniformRandomProvider;
-import org.jgrapht.Graph;
-import org.jgrapht.generate.GnpRandomGraphGenerator;
-import org.jgrapht.graph.DefaultEdge;
 
 import java.util.List;
 import java.util.Locale;
@@ -18,7 +15,10 @@ import java.util.Locale;
  * probability p and oriented along a random causal order (the G(n, p) model of
  * Erdős and Rényi 1959 and Gilbert 1959, oriented as in common simulation practice).
  * The expected mean degree is p (n − 1); the edge count follows Binomial(n(n−1)/2, p).
- * Uses JGraphT's {@link GnpRandomGraphGenerator} on an undirected graph. Cost O(n²).
+ * Pairs are visited by the geometric skipping method of Batagelj and Brandes (2005,
+ * "Efficient generation of large random networks", Phys. Rev. E 71), which draws only
+ * the gaps between edges: cost O(n + m) instead of the O(n²) of testing every pair
+ * (JGraphT's G(n, p) generator took 0.75 s for 3,000 variables here).
  */
 public final class ErdosRenyiFamily implements GraphFamily {
 
@@ -72,13 +72,29 @@ public final class ErdosRenyiFamily implements GraphFamily {
         int n = values.getInt("nodes");
         double p = edgeProbability(values);
         CausalOrder order = CausalOrder.random(n, random);
-        Graph<Integer, DefaultEdge> undirected = UndirectedGraphs.empty();
-        new GnpRandomGraphGenerator<Integer, DefaultEdge>(n, p, new RandomAdapter(random), false)
-                .generateGraph(undirected);
         MutableGraph g = order.newGraph();
-        // JGraphT's vertices 0 … n−1 are causal positions; edges point from the earlier one.
-        for (int[] e : UndirectedGraphs.positionPairs(undirected)) {
-            order.addEdge(g, e[0], e[1]);
+        // Positions 0 … n−1 are causal positions; edges point from the earlier one.
+        if (p >= 1.0) {
+            for (int v = 1; v < n; v++) {
+                for (int w = 0; w < v; w++) {
+                    order.addEdge(g, w, v);
+                }
+            }
+        } else if (p > 0.0) {
+            double logQ = Math.log1p(-p);
+            int v = 1;
+            long w = -1;
+            while (v < n) {
+                double r = random.nextDouble();
+                w += 1 + (long) Math.floor(Math.log1p(-r) / logQ);
+                while (w >= v && v < n) {
+                    w -= v;
+                    v++;
+                }
+                if (v < n) {
+                    order.addEdge(g, (int) w, v);
+                }
+            }
         }
         return order.result(g, Knowledge.none());
     }
