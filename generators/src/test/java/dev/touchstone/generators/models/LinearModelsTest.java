@@ -75,6 +75,40 @@ class LinearModelsTest {
     }
 
     @Test
+    @DisplayName("local Markov property on seeded random DAGs: each variable is uncorrelated with its non-descendants given its parents in the exact covariance (Lauritzen 1996, Thm 3.27)")
+    void localMarkovProperty() {
+        ModelKind k = ModelKinds.byId("linear-gaussian");
+        for (int rep = 0; rep < 20; rep++) {
+            Graph dag = randomDag(9, 3, 500 + rep);
+            CovarianceMatrix c = k.draw(dag, k.resolve(Map.of()), Seeds.random(600 + rep)).populationCovariance()
+                    .orElseThrow();
+            for (int v = 0; v < dag.size(); v++) {
+                boolean[] desc = dev.touchstone.core.graph.algorithms.Ancestry.descendants(dag, v);
+                int[] pa = dag.parents(v);
+                for (int w = 0; w < dag.size(); w++) {
+                    final int other = w;
+                    if (w == v || desc[w] || java.util.Arrays.stream(pa).anyMatch(q -> q == other)) {
+                        continue;
+                    }
+                    int[] idx = new int[pa.length + 2];
+                    idx[0] = v;
+                    idx[1] = w;
+                    System.arraycopy(pa, 0, idx, 2, pa.length);
+                    RealMatrix sub = MatrixUtils.createRealMatrix(idx.length, idx.length);
+                    for (int a = 0; a < idx.length; a++) {
+                        for (int b = 0; b < idx.length; b++) {
+                            sub.setEntry(a, b, c.get(idx[a], idx[b]));
+                        }
+                    }
+                    RealMatrix prec = MatrixUtils.inverse(sub);
+                    double partial = -prec.getEntry(0, 1) / Math.sqrt(prec.getEntry(0, 0) * prec.getEntry(1, 1));
+                    assertEquals(0.0, partial, 1e-9, dag.name(v) + " vs " + dag.name(w));
+                }
+            }
+        }
+    }
+
+    @Test
     @DisplayName("standardised linear model: exact covariance is the correlation matrix, sample variances near 1")
     void standardisedCovariance() {
         Graph dag = randomDag(10, 2, 21);
