@@ -3,6 +3,7 @@ package dev.touchstone.reports.charts;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.XYPlot;
@@ -138,6 +139,10 @@ public final class LineChart {
             LogAxis log = new LogAxis(label);
             log.setBase(10);
             log.setSmallestValue(1e-6);
+            // Whole powers of ten only, printed as plain numbers (100, 1000) rather than 10^2.1.
+            log.setTickUnit(new NumberTickUnit(1.0));
+            log.setNumberFormatOverride(new java.text.DecimalFormat("0.######"));
+            log.setMinorTickMarksVisible(true);
             a = log;
         } else {
             NumberAxis n = new NumberAxis(label);
