@@ -31,7 +31,7 @@ import java.util.concurrent.TimeUnit;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SampleTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
-@Warmup(iterations = 3, time = 1)
+@Warmup(iterations = 5, time = 2)
 @Measurement(iterations = 5, time = 1)
 @Fork(1)
 public class CpdagBenchmark {
