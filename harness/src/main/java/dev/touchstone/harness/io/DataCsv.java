@@ -150,6 +150,7 @@ public final class DataCsv {
                 }
             }
             done = new Pass(file, names, fixed);
+            System.arraycopy(first.firstNonNumber, 0, done.firstNonNumber, 0, p);
             done.run();
         }
         return done.result(declared);

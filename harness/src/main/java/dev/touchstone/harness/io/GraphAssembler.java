@@ -158,6 +158,8 @@ final class GraphAssembler {
         }
         List<Integer> cycle = new ArrayList<>(walk.subList(at.get(v), walk.size()));
         java.util.Collections.reverse(cycle);
+        // Start at the smallest index so the message does not depend on where the walk began.
+        java.util.Collections.rotate(cycle, -cycle.indexOf(java.util.Collections.min(cycle)));
         StringBuilder sb = new StringBuilder();
         for (int u : cycle) {
             sb.append(g.name(u)).append(" -> ");

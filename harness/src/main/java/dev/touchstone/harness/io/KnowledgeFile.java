@@ -113,8 +113,14 @@ public final class KnowledgeFile {
             }
         }
 
+        /** An empty value ({@code required:} with nothing after it) means no entries. */
+        private boolean isEmptyValue() throws IOException {
+            JsonToken t = parser.currentToken();
+            return t == JsonToken.VALUE_NULL || (t == JsonToken.VALUE_STRING && parser.getText().isEmpty());
+        }
+
         private void pairs(String field, boolean required) throws IOException {
-            if (parser.currentToken() == JsonToken.VALUE_NULL) {
+            if (isEmptyValue()) {
                 return;
             }
             if (parser.currentToken() != JsonToken.START_ARRAY) {
@@ -143,7 +149,7 @@ public final class KnowledgeFile {
         }
 
         private void tiers() throws IOException {
-            if (parser.currentToken() == JsonToken.VALUE_NULL) {
+            if (isEmptyValue()) {
                 return;
             }
             if (parser.currentToken() != JsonToken.START_ARRAY) {
