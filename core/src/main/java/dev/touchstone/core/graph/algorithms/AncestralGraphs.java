@@ -18,7 +18,7 @@ import java.util.Arrays;
  * search per bidirected edge, O(|E_bidirected| · (|V| + |E|)) in all.
  *
  * <p>Maximal (their §3.7): every pair of non-adjacent variables is m-separated by some set;
- * equivalently no inducing path joins two non-adjacent variables (their Theorem 4.2). For
+ * equivalently no inducing path joins two non-adjacent variables (their inducing-path theorem; numbering here and below from memory). For
  * an ancestral graph it is enough to test the set {@code ant({a, b}) \ {a, b}}: if an
  * m-connecting path given that set exists, every non-end vertex on it is anterior to
  * {@code a} or {@code b} and so must be a collider that is an ancestor of an end, which is

@@ -19,7 +19,7 @@ import java.util.List;
  * iff {@code a} is an ancestor of {@code b} in the DAG, an arrow otherwise. No path is
  * enumerated: with {@code A = an({a, b})}, an inducing path exists iff {@code a} and
  * {@code b} are d-connected given {@code Z = (A ∩ observed) \ {a, b}}. (If an inducing path
- * exists no set separates them, Richardson and Spirtes 2002, Theorem 4.2. Conversely every
+ * exists no set separates them, Richardson and Spirtes 2002, inducing-path theorem. Conversely every
  * vertex of a path d-connecting given {@code Z} lies in {@code an({a, b} ∪ Z) = A}, so its
  * observed non-end vertices, lying in {@code Z}, must be colliders, and its colliders lie in
  * {@code an(Z) ⊆ A}: it is an inducing path.) Because every relevant path lies in

@@ -48,7 +48,7 @@ public final class PagRules {
         this.rules = Collections.unmodifiableSet(EnumSet.copyOf(rules));
     }
 
-    /** All of R1–R10: complete when selection bias may be present (Zhang 2008, Theorem 4). */
+    /** All of R1–R10: complete when selection bias may be present (Zhang 2008, main theorem; from memory). */
     public static PagRules complete() {
         return new PagRules(EnumSet.allOf(Rule.class));
     }

@@ -67,7 +67,7 @@ class AncestralGraphsTest {
     }
 
     @Test
-    @DisplayName("an ancestral graph with an inducing path between non-adjacent variables is not maximal (Richardson and Spirtes 2002, §3.7, Thm 4.2; reasoned out)")
+    @DisplayName("an ancestral graph with an inducing path between non-adjacent variables is not maximal (Richardson and Spirtes 2002, §3.7 and the inducing-path theorem; reasoned out)")
     void notMaximal() {
         // A <-> B <-> C <-> D: B and C are colliders on it; B is an ancestor of D (B --> D)
         // and C of A (C --> A), so the path is inducing and no set separates A from D. The

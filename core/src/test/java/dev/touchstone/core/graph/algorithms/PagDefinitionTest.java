@@ -48,7 +48,7 @@ class PagDefinitionTest {
     }
 
     @Test
-    @DisplayName("selection allowed: complete rules R1–R10 = invariant marks of the class including undirected MAGs (Zhang 2008, Theorem 4)")
+    @DisplayName("selection allowed: complete rules R1–R10 = invariant marks of the class including undirected MAGs (Zhang 2008, main theorem; from memory)")
     void completeRulesEqualDefinitionWithUndirectedMembers() {
         int checked = 0;
         int withUndirectedMembers = 0;
