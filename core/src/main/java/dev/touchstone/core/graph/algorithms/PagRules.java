@@ -45,7 +45,9 @@ public final class PagRules {
     private final Set<Rule> rules;
 
     private PagRules(Set<Rule> rules) {
-        this.rules = Collections.unmodifiableSet(EnumSet.copyOf(rules));
+        EnumSet<Rule> copy = EnumSet.noneOf(Rule.class);
+        copy.addAll(rules);
+        this.rules = Collections.unmodifiableSet(copy);
     }
 
     /** All of R1–R10: complete when selection bias may be present (Zhang 2008, main theorem; from memory). */
@@ -58,6 +60,13 @@ public final class PagRules {
         return new PagRules(EnumSet.complementOf(EnumSet.of(Rule.R5, Rule.R6, Rule.R7)));
     }
 
+    /** Only the rules named (R0 is always available through {@link #orientColliders}). */
+    public static PagRules only(Rule... chosen) {
+        EnumSet<Rule> kept = EnumSet.noneOf(Rule.class);
+        kept.addAll(java.util.Arrays.asList(chosen));
+        return new PagRules(kept);
+    }
+
     /** The same rules without the ones named (for ablation studies and tests). */
     public PagRules without(Rule... dropped) {
         EnumSet<Rule> kept = EnumSet.noneOf(Rule.class);
@@ -65,7 +74,7 @@ public final class PagRules {
         for (Rule r : dropped) {
             kept.remove(r);
         }
-        return kept.isEmpty() ? new PagRules(EnumSet.noneOf(Rule.class)) : new PagRules(kept);
+        return new PagRules(kept);
     }
 
     /** The rules applied by {@link #close}. */
