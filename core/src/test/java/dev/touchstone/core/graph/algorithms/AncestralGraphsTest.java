@@ -4,7 +4,7 @@ import dev.touchstone.core.graph.Graph;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
-import static dev.touchstone.core.graph.algorithms.TestGraphs.graph;
+import static dev.touchstone.core.graph.algorithms.PagTestGraphs.graph;
 import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;

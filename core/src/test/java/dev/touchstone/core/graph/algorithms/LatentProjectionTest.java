@@ -11,8 +11,8 @@ import org.junit.jupiter.api.Test;
 import java.util.Arrays;
 import java.util.List;
 
-import static dev.touchstone.core.graph.algorithms.TestGraphs.graph;
-import static dev.touchstone.core.graph.algorithms.TestGraphs.hidden;
+import static dev.touchstone.core.graph.algorithms.PagTestGraphs.graph;
+import static dev.touchstone.core.graph.algorithms.PagTestGraphs.hidden;
 import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

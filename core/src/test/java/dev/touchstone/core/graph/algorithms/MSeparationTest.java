@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 
 import java.util.stream.IntStream;
 
-import static dev.touchstone.core.graph.algorithms.TestGraphs.graph;
+import static dev.touchstone.core.graph.algorithms.PagTestGraphs.graph;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;

@@ -7,7 +7,7 @@ import org.junit.jupiter.api.Test;
 
 import java.util.Set;
 
-import static dev.touchstone.core.graph.algorithms.TestGraphs.graph;
+import static dev.touchstone.core.graph.algorithms.PagTestGraphs.graph;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 /**

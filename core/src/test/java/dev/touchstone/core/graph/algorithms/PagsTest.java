@@ -14,8 +14,8 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-import static dev.touchstone.core.graph.algorithms.TestGraphs.graph;
-import static dev.touchstone.core.graph.algorithms.TestGraphs.hidden;
+import static dev.touchstone.core.graph.algorithms.PagTestGraphs.graph;
+import static dev.touchstone.core.graph.algorithms.PagTestGraphs.hidden;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -187,7 +187,7 @@ class PagsTest {
                     }
                 }
             }
-            Graph equivalentDag = TestGraphs.reverseCoveredEdges(dag, 6, Seeds.random(seed + 1));
+            Graph equivalentDag = PagTestGraphs.reverseCoveredEdges(dag, 6, Seeds.random(seed + 1));
             Graph equivalentMag = LatentProjection.mag(equivalentDag);
             if (!equivalentMag.equals(mag)) {
                 differentMags++;
@@ -213,7 +213,7 @@ class PagsTest {
             for (Edge e : dag.edges()) {
                 assertTrue(pag.adjacent(e.a(), e.b()));
             }
-            Graph other = TestGraphs.reverseCoveredEdges(dag, 5, Seeds.random(seed * 31));
+            Graph other = PagTestGraphs.reverseCoveredEdges(dag, 5, Seeds.random(seed * 31));
             if (!other.equals(dag)) {
                 distinctDags++;
             }

@@ -1,87 +1,81 @@
 package dev.touchstone.core.graph.algorithms;
 
 import dev.touchstone.core.graph.Graph;
-import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
 
 import java.util.Arrays;
 import java.util.List;
 
-/** Graphs written the way the papers draw them, e.g. {@code graph("A B C", "A --> B; B <-> C")}. */
+/** Hand-written graphs for tests, in a compact text form, and the two reference networks. */
 final class TestGraphs {
 
     private TestGraphs() {
     }
 
-    /** A graph over the space-separated names with the {@code ;}-separated edges. */
-    static Graph graph(String names, String edges) {
-        return hidden(names, "", edges);
+    /**
+     * A graph over the space-separated {@code names} with the comma-separated edges
+     * {@code a->b}, {@code a<-b}, {@code a--b} (undirected), {@code a<>b} (bidirected) or
+     * {@code ao>b} (circle at a).
+     */
+    static Graph of(String names, String edges) {
+        return mutable(names, edges).freeze();
     }
 
-    /** As {@link #graph}, with the space-separated {@code hidden} names flagged hidden. */
-    static Graph hidden(String names, String hidden, String edges) {
-        List<String> list = Arrays.asList(names.trim().split("\\s+"));
-        MutableGraph g = Graph.builder(list);
-        for (String h : hidden.trim().isEmpty() ? new String[0] : hidden.trim().split("\\s+")) {
-            g.setHidden(list.indexOf(h), true);
+    static MutableGraph mutable(String names, String edges) {
+        MutableGraph g = Graph.builder(List.of(names.trim().split("\\s+")));
+        if (edges.isBlank()) {
+            return g;
         }
-        for (String edge : edges.split(";")) {
-            if (edge.isBlank()) {
-                continue;
-            }
-            String[] parts = edge.trim().split("\\s+");
-            if (parts.length != 3 || parts[1].length() != 3) {
-                throw new IllegalArgumentException("bad edge '" + edge + "'");
-            }
-            int a = g.indexOf(parts[0]);
-            int b = g.indexOf(parts[2]);
-            if (a < 0 || b < 0) {
-                throw new IllegalArgumentException("unknown name in '" + edge + "'");
-            }
-            g.addEdge(a, b, mark(parts[1].charAt(0)), mark(parts[1].charAt(2)));
-        }
-        return g.freeze();
-    }
-
-    private static Mark mark(char c) {
-        switch (c) {
-            case '<':
-            case '>':
-                return Mark.ARROW;
-            case 'o':
-                return Mark.CIRCLE;
-            case '-':
-                return Mark.TAIL;
-            default:
-                throw new IllegalArgumentException("bad mark '" + c + "'");
-        }
-    }
-
-    /** Reverses covered edges at random (Chickering 1995: each reversal keeps the Markov equivalence class). */
-    static Graph reverseCoveredEdges(Graph dag, int steps, org.apache.commons.rng.UniformRandomProvider rng) {
-        MutableGraph g = dag.toMutable();
-        for (int s = 0; s < steps; s++) {
-            Graph now = g.freeze();
-            java.util.List<int[]> covered = new java.util.ArrayList<>();
-            for (dev.touchstone.core.graph.Edge e : now.edges()) {
-                int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
-                int to = e.other(from);
-                // from → to is covered when pa(to) = pa(from) ∪ {from}.
-                int[] paTo = now.parents(to);
-                int[] paFrom = now.parents(from);
-                int[] expected = Arrays.copyOf(paFrom, paFrom.length + 1);
-                expected[paFrom.length] = from;
-                Arrays.sort(expected);
-                if (Arrays.equals(paTo, expected)) {
-                    covered.add(new int[] {from, to});
+        for (String e : edges.split(",")) {
+            String t = e.trim();
+            String[] ops = {"->", "<-", "--", "<>", "o>"};
+            boolean done = false;
+            for (String op : ops) {
+                int i = t.indexOf(op);
+                if (i > 0) {
+                    int a = index(g, t.substring(0, i).trim());
+                    int b = index(g, t.substring(i + 2).trim());
+                    switch (op) {
+                        case "->": g.addDirected(a, b); break;
+                        case "<-": g.addDirected(b, a); break;
+                        case "--": g.addUndirected(a, b); break;
+                        case "<>": g.addBidirected(a, b); break;
+                        default: g.addEdge(a, b, dev.touchstone.core.graph.Mark.CIRCLE, dev.touchstone.core.graph.Mark.ARROW);
+                    }
+                    done = true;
+                    break;
                 }
             }
-            if (covered.isEmpty()) {
-                break;
+            if (!done) {
+                throw new IllegalArgumentException("cannot read edge '" + t + "'");
             }
-            int[] pick = covered.get(rng.nextInt(covered.size()));
-            g.orient(pick[1], pick[0]);
         }
-        return g.freeze();
+        return g;
+    }
+
+    private static int index(MutableGraph g, String name) {
+        int i = g.indexOf(name);
+        if (i < 0) {
+            throw new IllegalArgumentException("unknown name '" + name + "' among " + g.names());
+        }
+        return i;
+    }
+
+    /** Pearl's sprinkler network (Pearl 2000, Causality, ch. 1). */
+    static Graph sprinkler() {
+        return of("season sprinkler rain wet slippery",
+                "season->sprinkler, season->rain, sprinkler->wet, rain->wet, wet->slippery");
+    }
+
+    /** The chest-clinic network (Lauritzen and Spiegelhalter 1988), 8 arcs. */
+    static Graph asia() {
+        return of("asia tub smoke lung bronc either xray dysp",
+                "asia->tub, smoke->lung, smoke->bronc, tub->either, lung->either, either->xray,"
+                        + " either->dysp, bronc->dysp");
+    }
+
+    /** Shorthand for an int array. */
+    static int[] ints(int... v) {
+        return Arrays.copyOf(v, v.length);
     }
 }
