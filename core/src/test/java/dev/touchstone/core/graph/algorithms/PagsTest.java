@@ -224,6 +224,32 @@ class PagsTest {
         assertNotEquals(Pags.of(graph("A B C", "A --> B; B --> C")), Pags.of(graph("A B C", "A --> B; C --> B")));
     }
 
+    @Test
+    @DisplayName("nothing hidden: PAG and CPDAG agree (every DAG of the class is a MAG of the class, Meek 1995 and Zhang 2008): CPDAG-undirected edges are o-o, PAG tails and arrows match the CPDAG's directed edges")
+    void agreesWithCpdag() {
+        int tails = 0;
+        for (long seed = 1; seed <= 200; seed++) {
+            Graph dag = RandomDags.erdosRenyi(10 + (int) (seed % 20), 2 + seed % 3, seed);
+            Graph pag = Pags.of(dag);
+            Graph cpdag = Cpdags.of(dag);
+            assertEquals(cpdag.edgeCount(), pag.edgeCount());
+            for (Edge e : cpdag.edges()) {
+                Edge p = pag.edge(e.a(), e.b());
+                if (e.isUndirected()) {
+                    assertEquals(new Edge(e.a(), e.b(), Mark.CIRCLE, Mark.CIRCLE), p, "seed " + seed);
+                } else {
+                    for (int end : new int[] {e.a(), e.b()}) {
+                        if (p.markAt(end) != Mark.CIRCLE) {
+                            assertEquals(e.markAt(end), p.markAt(end), "seed " + seed + " on " + e);
+                            tails += p.markAt(end) == Mark.TAIL ? 1 : 0;
+                        }
+                    }
+                }
+            }
+        }
+        assertTrue(tails > 200, "tails " + tails);
+    }
+
     /**
      * The PAG as FCI would orient it with a d-separation oracle: R0 and R4 decided by
      * membership in a separating set, here {@code (an({x, y}) ∩ observed) \ {x, y}}, which
