@@ -4,8 +4,10 @@ import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
 
 import java.util.ArrayDeque;
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.EnumSet;
+import java.util.HashSet;
 import java.util.Set;
 
 /**
@@ -63,7 +65,7 @@ public final class PagRules {
     /** Only the rules named (R0 is always available through {@link #orientColliders}). */
     public static PagRules only(Rule... chosen) {
         EnumSet<Rule> kept = EnumSet.noneOf(Rule.class);
-        kept.addAll(java.util.Arrays.asList(chosen));
+        kept.addAll(Arrays.asList(chosen));
         return new PagRules(kept);
     }
 
@@ -558,12 +560,10 @@ public final class PagRules {
             path[0] = start;
             path[1] = second;
             int length = extend(2, target, circles, avoid, notAdjacentToLast);
+            // extend() clears its own marks on failure; on success the path found is cleared here.
             for (int i = 0; i < Math.max(length, 2); i++) {
                 onPath[path[i]] = false;
             }
-            // extend() clears its own marks on failure; the loop above clears the path found.
-            onPath[start] = false;
-            onPath[second] = false;
             return length;
         }
 
@@ -601,7 +601,7 @@ public final class PagRules {
          * of edge states times degree.
          */
         private boolean walkReaches(int start, int second, int target, boolean circles, int avoid) {
-            java.util.HashSet<Long> seen = new java.util.HashSet<>();
+            HashSet<Long> seen = new HashSet<>();
             ArrayDeque<long[]> queue = new ArrayDeque<>();
             queue.add(new long[] {start, second});
             seen.add((long) start * n + second);

@@ -36,7 +36,10 @@ public interface SeparationInfo {
     /** Membership in the separating sets a learner recorded. */
     @FunctionalInterface
     interface SeparatingSets {
-        /** Whether {@code v} is in the set recorded as separating {@code x} and {@code y}. */
+        /**
+         * Whether {@code v} is in the set recorded as separating {@code x} and {@code y}; called
+         * only for non-adjacent pairs, with {@code x} and {@code y} in either order.
+         */
         boolean contains(int x, int y, int v);
     }
 

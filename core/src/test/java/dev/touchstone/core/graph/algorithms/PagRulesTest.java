@@ -1,7 +1,12 @@
 package dev.touchstone.core.graph.algorithms;
 
+import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
+import dev.touchstone.core.random.Seeds;
+import dev.touchstone.core.testing.RandomDags;
+import org.apache.commons.rng.UniformRandomProvider;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -164,6 +169,44 @@ class PagRulesTest {
         MutableGraph chain = g.toMutable();
         PagRules.complete().orientColliders(chain, SeparationInfo.fromSeparatingSets((x, y, v) -> v == b));
         assertEquals(g, chain.freeze());
+    }
+
+    @Test
+    @DisplayName("with arbitrary (inconsistent) collider answers, as finite-sample tests give, the rules terminate and only replace circles (design of PagRules)")
+    void inconsistentInformation() {
+        for (long seed = 1; seed <= 100; seed++) {
+            UniformRandomProvider rng = Seeds.random(seed);
+            Graph skeleton = RandomDags.erdosRenyi(15, 3.5, seed);
+            MutableGraph g = Graph.builder(skeleton.names());
+            for (Edge e : skeleton.edges()) {
+                dev.touchstone.core.graph.Mark[] marks = Mark.values();
+                g.addEdge(e.a(), e.b(), rng.nextInt(4) == 0 ? marks[rng.nextInt(3)] : Mark.CIRCLE,
+                        rng.nextInt(4) == 0 ? marks[rng.nextInt(3)] : Mark.CIRCLE);
+            }
+            Graph before = g.freeze();
+            long salt = rng.nextLong();
+            SeparationInfo coin = new SeparationInfo() {
+                @Override
+                public boolean unshieldedCollider(int a, int b, int c) {
+                    return ((a * 31L + b * 17L + c + salt) & 4) == 0;
+                }
+
+                @Override
+                public boolean discriminatedCollider(int theta, int a, int b, int c) {
+                    return ((theta * 7L + b * 13L + c + salt) & 8) == 0;
+                }
+            };
+            PagRules.complete().orient(g, coin);
+            Graph after = g.freeze();
+            for (Edge e : before.edges()) {
+                for (int end : new int[] {e.a(), e.b()}) {
+                    if (e.markAt(end) != Mark.CIRCLE) {
+                        assertEquals(e.markAt(end), after.markAt(end, e.other(end)), "seed " + seed);
+                    }
+                }
+            }
+            assertEquals(before.edgeCount(), after.edgeCount());
+        }
     }
 
     @Test
