@@ -179,7 +179,7 @@ class PagRulesTest {
             Graph skeleton = RandomDags.erdosRenyi(15, 3.5, seed);
             MutableGraph g = Graph.builder(skeleton.names());
             for (Edge e : skeleton.edges()) {
-                dev.touchstone.core.graph.Mark[] marks = Mark.values();
+                Mark[] marks = Mark.values();
                 g.addEdge(e.a(), e.b(), rng.nextInt(4) == 0 ? marks[rng.nextInt(3)] : Mark.CIRCLE,
                         rng.nextInt(4) == 0 ? marks[rng.nextInt(3)] : Mark.CIRCLE);
             }
