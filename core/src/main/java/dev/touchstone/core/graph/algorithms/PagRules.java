@@ -7,7 +7,6 @@ import java.util.ArrayDeque;
 import java.util.Arrays;
 import java.util.Collections;
 import java.util.EnumSet;
-import java.util.HashSet;
 import java.util.Set;
 
 /**
@@ -113,6 +112,16 @@ public final class PagRules {
         private final MutableGraph g;
         private final SeparationInfo info;
         private final int n;
+        // The rules never change adjacencies, so a sorted snapshot of them, with a mirror of
+        // the marks kept in step with g, makes adjacency and mark look-ups O(log degree).
+        private final int[][] nbr;
+        private final Mark[][] marks;
+        private final int[] offset;
+        private final int[] stateFrom;
+        private final int[] stateSeen;
+        private final int[] reachSeen;
+        private final int[] stateQueue;
+        private int stamp;
         private final boolean[] onPath;
         private final int[] path;
         private int changes;
@@ -121,21 +130,53 @@ public final class PagRules {
             this.g = g;
             this.info = info;
             this.n = g.size();
+            this.nbr = new int[n][];
+            this.marks = new Mark[n][];
+            this.offset = new int[n + 1];
+            for (int v = 0; v < n; v++) {
+                int[] row = g.neighbours(v);
+                Arrays.sort(row);
+                nbr[v] = row;
+                marks[v] = new Mark[row.length];
+                for (int k = 0; k < row.length; k++) {
+                    marks[v][k] = g.markAt(v, row[k]);
+                }
+                offset[v + 1] = offset[v] + row.length;
+            }
+            int states = offset[n];
+            this.stateFrom = new int[states];
+            for (int v = 0; v < n; v++) {
+                Arrays.fill(stateFrom, offset[v], offset[v + 1], v);
+            }
+            this.stateSeen = new int[states];
+            this.stateQueue = new int[states];
+            this.reachSeen = new int[n];
             this.onPath = new boolean[n];
             this.path = new int[n];
         }
 
+        private int slot(int v, int w) {
+            return Arrays.binarySearch(nbr[v], w);
+        }
+
+        private boolean adjacent(int a, int b) {
+            return slot(a, b) >= 0;
+        }
+
         private Mark m(int at, int other) {
-            return g.markAt(at, other);
+            int k = slot(at, other);
+            return k < 0 ? null : marks[at][k];
         }
 
         private boolean fits(int at, int other, Mark mark) {
-            Mark now = g.markAt(at, other);
+            Mark now = m(at, other);
             return now == Mark.CIRCLE || now == mark;
         }
 
         private boolean set(int at, int other, Mark mark) {
-            if (g.markAt(at, other) == Mark.CIRCLE) {
+            int k = slot(at, other);
+            if (marks[at][k] == Mark.CIRCLE) {
+                marks[at][k] = mark;
                 g.setMark(at, other, mark);
                 changes++;
                 return true;
@@ -211,12 +252,12 @@ public final class PagRules {
 
         void r0() {
             for (int b = 0; b < n; b++) {
-                int[] nb = g.neighbours(b);
+                int[] nb = nbr[b];
                 for (int i = 0; i < nb.length; i++) {
                     for (int j = i + 1; j < nb.length; j++) {
                         int a = nb[i];
                         int c = nb[j];
-                        if (!g.adjacent(a, c) && info.unshieldedCollider(a, b, c)) {
+                        if (!adjacent(a, c) && info.unshieldedCollider(a, b, c)) {
                             set(b, a, Mark.ARROW, b, c, Mark.ARROW);
                         }
                     }
@@ -228,13 +269,13 @@ public final class PagRules {
         boolean r1() {
             boolean changed = false;
             for (int b = 0; b < n; b++) {
-                int[] nb = g.neighbours(b);
+                int[] nb = nbr[b];
                 for (int a : nb) {
                     if (m(b, a) != Mark.ARROW) {
                         continue;
                     }
                     for (int c : nb) {
-                        if (c != a && m(b, c) == Mark.CIRCLE && !g.adjacent(a, c)) {
+                        if (c != a && m(b, c) == Mark.CIRCLE && !adjacent(a, c)) {
                             changed |= set(b, c, Mark.TAIL, c, b, Mark.ARROW);
                         }
                     }
@@ -247,13 +288,13 @@ public final class PagRules {
         boolean r2() {
             boolean changed = false;
             for (int c = 0; c < n; c++) {
-                int[] nc = g.neighbours(c);
+                int[] nc = nbr[c].clone();
                 for (int a : nc) {
                     if (m(c, a) != Mark.CIRCLE) {
                         continue;
                     }
                     for (int b : nc) {
-                        if (b == a || m(c, b) != Mark.ARROW || !g.adjacent(a, b) || m(b, a) != Mark.ARROW) {
+                        if (b == a || m(c, b) != Mark.ARROW || !adjacent(a, b) || m(b, a) != Mark.ARROW) {
                             continue;
                         }
                         if (m(a, b) == Mark.TAIL || m(b, c) == Mark.TAIL) {
@@ -270,7 +311,7 @@ public final class PagRules {
         boolean r3() {
             boolean changed = false;
             for (int b = 0; b < n; b++) {
-                int[] nb = g.neighbours(b);
+                int[] nb = nbr[b];
                 for (int t : nb) {
                     if (m(b, t) != Mark.CIRCLE) {
                         continue;
@@ -278,13 +319,13 @@ public final class PagRules {
                     found:
                     for (int i = 0; i < nb.length; i++) {
                         int a = nb[i];
-                        if (a == t || m(b, a) != Mark.ARROW || !g.adjacent(a, t) || m(t, a) != Mark.CIRCLE) {
+                        if (a == t || m(b, a) != Mark.ARROW || !adjacent(a, t) || m(t, a) != Mark.CIRCLE) {
                             continue;
                         }
                         for (int j = i + 1; j < nb.length; j++) {
                             int c = nb[j];
-                            if (c == t || m(b, c) != Mark.ARROW || !g.adjacent(c, t) || m(t, c) != Mark.CIRCLE
-                                    || g.adjacent(a, c)) {
+                            if (c == t || m(b, c) != Mark.ARROW || !adjacent(c, t) || m(t, c) != Mark.CIRCLE
+                                    || adjacent(a, c)) {
                                 continue;
                             }
                             changed |= set(b, t, Mark.ARROW);
@@ -303,14 +344,14 @@ public final class PagRules {
         boolean r4() {
             boolean changed = false;
             for (int b = 0; b < n; b++) {
-                int[] nb = g.neighbours(b);
+                int[] nb = nbr[b];
                 for (int c : nb) {
                     if (m(b, c) != Mark.CIRCLE) {
                         continue;
                     }
                     for (int a : nb) {
                         // a is the last collider before b: a ←* b (arrow at a) and a → c.
-                        if (a == c || m(a, b) != Mark.ARROW || !g.adjacent(a, c) || !directed(a, c)) {
+                        if (a == c || m(a, b) != Mark.ARROW || !adjacent(a, c) || !directed(a, c)) {
                             continue;
                         }
                         int theta = discriminatingStart(a, b, c);
@@ -349,13 +390,13 @@ public final class PagRules {
             queue.add(a);
             while (!queue.isEmpty()) {
                 int v = queue.poll();
-                int[] nv = g.neighbours(v);
+                int[] nv = nbr[v];
                 for (int w : nv) {
                     // v must be a collider: the edge from its predecessor w is into v.
                     if (seen[w] || m(v, w) != Mark.ARROW) {
                         continue;
                     }
-                    if (!g.adjacent(w, c)) {
+                    if (!adjacent(w, c)) {
                         return w;
                     }
                     if (directed(w, c) && m(w, v) == Mark.ARROW) {
@@ -374,12 +415,12 @@ public final class PagRules {
         boolean r5() {
             boolean changed = false;
             for (int a = 0; a < n; a++) {
-                for (int b : g.neighbours(a)) {
+                for (int b : nbr[a]) {
                     if (!circleCircle(a, b)) {
                         continue;
                     }
-                    for (int c : g.neighbours(a)) {
-                        if (c == b || !circleCircle(a, c) || g.adjacent(b, c)) {
+                    for (int c : nbr[a]) {
+                        if (c == b || !circleCircle(a, c) || adjacent(b, c)) {
                             continue;
                         }
                         int length = uncoveredPath(a, c, b, true, -1, a);
@@ -401,7 +442,7 @@ public final class PagRules {
         boolean r6() {
             boolean changed = false;
             for (int b = 0; b < n; b++) {
-                int[] nb = g.neighbours(b);
+                int[] nb = nbr[b];
                 for (int a : nb) {
                     if (m(a, b) != Mark.TAIL || m(b, a) != Mark.TAIL) {
                         continue;
@@ -420,13 +461,13 @@ public final class PagRules {
         boolean r7() {
             boolean changed = false;
             for (int b = 0; b < n; b++) {
-                int[] nb = g.neighbours(b);
+                int[] nb = nbr[b];
                 for (int a : nb) {
                     if (m(a, b) != Mark.TAIL || m(b, a) != Mark.CIRCLE) {
                         continue;
                     }
                     for (int c : nb) {
-                        if (c != a && m(b, c) == Mark.CIRCLE && !g.adjacent(a, c)) {
+                        if (c != a && m(b, c) == Mark.CIRCLE && !adjacent(a, c)) {
                             changed |= set(b, c, Mark.TAIL);
                         }
                     }
@@ -443,13 +484,13 @@ public final class PagRules {
         boolean r8() {
             boolean changed = false;
             for (int a = 0; a < n; a++) {
-                int[] na = g.neighbours(a);
+                int[] na = nbr[a];
                 for (int c : na) {
                     if (!circleArrow(a, c)) {
                         continue;
                     }
                     for (int b : na) {
-                        if (b != c && m(a, b) == Mark.TAIL && m(b, a) != Mark.TAIL && g.adjacent(b, c)
+                        if (b != c && m(a, b) == Mark.TAIL && m(b, a) != Mark.TAIL && adjacent(b, c)
                                 && directed(b, c)) {
                             changed |= set(a, c, Mark.TAIL);
                             break;
@@ -464,13 +505,13 @@ public final class PagRules {
         boolean r9() {
             boolean changed = false;
             for (int a = 0; a < n; a++) {
-                int[] na = g.neighbours(a);
+                int[] na = nbr[a];
                 for (int c : na) {
                     if (!circleArrow(a, c)) {
                         continue;
                     }
                     for (int b : na) {
-                        if (b != c && !g.adjacent(b, c) && potentiallyDirected(a, b)
+                        if (b != c && !adjacent(b, c) && potentiallyDirected(a, b)
                                 && uncoveredPath(a, b, c, false, -1, -1) > 0) {
                             changed |= set(a, c, Mark.TAIL);
                             break;
@@ -489,12 +530,12 @@ public final class PagRules {
         boolean r10() {
             boolean changed = false;
             for (int a = 0; a < n; a++) {
-                int[] na = g.neighbours(a);
+                int[] na = nbr[a];
                 for (int c : na) {
                     if (!circleArrow(a, c)) {
                         continue;
                     }
-                    int[] nc = g.neighbours(c);
+                    int[] nc = nbr[c].clone();
                     int parents = 0;
                     for (int p : nc) {
                         if (directed(p, c)) {
@@ -513,9 +554,10 @@ public final class PagRules {
                             continue;
                         }
                         int found = -1;
+                        walk(a, first, false, c);
                         for (int i = 0; i < parents && found != -2; i++) {
                             int p = nc[i];
-                            if (p == first || uncoveredPath(a, first, p, false, c, -1) > 0) {
+                            if (p == first || (reachSeen[p] == stamp && exactPath(a, first, p, false, c, -1) > 0)) {
                                 found = found == -1 ? p : -2;
                             }
                         }
@@ -527,7 +569,7 @@ public final class PagRules {
                     found:
                     for (int i = 0; i < count; i++) {
                         for (int j = i + 1; j < count; j++) {
-                            if (!g.adjacent(firsts[i], firsts[j])
+                            if (!adjacent(firsts[i], firsts[j])
                                     && (reached[i] == -2 || reached[j] == -2 || reached[i] != reached[j])) {
                                 changed |= set(a, c, Mark.TAIL);
                                 break found;
@@ -552,9 +594,13 @@ public final class PagRules {
             if (second == target || second == avoid) {
                 return 0;
             }
-            if (!walkReaches(start, second, target, circles, avoid)) {
-                return 0;
-            }
+            walk(start, second, circles, avoid);
+            return reachSeen[target] == stamp ? exactPath(start, second, target, circles, avoid, notAdjacentToLast) : 0;
+        }
+
+        /** The depth-first search of {@link #uncoveredPath}, without the walk filter. */
+        private int exactPath(int start, int second, int target, boolean circles, int avoid,
+                              int notAdjacentToLast) {
             onPath[start] = true;
             onPath[second] = true;
             path[0] = start;
@@ -570,15 +616,15 @@ public final class PagRules {
         private int extend(int depth, int target, boolean circles, int avoid, int notAdjacentToLast) {
             int prev = path[depth - 2];
             int cur = path[depth - 1];
-            for (int next : g.neighbours(cur)) {
-                if (onPath[next] || next == avoid || g.adjacent(prev, next)) {
+            for (int next : nbr[cur]) {
+                if (onPath[next] || next == avoid || adjacent(prev, next)) {
                     continue;
                 }
                 if (circles ? !circleCircle(cur, next) : !potentiallyDirected(cur, next)) {
                     continue;
                 }
                 if (next == target) {
-                    if (notAdjacentToLast >= 0 && g.adjacent(cur, notAdjacentToLast)) {
+                    if (notAdjacentToLast >= 0 && adjacent(cur, notAdjacentToLast)) {
                         continue;
                     }
                     path[depth] = next;
@@ -596,35 +642,40 @@ public final class PagRules {
         }
 
         /**
-         * A necessary condition for {@link #uncoveredPath}: reachability of {@code target} over
-         * (previous, current) edge states, which allows repeated vertices. Linear in the number
-         * of edge states times degree.
+         * A necessary condition for {@link #uncoveredPath}: marks (with the current {@link
+         * #stamp} in {@link #reachSeen}) every vertex that ends a walk {@code <start, second,
+         * ...>} obeying the same local conditions, repeated vertices allowed. A breadth-first
+         * search over directed edge states, O(Σ deg(v)²).
          */
-        private boolean walkReaches(int start, int second, int target, boolean circles, int avoid) {
-            HashSet<Long> seen = new HashSet<>();
-            ArrayDeque<long[]> queue = new ArrayDeque<>();
-            queue.add(new long[] {start, second});
-            seen.add((long) start * n + second);
-            while (!queue.isEmpty()) {
-                long[] s = queue.poll();
-                int prev = (int) s[0];
-                int cur = (int) s[1];
-                for (int next : g.neighbours(cur)) {
-                    if (next == prev || next == start || next == avoid || g.adjacent(prev, next)) {
+        private void walk(int start, int second, boolean circles, int avoid) {
+            stamp++;
+            reachSeen[second] = stamp;
+            int head = 0;
+            int tail = 0;
+            int first = offset[start] + slot(start, second);
+            stateSeen[first] = stamp;
+            stateQueue[tail++] = first;
+            while (head < tail) {
+                int s = stateQueue[head++];
+                int prev = stateFrom[s];
+                int cur = nbr[prev][s - offset[prev]];
+                int[] row = nbr[cur];
+                for (int k = 0; k < row.length; k++) {
+                    int next = row[k];
+                    if (next == prev || next == start || next == avoid || adjacent(prev, next)) {
                         continue;
                     }
                     if (circles ? !circleCircle(cur, next) : !potentiallyDirected(cur, next)) {
                         continue;
                     }
-                    if (next == target) {
-                        return true;
-                    }
-                    if (seen.add((long) cur * n + next)) {
-                        queue.add(new long[] {cur, next});
+                    reachSeen[next] = stamp;
+                    int t = offset[cur] + k;
+                    if (stateSeen[t] != stamp) {
+                        stateSeen[t] = stamp;
+                        stateQueue[tail++] = t;
                     }
                 }
             }
-            return false;
         }
     }
 }
