@@ -117,6 +117,7 @@ public final class PagRules {
         private final int[][] nbr;
         private final Mark[][] marks;
         private final int[] offset;
+        private final long[][] adjacency;
         private final int[] stateFrom;
         private final int[] stateSeen;
         private final int[] reachSeen;
@@ -143,6 +144,15 @@ public final class PagRules {
                 }
                 offset[v + 1] = offset[v] + row.length;
             }
+            // An adjacency bit matrix where it stays small (≤ 2 MB); binary search otherwise.
+            this.adjacency = n <= 4096 ? new long[n][(n + 63) >>> 6] : null;
+            if (adjacency != null) {
+                for (int v = 0; v < n; v++) {
+                    for (int w : nbr[v]) {
+                        adjacency[v][w >>> 6] |= 1L << w;
+                    }
+                }
+            }
             int states = offset[n];
             this.stateFrom = new int[states];
             for (int v = 0; v < n; v++) {
@@ -160,6 +170,9 @@ public final class PagRules {
         }
 
         private boolean adjacent(int a, int b) {
+            if (adjacency != null) {
+                return (adjacency[a][b >>> 6] & (1L << b)) != 0;
+            }
             return slot(a, b) >= 0;
         }
 
