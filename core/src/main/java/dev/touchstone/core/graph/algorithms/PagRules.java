@@ -32,7 +32,10 @@ import java.util.Set;
  * it knows (for example an arrowhead at the later variable of two tiers) before or between
  * calls, and the rules respect them.
  *
- * <p>Cost: one pass of R0–R3 or R8 is O(Σ deg(v)²) adjacency tests; R4 runs one
+ * <p>Cost: each call first takes a sorted snapshot of the adjacencies (the rules never add
+ * or remove edges) with a mirror of the marks, and an adjacency bit matrix for up to 4096
+ * variables, so adjacency tests are O(1) and mark look-ups O(log degree). One pass of
+ * R0–R3 or R8 is O(Σ deg(v)²) adjacency tests; R4 runs one
  * breadth-first search, O(|V| + |E|), per candidate triple; R5, R9 and R10 search for
  * uncovered paths with a depth-first search over simple paths, which is exponential in the
  * worst case but, after a linear-time walk-reachability filter, cheap on sparse graphs.
