@@ -1,2 +1,2 @@
-/** JMH benchmarks of the graph algorithms in core (latent projection, PAG construction). */
+/** JMH benchmarks of the DAG and CPDAG algorithms of core (d-separation, DAG to CPDAG, Meek's rules, DAG extension). */
 package dev.touchstone.benchmarks.graph;
