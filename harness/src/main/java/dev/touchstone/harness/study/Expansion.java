@@ -58,17 +58,19 @@ public final class Expansion {
     private List<TruthSetting> truths(Study study) {
         List<List<TruthSetting.Choice>> perSection = new ArrayList<>();
         for (ComponentSpec c : study.truth()) {
-            TruthCatalog.Kind kind = catalog.section(c.section()).kind(c.kind());
             List<TruthSetting.Choice> choices = new ArrayList<>();
-            for (Map<String, Object> given : product(c.axes())) {
-                ParameterValues values;
-                try {
-                    values = ParameterValues.resolve(c.section() + " " + c.kind(), kind.parameters(), given);
-                } catch (ParameterException e) {
-                    throw new StudyException(placeOf(study, "truth", c.section()), "truth." + c.section() + "."
-                            + e.parameter(), e.getMessage());
+            for (String kindName : c.kinds()) {
+                TruthCatalog.Kind kind = catalog.section(c.section()).kind(kindName);
+                for (Map<String, Object> given : product(c.axes())) {
+                    ParameterValues values;
+                    try {
+                        values = ParameterValues.resolve(c.section() + " " + kindName, kind.parameters(), given);
+                    } catch (ParameterException e) {
+                        throw new StudyException(placeOf(study, "truth", c.section()), "truth." + c.section() + "."
+                                + e.parameter(), e.getMessage());
+                    }
+                    choices.add(new TruthSetting.Choice(c.section(), kindName, values, given));
                 }
-                choices.add(new TruthSetting.Choice(c.section(), c.kind(), values, given));
             }
             perSection.add(choices);
         }

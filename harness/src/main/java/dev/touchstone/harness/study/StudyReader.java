@@ -88,7 +88,7 @@ public final class StudyReader {
                             "this field is required (allowed " + section.kindField() + ": "
                                     + String.join(", ", section.kindNames()) + ")");
                 }
-                out.add(new ComponentSpec(section.name(), section.defaultKind(), Map.of()));
+                out.add(new ComponentSpec(section.name(), section.kindField(), section.defaultKind(), Map.of()));
                 continue;
             }
             out.add(component(section, s));
@@ -106,39 +106,59 @@ public final class StudyReader {
             ParameterSpec spec = kind.parameter(section.shorthand());
             Map<String, List<Object>> axes = new LinkedHashMap<>();
             axes.put(spec.name(), axis(node, spec));
-            return new ComponentSpec(section.name(), kind.name(), axes);
+            return new ComponentSpec(section.name(), section.kindField(), kind.name(), axes);
         }
         Node kindNode = node.get(section.kindField());
-        String kindName;
+        List<String> kindNames = new ArrayList<>();
+        List<Node> kindNodes = new ArrayList<>();
         if (kindNode == null) {
             if (section.defaultKind() == null) {
                 throw new StudyException(node.place(), path(node, section.kindField()),
                         "this field is required (allowed: " + String.join(", ", section.kindNames()) + ")");
             }
-            kindName = section.defaultKind();
+            kindNames.add(section.defaultKind());
+            kindNodes.add(node);
         } else {
-            kindName = text(kindNode);
-        }
-        TruthCatalog.Kind kind = section.kind(kindName);
-        if (kind == null) {
-            throw StudyException.at(kindNode, "unknown " + section.name() + " " + section.kindField() + " '"
-                    + kindName + "' (allowed: " + String.join(", ", section.kindNames()) + ")");
+            for (Node k : kindNode.isList() ? kindNode.items() : List.of(kindNode)) {
+                String name = text(k);
+                if (section.kind(name) == null) {
+                    throw StudyException.at(k, "unknown " + section.name() + " " + section.kindField() + " '"
+                            + name + "' (allowed: " + String.join(", ", section.kindNames()) + ")");
+                }
+                if (kindNames.contains(name)) {
+                    throw StudyException.at(k, "the " + section.kindField() + " " + name + " is listed twice");
+                }
+                kindNames.add(name);
+                kindNodes.add(k);
+            }
+            if (kindNames.isEmpty()) {
+                throw StudyException.at(kindNode, "an empty list gives no " + section.kindField() + " (allowed: "
+                        + String.join(", ", section.kindNames()) + ")");
+            }
         }
         Map<String, Node> flat = new LinkedHashMap<>();
         Map<String, Node.Place> keyPlaces = new LinkedHashMap<>();
         flatten(node, "", flat, keyPlaces, section.kindField());
         Map<String, List<Object>> axes = new LinkedHashMap<>();
         for (Map.Entry<String, Node> e : flat.entrySet()) {
-            ParameterSpec spec = kind.parameter(e.getKey());
-            if (spec == null) {
-                List<String> allowed = kind.parameters().stream().map(ParameterSpec::name).toList();
-                throw new StudyException(keyPlaces.get(e.getKey()), e.getValue().path(), "unknown parameter '"
-                        + e.getKey() + "' of " + section.name() + " " + kindName + " (allowed: "
-                        + (allowed.isEmpty() ? "none" : String.join(", ", allowed)) + ")");
+            List<Object> values = null;
+            for (String kindName : kindNames) {
+                TruthCatalog.Kind kind = section.kind(kindName);
+                ParameterSpec spec = kind.parameter(e.getKey());
+                if (spec == null) {
+                    List<String> allowed = kind.parameters().stream().map(ParameterSpec::name).toList();
+                    throw new StudyException(keyPlaces.get(e.getKey()), e.getValue().path(), "unknown parameter '"
+                            + e.getKey() + "' of " + section.name() + " " + kindName + " (allowed: "
+                            + (allowed.isEmpty() ? "none" : String.join(", ", allowed)) + ")");
+                }
+                List<Object> v = axis(e.getValue(), spec);
+                if (values == null) {
+                    values = v;
+                }
             }
-            axes.put(spec.name(), axis(e.getValue(), spec));
+            axes.put(e.getKey(), values);
         }
-        return new ComponentSpec(section.name(), kindName, axes);
+        return new ComponentSpec(section.name(), section.kindField(), kindNames, axes);
     }
 
     /** Nested maps name grouped parameters: {@code edge_weight: {low: 0.5}} is the parameter {@code edge_weight_low}. */
