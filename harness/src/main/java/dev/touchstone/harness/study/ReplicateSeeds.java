@@ -12,7 +12,18 @@ import dev.touchstone.core.random.Seeds;
  */
 public record ReplicateSeeds(long studySeed, TruthSetting truth, int replicate) {
 
-    /** The seed of a truth section's random draw. */
+    /**
+     * The one seed a whole replicate is drawn from by the generators (which derive graph,
+     * hidden, model, missingness and data streams from it by purpose). It depends on the
+     * study seed, the first truth section (the graph) and the replicate number only, so
+     * settings that differ in model, hidden or missing options share the replicate's graph
+     * (common random numbers: comparisons across those axes are paired too).
+     */
+    public long replicateSeed() {
+        return Seeds.derive(studySeed, "replicate", truth.canonicalUpTo(1), replicate);
+    }
+
+    /** The seed of a truth section's random draw (for simulators that seed each section separately). */
     public long section(String name) {
         int upTo = -1;
         for (int i = 0; i < truth.choices().size(); i++) {
