@@ -102,12 +102,12 @@ class CommandLearnerTest {
                 "\"" + pids + "\", \"{data}\", \"{output}\"", "json"));
         Path out = tmp.resolve("hanging");
         long t0 = System.nanoTime();
-        StudyRunner.Outcome o = run(c, "hang", "limits: {seconds: 1.5}\n", out);
+        StudyRunner.Outcome o = run(c, "hang", "limits: {seconds: 4}\n", out);
         double seconds = (System.nanoTime() - t0) / 1e9;
         assertEquals(2, o.count(RunStatus.TIMEOUT));
         assertTrue(seconds < 30, "killed at the limit, not after the script's 120 s: " + seconds);
         String runs = Files.readString(out.resolve("runs.csv"));
-        assertTrue(runs.contains("timeout,time limit of 1.5 s reached (external command hang was killed at the time limit)"), runs);
+        assertTrue(runs.contains("timeout,time limit of 4.0 s reached (external command hang was killed at the time limit)"), runs);
         for (String pid : Files.readString(pids).trim().split("\\s+")) {
             var h = ProcessHandle.of(Long.parseLong(pid));
             assertFalse(h.isPresent() && h.get().isAlive(), "process " + pid + " was left behind");
