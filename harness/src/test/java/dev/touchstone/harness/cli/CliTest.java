@@ -142,6 +142,24 @@ class CliTest {
     }
 
     @Test
+    @DisplayName("simulate writes each replicate's data and truth, the same draw run uses")
+    void simulate() throws IOException {
+        Path out = tmp.resolve("sim");
+        Result r = cli("simulate", ROOT.resolve("scenarios/first-look.yaml").toString(), "--out", out.toString(),
+                "--learners", LEARNERS.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().startsWith("wrote 8 replicates"), r.out());
+        Path one = out.resolve("t1-r3");
+        var data = dev.touchstone.harness.io.DataCsv.read(one.resolve("data.csv")).data();
+        assertEquals(1000, data.rows());
+        assertEquals(10, data.columns());
+        var dag = GraphJson.read(one.resolve("dag.json"));
+        assertEquals(data.names(), dag.names());
+        assertTrue(Files.exists(one.resolve("cpdag.json")));
+        assertEquals(9, Files.readAllLines(out.resolve("replicates.csv")).size());
+    }
+
+    @Test
     @DisplayName("usage errors give exit 2")
     void usage() {
         assertEquals(2, cli("run").status());
