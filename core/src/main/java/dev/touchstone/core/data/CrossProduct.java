@@ -4,23 +4,24 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.concurrent.atomic.AtomicReference;
 
 /**
- * The upper triangle of X'X for a row-major n × p matrix X, by a cache-blocked,
- * register-tiled loop that HotSpot's C2 compiler turns into SIMD code.
+ * The upper triangle of X'X for a row-major n × p matrix X, by a cache-blocked loop that
+ * HotSpot's C2 compiler turns into SIMD code.
  *
- * <p>The layout follows the blocking of Goto and van de Geijn (2008, "Anatomy of
- * high-performance matrix multiplication", ACM TOMS 34(3)): the columns are cut into
- * blocks of {@value #COLUMN_BLOCK}, the rows into panels of {@value #ROW_PANEL}, so that a
- * panel of X for one column block (≈ 512 kB) stays in the level-2 cache while every
- * quadruple of output rows sweeps it. The innermost loop updates four output rows with
- * four rows of X at once (16 multiply-adds per column, 8 loads and 4 stores), which keeps
- * the loop arithmetic-bound rather than memory-bound; it is written as a plain loop over
- * arrays with one index so that C2's superword pass vectorises it.
+ * <p>The blocking follows Goto and van de Geijn (2008, "Anatomy of high-performance matrix
+ * multiplication", ACM TOMS 34(3)): the columns are cut into blocks of
+ * {@value #COLUMN_BLOCK} and the rows into panels of {@value #ROW_PANEL}, so that the panel
+ * of X for one column block (≈ 512 kB) stays in the level-2 cache while every output row
+ * sweeps it, and the output segment being updated (2 kB) stays in the level-1 cache. The
+ * innermost loop adds four rows of X at once into one output row
+ * ({@code c[j] += a0·x0[j] + a1·x1[j] + a2·x2[j] + a3·x3[j]}): four multiply-adds per store
+ * instead of the naive loop's one, in a loop shape (one array written, one index) that C2's
+ * superword pass vectorises. Tiles updating two or four output rows at once were tried and
+ * measured slower on Java 17: C2 did not vectorise them (see {@code docs/dev/data-io.md}).
  *
  * <p>Every output entry is owned by exactly one task and accumulated in a fixed order
  * (panels in order, rows in quadruples in order, each quadruple's four products summed
  * left to right before being added), so the result is bitwise the same for any number of
- * threads. Cost: n·p·(p+1) multiply-adds (about n·p² flops for the triangle), O(p²) memory
- * for the output, no other allocation.
+ * threads. Cost: about n·p² flops for the triangle, O(p²) memory for the output.
  */
 final class CrossProduct {
 
@@ -112,47 +113,8 @@ final class CrossProduct {
         int iEnd = task[3];
         for (int pc = 0; pc < n; pc += ROW_PANEL) {
             int pe = Math.min(n, pc + ROW_PANEL);
-            int i = iStart;
-            for (; i + 4 <= iEnd; i += 4) {
-                int js = Math.max(jc, i);
-                quad(x, out[i], out[i + 1], out[i + 2], out[i + 3], i, js, je, pc, pe);
-            }
-            for (; i < iEnd; i++) {
+            for (int i = iStart; i < iEnd; i++) {
                 single(x, out[i], i, Math.max(jc, i), je, pc, pe);
-            }
-        }
-    }
-
-    /** Four output rows i … i+3, columns [js, je), rows of X [pc, pe). */
-    private static void quad(double[][] x, double[] c0, double[] c1, double[] c2, double[] c3,
-                             int i, int js, int je, int pc, int pe) {
-        int r = pc;
-        for (; r + 4 <= pe; r += 4) {
-            double[] x0 = x[r];
-            double[] x1 = x[r + 1];
-            double[] x2 = x[r + 2];
-            double[] x3 = x[r + 3];
-            double a0 = x0[i], a1 = x1[i], a2 = x2[i], a3 = x3[i];
-            double b0 = x0[i + 1], b1 = x1[i + 1], b2 = x2[i + 1], b3 = x3[i + 1];
-            double d0 = x0[i + 2], d1 = x1[i + 2], d2 = x2[i + 2], d3 = x3[i + 2];
-            double f0 = x0[i + 3], f1 = x1[i + 3], f2 = x2[i + 3], f3 = x3[i + 3];
-            for (int j = js; j < je; j++) {
-                double v0 = x0[j], v1 = x1[j], v2 = x2[j], v3 = x3[j];
-                c0[j] += a0 * v0 + a1 * v1 + a2 * v2 + a3 * v3;
-                c1[j] += b0 * v0 + b1 * v1 + b2 * v2 + b3 * v3;
-                c2[j] += d0 * v0 + d1 * v1 + d2 * v2 + d3 * v3;
-                c3[j] += f0 * v0 + f1 * v1 + f2 * v2 + f3 * v3;
-            }
-        }
-        for (; r < pe; r++) {
-            double[] x0 = x[r];
-            double a0 = x0[i], b0 = x0[i + 1], d0 = x0[i + 2], f0 = x0[i + 3];
-            for (int j = js; j < je; j++) {
-                double v0 = x0[j];
-                c0[j] += a0 * v0;
-                c1[j] += b0 * v0;
-                c2[j] += d0 * v0;
-                c3[j] += f0 * v0;
             }
         }
     }

@@ -14,7 +14,7 @@ import java.util.List;
  * (the additive noise model of Hoyer et al. 2009, "Nonlinear causal discovery with
  * additive noise models", NeurIPS; Peters et al. 2014, JMLR 15). Each f_v is drawn from one
  * class: {@code sigmoid} (a sum of scaled tanh of each parent), {@code polynomial} (a sum of
- * random quadratics of each parent), {@code neural-net} (a one-hidden-layer network of all
+ * random quadratics of each parent, clipped to ±3 sd), {@code neural-net} (a one-hidden-layer network of all
  * parents with sigmoid units), {@code fourier} (random Fourier features, a stand-in for a
  * Gaussian-process draw with an RBF kernel: Rahimi and Recht 2007, NeurIPS), or
  * {@code mixed} (each variable picks one of the four).

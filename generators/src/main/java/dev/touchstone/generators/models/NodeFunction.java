@@ -7,13 +7,20 @@ import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 /**
  * A random function of a variable's (standardised) parents, for the additive noise model.
  * The classes, each drawn with the model's weight range for its coefficients:
- * sigmoid Σ_k w_k tanh(a_k z_k); polynomial Σ_k (b_k z_k + c_k (z_k² − 1)); neural-net
+ * sigmoid Σ_k w_k tanh(a_k z_k); polynomial Σ_k (b_k x_k + c_k (x_k² − 1)) with x_k = z_k clipped
+ * to ±3; neural-net
  * Σ_h v_h σ(Σ_k W_hk z_k + c_h) with the logistic σ; fourier √(2/D) Σ_d a_d cos(ω_d·z + b_d)
  * with ω_d ~ N(0, I/ℓ²), b_d ~ U(0, 2π), a_d ~ N(0, 1), whose covariance approaches the RBF
  * kernel exp(−|z − z'|²/(2ℓ²)) as D grows (Rahimi and Recht 2007, "Random features for
  * large-scale kernel machines", NeurIPS).
  */
 interface NodeFunction {
+
+    /**
+     * Polynomials act on the standardised parent clipped to ±3: chained quadratics otherwise
+     * give ever heavier tails, whose variance a pilot draw cannot pin down.
+     */
+    double POLYNOMIAL_CLIP = 3.0;
 
     double apply(double[] z);
 
@@ -45,7 +52,8 @@ interface NodeFunction {
                 return z -> {
                     double s = 0;
                     for (int k = 0; k < z.length; k++) {
-                        s += lin[k] * z[k] + quad[k] * (z[k] * z[k] - 1);
+                        double x = Math.max(-POLYNOMIAL_CLIP, Math.min(POLYNOMIAL_CLIP, z[k]));
+                        s += lin[k] * x + quad[k] * (x * x - 1);
                     }
                     return s;
                 };

@@ -18,4 +18,19 @@ interface NodeMechanism {
      * @param stream  this variable's own random stream
      */
     void fill(Object[] columns, int rows, UniformRandomProvider stream);
+
+    /**
+     * A filler of this variable's column block by block, or null when the mechanism only
+     * fills whole columns. The filler allocates the column into {@code columns[node]} and
+     * must be given consecutive row blocks from 0; parents' blocks are filled first.
+     * Sampling every variable block by block keeps the parents' blocks in cache.
+     */
+    default BlockFiller blocks(Object[] columns, int rows, UniformRandomProvider stream) {
+        return null;
+    }
+
+    /** Fills rows [from, to) of one column. */
+    interface BlockFiller {
+        void fill(int from, int to);
+    }
 }

@@ -26,6 +26,9 @@ import java.util.function.Supplier;
  */
 final class NodeWiseModel implements StructuralModel {
 
+    /** Rows per block when every mechanism can fill block by block. */
+    private static final int BLOCK_ROWS = 1024;
+
     private final Graph graph;
     private final String kindId;
     private final Variable[] variables;
@@ -151,10 +154,35 @@ final class NodeWiseModel implements StructuralModel {
     /** The raw columns (no standardisation), by graph index. */
     Object[] fillColumns(int rows, long seed) {
         Object[] columns = new Object[graph.size()];
+        NodeMechanism.BlockFiller[] fillers = new NodeMechanism.BlockFiller[graph.size()];
+        boolean blockwise = true;
         for (int v : topological) {
-            mechanisms[v].fill(columns, rows, Seeds.random(Seeds.derive(seed, "variable", graph.name(v))));
+            fillers[v] = mechanisms[v].blocks(columns, rows, stream(seed, v));
+            if (fillers[v] == null) {
+                blockwise = false;
+                break;
+            }
+        }
+        if (blockwise) {
+            // Row blocks outermost: each block of every parent is still in cache when its
+            // children read it. Streams are consumed in row order, so values do not change.
+            for (int from = 0; from < rows; from += BLOCK_ROWS) {
+                int to = Math.min(rows, from + BLOCK_ROWS);
+                for (int v : topological) {
+                    fillers[v].fill(from, to);
+                }
+            }
+            return columns;
+        }
+        java.util.Arrays.fill(columns, null);
+        for (int v : topological) {
+            mechanisms[v].fill(columns, rows, stream(seed, v));
         }
         return columns;
+    }
+
+    private org.apache.commons.rng.UniformRandomProvider stream(long seed, int v) {
+        return Seeds.random(Seeds.derive(seed, "variable", graph.name(v)));
     }
 
     @Override
