@@ -3,7 +3,6 @@ package dev.touchstone.harness.execution;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.RunStatus;
@@ -31,38 +30,68 @@ public final class JournalCodec {
     public record Line(int run, String coordinates, RunResult result) {
     }
 
-    /** The line's JSON text, without the newline. */
+    /** The line's JSON text, without the newline. Streams with a generator (no tree): a few microseconds per line. */
     public static String write(Line line) {
         RunResult r = line.result();
-        ObjectNode o = JSON.createObjectNode();
-        o.put("key", r.key());
-        o.put("run", line.run());
-        o.put("coordinates", line.coordinates());
-        ObjectNode setting = o.putObject("setting");
-        r.setting().coordinates().forEach(setting::put);
-        o.put("replicate", r.replicate());
-        o.put("configuration", r.configurationId());
-        o.put("learner", r.learnerId());
-        ObjectNode params = o.putObject("parameters");
-        r.parameters().forEach(params::put);
-        o.put("seed", r.seed());
-        o.put("status", r.status().word());
-        o.put("message", r.message());
-        o.put("estimate_class", r.estimateClass() == null ? null : r.estimateClass().word());
-        o.put("scored_against", r.scoredAgainst() == null ? null : r.scoredAgainst().word());
-        ObjectNode metrics = o.putObject("metrics");
-        r.metrics().forEach(metrics::put);
-        ObjectNode t = o.putObject("timings");
-        Timings tm = r.timings();
-        t.put("seconds", tm.seconds());
-        t.put("cpu_seconds", tm.cpuSeconds());
-        t.put("allocated_mb", tm.allocatedMb());
-        t.put("tests", tm.tests());
-        t.put("scores", tm.scores());
-        try {
-            return JSON.writeValueAsString(o);
-        } catch (JsonProcessingException e) {
+        java.io.StringWriter w = new java.io.StringWriter(512);
+        try (com.fasterxml.jackson.core.JsonGenerator g = JSON.getFactory().createGenerator(w)) {
+            g.writeStartObject();
+            g.writeStringField("key", r.key());
+            g.writeNumberField("run", line.run());
+            g.writeStringField("coordinates", line.coordinates());
+            g.writeObjectFieldStart("setting");
+            for (Map.Entry<String, String> e : r.setting().coordinates().entrySet()) {
+                g.writeStringField(e.getKey(), e.getValue());
+            }
+            g.writeEndObject();
+            g.writeNumberField("replicate", r.replicate());
+            g.writeStringField("configuration", r.configurationId());
+            g.writeStringField("learner", r.learnerId());
+            g.writeObjectFieldStart("parameters");
+            for (Map.Entry<String, String> e : r.parameters().entrySet()) {
+                g.writeStringField(e.getKey(), e.getValue());
+            }
+            g.writeEndObject();
+            g.writeNumberField("seed", r.seed());
+            g.writeStringField("status", r.status().word());
+            g.writeStringField("message", r.message());
+            g.writeStringField("estimate_class", r.estimateClass() == null ? null : r.estimateClass().word());
+            g.writeStringField("scored_against", r.scoredAgainst() == null ? null : r.scoredAgainst().word());
+            g.writeObjectFieldStart("metrics");
+            for (Map.Entry<String, Double> e : r.metrics().entrySet()) {
+                number(g, e.getKey(), e.getValue());
+            }
+            g.writeEndObject();
+            g.writeObjectFieldStart("timings");
+            Timings tm = r.timings();
+            number(g, "seconds", tm.seconds());
+            number(g, "cpu_seconds", tm.cpuSeconds());
+            number(g, "allocated_mb", tm.allocatedMb());
+            count(g, "tests", tm.tests());
+            count(g, "scores", tm.scores());
+            g.writeEndObject();
+            g.writeEndObject();
+        } catch (java.io.IOException e) {
             throw new IllegalStateException("a journal line could not be written as JSON", e);
+        }
+        return w.toString();
+    }
+
+    private static void number(com.fasterxml.jackson.core.JsonGenerator g, String name, Double v)
+            throws java.io.IOException {
+        if (v == null) {
+            g.writeNullField(name);
+        } else {
+            g.writeNumberField(name, v);
+        }
+    }
+
+    private static void count(com.fasterxml.jackson.core.JsonGenerator g, String name, Long v)
+            throws java.io.IOException {
+        if (v == null) {
+            g.writeNullField(name);
+        } else {
+            g.writeNumberField(name, v);
         }
     }
 
