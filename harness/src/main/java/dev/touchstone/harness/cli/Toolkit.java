@@ -74,6 +74,17 @@ final class Toolkit {
         }
     }
 
+    /** Writes report.html and report.md for the study in {@code out} (finished or partial) into {@code to}. */
+    Path report(Plan plan, Path out, Path to) {
+        return dev.touchstone.harness.report.StudyReports.write(to, reportData(plan, out));
+    }
+
+    /** The report data of the study in {@code out}, from its journal. */
+    dev.touchstone.reports.ReportData reportData(Plan plan, Path out) {
+        return dev.touchstone.harness.report.ReportFolder.read(out, plan, new GeneratorSimulator(),
+                new MetricsAggregator());
+    }
+
     StudyRunner runner() {
         return new StudyRunner(new GeneratorSimulator(), new MetricsScorer(), new MetricsAggregator());
     }
