@@ -8,11 +8,11 @@ import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.algorithms.Ancestry;
-import dev.touchstone.core.graph.algorithms.Cpdags;
 import dev.touchstone.harness.io.GraphCsv;
 import dev.touchstone.harness.io.GraphJson;
 import dev.touchstone.metrics.scoring.Scorer;
 import dev.touchstone.metrics.truth.Truth;
+import dev.touchstone.metrics.truth.TruthSelection;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -137,20 +137,13 @@ public final class ScoreCommand implements Callable<Integer> {
 
     private Truth truthFor(Graph t, GraphClass estimateClass) {
         boolean isDag = t.isFullyDirected() && Ancestry.topologicalOrder(t) != null;
-        if (isDag && !t.hasHidden()) {
-            switch (estimateClass) {
-                case DAG:
-                    return Truth.of(t, GraphClass.DAG);
-                case CPDAG:
-                    return new Truth(Cpdags.of(t), GraphClass.CPDAG, t);
-                default:
-                    throw new UsageException(truthFile + ": scoring a PAG needs the true PAG; this version cannot "
-                            + "derive it from a DAG yet, so give the true PAG as --truth");
-            }
-        }
         if (isDag) {
-            throw new UsageException(truthFile + ": the true DAG has hidden variables; give the true "
-                    + (estimateClass == GraphClass.DAG ? "MAG" : "PAG") + " over the observed variables as --truth");
+            // A generating DAG (hidden variables flagged) gives the truth of the estimate's class (design §3).
+            try {
+                return TruthSelection.forEstimate(t, estimateClass);
+            } catch (IllegalArgumentException e) {
+                throw new UsageException(truthFile + ": " + e.getMessage());
+            }
         }
         for (Edge e : t.edges()) {
             if (!estimateClass.allows(e)) {

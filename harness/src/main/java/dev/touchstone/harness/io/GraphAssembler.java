@@ -13,7 +13,6 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-
 /**
  * Builds a graph from the parts read from a graph file, with the checks every graph format
  * shares, each failure naming the file and the edge: unknown variable, self-loop, a pair
@@ -166,5 +165,4 @@ final class GraphAssembler {
         }
         return sb.append(g.name(cycle.get(0))).toString();
     }
-
 }

@@ -16,7 +16,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
-
 import java.util.Set;
 
 /**
@@ -164,5 +163,4 @@ public final class GraphJson {
         }
         sb.append(']');
     }
-
 }

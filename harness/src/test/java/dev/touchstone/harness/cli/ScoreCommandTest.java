@@ -88,12 +88,24 @@ class ScoreCommandTest {
         String[] badClass = run("score", "--truth", truth.toString(), "--estimate", truth.toString(), "--as", "tree");
         assertEquals("2", badClass[0]);
         assertTrue(badClass[2].contains("--as: unknown class 'tree' (allowed: dag, cpdag, pag)"), badClass[2]);
-        String[] pag = run("score", "--truth", truth.toString(), "--estimate", truth.toString(), "--as", "pag");
-        assertEquals("2", pag[0]);
-        assertTrue(pag[2].contains("needs the true PAG"), pag[2]);
         Path broken = file("broken.json", "{\"variables\": [\"a\"], \"edges\": [{\"between\": [\"a\", \"b\"], \"marks\": [\"tail\", \"arrow\"]}]}");
         String[] e = run("score", "--truth", broken.toString(), "--estimate", truth.toString());
         assertEquals("2", e[0]);
         assertTrue(e[2].contains("broken.json, edge 1 (a, b): unknown variable 'b'"), e[2]);
+    }
+
+    @Test
+    @DisplayName("a hidden common cause: A <- H -> B with H hidden has the MAG A <-> B and the PAG A o-o B"
+            + " (Richardson and Spirtes 2002; Zhang 2008), so the estimate A o-o B scores SHD 0")
+    void pagEstimateAgainstADagWithAHiddenConfounder() throws IOException {
+        Path truth = file("hidden.json", "{\"variables\": [\"A\", \"B\", \"H\"], \"hidden\": [\"H\"], \"edges\": ["
+                + "{\"between\": [\"H\", \"A\"], \"marks\": [\"tail\", \"arrow\"]},"
+                + "{\"between\": [\"H\", \"B\"], \"marks\": [\"tail\", \"arrow\"]}]}");
+        Path estimate = file("pag.json", "{\"variables\": [\"A\", \"B\"], \"edges\": ["
+                + "{\"between\": [\"A\", \"B\"], \"marks\": [\"circle\", \"circle\"]}]}");
+        String[] r = run("score", "--truth", truth.toString(), "--estimate", estimate.toString(), "--as", "pag");
+        assertEquals("0", r[0], r[2]);
+        assertTrue(r[1].startsWith("estimate as pag, scored against the true pag"), r[1]);
+        assertEquals("0", metric(r[1], "shd"));
     }
 }

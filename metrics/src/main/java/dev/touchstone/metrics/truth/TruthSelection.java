@@ -4,6 +4,8 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.algorithms.Cpdags;
 import dev.touchstone.core.graph.algorithms.GraphChecks;
+import dev.touchstone.core.graph.algorithms.LatentProjection;
+import dev.touchstone.core.graph.algorithms.Pags;
 
 import java.util.Objects;
 
@@ -23,11 +25,11 @@ import java.util.Objects;
  * </table>
  *
  * <p>The CPDAG is built by core's {@link Cpdags#of} (Meek 1995, cross-checked there against
- * Chickering 1995). Cost: O(p + E) for a DAG; the CPDAG costs what core's construction costs.
+ * Chickering 1995). Cost: O(p + E) for a DAG; the other truths cost what core's constructions cost.
  *
- * <p><b>Not finished:</b> the MAG and PAG of a DAG with hidden variables (and the PAG of one
- * without) need core's latent projection and PAG construction, which have not landed yet; those
- * requests are refused with a message saying so rather than approximated.
+ * <p>The MAG is core's {@link LatentProjection#mag} (Richardson and Spirtes 2002) and the PAG
+ * core's {@link Pags#of} (Zhang 2008), both over the observed variables; the SID, defined
+ * against a DAG, is available only when nothing is hidden.
  */
 public final class TruthSelection {
 
@@ -57,8 +59,6 @@ public final class TruthSelection {
      * @throws IllegalArgumentException when the graph is not a DAG, or a DAG or CPDAG truth is
      *                                  asked for while variables are hidden (estimates are over the
      *                                  observed variables only, those truths are not)
-     * @throws UnsupportedOperationException for the MAG and PAG truths that need core's latent
-     *                                  projection, not available yet
      */
     public static Truth as(Graph generatingDag, GraphClass requested) {
         Objects.requireNonNull(generatingDag, "generatingDag");
@@ -76,18 +76,10 @@ public final class TruthSelection {
             case CPDAG:
                 return new Truth(Cpdags.of(generatingDag), GraphClass.CPDAG, generatingDag);
             case MAG:
-                if (!hidden) {
-                    // with nothing hidden the latent projection changes nothing: the MAG is the DAG itself
-                    return new Truth(generatingDag, GraphClass.MAG, generatingDag);
-                }
-                throw notYet("MAG");
+                // with nothing hidden the latent projection is the DAG itself, and SID stays defined
+                return new Truth(LatentProjection.mag(generatingDag), GraphClass.MAG, hidden ? null : generatingDag);
             default:
-                throw notYet("PAG");
+                return new Truth(Pags.of(generatingDag), GraphClass.PAG, hidden ? null : generatingDag);
         }
-    }
-
-    private static UnsupportedOperationException notYet(String what) {
-        return new UnsupportedOperationException("scoring against the true " + what
-                + " is not available yet: it needs core's latent projection and PAG construction");
     }
 }
