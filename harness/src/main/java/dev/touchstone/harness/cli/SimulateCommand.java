@@ -1,6 +1,8 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.algorithms.Cpdags;
+import dev.touchstone.metrics.truth.TruthSelection;
 import dev.touchstone.harness.execution.GeneratorSimulator;
 import dev.touchstone.harness.execution.Replicate;
 import dev.touchstone.harness.execution.StudyRunner;
@@ -28,9 +30,8 @@ import java.util.concurrent.Callable;
  *
  * <p>Layout: {@code DIR/replicates.csv} indexes {@code DIR/t<setting>-r<replicate>/} folders, each
  * with {@code data.csv} (the largest sample size; smaller ones are its first rows),
- * {@code dag.json} and {@code dag.dot} (hidden variables flagged) and, when nothing is
- * hidden, {@code cpdag.json}. The true PAG for hidden variables is not written yet (it
- * needs core's PAG construction, not merged).
+ * {@code dag.json} and {@code dag.dot} (hidden variables flagged), {@code pag.json} (over the
+ * observed variables) and, when nothing is hidden, {@code cpdag.json}, else {@code mag.json}.
  */
 @Command(name = "simulate", description = "Write every replicate's data and truth graphs, without running learners.")
 final class SimulateCommand implements Callable<Integer> {
@@ -73,7 +74,10 @@ final class SimulateCommand implements Callable<Integer> {
                 GraphDot.write(dir.resolve("dag.dot"), rep.trueDag(), "true DAG " + name);
                 if (!rep.trueDag().hasHidden()) {
                     GraphJson.write(dir.resolve("cpdag.json"), Cpdags.of(rep.trueDag()));
+                } else {
+                    GraphJson.write(dir.resolve("mag.json"), TruthSelection.as(rep.trueDag(), GraphClass.MAG).reference());
                 }
+                GraphJson.write(dir.resolve("pag.json"), TruthSelection.as(rep.trueDag(), GraphClass.PAG).reference());
                 index.append(name).append(',').append(t.index()).append(',').append(r).append(',').append(rows)
                         .append(',').append(seeds.replicateSeed()).append(",\"").append(t.label().replace("\"", "'"))
                         .append("\"\n");

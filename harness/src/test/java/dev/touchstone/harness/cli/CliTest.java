@@ -156,6 +156,7 @@ class CliTest {
         var dag = GraphJson.read(one.resolve("dag.json"));
         assertEquals(data.names(), dag.names());
         assertTrue(Files.exists(one.resolve("cpdag.json")));
+        assertTrue(Files.exists(one.resolve("pag.json")));
         assertEquals(9, Files.readAllLines(out.resolve("replicates.csv")).size());
     }
 
