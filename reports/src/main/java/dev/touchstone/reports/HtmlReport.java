@@ -133,7 +133,7 @@ public final class HtmlReport {
                 continue;
             }
             xs.add(x);
-            String panel = without(a.setting(), axis);
+            String panel = without(a.setting(), axis, view.constantCoordinates());
             byPanel.computeIfAbsent(panel, k -> new LinkedHashMap<>())
                     .computeIfAbsent(a.configurationId(), k -> new ArrayList<>())
                     .add(new ChartPoint(x, s.mean(), s.low() == null ? Double.NaN : s.low(),
@@ -364,10 +364,11 @@ public final class HtmlReport {
         page.table(t.build());
     }
 
-    private static String without(Setting s, String coordinate) {
+    /** The setting's label without {@code coordinate} and without coordinates that never vary. */
+    private static String without(Setting s, String coordinate, Set<String> constant) {
         StringBuilder sb = new StringBuilder();
         s.coordinates().forEach((k, v) -> {
-            if (!k.equals(coordinate)) {
+            if (!k.equals(coordinate) && !constant.contains(k)) {
                 if (sb.length() > 0) {
                     sb.append(", ");
                 }

@@ -11,6 +11,11 @@ public final class MarkdownReport {
     private MarkdownReport() {
     }
 
+    /** The headline table alone (each configuration's pooled mean of each metric), in Markdown. */
+    public static String headline(ReportData data) {
+        return MarkdownTable.render(new StudyView(data).headline());
+    }
+
     public static String render(ReportData data) {
         StudyView view = new StudyView(data);
         StringBuilder sb = new StringBuilder();

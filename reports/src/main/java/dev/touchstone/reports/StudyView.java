@@ -88,6 +88,21 @@ final class StudyView {
         return new ArrayList<>(s);
     }
 
+    /** Coordinates with one value over all settings (left out of chart titles; listed under Settings). */
+    Set<String> constantCoordinates() {
+        Map<String, Set<String>> values = new LinkedHashMap<>();
+        for (Setting s : settings()) {
+            s.coordinates().forEach((k, v) -> values.computeIfAbsent(k, x -> new LinkedHashSet<>()).add(v));
+        }
+        Set<String> out = new LinkedHashSet<>();
+        values.forEach((k, v) -> {
+            if (v.size() == 1) {
+                out.add(k);
+            }
+        });
+        return out;
+    }
+
     Map<RunStatus, Integer> statusCounts() {
         Map<RunStatus, Integer> m = new EnumMap<>(RunStatus.class);
         for (RunStatus s : RunStatus.values()) {

@@ -1,0 +1,52 @@
+#!/usr/bin/env Rscript
+# Example Touchstone adapter in R (base R only).
+#
+# Touchstone runs this script as an external command learner (see docs/outside-learners.md):
+#
+#   Rscript correlation_skeleton.R --data DATA.csv --output GRAPH.csv --seed N --threshold T
+#
+# It reads the data set (CSV, header row of variable names, empty cell = missing), joins every
+# pair of variables whose absolute Pearson correlation over the rows complete for that pair
+# exceeds the threshold, and writes the result as a CPDAG of undirected edges in Touchstone's
+# CSV edge-list shape (node_a, node_b, mark_a, mark_b). It is a stand-in for YOUR method:
+# replace learn() with your own search and keep the reading and writing as they are.
+
+args <- commandArgs(trailingOnly = TRUE)
+option <- function(name, default = NULL) {
+  i <- match(paste0("--", name), args)
+  if (is.na(i)) {
+    if (is.null(default)) stop(paste0("missing --", name))
+    return(default)
+  }
+  args[i + 1]
+}
+
+data_file <- option("data")
+output_file <- option("output")
+seed <- as.numeric(option("seed", "0"))
+threshold <- as.numeric(option("threshold", "0.3"))
+set.seed(seed %% .Machine$integer.max)  # use R's generator for any randomness: runs stay reproducible
+
+data <- read.csv(data_file, check.names = FALSE, na.strings = "")
+
+learn <- function(data, threshold) {
+  # Your method goes here. Return a data frame of edges: node_a, node_b, mark_a, mark_b.
+  r <- suppressWarnings(cor(data, use = "pairwise.complete.obs"))
+  r[is.na(r)] <- 0
+  names <- colnames(data)
+  edges <- data.frame(node_a = character(), node_b = character(), mark_a = character(),
+                      mark_b = character(), stringsAsFactors = FALSE)
+  p <- ncol(data)
+  if (p >= 2) {
+    for (i in 1:(p - 1)) {
+      for (j in (i + 1):p) {
+        if (abs(r[i, j]) > threshold) {
+          edges[nrow(edges) + 1, ] <- c(names[i], names[j], "tail", "tail")
+        }
+      }
+    }
+  }
+  edges
+}
+
+write.csv(learn(data, threshold), output_file, row.names = FALSE, quote = TRUE)

@@ -1,0 +1,77 @@
+package dev.touchstone.harness.cli;
+
+import dev.touchstone.harness.execution.StudyRunner;
+import dev.touchstone.harness.study.LearnerConfig;
+import dev.touchstone.harness.study.Plan;
+import dev.touchstone.harness.study.SampleSize;
+import dev.touchstone.harness.study.TruthSetting;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+/** {@code touchstone check STUDY}: validates a study and prints its grid and the work it implies, without running. */
+@Command(name = "check", description = "Validate a study; print its grid size, settings and expected work, without running.")
+final class CheckCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "STUDY", description = "The study file (YAML or JSON).")
+    Path study;
+
+    @Option(names = "--learners", paramLabel = "FILE", description = "A learners file declaring external command learners.")
+    Path learnersFile;
+
+    @Option(names = "--plugins", paramLabel = "DIR", description = "A folder of plug-in jars with Learner services.")
+    Path plugins;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        Toolkit kit = new Toolkit(learnersFile, plugins);
+        Plan plan = kit.plan(kit.readStudy(study));
+        var s = plan.study();
+        out.printf(Locale.ROOT, "study %s: valid%n", s.name());
+        out.printf(Locale.ROOT, "  %,d truth settings x %,d sample sizes = %,d settings; %,d replicates each%n",
+                plan.truths().size(), s.samples().size(), plan.settingCount(), s.replicates());
+        out.printf(Locale.ROOT, "  %,d learner configurations; %,d runs in all (limit %,d)%n", plan.configs().size(),
+                plan.runs().size(), s.limits().maxRuns());
+        out.println("truth settings:");
+        for (TruthSetting t : plan.truths()) {
+            out.println("  " + t.label());
+        }
+        StringBuilder samples = new StringBuilder();
+        for (SampleSize n : s.samples()) {
+            samples.append(samples.length() == 0 ? "" : ", ").append(n.word());
+        }
+        out.println("sample sizes: " + samples);
+        out.println("learner configurations:");
+        for (LearnerConfig c : plan.configs()) {
+            out.println("  " + c.label() + " (" + c.use() + ": " + c.parametersText() + ")");
+        }
+        long cells = 0;
+        int rows = StudyRunner.largestRows(plan);
+        for (TruthSetting t : plan.truths()) {
+            Object nodes = t.choice("graph").values().asMap().get("nodes");
+            long p = nodes instanceof Number ? ((Number) nodes).longValue() : 0;
+            cells += p * rows * (long) s.replicates();
+        }
+        out.printf(Locale.ROOT, "work: %,d replicates to draw (%,d rows each, about %,d data cells in all);"
+                + " %,d learner runs%n", plan.replicateCount(), rows, cells, plan.runs().size());
+        if (s.limits().perRun() != null) {
+            double worst = plan.runs().size() * s.limits().seconds();
+            out.printf(Locale.ROOT, "  time limit %s s per run: at most %.0f core-seconds of learner time%n",
+                    dev.touchstone.harness.study.Canonical.value(s.limits().seconds()), worst);
+        } else {
+            out.println("  no time limit per run (set limits.seconds to bound the work)");
+        }
+        out.println("study hash: " + plan.hash());
+        out.flush();
+        return Main.DONE;
+    }
+}

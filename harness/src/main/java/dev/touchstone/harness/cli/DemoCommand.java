@@ -1,0 +1,90 @@
+package dev.touchstone.harness.cli;
+
+import dev.touchstone.harness.execution.Journal;
+import dev.touchstone.harness.execution.LocalExecutor;
+import dev.touchstone.harness.execution.Progress;
+import dev.touchstone.harness.execution.StudyRunner;
+import dev.touchstone.harness.study.Plan;
+import dev.touchstone.metrics.results.RunStatus;
+import dev.touchstone.reports.MarkdownReport;
+import dev.touchstone.reports.ReportData;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+/**
+ * {@code touchstone demo [--out DIR]}: runs the bundled quick study (scenarios/demo.yaml),
+ * prints its headline table and writes the report. Run again on the same folder, it
+ * reuses the runs already done.
+ */
+@Command(name = "demo", description = "Run the bundled quick study, print its headline table and write its report.")
+final class DemoCommand implements Callable<Integer> {
+
+    /** The bundled study, packaged from scenarios/ into the jar. */
+    static final String STUDY = "/scenarios/demo.yaml";
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./touchstone-demo).")
+    Path out = Path.of("touchstone-demo");
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--quiet", description = "Print no progress.")
+    boolean quiet;
+
+    /** For tests: a study file to use instead of the bundled one. */
+    @Option(names = "--study", hidden = true)
+    Path study;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter w = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        Toolkit kit = new Toolkit(null, null);
+        Path file = study != null ? study : bundledStudy();
+        Plan plan = kit.plan(kit.readStudy(file));
+        int n = threads == null ? LocalExecutor.defaultThreads() : threads;
+        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, System.console() != null,
+                System.console() != null ? 0.2 : 5.0);
+        StudyRunner.Outcome o;
+        try {
+            o = kit.runner().run(plan, new StudyRunner.Options(out, n, progress, quiet ? null : err));
+        } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {
+            throw new UsageException(e.getMessage(), e);
+        }
+        ReportData data = kit.reportData(plan, out);
+        Path html = dev.touchstone.harness.report.StudyReports.write(out, data);
+        w.printf(Locale.ROOT, "demo study '%s': %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped)%n%n",
+                plan.study().name(), o.total(), o.count(RunStatus.OK), o.count(RunStatus.FAILED),
+                o.count(RunStatus.TIMEOUT), o.count(RunStatus.SKIPPED));
+        w.print(MarkdownReport.headline(data));
+        w.printf(Locale.ROOT, "%nreport: %s%nall files: %s%n", html.toAbsolutePath(), out.toAbsolutePath());
+        w.flush();
+        return Main.DONE;
+    }
+
+    private static Path bundledStudy() {
+        try (InputStream in = DemoCommand.class.getResourceAsStream(STUDY)) {
+            if (in == null) {
+                throw new IllegalStateException("the bundled study " + STUDY + " is missing from the jar");
+            }
+            Path tmp = Files.createTempFile("touchstone-demo", ".yaml");
+            tmp.toFile().deleteOnExit();
+            Files.write(tmp, in.readAllBytes());
+            return tmp;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

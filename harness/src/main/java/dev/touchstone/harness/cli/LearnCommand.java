@@ -1,0 +1,114 @@
+package dev.touchstone.harness.cli;
+
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeadlineExceededException;
+import dev.touchstone.core.learner.Estimate;
+import dev.touchstone.core.learner.LearnerDescription;
+import dev.touchstone.core.learner.LearnerException;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.param.ParameterException;
+import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.harness.catalog.LearnerCatalog;
+import dev.touchstone.harness.io.DataCsv;
+import dev.touchstone.harness.io.GraphJson;
+import dev.touchstone.harness.io.KnowledgeFile;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+/** {@code touchstone learn}: runs one learner on one data file and writes the graph it returns. */
+@Command(name = "learn", description = "Run one learner on a data file and write the estimated graph (JSON).")
+final class LearnCommand implements Callable<Integer> {
+
+    @Option(names = "--learner", required = true, paramLabel = "ID", description = "The learner (see 'touchstone learners').")
+    String learner;
+
+    @Option(names = "--set", paramLabel = "NAME=VALUE", description = "A parameter value; repeat for several.")
+    List<String> settings = List.of();
+
+    @Option(names = "--data", required = true, paramLabel = "FILE", description = "The data (CSV with a header row).")
+    Path data;
+
+    @Option(names = "--knowledge", paramLabel = "FILE", description = "Background knowledge (YAML or JSON).")
+    Path knowledge;
+
+    @Option(names = "--out", paramLabel = "FILE", description = "Where to write the graph (default: print it).")
+    Path out;
+
+    @Option(names = "--seed", paramLabel = "N", description = "The run's seed (default: 0).")
+    long seed;
+
+    @Option(names = "--seconds", paramLabel = "S", description = "Time limit (default: none).")
+    Double seconds;
+
+    @Option(names = "--learners", paramLabel = "FILE", description = "A learners file declaring external command learners.")
+    Path learnersFile;
+
+    @Option(names = "--plugins", paramLabel = "DIR", description = "A folder of plug-in jars.")
+    Path plugins;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws Exception {
+        LearnerCatalog catalog = new Toolkit(learnersFile, plugins).learners;
+        LearnerCatalog.Entry entry = catalog.find(learner);
+        if (entry == null) {
+            throw new UsageException("--learner: unknown learner '" + learner + "' (available: "
+                    + String.join(", ", catalog.ids()) + ")");
+        }
+        LearnerDescription d = entry.learner().description();
+        Map<String, String> raw = new LinkedHashMap<>();
+        for (String s : settings) {
+            int eq = s.indexOf('=');
+            if (eq <= 0) {
+                throw new UsageException("--set " + s + ": expected NAME=VALUE");
+            }
+            raw.put(s.substring(0, eq).trim(), s.substring(eq + 1).trim());
+        }
+        ParameterValues values;
+        try {
+            values = ParameterValues.resolve("learner " + d.id(), d.parameters(), raw);
+        } catch (ParameterException e) {
+            throw new UsageException("--set: " + e.getMessage(), e);
+        }
+        DataCsv.Result read = DataCsv.read(data);
+        Knowledge k = knowledge == null ? Knowledge.none() : KnowledgeFile.read(knowledge, read.data().names());
+        LearnerInput input = LearnerInput.of(read.data());
+        try {
+            d.checkAccepts(input);
+        } catch (LearnerException e) {
+            throw new UsageException(data + ": " + e.getMessage(), e);
+        }
+        RunContext context = RunContext.of(seed, seconds == null ? null : Duration.ofNanos((long) (seconds * 1e9)), 1);
+        long t0 = System.nanoTime();
+        Estimate est;
+        try {
+            est = entry.learner().learn(input, k, values, context);
+        } catch (DeadlineExceededException e) {
+            throw new UsageException("learner " + d.id() + " reached the time limit of " + seconds + " s");
+        }
+        double secs = (System.nanoTime() - t0) / 1e9;
+        PrintWriter err = spec.commandLine().getErr();
+        if (out != null) {
+            GraphJson.write(out, est.graph());
+            err.printf(Locale.ROOT, "%s: %d edges (%s) in %.3f s, %d tests, %d scores; written to %s%n", d.id(),
+                    est.graph().edgeCount(), est.graphClass().word(), secs, context.tests(), context.scores(), out);
+        } else {
+            spec.commandLine().getOut().println(GraphJson.toJson(est.graph()));
+        }
+        spec.commandLine().getOut().flush();
+        err.flush();
+        return Main.DONE;
+    }
+}

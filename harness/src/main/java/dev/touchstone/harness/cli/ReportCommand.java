@@ -1,0 +1,52 @@
+package dev.touchstone.harness.cli;
+
+import dev.touchstone.harness.study.Plan;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+/**
+ * {@code touchstone report OUT [--to DIR]}: re-renders report.html and report.md of a study's
+ * output folder from its journal, also while the study is running or after it was
+ * interrupted (the report is then marked partial).
+ */
+@Command(name = "report", description = "Re-render the report of a finished or partial study from its output folder.")
+final class ReportCommand implements Callable<Integer> {
+
+    @Parameters(paramLabel = "OUT", description = "The study's output folder (holding study.yaml and journal.jsonl).")
+    Path out;
+
+    @Option(names = "--to", paramLabel = "DIR", description = "Where to write the report (default: the output folder).")
+    Path to;
+
+    @Option(names = "--learners", paramLabel = "FILE",
+            description = "The learners file the study was run with, if it uses external command learners.")
+    Path learnersFile;
+
+    @Option(names = "--plugins", paramLabel = "DIR", description = "The plug-in folder the study was run with, if any.")
+    Path plugins;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Path study = out.resolve("study.yaml");
+        if (!Files.isRegularFile(study) || !Files.isRegularFile(out.resolve("journal.jsonl"))) {
+            throw new UsageException(out + ": not a study's output folder (it needs study.yaml and journal.jsonl)");
+        }
+        Toolkit kit = new Toolkit(learnersFile, plugins);
+        Plan plan = kit.plan(kit.readStudy(study));
+        Path html = kit.report(plan, out, to == null ? out : to);
+        PrintWriter w = spec.commandLine().getOut();
+        w.printf(Locale.ROOT, "report: %s%n", html);
+        w.flush();
+        return Main.DONE;
+    }
+}

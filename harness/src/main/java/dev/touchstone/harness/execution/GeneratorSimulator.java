@@ -1,0 +1,21 @@
+package dev.touchstone.harness.execution;
+
+import dev.touchstone.generators.SimulatedTruth;
+import dev.touchstone.harness.study.GeneratorTruthCatalog;
+import dev.touchstone.harness.study.ReplicateSeeds;
+import dev.touchstone.harness.study.TruthSetting;
+
+/**
+ * The simulator over the generators: builds the setting's {@code Simulation}, draws the
+ * replicate's truth from {@link ReplicateSeeds#replicateSeed()} and one data set of the
+ * largest sample size (smaller ones are its prefixes). Thread-safe; cost: the generators'.
+ */
+public final class GeneratorSimulator implements Simulator {
+
+    @Override
+    public Replicate draw(TruthSetting truth, ReplicateSeeds seeds, int rows) {
+        SimulatedTruth t = GeneratorTruthCatalog.simulation(truth).drawTruth(seeds.replicateSeed());
+        return new Replicate(t.dag(), rows > 0 ? t.sample(rows).data() : null,
+                t.populationCovariance().orElse(null));
+    }
+}

@@ -1,0 +1,74 @@
+package dev.touchstone.harness.execution;
+
+import dev.touchstone.core.data.CovarianceMatrix;
+import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.Oracle;
+import dev.touchstone.harness.study.SampleSize;
+
+import java.util.Objects;
+
+/**
+ * One replicate's draw, shared by all its runs: the true DAG (hidden variables flagged),
+ * one data set of the largest sample size over the observed variables (smaller sample sizes
+ * are its prefixes, so they are nested) and, when the model has one, the exact population
+ * covariance of the observed variables. Immutable.
+ */
+public final class Replicate {
+
+    private final Graph trueDag;
+    private final DataSet data;
+    private final CovarianceMatrix populationCovariance;
+    private volatile Oracle oracle;
+
+    /**
+     * @param trueDag              the generating DAG
+     * @param data                 the data over the observed variables, or null when the study has only the oracle
+     * @param populationCovariance the exact covariance over the observed variables, or null
+     */
+    public Replicate(Graph trueDag, DataSet data, CovarianceMatrix populationCovariance) {
+        this.trueDag = Objects.requireNonNull(trueDag, "trueDag");
+        this.data = data;
+        this.populationCovariance = populationCovariance;
+    }
+
+    public Graph trueDag() {
+        return trueDag;
+    }
+
+    /** The full draw, or null. */
+    public DataSet data() {
+        return data;
+    }
+
+    public CovarianceMatrix populationCovariance() {
+        return populationCovariance;
+    }
+
+    /** What a learner sees at this sample size: the first {@code n} rows, or the oracle. */
+    public LearnerInput input(SampleSize n) {
+        if (n.isOracle()) {
+            return LearnerInput.of(oracle());
+        }
+        if (data == null || data.rows() < n.intRows()) {
+            throw new IllegalStateException("the replicate's draw has " + (data == null ? 0 : data.rows())
+                    + " rows, fewer than the sample size " + n.word());
+        }
+        return LearnerInput.of(data.rows() == n.intRows() ? data : data.head(n.intRows()));
+    }
+
+    /** The oracle over this truth (built once). */
+    public Oracle oracle() {
+        Oracle o = oracle;
+        if (o == null) {
+            synchronized (this) {
+                if (oracle == null) {
+                    oracle = new Oracle(trueDag, populationCovariance);
+                }
+                o = oracle;
+            }
+        }
+        return o;
+    }
+}

@@ -1,0 +1,234 @@
+package dev.touchstone.harness.execution;
+
+import dev.touchstone.harness.study.Canonical;
+import dev.touchstone.harness.study.Plan;
+import dev.touchstone.harness.study.RunDefinition;
+import dev.touchstone.harness.study.SampleSize;
+import dev.touchstone.harness.study.StudyWriter;
+import dev.touchstone.metrics.results.RunResult;
+import dev.touchstone.metrics.results.RunStatus;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.AbstractMap;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.stream.Stream;
+
+/**
+ * Runs or resumes an expanded study in an output folder and writes its files (design §7):
+ * {@code study.yaml}, {@code provenance.json}, {@code journal.jsonl}, {@code runs.csv},
+ * {@code summary.csv}, {@code comparisons.csv}, each written whole or not at all.
+ *
+ * <p>On an existing folder it resumes: runs whose key is already in the journal are kept,
+ * runs whose definition changed (same coordinates, different key) and new runs are done,
+ * and the counts are said. Tables are always rebuilt from the journal, in plan order, so
+ * they are identical for any thread count, order or number of interruptions.
+ */
+public final class StudyRunner {
+
+    public static final String STUDY_FILE = "study.yaml";
+    public static final String PROVENANCE_FILE = "provenance.json";
+    public static final String RUNS_FILE = "runs.csv";
+    public static final String SUMMARY_FILE = "summary.csv";
+    public static final String COMPARISONS_FILE = "comparisons.csv";
+
+    private final Simulator simulator;
+    private final Scorer scorer;
+    private final Aggregator aggregator;
+
+    public StudyRunner(Simulator simulator, Scorer scorer, Aggregator aggregator) {
+        this.simulator = simulator;
+        this.scorer = scorer;
+        this.aggregator = aggregator;
+    }
+
+    /**
+     * How to run.
+     *
+     * @param out      the output folder (created if missing)
+     * @param threads  worker threads
+     * @param progress progress listener
+     * @param messages where to say what is resumed (one line each)
+     * @param shuffle  a seed to start runs in a shuffled order (tests of order independence), or null for plan order
+     */
+    public record Options(Path out, int threads, Progress progress, PrintWriter messages, Long shuffle) {
+        public Options(Path out, int threads, Progress progress, PrintWriter messages) {
+            this(out, threads, progress, messages, null);
+        }
+    }
+
+    /** What a session did: runs in the study, already done, redone because changed, done now, and runs by status. */
+    public record Outcome(int total, int reused, int changed, int performed, Map<RunStatus, Integer> byStatus,
+                          Path out) {
+        public int count(RunStatus s) {
+            return byStatus.getOrDefault(s, 0);
+        }
+    }
+
+    public Outcome run(Plan plan, Options options) {
+        Path out = options.out();
+        prepareFolder(out);
+        Instant started = Instant.now();
+        String studyText = StudyWriter.yaml(plan.study());
+        OutputFiles.write(out.resolve(STUDY_FILE), studyText);
+        Provenance running = provenance(plan, studyText, options.threads(), started, null, Map.of());
+        OutputFiles.write(out.resolve(PROVENANCE_FILE), running.json());
+
+        SettingLayout layout = new SettingLayout(plan);
+        Map<Integer, RunResult> results = new ConcurrentHashMap<>();
+        int reused = 0;
+        int changed = 0;
+        List<RunDefinition> todo = new ArrayList<>();
+        try (Journal journal = Journal.open(out.resolve(Journal.FILE_NAME))) {
+            Map<String, JournalCodec.Line> existing = journal.existing();
+            Set<String> oldCoordinates = new HashSet<>();
+            for (JournalCodec.Line l : existing.values()) {
+                oldCoordinates.add(l.coordinates());
+            }
+            for (RunDefinition r : plan.runs()) {
+                JournalCodec.Line done = existing.get(r.key());
+                if (done != null) {
+                    results.put(r.index(), done.result());
+                    reused++;
+                } else {
+                    if (oldCoordinates.contains(r.coordinates())) {
+                        changed++;
+                    }
+                    todo.add(r);
+                }
+            }
+            say(options, journal, plan, reused, changed, todo.size());
+            options.progress().start(plan.runs().size(), reused);
+            if (options.shuffle() != null) {
+                java.util.Collections.shuffle(todo, new java.util.Random(options.shuffle()));
+            }
+            RunPerformer performer = new RunPerformer(scorer, layout);
+            LocalExecutor executor = new LocalExecutor(options.threads(), simulator, performer);
+            Map<String, Integer> indexByKey = new LinkedHashMap<>();
+            for (RunDefinition r : todo) {
+                indexByKey.put(r.key(), r.index());
+            }
+            executor.execute(todo, largestRows(plan), result -> {
+                int index = indexByKey.get(result.key());
+                RunDefinition def = plan.runs().get(index);
+                journal.append(new JournalCodec.Line(index, def.coordinates(), result), line -> {
+                    results.put(line.run(), line.result());
+                    options.progress().finished(line.result());
+                });
+            });
+        }
+        options.progress().end();
+        if (results.size() != plan.runs().size()) {
+            throw new IllegalStateException("only " + results.size() + " of " + plan.runs().size()
+                    + " runs have results; the journal may be damaged");
+        }
+        List<Map.Entry<Integer, RunResult>> ordered = new ArrayList<>();
+        List<RunResult> list = new ArrayList<>();
+        Map<RunStatus, Integer> byStatus = new LinkedHashMap<>();
+        for (RunDefinition r : plan.runs()) {
+            RunResult res = results.get(r.index());
+            ordered.add(new AbstractMap.SimpleEntry<>(r.index(), res));
+            list.add(res);
+            byStatus.merge(res.status(), 1, Integer::sum);
+        }
+        List<String> structural = new ArrayList<>();
+        for (String m : plan.study().metrics()) {
+            if (!Scorer.MEASURED.contains(m)) {
+                structural.add(m);
+            }
+        }
+        List<String> columns = layout.columns();
+        OutputFiles.write(out.resolve(RUNS_FILE), ResultTables.runs(columns, structural, ordered));
+        long statsSeed = dev.touchstone.core.random.Seeds.derive(plan.study().seed(), "statistics");
+        OutputFiles.write(out.resolve(SUMMARY_FILE), ResultTables.summary(columns,
+                aggregator.summarise(list, plan.study().metrics(), statsSeed)));
+        var reference = plan.reference();
+        OutputFiles.write(out.resolve(COMPARISONS_FILE), ResultTables.comparisons(columns, reference == null
+                ? List.of() : aggregator.compare(list, plan.study().metrics(), reference.label(), statsSeed)));
+        Map<String, Integer> counts = new LinkedHashMap<>();
+        counts.put("total", plan.runs().size());
+        for (RunStatus s : RunStatus.values()) {
+            counts.put(s.word(), byStatus.getOrDefault(s, 0));
+        }
+        counts.put("done_this_session", todo.size());
+        OutputFiles.write(out.resolve(PROVENANCE_FILE), provenance(plan, studyText, options.threads(), started,
+                Instant.now(), counts).json());
+        return new Outcome(plan.runs().size(), reused, changed, todo.size(), byStatus, out);
+    }
+
+    /** The number of rows each replicate's draw needs: the largest finite sample size, 0 for oracle-only studies. */
+    public static int largestRows(Plan plan) {
+        int rows = 0;
+        for (SampleSize n : plan.study().samples()) {
+            if (!n.isOracle()) {
+                rows = Math.max(rows, n.intRows());
+            }
+        }
+        return rows;
+    }
+
+    private static void say(Options o, Journal journal, Plan plan, int reused, int changed, int todo) {
+        PrintWriter w = o.messages();
+        if (w == null) {
+            return;
+        }
+        if (journal.hadTornLine()) {
+            w.println("the journal's last line was torn (the previous session was interrupted while writing it);"
+                    + " it was ignored and its run will be redone");
+        }
+        if (!journal.existing().isEmpty()) {
+            w.printf(java.util.Locale.ROOT, "resuming in %s: %,d of %,d runs already done", o.out(), reused,
+                    plan.runs().size());
+            if (changed > 0) {
+                w.printf(java.util.Locale.ROOT, "; %,d runs whose definition changed will be recomputed", changed);
+            }
+            w.printf(java.util.Locale.ROOT, "; %,d to do%n", todo);
+        }
+        w.flush();
+    }
+
+    private static void prepareFolder(Path out) {
+        try {
+            if (Files.exists(out) && !Files.isDirectory(out)) {
+                throw new OutputFolderException("the output " + out + " exists and is not a folder");
+            }
+            if (Files.isDirectory(out) && !Files.exists(out.resolve(Journal.FILE_NAME))) {
+                try (Stream<Path> s = Files.list(out)) {
+                    if (s.findAny().isPresent()) {
+                        throw new OutputFolderException("the folder " + out + " is not empty and holds no "
+                                + Journal.FILE_NAME + ", so it is not a study's output; choose another --out");
+                    }
+                }
+            }
+            Files.createDirectories(out);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot prepare the output folder " + out + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static Provenance provenance(Plan plan, String studyText, int threads, Instant started, Instant finished,
+                                         Map<String, Integer> counts) {
+        var v = dev.touchstone.harness.cli.VersionInfo.current();
+        return new Provenance(v.version(), v.commit() + (v.dirty() ? "-dirty" : ""), plan.study().name(),
+                plan.hash(), Canonical.hash(studyText), threads, started, finished, counts);
+    }
+
+    /** The output folder cannot be used. */
+    public static final class OutputFolderException extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        public OutputFolderException(String message) {
+            super(message);
+        }
+    }
+}

@@ -1,0 +1,71 @@
+package dev.touchstone.harness.report;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import dev.touchstone.harness.execution.Aggregator;
+import dev.touchstone.harness.execution.Journal;
+import dev.touchstone.harness.execution.JournalCodec;
+import dev.touchstone.harness.execution.Simulator;
+import dev.touchstone.harness.study.Plan;
+import dev.touchstone.harness.study.RunDefinition;
+import dev.touchstone.metrics.results.RunResult;
+import dev.touchstone.reports.ReportData;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Re-renders the report of a study's output folder from its journal: works for a finished
+ * study and for one still running or interrupted (then marked partial). The journal is only
+ * read; runs recorded under an older definition of the study are left out.
+ */
+public final class ReportFolder {
+
+    private ReportFolder() {
+    }
+
+    /** The report data of the study in {@code out}, planned as {@code plan}. */
+    public static ReportData read(Path out, Plan plan, Simulator simulator, Aggregator aggregator) {
+        Map<String, JournalCodec.Line> lines;
+        try {
+            lines = Journal.read(out.resolve(Journal.FILE_NAME)).lines();
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read the journal in " + out + ": " + e.getMessage(), e);
+        }
+        List<RunResult> runs = new ArrayList<>();
+        for (RunDefinition r : plan.runs()) {
+            JournalCodec.Line l = lines.get(r.key());
+            if (l != null) {
+                runs.add(l.result());
+            }
+        }
+        boolean partial = runs.size() < plan.runs().size();
+        return StudyReports.gather(plan, runs, partial, simulator, aggregator, provenance(out));
+    }
+
+    /** The top-level fields of provenance.json as text, or an empty map when it is missing. */
+    public static Map<String, String> provenance(Path out) {
+        Map<String, String> m = new LinkedHashMap<>();
+        Path file = out.resolve("provenance.json");
+        if (!Files.exists(file)) {
+            return m;
+        }
+        try {
+            JsonNode root = new ObjectMapper().readTree(file.toFile());
+            for (Iterator<Map.Entry<String, JsonNode>> it = root.fields(); it.hasNext(); ) {
+                Map.Entry<String, JsonNode> e = it.next();
+                m.put(e.getKey(), e.getValue().isValueNode() ? e.getValue().asText() : e.getValue().toString());
+            }
+        } catch (IOException e) {
+            m.put("provenance", "unreadable: " + e.getMessage());
+        }
+        return m;
+    }
+}

@@ -1,0 +1,188 @@
+package dev.touchstone.harness.report;
+
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.Estimate;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.generators.audit.SortabilityAudit;
+import dev.touchstone.harness.execution.Aggregator;
+import dev.touchstone.harness.execution.Replicate;
+import dev.touchstone.harness.execution.SettingLayout;
+import dev.touchstone.harness.execution.Simulator;
+import dev.touchstone.harness.execution.StudyRunner;
+import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.study.LearnerConfig;
+import dev.touchstone.harness.study.Plan;
+import dev.touchstone.harness.study.RunDefinition;
+import dev.touchstone.harness.study.TruthSetting;
+import dev.touchstone.metrics.aggregate.Summaries;
+import dev.touchstone.metrics.rank.Ranking;
+import dev.touchstone.metrics.results.RankingResult;
+import dev.touchstone.metrics.results.RunResult;
+import dev.touchstone.metrics.results.Setting;
+import dev.touchstone.metrics.scoring.Direction;
+import dev.touchstone.metrics.scoring.Metric;
+import dev.touchstone.metrics.scoring.MetricRegistry;
+import dev.touchstone.metrics.truth.TruthSelection;
+import dev.touchstone.reports.HtmlReport;
+import dev.touchstone.reports.MarkdownReport;
+import dev.touchstone.reports.ReportData;
+import dev.touchstone.core.random.Seeds;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Gathers a study's report data from its plan and the runs recorded so far, and writes
+ * {@code report.html} and {@code report.md} (design §7), each whole or not at all.
+ *
+ * <p>Aggregates, comparisons and rankings come from the metrics module, seeded from the
+ * study seed, so a report re-rendered later shows the same numbers. The sortability audit
+ * and the graph pictures need the data, which the journal does not keep: they re-draw
+ * replicate 0 of each setting (deterministic, from the same seeds) and re-run the learners
+ * of the first setting on it, so pictures show exactly what those runs returned.
+ */
+public final class StudyReports {
+
+    /** Settings whose replicate 0 is re-drawn for the audit, at most. */
+    static final int AUDITED_SETTINGS = 24;
+    /** Learner configurations pictured, at most. */
+    static final int PICTURED_CONFIGURATIONS = 6;
+    /** Variables a picture may have; larger graphs are not drawn (they would not be readable). */
+    static final int PICTURE_VARIABLES = 40;
+    /** Learner ids of the scale-artefact baselines, for the audit's warning. */
+    public static final Set<String> SCALE_BASELINES = Set.of("variance-sort-regress", "r2-sort-regress");
+
+    private StudyReports() {
+    }
+
+    /**
+     * The report data of a study.
+     *
+     * @param runs    the recorded runs in plan order (fewer than the plan's when partial)
+     * @param partial whether the study is unfinished
+     */
+    public static ReportData gather(Plan plan, List<RunResult> runs, boolean partial, Simulator simulator,
+                                    Aggregator aggregator, Map<String, String> provenance) {
+        long statsSeed = Seeds.derive(plan.study().seed(), "statistics");
+        List<String> metrics = plan.study().metrics();
+        ReportData.Builder b = ReportData.builder(plan.study().name())
+                .description(plan.study().description())
+                .partial(partial)
+                .metrics(metrics)
+                .runs(runs)
+                .summary(aggregator.summarise(runs, metrics, statsSeed))
+                .provenance(provenance)
+                .scaleBaselines(SCALE_BASELINES)
+                .coordinates(SettingLayout.SAMPLES, "nodes")
+                .summarizer(values -> Summaries.of(values.stream().mapToDouble(Double::doubleValue).toArray(),
+                        Seeds.random(Seeds.derive(statsSeed, "pooled"))));
+        for (String m : metrics) {
+            MetricRegistry.find(m).map(Metric::direction).filter(d -> d != Direction.NONE)
+                    .ifPresent(d -> b.direction(m, d == Direction.HIGHER_IS_BETTER));
+        }
+        if (plan.reference() != null) {
+            String ref = plan.reference().label();
+            b.reference(ref).comparisons(aggregator.compare(runs, metrics, ref, statsSeed));
+        }
+        List<RankingResult> rankings = new ArrayList<>();
+        for (String m : metrics) {
+            Metric metric = MetricRegistry.find(m).orElse(null);
+            if (metric != null && metric.direction() != Direction.NONE && !m.equals("seconds")) {
+                rankings.add(Ranking.over(runs, m, 0.05));
+            }
+        }
+        b.rankings(rankings);
+        redraw(plan, simulator, b);
+        return b.build();
+    }
+
+    private static void redraw(Plan plan, Simulator simulator, ReportData.Builder b) {
+        SettingLayout layout = new SettingLayout(plan);
+        int rows = StudyRunner.largestRows(plan);
+        List<ReportData.Audit> audits = new ArrayList<>();
+        List<ReportData.Example> examples = new ArrayList<>();
+        Set<Integer> auditedTruths = new HashSet<>();
+        Set<String> auditedSettings = new HashSet<>();
+        Map<Integer, Replicate> drawn = new LinkedHashMap<>();
+        Set<String> pictured = new HashSet<>();
+        Integer picturedTruth = null;
+        for (RunDefinition run : plan.runs()) {
+            if (run.replicate() != 0) {
+                continue;
+            }
+            TruthSetting truth = run.truth();
+            Replicate rep = drawn.get(truth.index());
+            if (rep == null && drawn.size() < AUDITED_SETTINGS) {
+                try {
+                    rep = simulator.draw(truth, run.seeds(), rows);
+                } catch (RuntimeException e) {
+                    continue;
+                }
+                drawn.put(truth.index(), rep);
+            }
+            if (rep == null) {
+                continue;
+            }
+            Setting setting = layout.setting(run);
+            if (!run.sample().isOracle() && rep.data() != null && auditedSettings.add(setting.label())
+                    && auditedTruths.add(truth.index())) {
+                SortabilityAudit a = SortabilityAudit.of(rep.trueDag(), rep.data().head(run.sample().intRows()));
+                audits.add(new ReportData.Audit(setting, finite(a.varsortability()), finite(a.r2Sortability())));
+            }
+            if (picturedTruth == null) {
+                picturedTruth = truth.index();
+            }
+            LearnerConfig config = run.config();
+            if (truth.index() == picturedTruth && !run.sample().isOracle() && pictured.size() < PICTURED_CONFIGURATIONS
+                    && rep.trueDag().size() <= PICTURE_VARIABLES && !pictured.contains(config.label())) {
+                Estimate e = rerun(run, rep);
+                if (e != null) {
+                    pictured.add(config.label());
+                    Graph truthGraph = TruthSelection.forEstimate(rep.trueDag(), e.graphClass()).reference();
+                    examples.add(new ReportData.Example(config.label() + " on " + setting.label() + ", replicate 0"
+                            + " (scored against the true " + e.graphClass().word() + ")", truthGraph, e.graph()));
+                }
+            }
+        }
+        b.audits(audits).examples(examples);
+    }
+
+    /** The estimate the run returned, recomputed (learners are deterministic for a seed), or null if it failed. */
+    private static Estimate rerun(RunDefinition run, Replicate rep) {
+        try {
+            LearnerInput input = rep.input(run.sample());
+            run.config().learner().description().checkAccepts(input);
+            return run.config().learner().learn(input, Knowledge.none(), run.config().values(),
+                    RunContext.of(run.learnerSeed(), run.limit(), 1));
+        } catch (RuntimeException e) {
+            return null;
+        }
+    }
+
+    private static Double finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+
+    /** Writes report.html and report.md into {@code folder}; returns the HTML file. */
+    public static Path write(Path folder, ReportData data) {
+        try {
+            Files.createDirectories(folder);
+            Path html = folder.resolve("report.html");
+            AtomicFiles.writeString(html, HtmlReport.render(data));
+            AtomicFiles.writeString(folder.resolve("report.md"), MarkdownReport.render(data));
+            return html;
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the report into " + folder + ": " + e.getMessage(), e);
+        }
+    }
+}

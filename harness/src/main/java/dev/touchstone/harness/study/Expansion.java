@@ -1,0 +1,164 @@
+package dev.touchstone.harness.study;
+
+import dev.touchstone.core.param.ParameterException;
+import dev.touchstone.core.param.ParameterValues;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+
+/**
+ * Expands a study into its plan: every truth setting (the product of all truth axes), every
+ * learner configuration (the product of each entry's parameter axes), and the runs in a
+ * fixed order — truth setting, then replicate, then sample size, then configuration — so a
+ * replicate's runs are contiguous and its data can be generated once and dropped soon.
+ *
+ * <p>Expansion is pure: the same study always gives the same plan, keys and seeds. Cost:
+ * linear in the number of runs (bounded by {@code limits.max_runs}).
+ */
+public final class Expansion {
+
+    private final TruthCatalog catalog;
+    private final Function<String, String> fingerprints;
+
+    /**
+     * @param catalog      the truth catalogue (for defaults and cross-field checks)
+     * @param fingerprints for a learner id, what else defines it (e.g. an external command line), or ""
+     */
+    public Expansion(TruthCatalog catalog, Function<String, String> fingerprints) {
+        this.catalog = catalog;
+        this.fingerprints = fingerprints;
+    }
+
+    public Expansion(TruthCatalog catalog) {
+        this(catalog, id -> "");
+    }
+
+    /** Expands a validated study. */
+    public Plan expand(Study study, dev.touchstone.harness.catalog.LearnerCatalog learners) {
+        List<TruthSetting> truths = truths(study);
+        List<LearnerConfig> configs = configs(study, learners);
+        List<RunDefinition> runs = new ArrayList<>();
+        for (TruthSetting t : truths) {
+            for (int rep = 0; rep < study.replicates(); rep++) {
+                for (SampleSize n : study.samples()) {
+                    for (LearnerConfig c : configs) {
+                        runs.add(new RunDefinition(runs.size(), t, rep, n, c, study.seed(), study.metrics(),
+                                study.limits().perRun()));
+                    }
+                }
+            }
+        }
+        return new Plan(study, truths, configs, runs);
+    }
+
+    private List<TruthSetting> truths(Study study) {
+        List<List<TruthSetting.Choice>> perSection = new ArrayList<>();
+        for (ComponentSpec c : study.truth()) {
+            List<TruthSetting.Choice> choices = new ArrayList<>();
+            for (String kindName : c.kinds()) {
+                TruthCatalog.Kind kind = catalog.section(c.section()).kind(kindName);
+                for (Map<String, Object> given : product(c.axes())) {
+                    ParameterValues values;
+                    try {
+                        values = ParameterValues.resolve(c.section() + " " + kindName, kind.parameters(), given);
+                    } catch (ParameterException e) {
+                        throw new StudyException(placeOf(study, "truth", c.section()), "truth." + c.section() + "."
+                                + e.parameter(), e.getMessage());
+                    }
+                    choices.add(new TruthSetting.Choice(c.section(), kindName, values, given));
+                }
+            }
+            perSection.add(choices);
+        }
+        List<TruthSetting> out = new ArrayList<>();
+        combine(perSection, 0, new ArrayList<>(), out);
+        for (TruthSetting t : out) {
+            try {
+                catalog.checkCombination(t);
+            } catch (IllegalArgumentException e) {
+                throw new StudyException(placeOf(study, "truth"), "truth", e.getMessage() + " (in the setting "
+                        + t.label() + ")");
+            }
+        }
+        return out;
+    }
+
+    private static void combine(List<List<TruthSetting.Choice>> perSection, int i, List<TruthSetting.Choice> prefix,
+                                List<TruthSetting> out) {
+        if (i == perSection.size()) {
+            out.add(new TruthSetting(out.size(), prefix));
+            return;
+        }
+        for (TruthSetting.Choice c : perSection.get(i)) {
+            List<TruthSetting.Choice> next = new ArrayList<>(prefix);
+            next.add(c);
+            combine(perSection, i + 1, next, out);
+        }
+    }
+
+    private List<LearnerConfig> configs(Study study, dev.touchstone.harness.catalog.LearnerCatalog learners) {
+        List<LearnerConfig> out = new ArrayList<>();
+        Map<String, LearnerConfig> byCanonical = new HashMap<>();
+        for (LearnerEntry e : study.learners()) {
+            var learner = learners.find(e.use()).learner();
+            for (Map<String, Object> given : product(e.axes())) {
+                ParameterValues values;
+                try {
+                    values = ParameterValues.resolve("learner " + e.use(), learner.description().parameters(), given);
+                } catch (ParameterException ex) {
+                    throw new StudyException(e.place(), "learners." + e.id() + ".with." + ex.parameter(),
+                            ex.getMessage());
+                }
+                Map<String, Object> varied = new LinkedHashMap<>();
+                e.axes().forEach((k, v) -> {
+                    if (v.size() > 1) {
+                        varied.put(k, given.get(k));
+                    }
+                });
+                LearnerConfig c = new LearnerConfig(out.size(), e.id(), learner, values, varied,
+                        fingerprints.apply(e.use()));
+                LearnerConfig same = byCanonical.putIfAbsent(c.canonical(), c);
+                if (same != null) {
+                    throw new StudyException(e.place(), "learners." + e.id(), "the configuration " + c.label()
+                            + " is identical to " + same.label() + " (same learner, same parameter values);"
+                            + " remove one of them");
+                }
+                out.add(c);
+            }
+        }
+        return out;
+    }
+
+    /** All combinations of the axes, in order (last axis fastest). */
+    static List<Map<String, Object>> product(Map<String, List<Object>> axes) {
+        List<Map<String, Object>> out = new ArrayList<>();
+        out.add(new LinkedHashMap<>());
+        for (Map.Entry<String, List<Object>> axis : axes.entrySet()) {
+            List<Map<String, Object>> next = new ArrayList<>();
+            for (Map<String, Object> partial : out) {
+                for (Object v : axis.getValue()) {
+                    Map<String, Object> m = new LinkedHashMap<>(partial);
+                    m.put(axis.getKey(), v);
+                    next.add(m);
+                }
+            }
+            out = next;
+        }
+        return out;
+    }
+
+    private static Node.Place placeOf(Study study, String... path) {
+        Node n = study.source();
+        for (String p : path) {
+            if (n == null || n.get(p) == null) {
+                break;
+            }
+            n = n.get(p);
+        }
+        return n == null ? new Node.Place("study", 0, 0) : n.place();
+    }
+}

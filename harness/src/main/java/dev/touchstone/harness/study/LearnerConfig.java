@@ -1,0 +1,65 @@
+package dev.touchstone.harness.study;
+
+import dev.touchstone.core.learner.Learner;
+import dev.touchstone.core.param.ParameterValues;
+
+import java.util.Map;
+
+/**
+ * One learner configuration of the expansion: a study entry with one value for each of its
+ * parameters (defaults filled in). Immutable.
+ *
+ * @param index   position in the expansion's list of configurations
+ * @param entryId the study entry's id
+ * @param learner the catalogue learner
+ * @param values  all parameter values
+ * @param varied  the values of parameters the entry gave several values for (they name the configuration)
+ * @param fingerprint what defines the learner beyond its id and parameters (e.g. an external command line); may be empty
+ */
+public record LearnerConfig(int index, String entryId, Learner learner, ParameterValues values,
+                            Map<String, Object> varied, String fingerprint) {
+
+    public LearnerConfig {
+        varied = Map.copyOf(varied);
+    }
+
+    public String use() {
+        return learner.description().id();
+    }
+
+    /** The configuration's name in results: the entry id, with the varied values in brackets when there are any. */
+    public String label() {
+        if (varied.isEmpty()) {
+            return entryId;
+        }
+        StringBuilder sb = new StringBuilder(entryId).append('[');
+        boolean first = true;
+        for (Map.Entry<String, Object> e : values.asMap().entrySet()) {
+            if (varied.containsKey(e.getKey())) {
+                if (!first) {
+                    sb.append(',');
+                }
+                first = false;
+                sb.append(e.getKey()).append('=').append(Canonical.value(e.getValue()));
+            }
+        }
+        return sb.append(']').toString();
+    }
+
+    /** All parameter values as {@code name=value} joined by {@code ;}, in declaration order. */
+    public String parametersText() {
+        StringBuilder sb = new StringBuilder();
+        for (Map.Entry<String, Object> e : values.asMap().entrySet()) {
+            if (sb.length() > 0) {
+                sb.append(';');
+            }
+            sb.append(e.getKey()).append('=').append(Canonical.value(e.getValue()));
+        }
+        return sb.toString();
+    }
+
+    /** What defines this configuration, for run keys: the learner id, its values and its fingerprint. */
+    public String canonical() {
+        return use() + "{" + parametersText() + "}" + (fingerprint.isEmpty() ? "" : "#" + fingerprint);
+    }
+}

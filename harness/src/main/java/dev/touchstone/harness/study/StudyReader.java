@@ -1,0 +1,500 @@
+package dev.touchstone.harness.study;
+
+import dev.touchstone.core.learner.LearnerDescription;
+import dev.touchstone.core.param.ParameterException;
+import dev.touchstone.core.param.ParameterSpec;
+import dev.touchstone.harness.catalog.LearnerCatalog;
+
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Pattern;
+
+/**
+ * Reads and validates a study file against the catalogues of truth components, learners
+ * and metrics, before anything runs. Every problem is reported as one
+ * {@link StudyException} naming file, line, column, field and what is allowed.
+ *
+ * <p>Checks: unknown or missing fields; types; ranges and choices of every parameter (from
+ * its {@code ParameterSpec}); unknown learners (with a reminder that command learners must
+ * come from a learners file), parameters and metrics; duplicate values, ids and sample
+ * sizes; a {@code compare_to} that names no single configuration; and a grid larger than
+ * {@code limits.max_runs}. Cost: linear in the file plus the product of axis lengths
+ * (counted, not enumerated).
+ */
+public final class StudyReader {
+
+    private static final Pattern NAME = Pattern.compile("[A-Za-z0-9][A-Za-z0-9._-]*");
+    private static final Pattern ENTRY_ID = Pattern.compile("[a-z0-9][a-z0-9._-]*");
+
+    private final TruthCatalog truth;
+    private final LearnerCatalog learners;
+    private final MetricCatalog metrics;
+
+    public StudyReader(TruthCatalog truth, LearnerCatalog learners, MetricCatalog metrics) {
+        this.truth = truth;
+        this.learners = learners;
+        this.metrics = metrics;
+    }
+
+    /** Reads and validates a study file. */
+    public Study read(Path file) {
+        return read(NodeReader.read(file));
+    }
+
+    /** Validates a parsed study. */
+    public Study read(Node root) {
+        checkKeys(root, StudyFields.names());
+        String name = text(required(root, StudyFields.NAME));
+        if (!NAME.matcher(name).matches()) {
+            throw StudyException.at(root.get(StudyFields.NAME), "'" + name
+                    + "' is not allowed (letters, digits, '.', '_' and '-', starting with a letter or digit)");
+        }
+        Node descriptionNode = root.get(StudyFields.DESCRIPTION);
+        String description = descriptionNode == null || descriptionNode.isNull() ? "" : text(descriptionNode);
+        long seed = integer(required(root, StudyFields.SEED), Long.MIN_VALUE, Long.MAX_VALUE);
+        Node repNode = root.get(StudyFields.REPLICATES);
+        int replicates = repNode == null ? 1 : (int) integer(repNode, 1, StudyFields.MAX_REPLICATES);
+        List<ComponentSpec> truthSpecs = truth(required(root, StudyFields.TRUTH));
+        List<SampleSize> samples = samples(required(root, StudyFields.SAMPLES));
+        List<LearnerEntry> entries = learners(required(root, StudyFields.LEARNERS));
+        List<String> metricNames = metrics(root.get(StudyFields.METRICS));
+        Limits limits = limits(root.get(StudyFields.LIMITS));
+        String compareTo = compareTo(root.get(StudyFields.COMPARE_TO), entries);
+        Study study = new Study(name, description, seed, replicates, truthSpecs, samples, entries, metricNames,
+                limits, compareTo, root);
+        checkSize(root, study);
+        return study;
+    }
+
+    // ---- truth
+
+    private List<ComponentSpec> truth(Node node) {
+        requireMap(node);
+        List<String> sectionNames = truth.sections().stream().map(TruthCatalog.Section::name).toList();
+        checkKeys(node, sectionNames);
+        List<ComponentSpec> out = new ArrayList<>();
+        for (TruthCatalog.Section section : truth.sections()) {
+            Node s = node.get(section.name());
+            if (s == null || s.isNull()) {
+                if (section.defaultKind() == null) {
+                    throw new StudyException(node.place(), path(node, section.name()),
+                            "this field is required (allowed " + section.kindField() + ": "
+                                    + String.join(", ", section.kindNames()) + ")");
+                }
+                out.add(new ComponentSpec(section.name(), section.kindField(), section.defaultKind(), Map.of()));
+                continue;
+            }
+            out.add(component(section, s));
+        }
+        return out;
+    }
+
+    private ComponentSpec component(TruthCatalog.Section section, Node node) {
+        if (!node.isMap()) {
+            if (section.shorthand() == null) {
+                throw StudyException.at(node, "expected a map such as {" + section.kindField() + ": "
+                        + section.kindNames().get(0) + ", …}, found " + node.describe());
+            }
+            TruthCatalog.Kind kind = section.kind(section.shorthandKind());
+            ParameterSpec spec = kind.parameter(section.shorthand());
+            Map<String, List<Object>> axes = new LinkedHashMap<>();
+            axes.put(spec.name(), axis(node, spec));
+            return new ComponentSpec(section.name(), section.kindField(), kind.name(), axes);
+        }
+        Node kindNode = node.get(section.kindField());
+        List<String> kindNames = new ArrayList<>();
+        List<Node> kindNodes = new ArrayList<>();
+        if (kindNode == null) {
+            if (section.defaultKind() == null) {
+                throw new StudyException(node.place(), path(node, section.kindField()),
+                        "this field is required (allowed: " + String.join(", ", section.kindNames()) + ")");
+            }
+            kindNames.add(section.defaultKind());
+            kindNodes.add(node);
+        } else {
+            for (Node k : kindNode.isList() ? kindNode.items() : List.of(kindNode)) {
+                String name = text(k);
+                if (section.kind(name) == null) {
+                    throw StudyException.at(k, "unknown " + section.name() + " " + section.kindField() + " '"
+                            + name + "' (allowed: " + String.join(", ", section.kindNames()) + ")");
+                }
+                if (kindNames.contains(name)) {
+                    throw StudyException.at(k, "the " + section.kindField() + " " + name + " is listed twice");
+                }
+                kindNames.add(name);
+                kindNodes.add(k);
+            }
+            if (kindNames.isEmpty()) {
+                throw StudyException.at(kindNode, "an empty list gives no " + section.kindField() + " (allowed: "
+                        + String.join(", ", section.kindNames()) + ")");
+            }
+        }
+        Map<String, Node> flat = new LinkedHashMap<>();
+        Map<String, Node.Place> keyPlaces = new LinkedHashMap<>();
+        flatten(node, "", flat, keyPlaces, section.kindField());
+        Map<String, List<Object>> axes = new LinkedHashMap<>();
+        for (Map.Entry<String, Node> e : flat.entrySet()) {
+            List<Object> values = null;
+            for (String kindName : kindNames) {
+                TruthCatalog.Kind kind = section.kind(kindName);
+                ParameterSpec spec = kind.parameter(e.getKey());
+                if (spec == null) {
+                    List<String> allowed = kind.parameters().stream().map(ParameterSpec::name).toList();
+                    throw new StudyException(keyPlaces.get(e.getKey()), e.getValue().path(), "unknown parameter '"
+                            + e.getKey() + "' of " + section.name() + " " + kindName + " (allowed: "
+                            + (allowed.isEmpty() ? "none" : String.join(", ", allowed)) + ")");
+                }
+                List<Object> v = axis(e.getValue(), spec);
+                if (values == null) {
+                    values = v;
+                }
+            }
+            axes.put(e.getKey(), values);
+        }
+        return new ComponentSpec(section.name(), section.kindField(), kindNames, axes);
+    }
+
+    /** Nested maps name grouped parameters: {@code edge_weight: {low: 0.5}} is the parameter {@code edge_weight_low}. */
+    private static void flatten(Node map, String prefix, Map<String, Node> out, Map<String, Node.Place> places,
+                                String skip) {
+        for (Map.Entry<String, Node> e : map.entries().entrySet()) {
+            if (prefix.isEmpty() && e.getKey().equals(skip)) {
+                continue;
+            }
+            String name = prefix.isEmpty() ? e.getKey() : prefix + "_" + e.getKey();
+            if (e.getValue().isMap()) {
+                flatten(e.getValue(), name, out, places, skip);
+            } else {
+                out.put(name, e.getValue());
+                places.put(name, map.keyPlace(e.getKey()));
+            }
+        }
+    }
+
+    /** One value or a list of values, each checked by the parameter's declaration. */
+    private static List<Object> axis(Node node, ParameterSpec spec) {
+        List<Node> items = node.isList() ? node.items() : List.of(node);
+        if (items.isEmpty()) {
+            throw StudyException.at(node, "an empty list gives no values (allowed: " + spec.allowed() + ")");
+        }
+        List<Object> values = new ArrayList<>();
+        Set<String> seen = new HashSet<>();
+        for (Node item : items) {
+            if (!item.isScalar()) {
+                throw StudyException.at(item, "expected a value (allowed: " + spec.allowed() + "), found "
+                        + item.describe());
+            }
+            Object v;
+            try {
+                v = spec.parse(item.value());
+            } catch (ParameterException e) {
+                throw StudyException.at(item, e.getMessage());
+            }
+            if (!seen.add(Canonical.value(v))) {
+                throw StudyException.at(item, "the value " + Canonical.value(v) + " is listed twice");
+            }
+            values.add(v);
+        }
+        return values;
+    }
+
+    // ---- samples
+
+    private static List<SampleSize> samples(Node node) {
+        List<Node> items = node.isList() ? node.items() : List.of(node);
+        if (items.isEmpty()) {
+            throw StudyException.at(node, "needs at least one sample size (whole numbers of at least "
+                    + StudyFields.MIN_SAMPLES + ", or oracle)");
+        }
+        List<SampleSize> out = new ArrayList<>();
+        for (Node item : items) {
+            SampleSize s = sample(item);
+            if (out.contains(s)) {
+                throw StudyException.at(item, "the sample size " + s.word() + " is listed twice");
+            }
+            out.add(s);
+        }
+        return out;
+    }
+
+    private static SampleSize sample(Node item) {
+        Object v = item.value();
+        if (item.isScalar() && v instanceof String
+                && ((String) v).trim().toLowerCase(Locale.ROOT).equals(SampleSize.ORACLE_WORD)) {
+            return SampleSize.oracle();
+        }
+        if (item.isScalar() && v instanceof Long && (Long) v >= StudyFields.MIN_SAMPLES && (Long) v <= Integer.MAX_VALUE) {
+            return SampleSize.of((Long) v);
+        }
+        throw StudyException.at(item, item.describe() + " is not a sample size (allowed: whole numbers from "
+                + StudyFields.MIN_SAMPLES + " to " + Integer.MAX_VALUE + ", or oracle)");
+    }
+
+    // ---- learners
+
+    private List<LearnerEntry> learners(Node node) {
+        if (!node.isList()) {
+            throw StudyException.at(node, "expected a list of learner entries, found " + node.describe());
+        }
+        if (node.items().isEmpty()) {
+            throw StudyException.at(node, "needs at least one learner (see 'touchstone learners')");
+        }
+        List<LearnerEntry> out = new ArrayList<>();
+        Map<String, Node> ids = new LinkedHashMap<>();
+        for (Node item : node.items()) {
+            LearnerEntry e = entry(item);
+            if (ids.containsKey(e.id())) {
+                throw StudyException.at(item, "the learner id '" + e.id() + "' is already used at line "
+                        + ids.get(e.id()).place().line() + "; give each entry its own id");
+            }
+            ids.put(e.id(), item);
+            out.add(e);
+        }
+        return out;
+    }
+
+    private LearnerEntry entry(Node item) {
+        if (item.isScalar() && item.value() instanceof String) {
+            String use = (String) item.value();
+            LearnerCatalog.Entry found = findLearner(item, use);
+            return new LearnerEntry(checkId(item, use), found.id(), Map.of(), item.place());
+        }
+        if (!item.isMap()) {
+            throw StudyException.at(item, "expected a learner id or {id: …, use: …, with: {…}}, found "
+                    + item.describe());
+        }
+        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH));
+        Node useNode = required(item, StudyFields.ENTRY_USE);
+        LearnerCatalog.Entry found = findLearner(useNode, text(useNode));
+        Node idNode = item.get(StudyFields.ENTRY_ID);
+        String id = idNode == null ? found.id() : checkId(idNode, text(idNode));
+        LearnerDescription d = found.learner().description();
+        Map<String, List<Object>> axes = new LinkedHashMap<>();
+        Node with = item.get(StudyFields.ENTRY_WITH);
+        if (with != null && !with.isNull()) {
+            requireMap(with);
+            for (Map.Entry<String, Node> p : with.entries().entrySet()) {
+                ParameterSpec spec = d.parameter(p.getKey());
+                if (spec == null) {
+                    List<String> allowed = d.parameters().stream().map(ParameterSpec::name).toList();
+                    throw new StudyException(with.keyPlace(p.getKey()), p.getValue().path(), "unknown parameter '"
+                            + p.getKey() + "' of learner " + d.id() + " (allowed: "
+                            + (allowed.isEmpty() ? "none, it has no parameters" : String.join(", ", allowed)) + ")");
+                }
+                axes.put(spec.name(), axis(p.getValue(), spec));
+            }
+        }
+        for (ParameterSpec spec : d.parameters()) {
+            if (spec.defaultValue() == null && !axes.containsKey(spec.name())) {
+                throw new StudyException(item.place(), item.path() + "." + StudyFields.ENTRY_WITH + "." + spec.name(),
+                        "learner " + d.id() + " needs this parameter (allowed: " + spec.allowed() + ")");
+            }
+        }
+        return new LearnerEntry(id, found.id(), axes, item.place());
+    }
+
+    private LearnerCatalog.Entry findLearner(Node node, String use) {
+        LearnerCatalog.Entry found = learners.find(use);
+        if (found == null) {
+            throw StudyException.at(node, "unknown learner '" + use + "' (available: "
+                    + String.join(", ", learners.ids()) + "). An external command learner must be declared in a"
+                    + " learners file given with --learners FILE; a study file alone cannot make one runnable");
+        }
+        return found;
+    }
+
+    private static String checkId(Node node, String id) {
+        if (!ENTRY_ID.matcher(id).matches()) {
+            throw StudyException.at(node, "'" + id + "' is not allowed as an id (lower-case letters, digits, '.', '_'"
+                    + " and '-', starting with a letter or digit)");
+        }
+        return id;
+    }
+
+    // ---- metrics, limits, compare_to
+
+    private List<String> metrics(Node node) {
+        if (node == null || node.isNull()) {
+            return metrics.defaults();
+        }
+        List<Node> items = node.isList() ? node.items() : List.of(node);
+        if (items.isEmpty()) {
+            throw StudyException.at(node, "needs at least one metric (allowed: " + String.join(", ", metrics.names())
+                    + "), or leave the field out for the defaults");
+        }
+        List<String> out = new ArrayList<>();
+        for (Node item : items) {
+            String m = text(item);
+            if (!metrics.contains(m)) {
+                throw StudyException.at(item, "unknown metric '" + m + "' (allowed: "
+                        + String.join(", ", metrics.names()) + ")");
+            }
+            if (out.contains(m)) {
+                throw StudyException.at(item, "the metric " + m + " is listed twice");
+            }
+            out.add(m);
+        }
+        return out;
+    }
+
+    private static Limits limits(Node node) {
+        if (node == null || node.isNull()) {
+            return Limits.defaults();
+        }
+        requireMap(node);
+        checkKeys(node, List.of(StudyFields.LIMIT_SECONDS, StudyFields.LIMIT_MAX_RUNS));
+        Duration perRun = null;
+        Node s = node.get(StudyFields.LIMIT_SECONDS);
+        if (s != null && !s.isNull()) {
+            double sec = real(s);
+            if (!(sec > 0) || sec > 7 * 24 * 3600) {
+                throw StudyException.at(s, s.describe() + " is not allowed (allowed: more than 0, at most 604800 seconds)");
+            }
+            perRun = Duration.ofNanos(Math.round(sec * 1e9));
+        }
+        Node m = node.get(StudyFields.LIMIT_MAX_RUNS);
+        long maxRuns = m == null || m.isNull() ? Limits.DEFAULT_MAX_RUNS : integer(m, 1, Integer.MAX_VALUE);
+        return new Limits(perRun, maxRuns);
+    }
+
+    private static String compareTo(Node node, List<LearnerEntry> entries) {
+        if (node == null || node.isNull()) {
+            return null;
+        }
+        String id = text(node);
+        for (LearnerEntry e : entries) {
+            if (e.id().equals(id)) {
+                if (e.configurations() != 1) {
+                    throw StudyException.at(node, "learner entry '" + id + "' expands into " + e.configurations()
+                            + " configurations; compare_to needs an entry with one configuration");
+                }
+                if (entries.size() < 2) {
+                    throw StudyException.at(node, "there is no other learner to compare with '" + id + "'");
+                }
+                return id;
+            }
+        }
+        throw StudyException.at(node, "no learner entry has the id '" + id + "' (ids: "
+                + String.join(", ", entries.stream().map(LearnerEntry::id).toList()) + ")");
+    }
+
+    private static void checkSize(Node root, Study study) {
+        long runs;
+        try {
+            runs = study.runCount();
+        } catch (ArithmeticException e) {
+            runs = Long.MAX_VALUE;
+        }
+        if (runs > study.limits().maxRuns()) {
+            Node at = root.get(StudyFields.LIMITS) != null ? root.get(StudyFields.LIMITS) : root;
+            throw new StudyException(at.place(), StudyFields.LIMITS + "." + StudyFields.LIMIT_MAX_RUNS,
+                    String.format(Locale.ROOT, "the study expands to %,d runs (%,d truth settings x %d replicates x %d"
+                                    + " sample sizes x %d learner configurations), more than the limit of %,d;"
+                                    + " make the grid smaller or raise limits.max_runs",
+                            runs, study.truthCombinations(), study.replicates(), study.samples().size(),
+                            study.configurations(), study.limits().maxRuns()));
+        }
+    }
+
+    // ---- helpers
+
+    private static Node required(Node map, String key) {
+        Node n = map.get(key);
+        if (n == null || n.isNull()) {
+            StudyFields.Field f = StudyFields.TOP_LEVEL.stream().filter(x -> x.name().equals(key)).findFirst()
+                    .orElse(null);
+            throw new StudyException(n == null ? map.place() : n.place(), path(map, key), "this field is required"
+                    + (f != null && map.path().isEmpty() ? " (" + f.meaning() + ")" : ""));
+        }
+        return n;
+    }
+
+    private static void checkKeys(Node map, List<String> allowed) {
+        requireMap(map);
+        for (String key : map.entries().keySet()) {
+            if (!allowed.contains(key)) {
+                String hint = closest(key, allowed);
+                throw new StudyException(map.keyPlace(key), path(map, key), "unknown field"
+                        + (hint == null ? "" : " (did you mean '" + hint + "'?)") + "; allowed here: "
+                        + String.join(", ", allowed));
+            }
+        }
+    }
+
+    private static void requireMap(Node node) {
+        if (!node.isMap()) {
+            throw StudyException.at(node, "expected a map (name: value, …), found " + node.describe());
+        }
+    }
+
+    private static String text(Node node) {
+        if (!node.isScalar() || node.value() == null || node.value() instanceof Boolean) {
+            throw StudyException.at(node, "expected a word or text, found " + node.describe());
+        }
+        return node.value().toString();
+    }
+
+    private static long integer(Node node, long min, long max) {
+        Object v = node.value();
+        if (!node.isScalar() || !(v instanceof Long)) {
+            throw StudyException.at(node, "expected a whole number, found " + node.describe());
+        }
+        long x = (Long) v;
+        if (x < min || x > max) {
+            throw StudyException.at(node, x + " is outside the allowed range [" + min + ", " + max + "]");
+        }
+        return x;
+    }
+
+    private static double real(Node node) {
+        Object v = node.value();
+        if (!node.isScalar() || !(v instanceof Number)) {
+            throw StudyException.at(node, "expected a number, found " + node.describe());
+        }
+        return ((Number) v).doubleValue();
+    }
+
+    private static String path(Node parent, String key) {
+        return parent.path().isEmpty() ? key : parent.path() + "." + key;
+    }
+
+    /** The allowed word closest to a misspelt one (edit distance at most 2), or null. */
+    static String closest(String word, List<String> allowed) {
+        String best = null;
+        int bestDistance = 3;
+        for (String a : allowed) {
+            int d = distance(word.toLowerCase(Locale.ROOT), a);
+            if (d < bestDistance) {
+                bestDistance = d;
+                best = a;
+            }
+        }
+        return best;
+    }
+
+    private static int distance(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
+    }
+}

@@ -1,0 +1,79 @@
+package dev.touchstone.harness.study;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLGenerator;
+import com.fasterxml.jackson.dataformat.yaml.YAMLMapper;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Writes a study back out normalised: every field explicit (defaults filled in for
+ * replicates, metrics and limits), values as parsed, grouped parameters flattened, in a
+ * fixed field order. Reading the normalised file back gives the same plan and keys.
+ */
+public final class StudyWriter {
+
+    private static final YAMLMapper YAML = new YAMLMapper(YAMLFactory.builder()
+            .enable(YAMLGenerator.Feature.MINIMIZE_QUOTES)
+            .disable(YAMLGenerator.Feature.WRITE_DOC_START_MARKER)
+            .build());
+
+    private StudyWriter() {
+    }
+
+    public static String yaml(Study s) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put(StudyFields.NAME, s.name());
+        if (!s.description().isEmpty()) {
+            m.put(StudyFields.DESCRIPTION, s.description());
+        }
+        m.put(StudyFields.SEED, s.seed());
+        m.put(StudyFields.REPLICATES, s.replicates());
+        Map<String, Object> truth = new LinkedHashMap<>();
+        for (ComponentSpec c : s.truth()) {
+            Map<String, Object> section = new LinkedHashMap<>();
+            section.put(c.kindField(), c.kinds().size() == 1 ? c.kind() : c.kinds());
+            c.axes().forEach((k, v) -> section.put(k, v.size() == 1 ? v.get(0) : v));
+            truth.put(c.section(), section);
+        }
+        m.put(StudyFields.TRUTH, truth);
+        List<Object> samples = new ArrayList<>();
+        for (SampleSize n : s.samples()) {
+            samples.add(n.isOracle() ? SampleSize.ORACLE_WORD : n.rows());
+        }
+        m.put(StudyFields.SAMPLES, samples);
+        List<Object> learners = new ArrayList<>();
+        for (LearnerEntry e : s.learners()) {
+            Map<String, Object> entry = new LinkedHashMap<>();
+            entry.put(StudyFields.ENTRY_ID, e.id());
+            entry.put(StudyFields.ENTRY_USE, e.use());
+            if (!e.axes().isEmpty()) {
+                Map<String, Object> with = new LinkedHashMap<>();
+                e.axes().forEach((k, v) -> with.put(k, v.size() == 1 ? v.get(0) : v));
+                entry.put(StudyFields.ENTRY_WITH, with);
+            }
+            learners.add(entry);
+        }
+        m.put(StudyFields.LEARNERS, learners);
+        m.put(StudyFields.METRICS, s.metrics());
+        Map<String, Object> limits = new LinkedHashMap<>();
+        if (s.limits().perRun() != null) {
+            limits.put(StudyFields.LIMIT_SECONDS, s.limits().seconds());
+        }
+        limits.put(StudyFields.LIMIT_MAX_RUNS, s.limits().maxRuns());
+        m.put(StudyFields.LIMITS, limits);
+        if (s.compareTo() != null) {
+            m.put(StudyFields.COMPARE_TO, s.compareTo());
+        }
+        try {
+            return "# The study as run, normalised by touchstone: every field explicit.\n" + YAML.writeValueAsString(m);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("the study could not be written as YAML", e);
+        }
+    }
+
+}

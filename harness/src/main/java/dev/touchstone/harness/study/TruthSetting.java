@@ -1,0 +1,86 @@
+package dev.touchstone.harness.study;
+
+import dev.touchstone.core.param.ParameterValues;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One point of the truth grid: for every truth section, its kind and the complete
+ * parameter values (defaults filled in). Its {@link #canonical()} text is what seeds and
+ * run keys are derived from. Immutable.
+ *
+ * @param index   position in the expansion's list of truth settings
+ * @param choices one choice per section, in the catalogue's order
+ */
+public record TruthSetting(int index, List<Choice> choices) {
+
+    public TruthSetting {
+        choices = List.copyOf(choices);
+    }
+
+    /** A section's kind and values. {@code given} holds only the values the study wrote (for output columns). */
+    public record Choice(String section, String kind, ParameterValues values, Map<String, Object> given) {
+        public Choice {
+            given = Map.copyOf(given);
+        }
+
+        /** E.g. {@code graph=erdos-renyi{nodes=20,mean_degree=2.0}}. */
+        public String canonical() {
+            StringBuilder sb = new StringBuilder(section).append('=').append(kind).append('{');
+            boolean first = true;
+            for (Map.Entry<String, Object> e : values.asMap().entrySet()) {
+                if (!first) {
+                    sb.append(',');
+                }
+                first = false;
+                sb.append(e.getKey()).append('=').append(Canonical.value(e.getValue()));
+            }
+            return sb.append('}').toString();
+        }
+    }
+
+    /** The choice of this section, or null. */
+    public Choice choice(String section) {
+        for (Choice c : choices) {
+            if (c.section().equals(section)) {
+                return c;
+            }
+        }
+        return null;
+    }
+
+    /** Every section's canonical text joined by {@code ;}. */
+    public String canonical() {
+        return canonicalUpTo(choices.size());
+    }
+
+    /** The canonical text of the first {@code count} sections (what that section's random draw may depend on). */
+    public String canonicalUpTo(int count) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < count; i++) {
+            if (i > 0) {
+                sb.append(';');
+            }
+            sb.append(choices.get(i).canonical());
+        }
+        return sb.toString();
+    }
+
+    /** A short human label: each section's kind and the values the study varied or gave. */
+    public String label() {
+        StringBuilder sb = new StringBuilder();
+        for (Choice c : choices) {
+            if (sb.length() > 0) {
+                sb.append(' ');
+            }
+            sb.append(c.kind());
+            for (Map.Entry<String, Object> e : c.values().asMap().entrySet()) {
+                if (c.given().containsKey(e.getKey())) {
+                    sb.append(' ').append(e.getKey()).append('=').append(Canonical.value(e.getValue()));
+                }
+            }
+        }
+        return sb.toString();
+    }
+}

@@ -1,0 +1,169 @@
+package dev.touchstone.harness.cli;
+
+import dev.touchstone.harness.io.GraphJson;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** The verbs through {@link Main#execute}: exit status and error style of design §9. */
+class CliTest {
+
+    static final Path ROOT = Path.of("..").toAbsolutePath().normalize();
+    static final Path LEARNERS = ROOT.resolve("examples/adapters/learners.yaml");
+
+    @TempDir
+    Path tmp;
+
+    record Result(int status, String out, String err) {
+    }
+
+    static Result cli(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int status = Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return new Result(status, out.toString(), err.toString());
+    }
+
+    @Test
+    @DisplayName("check validates every bundled scenario and prints the grid and the work")
+    void checkScenarios() throws IOException {
+        List<Path> scenarios = new ArrayList<>();
+        try (var s = Files.list(ROOT.resolve("scenarios"))) {
+            s.filter(p -> p.toString().endsWith(".yaml")).forEach(scenarios::add);
+        }
+        assertFalse(scenarios.isEmpty());
+        for (Path p : scenarios) {
+            Result r = cli("check", p.toString(), "--learners", LEARNERS.toString());
+            assertEquals(0, r.status(), r.err());
+            assertTrue(r.out().contains(": valid"), r.out());
+            assertTrue(r.out().contains("runs in all"), r.out());
+            assertTrue(r.out().contains("replicates to draw"), r.out());
+            assertTrue(Files.readString(p).startsWith("# "), p + " starts with a comment saying what it is for");
+        }
+    }
+
+    @Test
+    @DisplayName("a bad study gives exit 2 and one line 'error: FILE:LINE:COLUMN: field: …'")
+    void badStudy() throws IOException {
+        Path f = tmp.resolve("bad.yaml");
+        Files.writeString(f, "name: b\nseed: 1\ntruth:\n  graph: {family: erdos-renyi, nodes: 0}\n"
+                + "  model: {kind: linear-gaussian}\nsamples: [10]\nlearners: [nobody]\n");
+        Result r = cli("check", f.toString());
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("error: bad.yaml:4:"), r.err());
+        assertTrue(r.err().contains("truth.graph.nodes: parameter 'nodes': 0 is outside the allowed range"), r.err());
+        assertEquals(1, r.err().lines().count(), r.err());
+        assertFalse(r.err().contains("Exception"), r.err());
+    }
+
+    @Test
+    @DisplayName("a study naming an undeclared command learner is refused by run with exit 2, saying so")
+    void undeclaredCommand() throws IOException {
+        Result r = cli("run", ROOT.resolve("scenarios/first-look.yaml").toString(), "--out", tmp.resolve("o").toString());
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("unknown learner 'corr-skeleton-py'"), r.err());
+        assertTrue(r.err().contains("--learners FILE"), r.err());
+        assertFalse(Files.exists(tmp.resolve("o")), "nothing runs before the study is valid");
+    }
+
+    @Test
+    @DisplayName("run writes every output and a final line; a second run resumes with nothing to do")
+    void runAndResume() throws IOException {
+        Path study = tmp.resolve("quick.yaml");
+        Files.writeString(study, Files.readString(ROOT.resolve("scenarios/first-look.yaml"))
+                .replace("replicates: 4", "replicates: 1").replace("nodes: [6, 10]", "nodes: 5")
+                .replace("samples: [200, 1000]", "samples: [200]"));
+        Path out = tmp.resolve("out");
+        Result r = cli("run", study.toString(), "--out", out.toString(), "--threads", "2", "--quiet",
+                "--learners", LEARNERS.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().startsWith("done: 2 runs (2 ok"), r.out());
+        assertEquals("", r.err());
+        for (String f : List.of("study.yaml", "provenance.json", "journal.jsonl", "runs.csv", "summary.csv",
+                "comparisons.csv")) {
+            assertTrue(Files.isRegularFile(out.resolve(f)), f);
+        }
+        Result again = cli("run", study.toString(), "--out", out.toString(), "--learners", LEARNERS.toString());
+        assertEquals(0, again.status(), again.err());
+        assertTrue(again.err().contains("2 of 2 runs already done"), again.err());
+        assertTrue(again.out().contains("0 done now"), again.out());
+    }
+
+    @Test
+    @DisplayName("learners --json lists command learners with their declared parameters")
+    void learnersJson() {
+        Result r = cli("learners", "--json", "--learners", LEARNERS.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().contains("\"id\" : \"corr-skeleton-py\""), r.out());
+        assertTrue(r.out().contains("\"origin\" : \"command\""), r.out());
+        assertTrue(r.out().contains("\"name\" : \"threshold\""), r.out());
+        Result text = cli("learners", "--learners", LEARNERS.toString());
+        assertTrue(text.out().contains("threshold (real, default 0.3, allowed [0.0, 1.0])"), text.out());
+    }
+
+    @Test
+    @DisplayName("learn runs one learner on a CSV file; bad parameters and unknown learners are one-line errors")
+    void learn() throws IOException {
+        Path data = tmp.resolve("d.csv");
+        StringBuilder sb = new StringBuilder("A,B,C\n");
+        java.util.Random rnd = new java.util.Random(3);
+        for (int i = 0; i < 200; i++) {
+            double a = rnd.nextGaussian();
+            double b = a + 0.5 * rnd.nextGaussian();
+            sb.append(a).append(',').append(b).append(',').append(rnd.nextGaussian()).append('\n');
+        }
+        Files.writeString(data, sb.toString());
+        Path g = tmp.resolve("g.json");
+        Result r = cli("learn", "--learner", "corr-skeleton-py", "--set", "threshold=0.5", "--data", data.toString(),
+                "--out", g.toString(), "--learners", LEARNERS.toString());
+        assertEquals(0, r.status(), r.err());
+        var graph = GraphJson.read(g);
+        assertTrue(graph.adjacent(graph.index("A"), graph.index("B")), "A and B are strongly correlated");
+        assertFalse(graph.adjacent(graph.index("A"), graph.index("C")));
+        Result bad = cli("learn", "--learner", "corr-skeleton-py", "--set", "threshold=2", "--data", data.toString(),
+                "--learners", LEARNERS.toString());
+        assertEquals(2, bad.status());
+        assertTrue(bad.err().contains("threshold") && bad.err().contains("[0.0, 1.0]"), bad.err());
+        Result unknown = cli("learn", "--learner", "nope", "--data", data.toString());
+        assertEquals(2, unknown.status());
+        assertTrue(unknown.err().startsWith("error: --learner: unknown learner 'nope'"), unknown.err());
+    }
+
+    @Test
+    @DisplayName("simulate writes each replicate's data and truth, the same draw run uses")
+    void simulate() throws IOException {
+        Path out = tmp.resolve("sim");
+        Result r = cli("simulate", ROOT.resolve("scenarios/first-look.yaml").toString(), "--out", out.toString(),
+                "--learners", LEARNERS.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().startsWith("wrote 8 replicates"), r.out());
+        Path one = out.resolve("t1-r3");
+        var data = dev.touchstone.harness.io.DataCsv.read(one.resolve("data.csv")).data();
+        assertEquals(1000, data.rows());
+        assertEquals(10, data.columns());
+        var dag = GraphJson.read(one.resolve("dag.json"));
+        assertEquals(data.names(), dag.names());
+        assertTrue(Files.exists(one.resolve("cpdag.json")));
+        assertTrue(Files.exists(one.resolve("pag.json")));
+        assertEquals(9, Files.readAllLines(out.resolve("replicates.csv")).size());
+    }
+
+    @Test
+    @DisplayName("usage errors give exit 2")
+    void usage() {
+        assertEquals(2, cli("run").status());
+        assertEquals(2, cli("frobnicate").status());
+    }
+}
