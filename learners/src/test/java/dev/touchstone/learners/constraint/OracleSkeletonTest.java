@@ -22,8 +22,8 @@ class OracleSkeletonTest {
 
     static Graph truth(int i) {
         int n = 5 + i % 26;
-        return i % 2 == 0 ? RandomDags.erdosRenyi(n, 1.5 + (i % 5) * 0.5, 7000 + i)
-                : RandomDags.scaleFree(n, 1 + i % 3, 8000 + i);
+        return i % 2 == 0 ? RandomDags.erdosRenyi(n, 1.5 + (i % 4) * 0.5, 7000 + i)
+                : RandomDags.scaleFree(n, 1 + (i / 2) % 2, 8000 + i);
     }
 
     @Test
