@@ -1,0 +1,2 @@
+/** Audits of simulated data for known artefacts, such as variance and R² sortability. */
+package dev.touchstone.generators.audit;

@@ -1,0 +1,95 @@
+package dev.touchstone.generators.hidden;
+
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.param.ParameterSpec;
+import dev.touchstone.core.param.ParameterValues;
+import org.apache.commons.rng.UniformRandomProvider;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * The built-in hidden-variable options: {@code none} (keep the DAG's flags as they are),
+ * {@code random} (hide k variables chosen uniformly) and {@code confounders} (hide k
+ * variables chosen uniformly among those with at least two children, the common causes
+ * whose omission creates bidirected edges in the MAG; Richardson and Spirtes 2002).
+ * When fewer variables qualify than asked for, all that qualify are hidden; the truth's
+ * {@code hiddenNames()} says how many were. Cost O(p + edges).
+ */
+public final class HiddenOptions {
+
+    public static final String NONE = "none";
+    public static final String RANDOM = "random";
+    public static final String CONFOUNDERS = "confounders";
+
+    static final ParameterSpec COUNT = ParameterSpec.integer("count", 1, 0, 1_000_000,
+            "number of variables to hide");
+
+    private static final List<HiddenOption> ALL = List.of(
+            new Option(NONE, "hide nothing (a given graph keeps its own flags)", List.of(), false, false),
+            new Option(RANDOM, "hide variables chosen uniformly at random", List.of(COUNT), true, false),
+            new Option(CONFOUNDERS, "hide only common causes (variables with at least two children)",
+                    List.of(COUNT), true, true));
+
+    private HiddenOptions() {
+    }
+
+    public static List<HiddenOption> all() {
+        return ALL;
+    }
+
+    /**
+     * The option with this id.
+     *
+     * @throws IllegalArgumentException naming the id and listing the known ones
+     */
+    public static HiddenOption byId(String id) {
+        for (HiddenOption o : ALL) {
+            if (o.id().equals(id)) {
+                return o;
+            }
+        }
+        List<String> known = new ArrayList<>();
+        for (HiddenOption o : ALL) {
+            known.add(o.id());
+        }
+        throw new IllegalArgumentException("unknown hidden option '" + id + "' (known: " + String.join(", ", known) + ")");
+    }
+
+    private record Option(String id, String summary, List<ParameterSpec> parameters, boolean hides,
+                          boolean confoundersOnly) implements HiddenOption {
+
+        @Override
+        public Graph apply(Graph dag, ParameterValues values, UniformRandomProvider random) {
+            if (!hides) {
+                return dag;
+            }
+            int k = values.getInt(COUNT.name());
+            if (!confoundersOnly && k >= dag.size()) {
+                throw new dev.touchstone.core.param.ParameterException(COUNT.name(), "parameter 'count': hiding " + k
+                        + " of " + dag.size() + " variables would leave none observed");
+            }
+            List<Integer> eligible = new ArrayList<>();
+            for (int v = 0; v < dag.size(); v++) {
+                if (!confoundersOnly || dag.children(v).length >= 2) {
+                    eligible.add(v);
+                }
+            }
+            // Partial Fisher–Yates shuffle: the first k of the list are a uniform choice.
+            int take = Math.min(k, eligible.size());
+            for (int i = 0; i < take; i++) {
+                int j = i + random.nextInt(eligible.size() - i);
+                Integer t = eligible.get(i);
+                eligible.set(i, eligible.get(j));
+                eligible.set(j, t);
+            }
+            Set<String> hidden = new LinkedHashSet<>();
+            for (int i = 0; i < take; i++) {
+                hidden.add(dag.name(eligible.get(i)));
+            }
+            return dag.withHidden(hidden);
+        }
+    }
+}

@@ -1,0 +1,48 @@
+package dev.touchstone.learners.baseline;
+
+import dev.touchstone.core.data.DataKind;
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.Estimate;
+import dev.touchstone.core.learner.Learner;
+import dev.touchstone.core.learner.LearnerDescription;
+import dev.touchstone.core.learner.LearnerFamily;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.MissingValues;
+import dev.touchstone.core.learner.OracleUse;
+import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.param.ParameterValues;
+
+/**
+ * Returns the graph with no edges (common practice as the floor of any comparison). The
+ * empty graph is its own equivalence class, so it is declared a CPDAG and scored like PC
+ * and GES. Any learner that does not beat it has learned nothing about the structure;
+ * note that on sparse truths its SHD can look respectable while its SID is large
+ * (Peters and Bühlmann 2015). Cost: O(p).
+ */
+public final class EmptyGraphLearner implements Learner {
+
+    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder("empty")
+            .summary("returns the graph with no edges: the floor any learner must beat")
+            .publication("common practice")
+            .family(LearnerFamily.BASELINE)
+            .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
+            .returns(GraphClass.CPDAG)
+            .missingValues(MissingValues.OWN_METHOD)
+            .oracle(OracleUse.INDEPENDENCE)
+            .assumption("none: it ignores the data")
+            .build();
+
+    @Override
+    public LearnerDescription description() {
+        return DESCRIPTION;
+    }
+
+    @Override
+    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
+        DESCRIPTION.checkAccepts(input);
+        context.checkDeadline();
+        return Estimate.of(Graph.empty(input.variableNames()), GraphClass.CPDAG);
+    }
+}
