@@ -1,0 +1,106 @@
+package dev.touchstone.learners.constraint;
+
+import dev.touchstone.core.data.DataKind;
+import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.graph.MutableGraph;
+import dev.touchstone.core.graph.algorithms.MeekRules;
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.Estimate;
+import dev.touchstone.core.learner.KnowledgeUse;
+import dev.touchstone.core.learner.Learner;
+import dev.touchstone.core.learner.LearnerDescription;
+import dev.touchstone.core.learner.LearnerFamily;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.MissingValues;
+import dev.touchstone.core.learner.OracleUse;
+import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.param.ParameterSpec;
+import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.independence.IndependenceTest;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The PC algorithm (Spirtes, Glymour and Scheines 2000, "Causation, Prediction, and
+ * Search", 2nd ed., §5.4.2) with the variants in which published versions differ, chosen
+ * by parameters of the one learner {@code pc}:
+ * <ul>
+ *   <li>{@code skeleton}: the original adjacency search or the order-independent one of
+ *   Colombo and Maathuis (2014, JMLR 15), whose levels run in parallel;</li>
+ *   <li>{@code colliders}: the sepset rule, the conservative rule (Ramsey, Zhang and Spirtes
+ *   2006, UAI) or the majority rule (Colombo and Maathuis 2014);</li>
+ *   <li>{@code conflicts}: how two colliders that disagree about one edge are resolved
+ *   ({@link ConflictRule}).</li>
+ * </ul>
+ * After the colliders, Meek's rules (Meek 1995, "Causal inference and causal explanation
+ * with background knowledge", UAI) orient what follows, honouring the knowledge.
+ *
+ * <p>With the d-separation oracle every variant returns the CPDAG of the true DAG (the
+ * correctness theorem of PC; checked in the tests). Cost: dominated by the adjacency search
+ * (see {@link AdjacencySearch}); the conservative and majority rules add the tests of
+ * {@link ColliderOrientation}. Stateless and thread-safe.
+ */
+public final class PcLearner implements Learner {
+
+    static final ParameterSpec COLLIDERS = ParameterSpec.choice("colliders", ColliderRule.SEPSET.word(),
+            ColliderRule.words(), "collider rule: sepset (z not in the recorded separating set), conservative "
+                    + "(Ramsey, Zhang and Spirtes 2006) or majority (Colombo and Maathuis 2014)");
+    static final ParameterSpec CONFLICTS = ParameterSpec.choice("conflicts", ConflictRule.KEEP_FIRST.word(),
+            ConflictRule.words(), "colliders disagreeing about an edge: keep-first (in variable order) or "
+                    + "drop-both (the edge stays undirected; order-independent)");
+
+    private static final LearnerDescription DESCRIPTION = describe();
+
+    private static LearnerDescription describe() {
+        LearnerDescription.Builder b = LearnerDescription.builder("pc")
+                .summary("PC: adjacency search by conditional independence tests, then colliders and Meek's rules;"
+                        + " original or order-independent skeleton, sepset, conservative or majority colliders")
+                .publication("Spirtes, Glymour and Scheines (2000), Causation, Prediction, and Search, 2nd ed.;"
+                        + " Colombo and Maathuis (2014), JMLR 15; Ramsey, Zhang and Spirtes (2006), UAI")
+                .family(LearnerFamily.CONSTRAINT)
+                .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
+                .returns(GraphClass.CPDAG)
+                .missingValues(MissingValues.CONFIGURABLE)
+                .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
+                .oracle(OracleUse.INDEPENDENCE)
+                .assumption("acyclic causal structure")
+                .assumption("causal Markov condition and faithfulness")
+                .assumption("no hidden common causes and no selection bias")
+                .assumption("the independence test fits the data (e.g. Gaussian for fisher-z)");
+        for (ParameterSpec s : ConstraintParameters.shared()) {
+            b.parameter(s);
+        }
+        return b.parameter(COLLIDERS).parameter(CONFLICTS).build();
+    }
+
+    @Override
+    public LearnerDescription description() {
+        return DESCRIPTION;
+    }
+
+    @Override
+    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
+        DESCRIPTION.checkAccepts(input);
+        List<String> names = input.variableNames();
+        KnowledgeIndex ki = ConstraintParameters.knowledge(knowledge, names);
+        context.checkDeadline();
+        IndependenceTest test = ConstraintParameters.test(input, parameters);
+        int maxDepth = parameters.getInt(ConstraintParameters.MAX_DEPTH.name());
+        SkeletonVariant variant = SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name()));
+        Skeleton skeleton = new AdjacencySearch(test, ki, variant, maxDepth, context).run();
+        ColliderOrientation colliders = new ColliderOrientation(skeleton, test, ki,
+                ColliderRule.parse(parameters.getString(COLLIDERS.name())),
+                ConflictRule.parse(parameters.getString(CONFLICTS.name())), maxDepth, context);
+        MutableGraph g = colliders.orient(names);
+        context.checkDeadline();
+        MeekRules.Outcome meek = MeekRules.apply(g, knowledge);
+        Map<String, Double> extras = new LinkedHashMap<>();
+        extras.put("colliders", (double) colliders.counts().colliders());
+        extras.put("ambiguous_triples", (double) colliders.counts().ambiguous());
+        extras.put("collider_conflicts", (double) colliders.counts().conflicts());
+        extras.put("orientation_conflicts", (double) meek.conflicts().size());
+        return new Estimate(g.freeze(), GraphClass.CPDAG, extras);
+    }
+}

@@ -1,0 +1,46 @@
+package dev.touchstone.learners.constraint;
+
+import java.util.List;
+
+/** How the adjacency search of PC and FCI visits pairs. */
+public enum SkeletonVariant {
+    /**
+     * The original PC adjacency search (Spirtes, Glymour and Scheines 2000, §5.4.2): pairs
+     * are visited in variable order and an edge removed is gone at once, so later tests of
+     * the same level condition on the thinned neighbourhoods. The result can depend on the
+     * order of the variables.
+     */
+    ORIGINAL("original"),
+    /**
+     * The order-independent ("stable") search of Colombo and Maathuis (2014,
+     * "Order-independent constraint-based causal structure learning", JMLR 15): the
+     * neighbourhoods are frozen at the start of each level, so the level's tests do not
+     * depend on each other and run in parallel; the skeleton does not depend on the order of
+     * the variables.
+     */
+    ORDER_INDEPENDENT("order-independent");
+
+    private final String word;
+
+    SkeletonVariant(String word) {
+        this.word = word;
+    }
+
+    public String word() {
+        return word;
+    }
+
+    public static List<String> words() {
+        return List.of(ORIGINAL.word, ORDER_INDEPENDENT.word);
+    }
+
+    public static SkeletonVariant parse(String word) {
+        for (SkeletonVariant v : values()) {
+            if (v.word.equals(word)) {
+                return v;
+            }
+        }
+        throw new IllegalArgumentException("unknown skeleton variant '" + word + "' (allowed: "
+                + String.join(", ", words()) + ")");
+    }
+}

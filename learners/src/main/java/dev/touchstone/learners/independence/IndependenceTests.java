@@ -1,0 +1,103 @@
+package dev.touchstone.learners.independence;
+
+import dev.touchstone.core.data.DataKind;
+import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.learner.LearnerException;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.param.ParameterSpec;
+
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Chooses and builds the independence test for a learner's input: the d-separation oracle
+ * for an oracle input, otherwise the test named by the {@code test} parameter, with the
+ * missing-value policy applied. Also holds the parameter declarations every
+ * constraint-based learner shares, so that they are spelled the same everywhere.
+ */
+public final class IndependenceTests {
+
+    /** Picks Fisher z for continuous data, G² for discrete and the conditional Gaussian test for mixed. */
+    public static final String AUTO = "auto";
+    public static final String FISHER_Z = "fisher-z";
+    public static final String G_SQUARE = "g-square";
+    public static final String CHI_SQUARE = "chi-square";
+    public static final String CG_LRT = "cg-lrt";
+
+    /** The {@code test} parameter. */
+    public static final ParameterSpec TEST = ParameterSpec.choice("test", AUTO,
+            List.of(AUTO, FISHER_Z, G_SQUARE, CHI_SQUARE, CG_LRT),
+            "independence test: auto picks fisher-z (continuous), g-square (discrete) or cg-lrt (mixed); "
+                    + "ignored with the oracle");
+    /** The {@code alpha} parameter. */
+    public static final ParameterSpec ALPHA = ParameterSpec.real("alpha", 0.01, 1e-12, 0.999,
+            "significance level of each independence test");
+    /** The {@code missing} parameter. */
+    public static final ParameterSpec MISSING = ParameterSpec.choice("missing", MissingPolicy.TEST_WISE.word(),
+            MissingPolicy.words(), "rows with missing cells: test-wise uses the rows complete for each test's "
+                    + "variables, list-wise drops every incomplete row first");
+
+    private IndependenceTests() {
+    }
+
+    /**
+     * The test for this input.
+     *
+     * @throws LearnerException when the named test does not fit the data (naming both), or
+     *     list-wise deletion leaves no rows
+     */
+    public static IndependenceTest forInput(LearnerInput input, String test, double alpha, MissingPolicy missing) {
+        if (input.isOracle()) {
+            return new OracleTest(input.oracle());
+        }
+        DataSet data = input.data();
+        if (missing == MissingPolicy.LIST_WISE && data.hasMissing()) {
+            data = data.rows(completeRows(data));
+            if (data.rows() == 0) {
+                throw new LearnerException("list-wise deletion leaves no rows: every row has a missing cell");
+            }
+        }
+        DataKind kind = data.kind();
+        String chosen = test;
+        if (AUTO.equals(test)) {
+            chosen = kind == DataKind.CONTINUOUS ? FISHER_Z : kind == DataKind.DISCRETE ? G_SQUARE : CG_LRT;
+        }
+        switch (chosen) {
+            case FISHER_Z:
+                if (kind != DataKind.CONTINUOUS) {
+                    throw new LearnerException("test fisher-z needs continuous data, these are " + kind.word()
+                            + " (use g-square or chi-square for discrete, cg-lrt for mixed)");
+                }
+                return data.hasMissing() ? new TestwiseFisherZTest(data, alpha) : FisherZTest.of(data, alpha);
+            case G_SQUARE:
+            case CHI_SQUARE:
+                if (kind != DataKind.DISCRETE) {
+                    throw new LearnerException("test " + chosen + " needs discrete data, these are " + kind.word()
+                            + " (use fisher-z for continuous, cg-lrt for mixed)");
+                }
+                return new ContingencyTest(data, chosen.equals(G_SQUARE)
+                        ? ContingencyTest.Statistic.G_SQUARE : ContingencyTest.Statistic.CHI_SQUARE, alpha);
+            case CG_LRT:
+                return new ConditionalGaussianTest(data, alpha);
+            default:
+                throw new LearnerException("unknown independence test '" + test + "' (allowed: "
+                        + String.join(", ", TEST.choices()) + ")");
+        }
+    }
+
+    /** The rows without any missing cell. */
+    static int[] completeRows(DataSet data) {
+        int[] keep = new int[data.rows()];
+        int k = 0;
+        for (int r = 0; r < data.rows(); r++) {
+            boolean ok = true;
+            for (int j = 0; j < data.columns() && ok; j++) {
+                ok = !data.isMissing(r, j);
+            }
+            if (ok) {
+                keep[k++] = r;
+            }
+        }
+        return Arrays.copyOf(keep, k);
+    }
+}
