@@ -16,12 +16,14 @@ final class KnowledgeIndex {
     private final boolean[] forbidden;
     private final boolean[] required;
     private final List<int[]> requiredEdges;
+    private final boolean empty;
 
     private KnowledgeIndex(int p, boolean[] forbidden, boolean[] required, List<int[]> requiredEdges) {
         this.p = p;
         this.forbidden = forbidden;
         this.required = required;
         this.requiredEdges = requiredEdges;
+        this.empty = requiredEdges.isEmpty() && !anyForbidden();
     }
 
     /**
@@ -72,7 +74,7 @@ final class KnowledgeIndex {
     }
 
     boolean isEmpty() {
-        return requiredEdges.isEmpty() && !anyForbidden();
+        return empty;
     }
 
     private boolean anyForbidden() {

@@ -87,7 +87,27 @@ public final class ScoreCache implements LocalScore {
         Key(int node, int[] parents) {
             this.node = node;
             this.parents = parents;
-            this.hash = 31 * node + Arrays.hashCode(parents);
+            this.hash = mix(node, parents);
+        }
+
+        /**
+         * A well-mixed hash: parent sets of one node differ in few small integers, and a
+         * polynomial hash of them collides so often that hash bins degrade to lists.
+         * Multiply-and-add per element, then the MurmurHash3 32-bit finaliser (Appleby 2011).
+         */
+        private static int mix(int node, int[] parents) {
+            int h = 0x9E3779B9 ^ node;
+            for (int v : parents) {
+                h = (h ^ v) * 0x01000193 + 0x7F4A7C15;
+                h = Integer.rotateLeft(h, 13);
+            }
+            h ^= parents.length;
+            h ^= h >>> 16;
+            h *= 0x85EBCA6B;
+            h ^= h >>> 13;
+            h *= 0xC2B2AE35;
+            h ^= h >>> 16;
+            return h;
         }
 
         @Override
