@@ -1,0 +1,26 @@
+package dev.touchstone.metrics.scoring;
+
+import dev.touchstone.metrics.sid.SidResult;
+
+/**
+ * {@code sid_upper}: for DAG and CPDAG estimates: the upper bound of the SID over the DAGs the estimate stands for (Peters and Bühlmann 2015); equals sid for a DAG; null when the truth has hidden variables
+ *
+ * <p>Cost: that of {@link dev.touchstone.metrics.sid.StructuralInterventionDistance}, shared by the three SID metrics of
+ * one comparison.
+ */
+public final class SidUpper extends BaseMetric {
+
+    /** The one instance. */
+    public static final SidUpper INSTANCE = new SidUpper();
+
+    private SidUpper() {
+        super("sid_upper", Direction.LOWER_IS_BETTER, MetricRange.upTo("p(p−1)"), DAG_OR_CPDAG,
+                "for DAG and CPDAG estimates: the upper bound of the SID over the DAGs the estimate stands for (Peters and Bühlmann 2015); equals sid for a DAG; null when the truth has hidden variables");
+    }
+
+    @Override
+    public Double value(GraphComparison c) {
+        SidResult s = c.sid();
+        return s == null ? null : (double) s.upper();
+    }
+}
