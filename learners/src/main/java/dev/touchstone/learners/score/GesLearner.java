@@ -66,7 +66,7 @@ public final class GesLearner implements Learner {
         List<String> names = input.variableNames();
         KnowledgeIndex index = HillClimbLearner.indexKnowledge(knowledge, names);
         LocalScore score = ScoreCache.of(ScoreSettings.build(ID, input, parameters), context);
-        GesSearch search = new GesSearch(score, index, new CpdagCompletion(index),
+        GesSearch search = new GesSearch(score, index, new CpdagCompletion(names, knowledge),
                 ScoreSettings.maxParents(parameters), context);
         Graph cpdag = search.run().toGraph(names);
         return new Estimate(cpdag, GraphClass.CPDAG, Map.of(
