@@ -32,8 +32,9 @@ import java.util.stream.IntStream;
  * "A million variables and more", which we follow only in idea): the forward phase keeps
  * the best Insert of every ordered pair, rated over the T that satisfy the clique
  * condition, in a priority queue with a version number per pair. After a move only the
- * pairs (X, Y) whose rating can have changed are re-rated: Y a node whose edges changed, or
- * an undirected neighbour (before or after the move) of such a node. The semi-directed path
+ * pairs (X, Y) whose rating can have changed are re-rated: every X for a Y whose own edges
+ * changed or that has two or more changed undirected neighbours, and only the changed X for
+ * a Y with one changed undirected neighbour. The semi-directed path
  * condition, which is global, is checked when an operator reaches the top of the queue;
  * an operator that fails it is re-rated with the condition enforced. When the queue has no
  * improving operator left, a full sweep re-rates every pair with all conditions enforced,
@@ -49,8 +50,8 @@ import java.util.stream.IntStream;
  * than a CPDAG, and the operators are applied to it as they are (common practice).
  *
  * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with two local scores each; a
- * forward move re-rates O(c · (1 + d) · p) pairs, c the nodes whose edges changed and d
- * their degree; Insert enumerates the cliques of T₀ (exponential only in dense graphs,
+ * forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those next to
+ * two of them); Insert enumerates the cliques of T₀ (exponential only in dense graphs,
  * bounded by {@code maxParents}); each move re-completes the PDAG (cost of the completion).
  */
 final class GesSearch {
@@ -140,7 +141,7 @@ final class GesSearch {
                 continue;
             }
             if (!stillValidInsert(best)) {
-                Candidate again = bestInsert(best.x, best.y, true);
+                Candidate again = bestInsert(best.x, best.y, graph.parents(best.y), graph.undirectedNeighbours(best.y), true);
                 version[pair]++;
                 if (again != null) {
                     again.version = version[pair];
@@ -156,26 +157,40 @@ final class GesSearch {
             }
             graph = completion.complete(next);
             forwardMoves++;
-            rateInserts(affectedChildren(before, graph), false, version, rated, queue);
+            rerateAfterMove(before, version, rated, queue);
         }
     }
 
     /** Rates the Inserts (x, y) for every x and the given y, replacing the queued entries. */
     private void rateInserts(int[] ys, boolean checkPath, int[] version, Candidate[] rated,
                              PriorityQueue<Candidate> queue) {
+        ratePairs(ys, null, checkPath, version, rated, queue);
+    }
+
+    /**
+     * Rates the Inserts (x, y) for the given y and x in {@code xs} (every x when null),
+     * replacing the queued entries of those pairs.
+     */
+    private void ratePairs(int[] ys, int[] xs, boolean checkPath, int[] version, Candidate[] rated,
+                           PriorityQueue<Candidate> queue) {
+        int count = xs == null ? p : xs.length;
         parallel(ys.length, i -> {
             int y = ys[i];
             if ((i & 15) == 0) {
                 context.checkDeadline();
             }
-            for (int x = 0; x < p; x++) {
+            int[] pa = graph.parents(y);
+            int[] ne = graph.undirectedNeighbours(y);
+            for (int j = 0; j < count; j++) {
+                int x = xs == null ? j : xs[j];
                 if (x != y) {
-                    rated[x * p + y] = bestInsert(x, y, checkPath);
+                    rated[x * p + y] = bestInsert(x, y, pa, ne, checkPath);
                 }
             }
         });
         for (int y : ys) {
-            for (int x = 0; x < p; x++) {
+            for (int j = 0; j < count; j++) {
+                int x = xs == null ? j : xs[j];
                 if (x == y) {
                     continue;
                 }
@@ -192,15 +207,60 @@ final class GesSearch {
     }
 
     /**
+     * Re-rates the pairs whose rating a move can have changed. The rating of (x, y) depends on
+     * Pa(y), Ne(y) (undirected neighbours), the adjacencies of x with Ne(y) and those within
+     * Ne(y). So: every x for a y whose own edges changed, or with two or more changed
+     * neighbours; only the changed x for a y with exactly one changed undirected neighbour
+     * (an adjacency between x and that neighbour changes only when both are changed nodes).
+     */
+    private void rerateAfterMove(Pdag before, int[] version, Candidate[] rated, PriorityQueue<Candidate> queue) {
+        boolean[] changed = new boolean[p];
+        int nChanged = 0;
+        for (int v = 0; v < p; v++) {
+            if (!graph.sameNeighbourhood(before, v)) {
+                changed[v] = true;
+                nChanged++;
+            }
+        }
+        int[] changedNodes = new int[nChanged];
+        int[] full = new int[p];
+        int[] partial = new int[p];
+        int nFull = 0;
+        int nPartial = 0;
+        int k = 0;
+        for (int v = 0; v < p; v++) {
+            if (changed[v]) {
+                changedNodes[k++] = v;
+                full[nFull++] = v;
+                continue;
+            }
+            int changedNeighbours = 0;
+            for (int m = 0; m < graph.degree(v); m++) {
+                int w = graph.neighbour(v, m);
+                if (changed[w] && graph.undirected(v, w)) {
+                    changedNeighbours++;
+                }
+            }
+            if (changedNeighbours >= 2) {
+                full[nFull++] = v;
+            } else if (changedNeighbours == 1) {
+                partial[nPartial++] = v;
+            }
+        }
+        ratePairs(Arrays.copyOf(full, nFull), null, false, version, rated, queue);
+        if (nPartial > 0) {
+            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, false, version, rated, queue);
+        }
+    }
+
+    /**
      * The best Insert(x, y, T) over the T satisfying the clique condition (and, when
      * {@code checkPath}, the semi-directed path condition), or null when there is none.
      */
-    Candidate bestInsert(int x, int y, boolean checkPath) {
+    Candidate bestInsert(int x, int y, int[] pa, int[] ne, boolean checkPath) {
         if (graph.adjacent(x, y) || knowledge.isForbidden(x, y)) {
             return null;
         }
-        int[] pa = graph.parents(y);
-        int[] ne = graph.undirectedNeighbours(y);
         int[] na = new int[ne.length];
         int[] t0 = new int[ne.length];
         int nna = 0;
@@ -339,36 +399,6 @@ final class GesSearch {
             }
         }
         return false;
-    }
-
-    /** The nodes Y whose Insert ratings can have changed: changed nodes and their undirected neighbours before and after. */
-    private int[] affectedChildren(Pdag before, Pdag after) {
-        boolean[] mark = new boolean[p];
-        for (int v = 0; v < p; v++) {
-            if (!after.sameNeighbourhood(before, v)) {
-                mark[v] = true;
-                for (int k = 0; k < before.degree(v); k++) {
-                    int w = before.neighbour(v, k);
-                    if (before.undirected(v, w)) {
-                        mark[w] = true;
-                    }
-                }
-                for (int k = 0; k < after.degree(v); k++) {
-                    int w = after.neighbour(v, k);
-                    if (after.undirected(v, w)) {
-                        mark[w] = true;
-                    }
-                }
-            }
-        }
-        int n = 0;
-        int[] out = new int[p];
-        for (int v = 0; v < p; v++) {
-            if (mark[v]) {
-                out[n++] = v;
-            }
-        }
-        return Arrays.copyOf(out, n);
     }
 
     // ---------------------------------------------------------------- backward phase

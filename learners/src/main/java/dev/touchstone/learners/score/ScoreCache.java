@@ -96,10 +96,10 @@ public final class ScoreCache implements LocalScore {
          * Multiply-and-add per element, then the MurmurHash3 32-bit finaliser (Appleby 2011).
          */
         private static int mix(int node, int[] parents) {
-            int h = 0x9E3779B9 ^ node;
+            int h = (node + 1) * 0x9E3779B1;
             for (int v : parents) {
-                h = (h ^ v) * 0x01000193 + 0x7F4A7C15;
-                h = Integer.rotateLeft(h, 13);
+                h = (h + v + 1) * 0x85EBCA77;
+                h ^= h >>> 15;
             }
             h ^= parents.length;
             h ^= h >>> 16;
