@@ -1,0 +1,49 @@
+package dev.touchstone.benchmarks.score;
+
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.Estimate;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.score.GesLearner;
+
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * The scaling driver behind {@code scripts/scaling/score.sh}: runs GES on linear Gaussian
+ * data (Erdős–Rényi, mean degree 2, n rows) for each p given and prints one line per p with
+ * the wall time, the CPU time of the calling thread (robust to a loaded machine when
+ * threads = 1), the time of the covariance (the irreducible part of the input work), the
+ * number of local-score evaluations and the moves. Usage:
+ * {@code GesScaling threads rows p1 p2 ...}.
+ */
+public final class GesScaling {
+
+    private GesScaling() {
+    }
+
+    public static void main(String[] args) {
+        int threads = Integer.parseInt(args[0]);
+        int rows = Integer.parseInt(args[1]);
+        GesLearner ges = new GesLearner();
+        ParameterValues values = ParameterValues.resolve("ges", ges.description().parameters(), Map.of());
+        System.out.println("p,rows,threads,seconds,main_thread_cpu_seconds,covariance_seconds,score_evaluations,forward_moves,backward_moves,edges,true_edges");
+        for (int a = 2; a < args.length; a++) {
+            int p = Integer.parseInt(args[a]);
+            LinearGaussianFixture f = LinearGaussianFixture.of(p, 2.0, rows, 1000 + p);
+            java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
+            long c0 = mx.getCurrentThreadCpuTime();
+            long t0 = System.nanoTime();
+            f.data.covariance();
+            long t1 = System.nanoTime();
+            RunContext ctx = RunContext.of(1, null, threads);
+            Estimate e = ges.learn(LearnerInput.of(f.data), Knowledge.none(), values, ctx);
+            long t2 = System.nanoTime();
+            long c2 = mx.getCurrentThreadCpuTime();
+            System.out.println(String.format(Locale.ROOT, "%d,%d,%d,%.3f,%.3f,%.3f,%d,%.0f,%.0f,%d,%d", p, rows, threads,
+                    (t2 - t0) / 1e9, (c2 - c0) / 1e9, (t1 - t0) / 1e9, ctx.scores(), e.extras().get("forward-moves"),
+                    e.extras().get("backward-moves"), e.graph().edgeCount(), f.dag.edgeCount()));
+        }
+    }
+}

@@ -1,0 +1,580 @@
+package dev.touchstone.learners.score;
+
+import dev.touchstone.core.learner.DeadlineExceededException;
+import dev.touchstone.core.learner.RunContext;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+import java.util.PriorityQueue;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.function.IntConsumer;
+import java.util.stream.IntStream;
+
+/**
+ * Greedy equivalence search (Chickering 2002, "Optimal structure identification with
+ * greedy search", JMLR 3): a forward phase of Insert operators and a backward phase of
+ * Delete operators over equivalence classes, each move followed by re-completion of the
+ * PDAG to a CPDAG.
+ *
+ * <p><b>Operators</b> (ibid., §4, theorems 15 and 17). Insert(X, Y, T) for non-adjacent
+ * X, Y and T ⊆ T₀ (undirected neighbours of Y not adjacent to X) is valid when
+ * NA_{Y,X} ∪ T is a clique and every semi-directed path from Y to X meets NA_{Y,X} ∪ T;
+ * it adds X → Y and directs T — Y as T → Y, changing the score by
+ * s(Y, NA ∪ T ∪ Pa(Y) ∪ {X}) − s(Y, NA ∪ T ∪ Pa(Y)). Delete(X, Y, H) for X — Y or X → Y and
+ * H ⊆ NA_{Y,X} is valid when NA_{Y,X} \ H is a clique; it removes the edge and directs
+ * Y — H as Y → H and X — H as X → H, changing the score by
+ * s(Y, (NA \ H) ∪ Pa(Y) \ {X}) − s(Y, (NA \ H) ∪ Pa(Y) ∪ {X}).
+ *
+ * <p><b>Caching</b> (in the manner of the fast GES literature, e.g. Ramsey et al. 2017,
+ * "A million variables and more", which we follow only in idea): the forward phase keeps
+ * the best Insert of every ordered pair, rated over the T that satisfy the clique
+ * condition, in a priority queue with a version number per pair. After a move only the
+ * pairs (X, Y) whose rating can have changed are re-rated: every X for a Y whose own edges
+ * changed or that has two or more changed undirected neighbours, and only the changed X for
+ * a Y with one changed undirected neighbour. The semi-directed path
+ * condition, which is global, is checked when an operator reaches the top of the queue;
+ * an operator that fails it is re-rated with the condition enforced. When the queue has no
+ * improving operator left, a full sweep re-rates every pair with all conditions enforced,
+ * so the phase ends exactly when no valid improving Insert exists, as in the paper. The
+ * backward phase (few edges) re-rates every adjacent pair after each move. Sweeps are
+ * spread over {@link RunContext#threads()} threads; results do not depend on the thread
+ * count (the queue is totally ordered by score change, then X, then Y).
+ *
+ * <p><b>Background knowledge</b>: required edges are in the start graph and never
+ * deleted; an Insert or Delete that would create a forbidden orientation (X → Y, T → Y,
+ * Y → H, X → H) is not considered; the completion orients undirected edges as the knowledge
+ * demands (Meek 1995). With knowledge the graph is then a maximally oriented PDAG rather
+ * than a CPDAG, and the operators are applied to it as they are (common practice).
+ *
+ * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with two local scores each; a
+ * forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those next to
+ * two of them); Insert enumerates the cliques of T₀ (exponential only in dense graphs,
+ * bounded by {@code maxParents}); each move re-completes the PDAG (cost of the completion).
+ */
+final class GesSearch {
+
+    private static final Comparator<Candidate> BEST_FIRST = Comparator
+            .comparingDouble((Candidate c) -> -c.delta)
+            .thenComparingInt(c -> c.x)
+            .thenComparingInt(c -> c.y);
+
+    /** Score changes at or below this count as no improvement (rounding of the local scores). */
+    static final double MIN_IMPROVEMENT = 1e-9;
+
+    private final LocalScore score;
+    private final KnowledgeIndex knowledge;
+    private final Completion completion;
+    private final int maxParents;
+    private final RunContext context;
+    private final int p;
+    private Pdag graph;
+    private int forwardMoves;
+    private int backwardMoves;
+    private ForkJoinPool pool;
+
+    /** Re-completes a PDAG after a move; see {@link CpdagCompletion}. */
+    interface Completion {
+        Pdag complete(Pdag pdag);
+    }
+
+    GesSearch(LocalScore score, KnowledgeIndex knowledge, Completion completion, int maxParents, RunContext context) {
+        this.score = score;
+        this.knowledge = knowledge;
+        this.completion = completion;
+        this.maxParents = maxParents < 0 ? Integer.MAX_VALUE : maxParents;
+        this.context = context;
+        this.p = score.variableCount();
+    }
+
+    /** Runs both phases from the graph of required edges and returns the final PDAG. */
+    Pdag run() {
+        Pdag start = new Pdag(p);
+        for (int[] e : knowledge.requiredEdges()) {
+            start.addDirected(e[0], e[1]);
+        }
+        graph = completion.complete(start);
+        context.checkDeadline();
+        pool = context.threads() > 1 ? new ForkJoinPool(context.threads()) : null;
+        try {
+            forward();
+            backward();
+        } finally {
+            if (pool != null) {
+                pool.shutdownNow();
+            }
+        }
+        return graph;
+    }
+
+    int forwardMoves() {
+        return forwardMoves;
+    }
+
+    int backwardMoves() {
+        return backwardMoves;
+    }
+
+    // ---------------------------------------------------------------- forward phase
+
+    private void forward() {
+        int[] version = new int[p * p];
+        Candidate[] rated = new Candidate[p * p];
+        PriorityQueue<Candidate> queue = new PriorityQueue<>(BEST_FIRST);
+        int[] allY = IntStream.range(0, p).toArray();
+        rateInserts(allY, false, version, rated, queue);
+        while (true) {
+            context.checkDeadline();
+            Candidate best = queue.poll();
+            if (best == null || best.delta <= MIN_IMPROVEMENT) {
+                queue.clear();
+                rateInserts(allY, true, version, rated, queue);
+                best = queue.poll();
+                if (best == null || best.delta <= MIN_IMPROVEMENT) {
+                    return;
+                }
+            }
+            int pair = best.x * p + best.y;
+            if (best.version != version[pair]) {
+                continue;
+            }
+            if (!stillValidInsert(best)) {
+                Candidate again = bestInsert(best.x, best.y, graph.parents(best.y), graph.undirectedNeighbours(best.y), true);
+                version[pair]++;
+                if (again != null) {
+                    again.version = version[pair];
+                    queue.add(again);
+                }
+                continue;
+            }
+            Pdag before = graph;
+            Pdag next = new Pdag(graph);
+            next.addDirected(best.x, best.y);
+            for (int t : best.set) {
+                next.orient(t, best.y);
+            }
+            graph = completion.complete(next);
+            forwardMoves++;
+            rerateAfterMove(before, version, rated, queue);
+        }
+    }
+
+    /** Rates the Inserts (x, y) for every x and the given y, replacing the queued entries. */
+    private void rateInserts(int[] ys, boolean checkPath, int[] version, Candidate[] rated,
+                             PriorityQueue<Candidate> queue) {
+        ratePairs(ys, null, checkPath, version, rated, queue);
+    }
+
+    /**
+     * Rates the Inserts (x, y) for the given y and x in {@code xs} (every x when null),
+     * replacing the queued entries of those pairs.
+     */
+    private void ratePairs(int[] ys, int[] xs, boolean checkPath, int[] version, Candidate[] rated,
+                           PriorityQueue<Candidate> queue) {
+        int count = xs == null ? p : xs.length;
+        parallel(ys.length, i -> {
+            int y = ys[i];
+            if ((i & 15) == 0) {
+                context.checkDeadline();
+            }
+            int[] pa = graph.parents(y);
+            int[] ne = graph.undirectedNeighbours(y);
+            for (int j = 0; j < count; j++) {
+                int x = xs == null ? j : xs[j];
+                if (x != y) {
+                    rated[x * p + y] = bestInsert(x, y, pa, ne, checkPath);
+                }
+            }
+        });
+        for (int y : ys) {
+            for (int j = 0; j < count; j++) {
+                int x = xs == null ? j : xs[j];
+                if (x == y) {
+                    continue;
+                }
+                int pair = x * p + y;
+                version[pair]++;
+                Candidate c = rated[pair];
+                rated[pair] = null;
+                if (c != null && c.delta > MIN_IMPROVEMENT) {
+                    c.version = version[pair];
+                    queue.add(c);
+                }
+            }
+        }
+    }
+
+    /**
+     * Re-rates the pairs whose rating a move can have changed. The rating of (x, y) depends on
+     * Pa(y), Ne(y) (undirected neighbours), the adjacencies of x with Ne(y) and those within
+     * Ne(y). So: every x for a y whose own edges changed, or with two or more changed
+     * neighbours; only the changed x for a y with exactly one changed undirected neighbour
+     * (an adjacency between x and that neighbour changes only when both are changed nodes).
+     */
+    private void rerateAfterMove(Pdag before, int[] version, Candidate[] rated, PriorityQueue<Candidate> queue) {
+        boolean[] changed = new boolean[p];
+        int nChanged = 0;
+        for (int v = 0; v < p; v++) {
+            if (!graph.sameNeighbourhood(before, v)) {
+                changed[v] = true;
+                nChanged++;
+            }
+        }
+        int[] changedNodes = new int[nChanged];
+        int[] full = new int[p];
+        int[] partial = new int[p];
+        int nFull = 0;
+        int nPartial = 0;
+        int k = 0;
+        for (int v = 0; v < p; v++) {
+            if (changed[v]) {
+                changedNodes[k++] = v;
+                full[nFull++] = v;
+                continue;
+            }
+            int changedNeighbours = 0;
+            for (int m = 0; m < graph.degree(v); m++) {
+                int w = graph.neighbour(v, m);
+                if (changed[w] && graph.undirected(v, w)) {
+                    changedNeighbours++;
+                }
+            }
+            if (changedNeighbours >= 2) {
+                full[nFull++] = v;
+            } else if (changedNeighbours == 1) {
+                partial[nPartial++] = v;
+            }
+        }
+        ratePairs(Arrays.copyOf(full, nFull), null, false, version, rated, queue);
+        if (nPartial > 0) {
+            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, false, version, rated, queue);
+        }
+    }
+
+    /**
+     * The best Insert(x, y, T) over the T satisfying the clique condition (and, when
+     * {@code checkPath}, the semi-directed path condition), or null when there is none.
+     */
+    Candidate bestInsert(int x, int y, int[] pa, int[] ne, boolean checkPath) {
+        if (graph.adjacent(x, y) || knowledge.isForbidden(x, y)) {
+            return null;
+        }
+        int[] na = new int[ne.length];
+        int[] t0 = new int[ne.length];
+        int nna = 0;
+        int nt0 = 0;
+        for (int z : ne) {
+            if (graph.adjacent(z, x)) {
+                na[nna++] = z;
+            } else if (!knowledge.isForbidden(z, y)) {
+                t0[nt0++] = z;
+            }
+        }
+        if (!graph.isClique(na, nna)) {
+            return null;
+        }
+        int fixed = pa.length + nna;
+        if (fixed + 1 > maxParents) {
+            return null;
+        }
+        // parents without x: pa ∪ na ∪ T, then x appended
+        int[] base = new int[fixed + nt0 + 1];
+        System.arraycopy(pa, 0, base, 0, pa.length);
+        System.arraycopy(na, 0, base, pa.length, nna);
+        List<Candidate> all = checkPath ? new ArrayList<>() : null;
+        Candidate[] best = new Candidate[1];
+        int[] chosen = new int[nt0];
+        enumerateT(x, y, base, fixed, t0, nt0, 0, chosen, 0, na, nna, all, best);
+        if (!checkPath) {
+            return best[0];
+        }
+        all.sort(Comparator.comparingDouble((Candidate c) -> -c.delta));
+        for (Candidate c : all) {
+            if (c.delta <= MIN_IMPROVEMENT) {
+                return null;
+            }
+            if (!semiDirectedPathAvoiding(y, x, union(na, nna, c.set))) {
+                return c;
+            }
+        }
+        return null;
+    }
+
+    private void enumerateT(int x, int y, int[] base, int fixed, int[] t0, int nt0, int from, int[] chosen,
+                            int nChosen, int[] na, int nna, List<Candidate> all, Candidate[] best) {
+        int size = fixed + nChosen;
+        int[] without = Arrays.copyOf(base, size);
+        int[] with = Arrays.copyOf(base, size + 1);
+        with[size] = x;
+        double delta = score.localScore(y, with) - score.localScore(y, without);
+        Candidate c = new Candidate(delta, x, y, Arrays.copyOf(chosen, nChosen));
+        if (all != null) {
+            all.add(c);
+        }
+        if (best[0] == null || delta > best[0].delta) {
+            best[0] = c;
+        }
+        if (size + 2 > maxParents) {
+            return;
+        }
+        for (int i = from; i < nt0; i++) {
+            int t = t0[i];
+            boolean clique = true;
+            for (int k = 0; k < nna && clique; k++) {
+                clique = graph.adjacent(t, na[k]);
+            }
+            for (int k = 0; k < nChosen && clique; k++) {
+                clique = graph.adjacent(t, chosen[k]);
+            }
+            if (!clique) {
+                continue;
+            }
+            chosen[nChosen] = t;
+            base[size] = t;
+            enumerateT(x, y, base, fixed, t0, nt0, i + 1, chosen, nChosen + 1, na, nna, all, best);
+        }
+    }
+
+    private boolean stillValidInsert(Candidate c) {
+        int x = c.x;
+        int y = c.y;
+        if (graph.adjacent(x, y)) {
+            return false;
+        }
+        int[] ne = graph.undirectedNeighbours(y);
+        int[] na = new int[ne.length];
+        int nna = 0;
+        for (int z : ne) {
+            if (graph.adjacent(z, x)) {
+                na[nna++] = z;
+            }
+        }
+        for (int t : c.set) {
+            if (!graph.undirected(t, y) || graph.adjacent(t, x)) {
+                return false;
+            }
+        }
+        int[] clique = union(na, nna, c.set);
+        if (!graph.isClique(clique, clique.length)) {
+            return false;
+        }
+        int[] pa = graph.parents(y);
+        int[] without = new int[pa.length + clique.length];
+        System.arraycopy(pa, 0, without, 0, pa.length);
+        System.arraycopy(clique, 0, without, pa.length, clique.length);
+        int[] with = Arrays.copyOf(without, without.length + 1);
+        with[without.length] = x;
+        double delta = score.localScore(y, with) - score.localScore(y, without);
+        if (Math.abs(delta - c.delta) > 1e-9 * Math.max(1.0, Math.abs(delta))) {
+            return false;
+        }
+        return !semiDirectedPathAvoiding(y, x, clique);
+    }
+
+    /** Whether a path from {@code from} to {@code to} along edges u → w or u — w avoids all of {@code blocked}. */
+    private boolean semiDirectedPathAvoiding(int from, int to, int[] blocked) {
+        boolean[] seen = new boolean[p];
+        for (int b : blocked) {
+            seen[b] = true;
+        }
+        int[] stack = new int[p];
+        int top = 0;
+        stack[top++] = from;
+        seen[from] = true;
+        while (top > 0) {
+            int u = stack[--top];
+            for (int k = 0; k < graph.degree(u); k++) {
+                int w = graph.neighbour(u, k);
+                byte s = graph.state(u, w);
+                if (seen[w] || (s != Pdag.OUT && s != Pdag.UNDIRECTED)) {
+                    continue;
+                }
+                if (w == to) {
+                    return true;
+                }
+                seen[w] = true;
+                stack[top++] = w;
+            }
+        }
+        return false;
+    }
+
+    // ---------------------------------------------------------------- backward phase
+
+    private void backward() {
+        while (true) {
+            context.checkDeadline();
+            int[] edges = adjacentOrderedPairs();
+            Candidate[] rated = new Candidate[edges.length];
+            parallel(edges.length, i -> {
+                if ((i & 63) == 0) {
+                    context.checkDeadline();
+                }
+                rated[i] = bestDelete(edges[i] / p, edges[i] % p);
+            });
+            Candidate best = null;
+            for (Candidate c : rated) {
+                if (c != null && c.delta > MIN_IMPROVEMENT && (best == null || BEST_FIRST.compare(c, best) < 0)) {
+                    best = c;
+                }
+            }
+            if (best == null) {
+                return;
+            }
+            Pdag next = new Pdag(graph);
+            next.remove(best.x, best.y);
+            for (int h : best.set) {
+                next.orient(best.y, h);
+                if (next.undirected(best.x, h)) {
+                    next.orient(best.x, h);
+                }
+            }
+            graph = completion.complete(next);
+            backwardMoves++;
+        }
+    }
+
+    /** Pairs x·p + y with x → y or x — y (undirected edges give both orders). */
+    private int[] adjacentOrderedPairs() {
+        int[] out = new int[2 * graph.edgeCount()];
+        int n = 0;
+        for (int y = 0; y < p; y++) {
+            for (int k = 0; k < graph.degree(y); k++) {
+                int x = graph.neighbour(y, k);
+                byte s = graph.state(x, y);
+                if (s == Pdag.OUT || s == Pdag.UNDIRECTED) {
+                    out[n++] = x * p + y;
+                }
+            }
+        }
+        int[] pairs = Arrays.copyOf(out, n);
+        Arrays.sort(pairs);
+        return pairs;
+    }
+
+    /** The best Delete(x, y, H) over the H with NA \ H a clique and no forbidden orientation, or null. */
+    Candidate bestDelete(int x, int y) {
+        if (knowledge.isRequiredEitherWay(x, y)) {
+            return null;
+        }
+        int[] pa = graph.parents(y);
+        int[] ne = graph.undirectedNeighbours(y);
+        int[] na = new int[ne.length];
+        int nna = 0;
+        for (int z : ne) {
+            if (z != x && graph.adjacent(z, x)) {
+                na[nna++] = z;
+            }
+        }
+        // the parents of y other than x; the kept clique C = NA \ H is added to them
+        int[] base = new int[pa.length + nna + 1];
+        int nb = 0;
+        for (int v : pa) {
+            if (v != x) {
+                base[nb++] = v;
+            }
+        }
+        Candidate[] best = new Candidate[1];
+        int[] kept = new int[nna];
+        enumerateKept(x, y, base, nb, na, nna, 0, kept, 0, best);
+        return best[0];
+    }
+
+    private void enumerateKept(int x, int y, int[] base, int nb, int[] na, int nna, int from, int[] kept, int nKept,
+                               Candidate[] best) {
+        int[] h = removedFrom(na, nna, kept, nKept);
+        if (deleteOrientationsAllowed(x, y, h)) {
+            int[] without = Arrays.copyOf(base, nb + nKept);
+            int[] with = Arrays.copyOf(without, without.length + 1);
+            with[without.length] = x;
+            double delta = score.localScore(y, without) - score.localScore(y, with);
+            if (best[0] == null || delta > best[0].delta) {
+                best[0] = new Candidate(delta, x, y, h);
+            }
+        }
+        for (int i = from; i < nna; i++) {
+            int c = na[i];
+            boolean clique = true;
+            for (int k = 0; k < nKept && clique; k++) {
+                clique = graph.adjacent(c, kept[k]);
+            }
+            if (!clique) {
+                continue;
+            }
+            kept[nKept] = c;
+            base[nb + nKept] = c;
+            enumerateKept(x, y, base, nb, na, nna, i + 1, kept, nKept + 1, best);
+        }
+    }
+
+    private boolean deleteOrientationsAllowed(int x, int y, int[] h) {
+        for (int v : h) {
+            if (knowledge.isForbidden(y, v) || (graph.undirected(x, v) && knowledge.isForbidden(x, v))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static int[] removedFrom(int[] na, int nna, int[] kept, int nKept) {
+        int[] out = new int[nna - nKept];
+        int n = 0;
+        for (int i = 0; i < nna; i++) {
+            boolean in = false;
+            for (int k = 0; k < nKept && !in; k++) {
+                in = kept[k] == na[i];
+            }
+            if (!in) {
+                out[n++] = na[i];
+            }
+        }
+        return out;
+    }
+
+    private static int[] union(int[] a, int na, int[] b) {
+        int[] out = Arrays.copyOf(a, na + b.length);
+        System.arraycopy(b, 0, out, na, b.length);
+        return out;
+    }
+
+    // ---------------------------------------------------------------- threads
+
+    private void parallel(int count, IntConsumer body) {
+        if (pool == null || count < 64) {
+            for (int i = 0; i < count; i++) {
+                body.accept(i);
+            }
+            return;
+        }
+        try {
+            pool.submit(() -> IntStream.range(0, count).parallel().forEach(body)).get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new DeadlineExceededException("interrupted");
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException) {
+                throw (RuntimeException) cause;
+            }
+            throw new IllegalStateException(cause);
+        }
+    }
+
+    /** A rated operator: Insert(x, y, T) in the forward phase, Delete(x, y, H) in the backward one. */
+    static final class Candidate {
+        final double delta;
+        final int x;
+        final int y;
+        final int[] set;
+        int version;
+
+        Candidate(double delta, int x, int y, int[] set) {
+            this.delta = delta;
+            this.x = x;
+            this.y = y;
+            this.set = set;
+        }
+    }
+}

@@ -1,0 +1,90 @@
+package dev.touchstone.learners.score;
+
+import dev.touchstone.core.data.DataKind;
+import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.learner.LearnerException;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.param.ParameterSpec;
+import dev.touchstone.core.param.ParameterValues;
+
+import java.util.List;
+
+/**
+ * The parameters every score-based learner shares (which local score, its penalty or prior
+ * strength, the parent-set bound) and the one place that turns them and the input into a
+ * {@link LocalScore}.
+ */
+final class ScoreSettings {
+
+    static final String SCORE = "score";
+    static final String PENALTY = "penalty";
+    static final String ESS = "ess";
+    static final String MAX_PARENTS = "max-parents";
+
+    static final String AUTO = "auto";
+    static final String BIC = "bic";
+    static final String BDEU = "bdeu";
+    static final String CG_BIC = "cg-bic";
+
+    private ScoreSettings() {
+    }
+
+    static List<ParameterSpec> specs() {
+        return List.of(
+                ParameterSpec.choice(SCORE, AUTO, List.of(AUTO, BIC, BDEU, CG_BIC),
+                        "local score: bic (continuous), bdeu (discrete), cg-bic (mixed); auto picks by data kind"),
+                ParameterSpec.real(PENALTY, 1.0, 0.01, 100.0,
+                        "multiplier of the BIC penalty (bic and cg-bic; 1 is the classical BIC)"),
+                ParameterSpec.real(ESS, 1.0, 0.001, 10000.0, "equivalent sample size of the BDeu prior (bdeu)"),
+                ParameterSpec.integer(MAX_PARENTS, -1, -1, 1000,
+                        "largest parent set a move may create; -1 for no limit"));
+    }
+
+    /**
+     * The local score the parameters ask for on this input, behind no cache.
+     *
+     * @throws LearnerException when the score does not fit the data kind or the oracle, or the data cannot be scored
+     */
+    static LocalScore build(String learnerId, LearnerInput input, ParameterValues values) {
+        String name = values.getString(SCORE);
+        double penalty = values.getDouble(PENALTY);
+        try {
+            if (input.isOracle()) {
+                if (!name.equals(AUTO) && !name.equals(BIC)) {
+                    throw new LearnerException("learner " + learnerId + ": score " + name
+                            + " cannot use the oracle (it gives a covariance; use bic)");
+                }
+                return BicScore.of(input.oracle().populationCovariance(), penalty);
+            }
+            DataSet data = input.data();
+            DataKind kind = data.kind();
+            if (name.equals(AUTO)) {
+                name = kind == DataKind.CONTINUOUS ? BIC : kind == DataKind.DISCRETE ? BDEU : CG_BIC;
+            }
+            switch (name) {
+                case BIC:
+                    requireKind(learnerId, name, kind, DataKind.CONTINUOUS);
+                    return BicScore.of(data.covariance(), penalty);
+                case BDEU:
+                    requireKind(learnerId, name, kind, DataKind.DISCRETE);
+                    return BdeuScore.of(data, values.getDouble(ESS));
+                default:
+                    return ConditionalGaussianScore.of(data, penalty);
+            }
+        } catch (IllegalArgumentException e) {
+            throw new LearnerException("learner " + learnerId + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** The parent-set bound, −1 for none. */
+    static int maxParents(ParameterValues values) {
+        return values.getInt(MAX_PARENTS);
+    }
+
+    private static void requireKind(String learnerId, String score, DataKind got, DataKind needed) {
+        if (got != needed) {
+            throw new LearnerException("learner " + learnerId + ": score " + score + " needs " + needed.word()
+                    + " data, got " + got.word() + " data (use score=auto or cg-bic)");
+        }
+    }
+}
