@@ -126,6 +126,7 @@ public final class NotearsLearner implements Learner {
         return new Estimate(g.freeze(), GraphClass.DAG, Map.of(
                 "acyclicity", fit.acyclicity(),
                 "penalty_rho", fit.rho(),
+                "function_evaluations", (double) fit.evaluations(),
                 "edges_dropped_on_cycles", (double) dropped));
     }
 
@@ -138,7 +139,7 @@ public final class NotearsLearner implements Learner {
     }
 
     /** The unthresholded solution with the final h(W) and ρ. */
-    record Fit(double[] weights, double acyclicity, double rho) {
+    record Fit(double[] weights, double acyclicity, double rho, long evaluations) {
     }
 
     /**
@@ -160,13 +161,14 @@ public final class NotearsLearner implements Learner {
         double h = Double.POSITIVE_INFINITY;
         double[] w = new double[dd];
         double[] trial = x.clone();
+        long evaluations = 0;
         for (int outer = 0; outer < settings.maxOuter(); outer++) {
             double hNew = h;
             while (rho < settings.rhoMax()) {
                 context.checkDeadline();
                 System.arraycopy(x, 0, trial, 0, x.length);
                 Lagrangian objective = new Lagrangian(s, d, settings.l1(), rho, alpha);
-                solver.minimise(objective, trial, heldSplit, context);
+                evaluations += solver.minimise(objective, trial, heldSplit, context).evaluations();
                 combine(trial, w, dd);
                 hNew = Acyclicity.value(w, d);
                 if (hNew > 0.25 * h) {
@@ -183,7 +185,7 @@ public final class NotearsLearner implements Learner {
             }
         }
         combine(x, w, dd);
-        return new Fit(w, Acyclicity.value(w, d), rho);
+        return new Fit(w, Acyclicity.value(w, d), rho, evaluations);
     }
 
     private static void combine(double[] x, double[] w, int dd) {
