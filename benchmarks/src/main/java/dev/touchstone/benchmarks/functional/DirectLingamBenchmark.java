@@ -63,6 +63,11 @@ public class DirectLingamBenchmark {
     }
 
     @Benchmark
+    public Graph directLingamTwoThreads() {
+        return learner.learn(LearnerInput.of(data), Knowledge.none(), parameters, RunContext.of(1, null, 2)).graph();
+    }
+
+    @Benchmark
     public double entropyTermsOnly() {
         long residuals = 0;
         for (int k = 2; k <= VARIABLES; k++) {

@@ -43,6 +43,9 @@ import java.util.List;
  * adaptive Lasso of Zou 2006), or ordinary least squares on the predecessors with a fixed
  * threshold on the absolute coefficients.
  *
+ * <p>The pairs of each step are spread over {@link RunContext#threads()}; the result does
+ * not depend on the thread count.
+ *
  * <p>Cost: O(p³ n) for the order (each of the p steps evaluates all O(p²) pairs of the
  * remaining variables at O(n) each) plus the pruning regressions, O(p⁴) at worst from the
  * covariance.
@@ -147,12 +150,12 @@ public final class DirectLingamLearner implements Learner {
                 entropy[i] = PairwiseLikelihoodRatio.entropy(x[i]);
                 penalty[i] = 0;
             }
+            double[][] ratio = pairRatios(x, remaining, left, entropy, context);
             for (int a = 0; a < left; a++) {
-                context.checkDeadline();
                 int i = remaining[a];
                 for (int b = a + 1; b < left; b++) {
                     int j = remaining[b];
-                    double r = PairwiseLikelihoodRatio.ratio(x[i], x[j], entropy[i], entropy[j]);
+                    double r = ratio[a][b];
                     // R(i → j) < 0 is evidence against i being exogenous, R(j → i) = −r against j.
                     if (r < 0) {
                         penalty[i] += r * r;
@@ -188,6 +191,58 @@ public final class DirectLingamLearner implements Learner {
             }
         }
         return order;
+    }
+
+    /**
+     * R(x_a → x_b) for all remaining pairs a < b (positions in {@code remaining}), spread
+     * over the run's threads by rows; every entry is computed alone, so the result does not
+     * depend on the thread count.
+     */
+    private static double[][] pairRatios(double[][] x, int[] remaining, int left, double[] entropy,
+                                         RunContext context) {
+        double[][] ratio = new double[left][left];
+        int threads = Math.min(context.threads(), Math.max(1, left - 1));
+        java.util.function.IntConsumer row = a -> {
+            context.checkDeadline();
+            int i = remaining[a];
+            for (int b = a + 1; b < left; b++) {
+                int j = remaining[b];
+                ratio[a][b] = PairwiseLikelihoodRatio.ratio(x[i], x[j], entropy[i], entropy[j]);
+            }
+        };
+        if (threads == 1) {
+            for (int a = 0; a < left; a++) {
+                row.accept(a);
+            }
+            return ratio;
+        }
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads);
+        try {
+            java.util.List<java.util.concurrent.Future<?>> parts = new java.util.ArrayList<>();
+            for (int t = 0; t < threads; t++) {
+                int first = t;
+                // Rows interleaved: row a has left − a − 1 pairs, so striding balances the work.
+                parts.add(pool.submit(() -> {
+                    for (int a = first; a < left; a += threads) {
+                        row.accept(a);
+                    }
+                }));
+            }
+            for (java.util.concurrent.Future<?> f : parts) {
+                f.get();
+            }
+        } catch (java.util.concurrent.ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException re) {
+                throw re;
+            }
+            throw new IllegalStateException(e.getCause());
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new dev.touchstone.core.learner.DeadlineExceededException("interrupted");
+        } finally {
+            pool.shutdownNow();
+        }
+        return ratio;
     }
 
     /** Centres and scales to variance 1 (divisor n); a constant column is left at 0. */

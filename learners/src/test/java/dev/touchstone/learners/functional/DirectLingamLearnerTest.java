@@ -123,4 +123,13 @@ class DirectLingamLearnerTest {
         Graph all = learn(r.data(), Map.of("pruning", "weight-threshold", "weight_threshold", 0.0));
         assertEquals(10, all.edgeCount(), "complete DAG over the estimated order");
     }
+
+    @Test
+    @DisplayName("The causal order is the same with 1 and 3 threads (design §6: results identical for any thread count)")
+    void threadCountDoesNotChangeTheOrder() {
+        SimulatedReplicate r = uniformNoise(12).drawTruth(21).sample(1000);
+        int[] one = DirectLingamLearner.causalOrder(r.data(), RunContext.unlimited(1));
+        int[] three = DirectLingamLearner.causalOrder(r.data(), RunContext.of(1, null, 3));
+        org.junit.jupiter.api.Assertions.assertArrayEquals(one, three);
+    }
 }
