@@ -29,7 +29,7 @@ public final class DataSet {
     private final Map<String, Integer> indexByName;
     private final Object[] columns;
     private final int rows;
-    private final Map<Object, Object> sharedStatistics = new ConcurrentHashMap<>();
+    private final Map<Object, Memo> sharedStatistics = new ConcurrentHashMap<>();
 
     private DataSet(List<Variable> variables, Object[] columns, int rows) {
         this.variables = List.copyOf(variables);
@@ -184,15 +184,9 @@ public final class DataSet {
      */
     @SuppressWarnings("unchecked")
     public <T> T shared(Object key, Function<DataSet, T> compute) {
-        Object v = sharedStatistics.get(key);
-        if (v == null) {
-            v = compute.apply(this);
-            Object prev = sharedStatistics.putIfAbsent(key, v);
-            if (prev != null) {
-                v = prev;
-            }
-        }
-        return (T) v;
+        // One memo per key, filled under its own lock: concurrent callers wait for the first
+        // computation instead of repeating it, and a computation may use other keys.
+        return (T) sharedStatistics.computeIfAbsent(key, k -> new Memo()).get(this, compute);
     }
 
     /** The first {@code n} rows (the nested prefix used for smaller sample sizes). */
@@ -256,6 +250,25 @@ public final class DataSet {
     }
 
     private record MissingCountKey(int column) { }
+
+    /** A value computed at most once (again only if an earlier computation threw). */
+    private static final class Memo {
+        private volatile Object value;
+
+        Object get(DataSet data, Function<DataSet, ?> compute) {
+            Object v = value;
+            if (v == null) {
+                synchronized (this) {
+                    v = value;
+                    if (v == null) {
+                        v = Objects.requireNonNull(compute.apply(data), "a shared statistic cannot be null");
+                        value = v;
+                    }
+                }
+            }
+            return v;
+        }
+    }
 
     private enum CovarianceKey { INSTANCE }
 

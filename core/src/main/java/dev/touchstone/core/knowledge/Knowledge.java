@@ -182,6 +182,9 @@ public final class Knowledge {
             for (int i = 0; i < tiers.size(); i++) {
                 for (String v : tiers.get(i)) {
                     Integer prev = seen.put(v, i);
+                    if (prev != null && prev == i) {
+                        throw new IllegalArgumentException("variable '" + v + "' appears twice in tier " + (i + 1));
+                    }
                     if (prev != null) {
                         throw new IllegalArgumentException("variable '" + v + "' is in tier " + (prev + 1)
                                 + " and tier " + (i + 1));

@@ -14,7 +14,7 @@ import java.io.PrintWriter;
         mixinStandardHelpOptions = true,
         versionProvider = VersionInfo.Provider.class,
         description = "Benchmark causal-discovery learners against known truth.",
-        subcommands = {CommandLine.HelpCommand.class})
+        subcommands = {CommandLine.HelpCommand.class, ScoreCommand.class})
 public final class Main implements Runnable {
 
     /** Exit status for a finished command (failed runs are counted in the output, not here). */

@@ -7,6 +7,7 @@ import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.scoring.MetricRegistry;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -43,7 +44,9 @@ public final class Aggregator {
         List<AggregateRow> out = new ArrayList<>();
         for (Map.Entry<Group, List<RunResult>> e : groups.entrySet()) {
             Group g = e.getKey();
-            List<RunResult> members = e.getValue();
+            List<RunResult> members = new ArrayList<>(e.getValue());
+            // sorted by replicate so that the bootstrap sees the values in an order independent of execution
+            members.sort(Comparator.comparingInt(RunResult::replicate).thenComparing(RunResult::key));
             String learnerId = members.get(0).learnerId();
             int ok = 0;
             int failed = 0;

@@ -18,6 +18,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
+import java.util.TreeMap;
 
 /**
  * Compares every learner configuration with a reference configuration, setting by setting and
@@ -25,9 +26,10 @@ import java.util.Set;
  *
  * <p>For each pair of runs the difference is {@code configuration − reference}. The row gives
  * the mean difference with a seeded percentile bootstrap 95% interval, the two-sided Wilcoxon
- * signed-rank p-value (Wilcoxon 1945) from Commons Statistics, which drops zero differences,
- * uses the exact distribution for small samples without ties and the normal approximation with
- * tie correction otherwise; then the Holm adjustment across the configurations compared on the
+ * signed-rank p-value (Wilcoxon 1945) from Commons Statistics, which ranks zero differences and
+ * then leaves them out of the statistic (Pratt 1959), uses the exact distribution for small
+ * samples without ties or zeros and the normal approximation with tie and continuity corrections
+ * otherwise; then the Holm adjustment across the configurations compared on the
  * same setting and metric; and wins, ties and losses by the metric's direction.
  *
  * <p>Cost: O(runs + rows · (resamples + replicates log replicates)).
@@ -48,12 +50,13 @@ public final class PairedComparison {
      */
     public static List<ComparisonRow> compare(List<RunResult> runs, String referenceId, List<String> metrics, long seed) {
         Objects.requireNonNull(referenceId, "referenceId");
+        // replicates kept sorted so that differences (and so the bootstrap) never depend on run order
         Map<Setting, Map<String, Map<Integer, RunResult>>> bySetting = new LinkedHashMap<>();
         Set<String> configurations = new LinkedHashSet<>();
         for (RunResult r : runs) {
             configurations.add(r.configurationId());
             RunResult previous = bySetting.computeIfAbsent(r.setting(), s -> new LinkedHashMap<>())
-                    .computeIfAbsent(r.configurationId(), c -> new LinkedHashMap<>()).put(r.replicate(), r);
+                    .computeIfAbsent(r.configurationId(), c -> new TreeMap<>()).put(r.replicate(), r);
             if (previous != null) {
                 throw new IllegalArgumentException("two runs of '" + r.configurationId() + "' for replicate "
                         + r.replicate() + " of setting " + r.setting().label());

@@ -52,35 +52,27 @@ public record EdgeCounts(int variables, long trueEdges, long estimatedEdges, lon
         for (int v = 0; v < p; v++) {
             int dt = truth.degree(v);
             int de = estimate.degree(v);
-            // marks at v itself, over all of v's edges: each endpoint is counted at its own node
-            for (int k = 0; k < dt; k++) {
-                Mark m = truth.markHere(v, k);
-                if (m == Mark.ARROW) {
-                    trueArrows++;
-                } else if (m == Mark.TAIL) {
-                    trueTails++;
-                }
-            }
-            for (int k = 0; k < de; k++) {
-                Mark m = estimate.markHere(v, k);
-                if (m == Mark.ARROW) {
-                    estArrows++;
-                } else if (m == Mark.TAIL) {
-                    estTails++;
-                }
-            }
+            // one merge of v's two sorted rows; every endpoint mark is counted at its own node v
             int kt = 0;
             int ke = 0;
-            while (kt < dt && ke < de) {
-                int wt = truth.neighbour(v, kt);
-                int we = estimate.neighbour(v, ke);
+            while (kt < dt || ke < de) {
+                int wt = kt < dt ? truth.neighbour(v, kt) : Integer.MAX_VALUE;
+                int we = ke < de ? estimate.neighbour(v, ke) : Integer.MAX_VALUE;
                 if (wt < we) {
-                    kt++;
+                    Mark m = truth.markHere(v, kt++);
+                    trueArrows += m == Mark.ARROW ? 1 : 0;
+                    trueTails += m == Mark.TAIL ? 1 : 0;
                 } else if (we < wt) {
-                    ke++;
+                    Mark m = estimate.markHere(v, ke++);
+                    estArrows += m == Mark.ARROW ? 1 : 0;
+                    estTails += m == Mark.TAIL ? 1 : 0;
                 } else {
                     Mark tHere = truth.markHere(v, kt);
                     Mark eHere = estimate.markHere(v, ke);
+                    trueArrows += tHere == Mark.ARROW ? 1 : 0;
+                    trueTails += tHere == Mark.TAIL ? 1 : 0;
+                    estArrows += eHere == Mark.ARROW ? 1 : 0;
+                    estTails += eHere == Mark.TAIL ? 1 : 0;
                     if (eHere == tHere) {
                         if (eHere == Mark.ARROW) {
                             correctArrows++;

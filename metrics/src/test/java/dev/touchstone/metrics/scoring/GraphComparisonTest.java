@@ -50,6 +50,8 @@ class GraphComparisonTest {
             long estArrows = 0;
             long correctArrows = 0;
             long correctTails = 0;
+            long trueTails = 0;
+            long estTails = 0;
             for (int a = 0; a < n; a++) {
                 for (int b = 0; b < n; b++) {
                     if (a == b) {
@@ -61,6 +63,8 @@ class GraphComparisonTest {
                     estArrows += ea == Mark.ARROW ? 1 : 0;
                     correctArrows += ea == Mark.ARROW && ta == Mark.ARROW ? 1 : 0;
                     correctTails += ea == Mark.TAIL && ta == Mark.TAIL ? 1 : 0;
+                    trueTails += ta == Mark.TAIL ? 1 : 0;
+                    estTails += ea == Mark.TAIL ? 1 : 0;
                     if (a < b) {
                         boolean inT = t.adjacent(a, b);
                         boolean inE = e.adjacent(a, b);
@@ -76,6 +80,10 @@ class GraphComparisonTest {
             assertEquals(estArrows, c.estimatedArrows());
             assertEquals(correctArrows, c.correctArrows());
             assertEquals(correctTails, c.correctTails());
+            assertEquals(trueTails, c.trueTails());
+            assertEquals(estTails, c.estimatedTails());
+            assertEquals(t.edgeCount(), c.trueEdges());
+            assertEquals(e.edgeCount(), c.estimatedEdges());
         }
     }
 

@@ -1,0 +1,436 @@
+package dev.touchstone.harness.io;
+
+import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.data.Variable;
+import dev.touchstone.core.data.VariableKind;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVPrinter;
+import org.apache.commons.csv.CSVRecord;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.regex.Pattern;
+
+/**
+ * Reads and writes data sets as CSV: a header row of variable names, one row per sample,
+ * an empty cell for a missing value (Commons CSV does the quoting).
+ *
+ * <p>Which columns are discrete is declared by the caller or inferred with one rule: a
+ * column that is not declared is <b>discrete if any of its cells is not a number</b>, and
+ * continuous otherwise (so a column of codes such as 0/1/2 is continuous unless declared
+ * discrete). The choice for every column is reported in {@link Result#columns()}. A number
+ * is written in decimal or scientific notation ({@code -1.5}, {@code 2e-3}); the words NaN
+ * and Infinity, and values too large for a double, are refused rather than read as missing.
+ * Categories of a discrete column are ordered numerically when every label is a number,
+ * otherwise alphabetically, so the codes do not depend on the order of the rows.
+ *
+ * <p>Bad input is refused with one line naming the file, line and column: a non-number in
+ * a declared-continuous column, a row with more or fewer cells than the header, an empty or
+ * repeated name, a column that is constant or entirely missing, NaN or infinity, an empty
+ * file, a declared column that the header lacks. Blank lines are skipped (except in a
+ * one-column file, where a blank line is a missing cell).
+ *
+ * <p>Cost: one pass over the file, two when a column turns out to be discrete after it
+ * began with numbers; memory O(rows × columns) for the values.
+ */
+public final class DataCsv {
+
+    private static final Pattern NUMBER = Pattern.compile("[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?");
+    private static final Pattern NOT_FINITE = Pattern.compile("(?i)[+-]?(?:nan|inf|infinity)");
+    private static final CSVFormat READ_FORMAT = CSVFormat.RFC4180.builder()
+            .setIgnoreSurroundingSpaces(true)
+            .setIgnoreEmptyLines(false)
+            .get();
+    private static final CSVFormat WRITE_FORMAT = CSVFormat.RFC4180.builder()
+            .setRecordSeparator("\n")
+            .get();
+
+    /** How a column's kind was chosen. */
+    public enum Choice {
+        /** The caller said so. */
+        DECLARED,
+        /** Every cell that is not empty is a number. */
+        INFERRED_ALL_NUMBERS,
+        /** Some cell is not a number. */
+        INFERRED_NOT_A_NUMBER
+    }
+
+    /**
+     * The kind chosen for one column, and why.
+     *
+     * @param example for {@link Choice#INFERRED_NOT_A_NUMBER}, the first value that is not a number and its line
+     */
+    public record ColumnKind(String name, VariableKind kind, Choice choice, String example) {
+        /** One line such as {@code colour: discrete (value 'red' on line 3 is not a number)}. */
+        public String describe() {
+            String why;
+            switch (choice) {
+                case DECLARED:
+                    why = "declared";
+                    break;
+                case INFERRED_ALL_NUMBERS:
+                    why = "every value is a number";
+                    break;
+                default:
+                    why = example;
+                    break;
+            }
+            return name + ": " + kind.word() + " (" + why + ")";
+        }
+    }
+
+    /** A data set read from CSV, with the kind chosen for each column. */
+    public record Result(DataSet data, List<ColumnKind> columns) {
+        public Result {
+            columns = List.copyOf(columns);
+        }
+
+        /** The report of the kinds, one line per column. */
+        public String describeKinds() {
+            StringBuilder sb = new StringBuilder();
+            for (ColumnKind c : columns) {
+                sb.append(c.describe()).append('\n');
+            }
+            return sb.toString();
+        }
+    }
+
+    private DataCsv() {
+    }
+
+    /** Reads a CSV data set, inferring every column's kind. */
+    public static Result read(Path file) throws IOException {
+        return read(file, Map.of());
+    }
+
+    /**
+     * Reads a CSV data set; columns named in {@code declared} get that kind, the others are
+     * inferred.
+     *
+     * @throws FileFormatException naming the file, line and column of the first problem
+     */
+    public static Result read(Path file, Map<String, VariableKind> declared) throws IOException {
+        List<String> names = readHeader(file);
+        Set<String> known = new HashSet<>(names);
+        for (String d : declared.keySet()) {
+            if (!known.contains(d)) {
+                throw new FileFormatException(file, null, "column '" + d + "' is declared "
+                        + declared.get(d).word() + " but the header has no such column");
+            }
+        }
+        int p = names.size();
+        Kind[] kinds = new Kind[p];
+        for (int j = 0; j < p; j++) {
+            VariableKind k = declared.get(names.get(j));
+            kinds[j] = k == null ? Kind.UNDECIDED : k == VariableKind.DISCRETE ? Kind.DISCRETE : Kind.CONTINUOUS;
+        }
+        Pass first = new Pass(file, names, kinds);
+        first.run();
+        Pass done = first;
+        if (first.switchedAfterNumbers) {
+            Kind[] fixed = first.kinds.clone();
+            for (int j = 0; j < p; j++) {
+                if (fixed[j] == Kind.UNDECIDED) {
+                    fixed[j] = Kind.CONTINUOUS;
+                }
+            }
+            done = new Pass(file, names, fixed);
+            System.arraycopy(first.firstNonNumber, 0, done.firstNonNumber, 0, p);
+            done.run();
+        }
+        return done.result(declared);
+    }
+
+    private static List<String> readHeader(Path file) throws IOException {
+        try (LineCountingReader in = open(file); CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
+            var it = parser.iterator();
+            if (!it.hasNext()) {
+                throw new FileFormatException(file, null, "the file is empty (expected a header row of variable names)");
+            }
+            CSVRecord header = it.next();
+            List<String> names = new ArrayList<>();
+            Map<String, Integer> seen = new HashMap<>();
+            for (int j = 0; j < header.size(); j++) {
+                String name = header.get(j);
+                if (name.isEmpty()) {
+                    throw new FileFormatException(file, "line 1, column " + (j + 1), "empty variable name");
+                }
+                Integer prev = seen.put(name, j);
+                if (prev != null) {
+                    throw new FileFormatException(file, "line 1, column " + (j + 1), "variable name '" + name
+                            + "' appears twice (also column " + (prev + 1) + ")");
+                }
+                names.add(name);
+            }
+            return names;
+        } catch (UncheckedIOException e) {
+            throw malformed(file, e);
+        }
+    }
+
+    private static FileFormatException malformed(Path file, UncheckedIOException e) {
+        String m = e.getCause() == null ? e.getMessage() : e.getCause().getMessage();
+        return new FileFormatException(file, null, "not valid CSV: " + m);
+    }
+
+    private static LineCountingReader open(Path file) throws IOException {
+        return new LineCountingReader(Files.newBufferedReader(file, StandardCharsets.UTF_8));
+    }
+
+    private enum Kind { UNDECIDED, CONTINUOUS, DISCRETE }
+
+    /** One read of the file's rows with the column kinds known so far. */
+    private static final class Pass {
+        private final Path file;
+        private final List<String> names;
+        private final Kind[] kinds;
+        private final String[] firstNonNumber;
+        private final double[][] numbers;
+        private final int[][] codes;
+        private final List<Map<String, Integer>> labels = new ArrayList<>();
+        private int rows;
+        private int capacity = 256;
+        boolean switchedAfterNumbers;
+
+        Pass(Path file, List<String> names, Kind[] kinds) {
+            this.file = file;
+            this.names = names;
+            this.kinds = kinds.clone();
+            int p = names.size();
+            this.firstNonNumber = new String[p];
+            this.numbers = new double[p][];
+            this.codes = new int[p][];
+            for (int j = 0; j < p; j++) {
+                if (this.kinds[j] == Kind.DISCRETE) {
+                    codes[j] = new int[capacity];
+                } else {
+                    numbers[j] = new double[capacity];
+                }
+                labels.add(new LinkedHashMap<>());
+            }
+        }
+
+        void run() throws IOException {
+            int p = names.size();
+            try (LineCountingReader in = open(file); CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
+                boolean header = true;
+                for (CSVRecord rec : parser) {
+                    if (header) {
+                        header = false;
+                        continue;
+                    }
+                    if (p > 1 && rec.size() == 1 && rec.get(0).isEmpty()) {
+                        continue;
+                    }
+                    long line = in.lineOf(rec.getCharacterPosition());
+                    if (rec.size() != p) {
+                        throw new FileFormatException(file, "line " + line, "the row has " + rec.size()
+                                + (rec.size() == 1 ? " cell" : " cells") + " but the header has " + p);
+                    }
+                    grow();
+                    for (int j = 0; j < p; j++) {
+                        cell(rec.get(j), j, line);
+                    }
+                    rows++;
+                }
+            } catch (UncheckedIOException e) {
+                throw malformed(file, e);
+            }
+        }
+
+        private void grow() {
+            if (rows < capacity) {
+                return;
+            }
+            capacity *= 2;
+            for (int j = 0; j < kinds.length; j++) {
+                if (kinds[j] == Kind.DISCRETE) {
+                    codes[j] = Arrays.copyOf(codes[j], capacity);
+                } else {
+                    numbers[j] = Arrays.copyOf(numbers[j], capacity);
+                }
+            }
+        }
+
+        private String place(long line, int j) {
+            return "line " + line + ", column '" + names.get(j) + "'";
+        }
+
+        private void cell(String text, int j, long line) {
+            Kind kind = kinds[j];
+            if (kind == Kind.DISCRETE) {
+                codes[j][rows] = text.isEmpty() ? DataSet.MISSING_CODE
+                        : labels.get(j).computeIfAbsent(text, t -> labels.get(j).size());
+                return;
+            }
+            if (text.isEmpty()) {
+                numbers[j][rows] = Double.NaN;
+                return;
+            }
+            if (NOT_FINITE.matcher(text).matches()) {
+                throw new FileFormatException(file, place(line, j), "'" + text
+                        + "' is not a finite number (leave the cell empty for a missing value)");
+            }
+            if (!NUMBER.matcher(text).matches()) {
+                if (kind == Kind.CONTINUOUS) {
+                    throw new FileFormatException(file, place(line, j), "'" + text
+                            + "' is not a number, but the column is continuous");
+                }
+                // An undeclared column with a label: it is discrete. Its earlier numbers are
+                // re-read as labels in a second pass, so their text is kept exactly.
+                kinds[j] = Kind.DISCRETE;
+                firstNonNumber[j] = "value '" + text + "' on line " + line + " is not a number";
+                codes[j] = new int[capacity];
+                numbers[j] = null;
+                if (rows > 0) {
+                    switchedAfterNumbers = true;
+                }
+                Arrays.fill(codes[j], 0, rows, DataSet.MISSING_CODE);
+                codes[j][rows] = labels.get(j).computeIfAbsent(text, t -> labels.get(j).size());
+                return;
+            }
+            double v = Double.parseDouble(text);
+            if (Double.isInfinite(v)) {
+                throw new FileFormatException(file, place(line, j), "'" + text
+                        + "' is too large for a double (not a finite number)");
+            }
+            numbers[j][rows] = v;
+        }
+
+        Result result(Map<String, VariableKind> declared) {
+            int p = names.size();
+            if (rows == 0) {
+                throw new FileFormatException(file, null, "no data rows after the header");
+            }
+            DataSet.Builder b = DataSet.builder(rows);
+            List<ColumnKind> report = new ArrayList<>();
+            for (int j = 0; j < p; j++) {
+                String name = names.get(j);
+                boolean isDeclared = declared.containsKey(name);
+                if (kinds[j] == Kind.DISCRETE) {
+                    Variable v = discrete(j);
+                    b.discrete(v, recode(j, v));
+                    report.add(new ColumnKind(name, VariableKind.DISCRETE,
+                            isDeclared ? Choice.DECLARED : Choice.INFERRED_NOT_A_NUMBER, firstNonNumber[j]));
+                } else {
+                    double[] values = Arrays.copyOf(numbers[j], rows);
+                    checkContinuous(j, values);
+                    b.continuous(name, values);
+                    report.add(new ColumnKind(name, VariableKind.CONTINUOUS,
+                            isDeclared ? Choice.DECLARED : Choice.INFERRED_ALL_NUMBERS, null));
+                }
+            }
+            return new Result(b.build(), report);
+        }
+
+        private void checkContinuous(int j, double[] values) {
+            double first = Double.NaN;
+            boolean constant = true;
+            for (double v : values) {
+                if (Double.isNaN(v)) {
+                    continue;
+                }
+                if (Double.isNaN(first)) {
+                    first = v;
+                } else if (v != first) {
+                    constant = false;
+                }
+            }
+            if (Double.isNaN(first)) {
+                throw new FileFormatException(file, "column '" + names.get(j) + "'", "every cell is empty");
+            }
+            if (constant) {
+                throw new FileFormatException(file, "column '" + names.get(j) + "'", "every value is " + first
+                        + " (a constant column carries no information)");
+            }
+        }
+
+        private Variable discrete(int j) {
+            Map<String, Integer> found = labels.get(j);
+            if (found.isEmpty()) {
+                throw new FileFormatException(file, "column '" + names.get(j) + "'", "every cell is empty");
+            }
+            if (found.size() == 1) {
+                throw new FileFormatException(file, "column '" + names.get(j) + "'", "every value is '"
+                        + found.keySet().iterator().next() + "' (a constant column carries no information)");
+            }
+            List<String> sorted = new ArrayList<>(found.keySet());
+            boolean allNumbers = sorted.stream().allMatch(s -> NUMBER.matcher(s).matches());
+            sorted.sort(allNumbers
+                    ? Comparator.comparingDouble((String s) -> Double.parseDouble(s)).thenComparing(Comparator.naturalOrder())
+                    : Comparator.naturalOrder());
+            return Variable.discrete(names.get(j), sorted);
+        }
+
+        private int[] recode(int j, Variable v) {
+            Map<String, Integer> found = labels.get(j);
+            int[] map = new int[found.size()];
+            List<String> cats = v.categories();
+            for (int k = 0; k < cats.size(); k++) {
+                map[found.get(cats.get(k))] = k;
+            }
+            int[] out = new int[rows];
+            for (int r = 0; r < rows; r++) {
+                int c = codes[j][r];
+                out[r] = c == DataSet.MISSING_CODE ? DataSet.MISSING_CODE : map[c];
+            }
+            return out;
+        }
+    }
+
+    /** Writes {@code data} to {@code file} atomically (see {@link #write(Writer, DataSet)}). */
+    public static void write(Path file, DataSet data) throws IOException {
+        AtomicFiles.writeText(file, w -> write(w, data));
+    }
+
+    /**
+     * Writes {@code data} as CSV: the header, then one row per sample; a missing cell is
+     * empty, a discrete cell is its category label, and a number is printed with
+     * {@link Double#toString(double)}, which gives the shortest decimal that reads back to
+     * the same double.
+     *
+     * @throws IllegalArgumentException if a category label is empty (it would read back as missing)
+     */
+    public static void write(Writer out, DataSet data) throws IOException {
+        int p = data.columns();
+        for (int j = 0; j < p; j++) {
+            for (String c : data.variable(j).categories()) {
+                if (c.isEmpty()) {
+                    throw new IllegalArgumentException("column '" + data.variable(j).name()
+                            + "' has an empty category label, which would read back as a missing cell");
+                }
+            }
+        }
+        CSVPrinter printer = new CSVPrinter(out, WRITE_FORMAT);
+        printer.printRecord(data.names());
+        String[] row = new String[p];
+        for (int r = 0; r < data.rows(); r++) {
+            for (int j = 0; j < p; j++) {
+                if (data.isMissing(r, j)) {
+                    row[j] = p == 1 ? "" : null;
+                } else if (data.isDiscrete(j)) {
+                    row[j] = data.variable(j).categories().get(data.discrete(j)[r]);
+                } else {
+                    row[j] = Double.toString(data.continuous(j)[r]);
+                }
+            }
+            printer.printRecord((Object[]) row);
+        }
+        printer.flush();
+    }
+}

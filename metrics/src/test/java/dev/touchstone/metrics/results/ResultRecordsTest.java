@@ -1,0 +1,70 @@
+package dev.touchstone.metrics.results;
+
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** The records' own rules (common practice for tidy data: one plain value per cell, undefined as empty). */
+class ResultRecordsTest {
+
+    @Test
+    @DisplayName("a run keeps the order of its coordinates and metrics, allows undefined (null) values and refuses NaN")
+    void runResult() {
+        Map<String, Double> metrics = new LinkedHashMap<>();
+        metrics.put("shd", 3.0);
+        metrics.put("adjacency_precision", null);
+        RunResult r = new RunResult("k1", Setting.of("nodes", "20", "samples", "oracle"), 0, "pc-fz", "pc",
+                Map.of("alpha", "0.01"), 42, RunStatus.OK, null, null, null, metrics, new Timings(1.5, 1.2, 30.0, 100L, null));
+        assertEquals(List.of("nodes", "samples"), List.copyOf(r.setting().coordinates().keySet()));
+        assertEquals("nodes=20, samples=oracle", r.setting().label());
+        assertEquals(List.of("shd", "adjacency_precision"), List.copyOf(r.metrics().keySet()));
+        assertNull(r.value("adjacency_precision"));
+        assertEquals(1.5, r.value("seconds"));
+        assertEquals(100.0, r.value("tests"));
+        assertNull(r.value("scores"));
+        metrics.put("shd", Double.NaN);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new RunResult("k1",
+                Setting.of("nodes", "20"), 0, "pc-fz", "pc", Map.of(), 1, RunStatus.OK, null, null, null, metrics, null));
+        assertTrue(e.getMessage().contains("metric 'shd'"), e.getMessage());
+    }
+
+    @Test
+    @DisplayName("a failed run needs a message and carries no metric values; its values read as undefined")
+    void failedRun() {
+        assertThrows(IllegalArgumentException.class, () -> new RunResult("k", Setting.of(), 0, "c", "l", Map.of(), 1,
+                RunStatus.FAILED, " ", null, null, Map.of(), null));
+        assertThrows(IllegalArgumentException.class, () -> new RunResult("k", Setting.of(), 0, "c", "l", Map.of(), 1,
+                RunStatus.TIMEOUT, "limit", null, null, Map.of("shd", 1.0), null));
+        RunResult f = new RunResult("k", Setting.of(), 0, "c", "l", Map.of(), 1, RunStatus.TIMEOUT, "over 60 s",
+                null, null, Map.of(), new Timings(60.0, null, null, null, null));
+        assertNull(f.value("seconds"));
+        assertTrue(f.status().isFailure());
+    }
+
+    @Test
+    @DisplayName("status words parse back and unknown words are refused with the allowed list")
+    void statusWords() {
+        for (RunStatus s : RunStatus.values()) {
+            assertEquals(s, RunStatus.parse(s.word()));
+        }
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> RunStatus.parse("done"));
+        assertEquals("unknown run status 'done' (allowed: ok, failed, timeout, skipped)", e.getMessage());
+    }
+
+    @Test
+    @DisplayName("comparison rows check wins + ties + losses = pairs")
+    void comparisonRow() {
+        assertThrows(IllegalArgumentException.class, () -> new ComparisonRow(Setting.of(), "shd", "a", "b", 5, 0.0,
+                null, null, null, null, 1, 1, 1));
+        ComparisonRow ok = new ComparisonRow(Setting.of(), "edges", "a", "b", 5, 0.0, null, null, null, null, null, null, null);
+        assertEquals(0.5, ok.withHolm(0.5).pHolm());
+    }
+}

@@ -1,0 +1,216 @@
+package dev.touchstone.reports.charts;
+
+import dev.touchstone.core.graph.Edge;
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.graph.Mark;
+import org.jfree.svg.SVGGraphics2D;
+import org.jgrapht.alg.drawing.FRLayoutAlgorithm2D;
+import org.jgrapht.alg.drawing.model.Box2D;
+import org.jgrapht.alg.drawing.model.LayoutModel2D;
+import org.jgrapht.alg.drawing.model.MapLayoutModel2D;
+import org.jgrapht.alg.drawing.model.Point2D;
+import org.jgrapht.graph.DefaultEdge;
+import org.jgrapht.graph.SimpleGraph;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Stroke;
+import java.awt.geom.Ellipse2D;
+import java.awt.geom.Line2D;
+import java.awt.geom.Path2D;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+
+/**
+ * The truth beside an estimate, over the same variables at the same positions (laid out
+ * by JGraphT's Fruchterman–Reingold algorithm on the union of both skeletons; Fruchterman
+ * and Reingold 1991). Edges are told apart by line style as well as colour, so the picture
+ * reads in greyscale: correct solid black, missing (truth panel) dashed grey, extra dotted
+ * red, wrong marks dash-dot orange. Arrowheads are filled triangles, circles open circles,
+ * tails plain line ends.
+ */
+public final class GraphPicture {
+
+    private static final int PANEL = 360;
+    private static final int MARGIN = 34;
+    private static final double NODE_RADIUS = 13;
+    private static final Map<EdgeVerdict, Color> COLOURS = new EnumMap<>(Map.of(
+            EdgeVerdict.CORRECT, new Color(0x22, 0x22, 0x22),
+            EdgeVerdict.MISSING, new Color(0x88, 0x88, 0x88),
+            EdgeVerdict.EXTRA, new Color(0xC0, 0x20, 0x20),
+            EdgeVerdict.WRONG_MARKS, new Color(0xE0, 0x80, 0x00)));
+
+    private final Graph truth;
+    private final Graph estimate;
+    private final long seed;
+
+    /**
+     * @param truth    the truth, of the estimate's class, over the same variables in the same order
+     * @param estimate the estimate
+     * @param seed     seeds the layout, so the picture is reproducible
+     */
+    public GraphPicture(Graph truth, Graph estimate, long seed) {
+        if (!truth.names().equals(estimate.names())) {
+            throw new IllegalArgumentException("truth and estimate must be over the same variables");
+        }
+        this.truth = truth;
+        this.estimate = estimate;
+        this.seed = seed;
+    }
+
+    /** How the edge between {@code a} and {@code b} of {@code in} compares with {@code other}. */
+    public static EdgeVerdict verdict(Graph in, Graph other, int a, int b, boolean inIsTruth) {
+        Edge e = in.edge(a, b);
+        Edge o = other.edge(a, b);
+        if (o == null) {
+            return inIsTruth ? EdgeVerdict.MISSING : EdgeVerdict.EXTRA;
+        }
+        return e.atA() == o.atA() && e.atB() == o.atB() ? EdgeVerdict.CORRECT : EdgeVerdict.WRONG_MARKS;
+    }
+
+    /** Both panels side by side with a legend, as an {@code <svg>} element. */
+    public String toSvg() {
+        int width = 2 * PANEL + 20;
+        int height = PANEL + 60;
+        Point2D[] at = layout();
+        SVGGraphics2D g = Svg.canvas(width, height);
+        g.setColor(Color.WHITE);
+        g.fillRect(0, 0, width, height);
+        g.setFont(new Font("SansSerif", Font.BOLD, 12));
+        g.setColor(Color.BLACK);
+        g.drawString("truth", 10, 16);
+        g.drawString("estimate", PANEL + 30, 16);
+        panel(g, truth, estimate, at, 0, true);
+        panel(g, estimate, truth, at, PANEL + 20, false);
+        legend(g, height - 22);
+        return g.getSVGElement();
+    }
+
+    private Point2D[] layout() {
+        int n = truth.size();
+        SimpleGraph<Integer, DefaultEdge> skeleton = new SimpleGraph<>(DefaultEdge.class);
+        for (int v = 0; v < n; v++) {
+            skeleton.addVertex(v);
+        }
+        for (Graph g : List.of(truth, estimate)) {
+            for (Edge e : g.edges()) {
+                if (!skeleton.containsEdge(e.a(), e.b())) {
+                    skeleton.addEdge(e.a(), e.b());
+                }
+            }
+        }
+        double size = PANEL - 2 * MARGIN;
+        LayoutModel2D<Integer> model = new MapLayoutModel2D<>(new Box2D(size, size));
+        new FRLayoutAlgorithm2D<Integer, DefaultEdge>(300, 0.5, new Random(seed)).layout(skeleton, model);
+        Point2D[] at = new Point2D[n];
+        for (int v = 0; v < n; v++) {
+            Point2D p = model.get(v);
+            at[v] = Point2D.of(MARGIN + clamp(p.getX(), size), 24 + MARGIN + clamp(p.getY(), size));
+        }
+        return at;
+    }
+
+    private static double clamp(double v, double size) {
+        return Double.isNaN(v) ? size / 2 : Math.max(0, Math.min(size, v));
+    }
+
+    private void panel(SVGGraphics2D g, Graph drawn, Graph other, Point2D[] at, int dx, boolean isTruth) {
+        for (Edge e : drawn.edges()) {
+            EdgeVerdict v = verdict(drawn, other, e.a(), e.b(), isTruth);
+            Point2D a = shift(at[e.a()], dx);
+            Point2D b = shift(at[e.b()], dx);
+            g.setColor(COLOURS.get(v));
+            g.setStroke(stroke(v));
+            double len = Math.hypot(b.getX() - a.getX(), b.getY() - a.getY());
+            if (len < 1e-6) {
+                continue;
+            }
+            double ux = (b.getX() - a.getX()) / len;
+            double uy = (b.getY() - a.getY()) / len;
+            double ax = a.getX() + ux * NODE_RADIUS;
+            double ay = a.getY() + uy * NODE_RADIUS;
+            double bx = b.getX() - ux * NODE_RADIUS;
+            double by = b.getY() - uy * NODE_RADIUS;
+            g.draw(new Line2D.Double(ax, ay, bx, by));
+            g.setStroke(new BasicStroke(1.2f));
+            mark(g, e.atA(), ax, ay, ux, uy);
+            mark(g, e.atB(), bx, by, -ux, -uy);
+        }
+        g.setFont(new Font("SansSerif", Font.PLAIN, 10));
+        FontMetrics fm = g.getFontMetrics();
+        for (int v = 0; v < drawn.size(); v++) {
+            Point2D p = shift(at[v], dx);
+            Ellipse2D node = new Ellipse2D.Double(p.getX() - NODE_RADIUS, p.getY() - NODE_RADIUS,
+                    2 * NODE_RADIUS, 2 * NODE_RADIUS);
+            g.setColor(new Color(0xF4, 0xF4, 0xF4));
+            g.fill(node);
+            g.setColor(Color.BLACK);
+            g.setStroke(new BasicStroke(1f));
+            g.draw(node);
+            String name = shorten(drawn.name(v));
+            g.drawString(name, (float) (p.getX() - fm.stringWidth(name) / 2.0), (float) (p.getY() + 4));
+        }
+    }
+
+    /** Draws the mark at an end point; (ux, uy) points from that end into the edge. */
+    private static void mark(SVGGraphics2D g, Mark m, double x, double y, double ux, double uy) {
+        if (m == Mark.ARROW) {
+            double len = 9;
+            double w = 4.5;
+            Path2D p = new Path2D.Double();
+            p.moveTo(x, y);
+            p.lineTo(x + ux * len - uy * w, y + uy * len + ux * w);
+            p.lineTo(x + ux * len + uy * w, y + uy * len - ux * w);
+            p.closePath();
+            g.fill(p);
+        } else if (m == Mark.CIRCLE) {
+            double r = 3.5;
+            Ellipse2D c = new Ellipse2D.Double(x + ux * r - r, y + uy * r - r, 2 * r, 2 * r);
+            Color line = g.getColor();
+            g.setColor(Color.WHITE);
+            g.fill(c);
+            g.setColor(line);
+            g.draw(c);
+        }
+    }
+
+    private static Point2D shift(Point2D p, int dx) {
+        return Point2D.of(p.getX() + dx, p.getY());
+    }
+
+    private static String shorten(String name) {
+        return name.length() <= 6 ? name : name.substring(0, 5) + "…";
+    }
+
+    private static Stroke stroke(EdgeVerdict v) {
+        switch (v) {
+            case MISSING:
+                return new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, new float[] {7f, 4f}, 0f);
+            case EXTRA:
+                return new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 10f, new float[] {1f, 4f}, 0f);
+            case WRONG_MARKS:
+                return new BasicStroke(1.8f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                        new float[] {9f, 3f, 2f, 3f}, 0f);
+            default:
+                return new BasicStroke(1.6f);
+        }
+    }
+
+    private static void legend(SVGGraphics2D g, int y) {
+        g.setFont(new Font("SansSerif", Font.PLAIN, 11));
+        int x = 10;
+        for (EdgeVerdict v : EdgeVerdict.values()) {
+            g.setColor(COLOURS.get(v));
+            g.setStroke(stroke(v));
+            g.draw(new Line2D.Double(x, y, x + 34, y));
+            g.setColor(Color.BLACK);
+            String label = v.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' ');
+            g.drawString(label, x + 40, y + 4);
+            x += 40 + g.getFontMetrics().stringWidth(label) + 24;
+        }
+    }
+}

@@ -1,0 +1,152 @@
+package dev.touchstone.reports.html;
+
+import dev.touchstone.reports.tables.Cell;
+import dev.touchstone.reports.tables.Table;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A self-contained HTML5 page: styles inline, pictures as inline SVG, no scripts, fonts,
+ * images or links to anything outside the file, so it opens from disk in any browser with
+ * no network. All text is escaped; only SVG produced by this module's charts is inserted
+ * as markup.
+ */
+public final class HtmlPage {
+
+    private static final String STYLE = String.join("\n",
+            "body{font-family:'DejaVu Sans',Helvetica,Arial,sans-serif;margin:0;color:#222;background:#fff}",
+            "main{max-width:1100px;margin:0 auto;padding:16px 24px 48px}",
+            "h1{font-size:1.6em;margin:.6em 0 .2em}h2{font-size:1.25em;margin-top:1.8em;border-bottom:1px solid #ccc}",
+            "h3{font-size:1.05em;margin-top:1.2em}",
+            "table{border-collapse:collapse;margin:.6em 0;font-size:.88em}",
+            "th,td{border:1px solid #ccc;padding:3px 7px;text-align:left;vertical-align:top}",
+            "th{background:#f0f0f0}td.best{font-weight:bold;background:#eef5ee}",
+            ".note{color:#555;font-size:.9em}",
+            ".warning{border-left:4px solid #c60;background:#fff6ec;padding:6px 10px;margin:.8em 0}",
+            ".caution{border:1px solid #999;background:#f7f7f7;padding:6px 14px;margin:1em 0}",
+            "figure{margin:1em 0}figcaption{font-size:.85em;color:#555}",
+            "nav a{margin-right:1em;font-size:.9em}",
+            "pre{background:#f6f6f6;padding:6px;overflow-x:auto;font-size:.85em}");
+
+    private final String title;
+    private final StringBuilder body = new StringBuilder();
+    private final List<String[]> sections = new ArrayList<>();
+
+    public HtmlPage(String title) {
+        this.title = title;
+    }
+
+    /** Starts a section with a level-2 heading, listed in the page's navigation. */
+    public HtmlPage section(String id, String heading) {
+        sections.add(new String[] {id, heading});
+        body.append("<h2 id=\"").append(escape(id)).append("\">").append(escape(heading)).append("</h2>\n");
+        return this;
+    }
+
+    public HtmlPage subheading(String text) {
+        body.append("<h3>").append(escape(text)).append("</h3>\n");
+        return this;
+    }
+
+    public HtmlPage paragraph(String text) {
+        body.append("<p>").append(escape(text)).append("</p>\n");
+        return this;
+    }
+
+    public HtmlPage note(String text) {
+        body.append("<p class=\"note\">").append(escape(text)).append("</p>\n");
+        return this;
+    }
+
+    public HtmlPage warning(String text) {
+        body.append("<div class=\"warning\">").append(escape(text)).append("</div>\n");
+        return this;
+    }
+
+    /** A boxed list (used for the cautions). */
+    public HtmlPage box(String heading, List<String> lines) {
+        body.append("<div class=\"caution\"><strong>").append(escape(heading)).append("</strong><ul>\n");
+        for (String l : lines) {
+            body.append("<li>").append(escape(l)).append("</li>\n");
+        }
+        body.append("</ul></div>\n");
+        return this;
+    }
+
+    public HtmlPage list(List<String> items) {
+        body.append("<ul>\n");
+        for (String i : items) {
+            body.append("<li>").append(escape(i)).append("</li>\n");
+        }
+        body.append("</ul>\n");
+        return this;
+    }
+
+    public HtmlPage preformatted(String text) {
+        body.append("<pre>").append(escape(text)).append("</pre>\n");
+        return this;
+    }
+
+    public HtmlPage table(Table t) {
+        body.append("<table>\n<thead><tr>");
+        for (String c : t.columns()) {
+            body.append("<th>").append(escape(c)).append("</th>");
+        }
+        body.append("</tr></thead>\n<tbody>\n");
+        for (List<Cell> row : t.rows()) {
+            body.append("<tr>");
+            for (Cell c : row) {
+                body.append(c.best() ? "<td class=\"best\">" : "<td>").append(escape(c.text())).append("</td>");
+            }
+            body.append("</tr>\n");
+        }
+        body.append("</tbody></table>\n");
+        return this;
+    }
+
+    /** An inline SVG picture (as produced by this module's charts) with a caption. */
+    public HtmlPage figure(String svgElement, String caption) {
+        if (!svgElement.startsWith("<svg")) {
+            throw new IllegalArgumentException("a figure must be an <svg> element");
+        }
+        body.append("<figure>").append(svgElement).append("<figcaption>").append(escape(caption))
+                .append("</figcaption></figure>\n");
+        return this;
+    }
+
+    /** The whole page. */
+    public String render() {
+        StringBuilder sb = new StringBuilder(body.length() + 4096);
+        sb.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
+                .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
+                .append("<title>").append(escape(title)).append("</title>\n<style>\n").append(STYLE)
+                .append("\n</style>\n</head>\n<body>\n<main>\n<h1>").append(escape(title)).append("</h1>\n");
+        if (!sections.isEmpty()) {
+            sb.append("<nav>");
+            for (String[] s : sections) {
+                sb.append("<a href=\"#").append(escape(s[0])).append("\">").append(escape(s[1])).append("</a>");
+            }
+            sb.append("</nav>\n");
+        }
+        sb.append(body).append("</main>\n</body>\n</html>\n");
+        return sb.toString();
+    }
+
+    /** Escapes text for HTML element content and attribute values. */
+    public static String escape(String s) {
+        StringBuilder sb = new StringBuilder(s.length() + 16);
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '<': sb.append("&lt;"); break;
+                case '>': sb.append("&gt;"); break;
+                case '&': sb.append("&amp;"); break;
+                case '"': sb.append("&quot;"); break;
+                case '\'': sb.append("&#39;"); break;
+                default: sb.append(c);
+            }
+        }
+        return sb.toString();
+    }
+}

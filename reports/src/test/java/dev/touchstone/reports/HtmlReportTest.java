@@ -1,0 +1,84 @@
+package dev.touchstone.reports;
+
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+class HtmlReportTest {
+
+    private static Document render(ReportData d) {
+        return Jsoup.parse(HtmlReport.render(d));
+    }
+
+    private static void selfContained(Document d) {
+        assertTrue(d.select("script, link, img, iframe, object, embed").isEmpty(), "nothing loaded from outside");
+        assertTrue(d.select("[src]").isEmpty(), "no src attributes");
+        for (Element a : d.select("[href], [xlink:href]")) {
+            String ref = a.hasAttr("href") ? a.attr("href") : a.attr("xlink:href");
+            assertTrue(ref.startsWith("#"), "only in-page references, got " + ref);
+        }
+        assertFalse(d.html().contains("url(http"), "no outside URLs in styles");
+    }
+
+    @Test
+    void completeStudyHasEveryExpectedChart() {
+        Document d = render(ReportFixtures.study(false, false).build());
+        selfContained(d);
+        // shd and adjacency_f1 against samples and nodes: 2 metrics × (1 panel vs samples per nodes value = 2,
+        // + 1 panel vs nodes per samples value = 2) = 8 panels (adjacency_f1 has no summary rows: 4);
+        // run time vs nodes: 2 panels; precision-recall (adjacency): 1; CD diagram: 1; one graph picture.
+        int expected = 4 + 2 + 1 + 1 + 1;
+        assertEquals(expected, d.select("figure > svg").size(), "one SVG per expected chart");
+        assertEquals(1, d.select("div.caution").size(), "the cautions are there");
+        assertTrue(d.text().contains("0 failed"), d.text());
+    }
+
+    @Test
+    void bestValueIsMarkedInTheHeadline() {
+        Document d = render(ReportFixtures.study(false, false).build());
+        // alpha has the lowest shd (pooled mean 3.0 vs 5.0 and 5.0), so its shd cell is marked best.
+        Element best = d.select("table td.best").first();
+        assertTrue(best.parent().child(0).text().equals("alpha"), best.parent().text());
+    }
+
+    @Test
+    void partialStudyIsMarked() {
+        Document d = render(ReportFixtures.study(false, false).partial(true).build());
+        assertTrue(d.title().endsWith("(partial)"));
+        assertEquals(1, d.select("div.warning").stream().filter(e -> e.text().contains("not finished")).count());
+    }
+
+    @Test
+    void aLearnerWhoseRunsAllFailedIsListedWithItsMessages() {
+        Document d = render(ReportFixtures.study(true, false).build());
+        selfContained(d);
+        assertTrue(d.text().contains("boom: singular matrix"));
+        assertTrue(d.text().contains("8 failed"), "8 failed runs of 'broken'");
+        Element brokenRow = d.select("table tr").stream().filter(r -> r.childrenSize() == 5 && r.child(0).text().equals("broken"))
+                .findFirst().orElseThrow();
+        assertTrue(brokenRow.text().contains("n/a"), "its values are undefined, shown n/a: " + brokenRow.text());
+    }
+
+    @Test
+    void undefinedValuesShowAsNotAvailable() {
+        Document d = render(ReportFixtures.study(false, true).build());
+        Element betaRow = d.select("table tr").stream().filter(r -> r.childrenSize() == 5 && r.child(0).text().equals("beta"))
+                .findFirst().orElseThrow();
+        assertEquals("n/a", betaRow.child(3).text(), "adjacency_f1 of beta is undefined everywhere");
+    }
+
+    @Test
+    void scaleBaselineCompetitiveWarns() {
+        // 'broken' uses learner 'empty', declared a scale baseline; its shd (5.0) equals the median of the others
+        // (3.0 and 5.0 → 4.0)? No: others are alpha 3.0 and beta 5.0, median 4.0; 5.0 is worse, so no warning.
+        Document d = render(ReportFixtures.study(false, false).build());
+        assertTrue(d.select("div.warning").stream().noneMatch(e -> e.text().contains("scale-artefact")));
+        Document w = render(ReportFixtures.study(false, false).scaleBaselines(java.util.Set.of("learner-alpha")).build());
+        assertTrue(w.select("div.warning").stream().anyMatch(e -> e.text().contains("scale-artefact baseline alpha")));
+    }
+}
