@@ -18,7 +18,7 @@ import org.apache.commons.math3.linear.SingularValueDecomposition;
  *
  * <p>Cost: one q × q solve plus O(path · sweeps · q²) for q candidates.
  */
-final class AdaptiveLasso {
+public final class AdaptiveLasso {
 
     /** Penalties tried, from the smallest that zeroes every coefficient down to 10⁻⁴ of it. */
     static final int PATH_LENGTH = 40;
@@ -35,7 +35,7 @@ final class AdaptiveLasso {
      * @param p          its dimension
      * @param rows       the number of rows it was estimated from (for BIC)
      */
-    static double[] fit(double[] cov, int p, long rows, int target, int[] candidates) {
+    public static double[] fit(double[] cov, int p, long rows, int target, int[] candidates) {
         int q = candidates.length;
         double[] out = new double[q];
         if (q == 0) {

@@ -1,0 +1,25 @@
+package dev.touchstone.learners.functional;
+
+import dev.touchstone.core.learner.Learner;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+import java.util.HashSet;
+import java.util.ServiceLoader;
+import java.util.Set;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+class ServiceRegistrationTest {
+
+    @Test
+    @DisplayName("DirectLiNGAM and NOTEARS are found by Java's service loader (design §5: listed and usable by id)")
+    void bothLearnersAreRegistered() {
+        Set<String> ids = new HashSet<>();
+        for (Learner l : ServiceLoader.load(Learner.class)) {
+            ids.add(l.description().id());
+        }
+        assertTrue(ids.contains("direct-lingam"), ids.toString());
+        assertTrue(ids.contains("notears-linear"), ids.toString());
+    }
+}
