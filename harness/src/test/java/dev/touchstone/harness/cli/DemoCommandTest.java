@@ -1,0 +1,73 @@
+package dev.touchstone.harness.cli;
+
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** The demo end to end, on the bundled study with a reduced grid (same learners and metrics). */
+class DemoCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private String bundledStudy() throws IOException {
+        try (InputStream in = DemoCommand.class.getResourceAsStream(DemoCommand.STUDY)) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+    }
+
+    private String[] run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int status = Main.execute(args, new PrintWriter(out), new PrintWriter(err));
+        return new String[] {Integer.toString(status), out.toString(), err.toString()};
+    }
+
+    @Test
+    @DisplayName("demo runs the bundled study end to end: headline table printed, report and tables written")
+    void demoRunsEndToEnd() throws IOException {
+        String reduced = bundledStudy().replace("replicates: 5", "replicates: 2")
+                .replace("nodes: [8, 16]", "nodes: [6]").replace("samples: [100, 500, 2000]", "samples: [100, 400]");
+        assertTrue(reduced.contains("replicates: 2") && reduced.contains("nodes: [6]"), "the bundled study changed shape");
+        Path study = dir.resolve("demo-reduced.yaml");
+        Files.writeString(study, reduced);
+        Path out = dir.resolve("out");
+        String[] r = run("demo", "--study", study.toString(), "--out", out.toString(), "--threads", "2", "--quiet");
+        assertEquals("0", r[0], r[2]);
+        assertTrue(r[1].contains("| learner configuration | ok runs | shd |"), r[1]);
+        assertTrue(r[1].contains("| pc |") && r[1].contains("| ges |") && r[1].contains("| empty |"), r[1]);
+        assertTrue(r[1].contains("report: "), r[1]);
+        for (String f : new String[] {"report.html", "report.md", "runs.csv", "summary.csv", "comparisons.csv",
+                "journal.jsonl", "provenance.json", "study.yaml"}) {
+            assertTrue(Files.isRegularFile(out.resolve(f)), f + " is written");
+        }
+        String html = Files.readString(out.resolve("report.html"));
+        assertTrue(html.contains("<svg"), "the report has charts");
+        assertTrue(html.contains("Read these results with care"), "the report carries the cautions");
+        assertTrue(!html.contains("(partial)"), "a finished study is not marked partial");
+
+        String[] again = run("report", out.toString(), "--to", dir.resolve("again").toString());
+        assertEquals("0", again[0], again[2]);
+        assertEquals(Files.readString(out.resolve("report.md")), Files.readString(dir.resolve("again/report.md")),
+                "re-rendering from the journal gives the same tables");
+    }
+
+    @Test
+    @DisplayName("report on a folder that is not a study's output: exit 2 and one line naming it")
+    void reportRefusesAForeignFolder() {
+        String[] r = run("report", dir.toString());
+        assertEquals("2", r[0]);
+        assertTrue(r[2].startsWith("error: ") && r[2].contains("not a study's output folder"), r[2]);
+    }
+}
