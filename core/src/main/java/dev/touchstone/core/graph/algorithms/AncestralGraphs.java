@@ -142,50 +142,8 @@ public final class AncestralGraphs {
 
     /** A directed cycle as its nodes with the first repeated at the end, or null. */
     static int[] directedCycle(Graph g) {
-        int n = g.size();
-        byte[] colour = new byte[n]; // 0 new, 1 on the stack, 2 done
-        int[] parent = new int[n];
-        int[] next = new int[n];
-        int[] stack = new int[n];
-        for (int root = 0; root < n; root++) {
-            if (colour[root] != 0) {
-                continue;
-            }
-            int top = 0;
-            stack[top++] = root;
-            colour[root] = 1;
-            parent[root] = -1;
-            next[root] = 0;
-            while (top > 0) {
-                int v = stack[top - 1];
-                if (next[v] == g.degree(v)) {
-                    colour[v] = 2;
-                    top--;
-                    continue;
-                }
-                int k = next[v]++;
-                if (g.markHere(v, k) != Mark.TAIL || g.markThere(v, k) != Mark.ARROW) {
-                    continue;
-                }
-                int w = g.neighbour(v, k);
-                if (colour[w] == 1) {
-                    ArrayDeque<Integer> cycle = new ArrayDeque<>();
-                    cycle.addFirst(w);
-                    for (int u = v; u != w; u = parent[u]) {
-                        cycle.addFirst(u);
-                    }
-                    cycle.addFirst(w);
-                    return cycle.stream().mapToInt(Integer::intValue).toArray();
-                }
-                if (colour[w] == 0) {
-                    colour[w] = 1;
-                    parent[w] = v;
-                    next[w] = 0;
-                    stack[top++] = w;
-                }
-            }
-        }
-        return null;
+        int[] cycle = Ancestry.directedCycle(g);
+        return cycle.length == 0 ? null : cycle;
     }
 
     /** A shortest directed path from {@code from} to {@code to} (at least one edge), or null. */
