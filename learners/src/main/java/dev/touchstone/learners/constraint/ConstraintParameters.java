@@ -14,7 +14,7 @@ import java.util.List;
 /** The parameter declarations PC and FCI share, and the steps that read them, in one place. */
 final class ConstraintParameters {
 
-    static final ParameterSpec MAX_DEPTH = ParameterSpec.integer("max-depth", -1, -1, 1000,
+    static final ParameterSpec MAX_DEPTH = ParameterSpec.integer("max_depth", -1, -1, 1000,
             "largest conditioning set the adjacency search tries; -1 for no limit");
     static final ParameterSpec SKELETON = ParameterSpec.choice("skeleton", SkeletonVariant.ORDER_INDEPENDENT.word(),
             SkeletonVariant.words(), "adjacency search: order-independent (levels frozen, parallel; Colombo and "
@@ -23,7 +23,7 @@ final class ConstraintParameters {
     private ConstraintParameters() {
     }
 
-    /** The shared declarations: test, alpha, missing, max-depth, skeleton. */
+    /** The shared declarations: test, alpha, missing, max_depth, skeleton. */
     static List<ParameterSpec> shared() {
         return List.of(IndependenceTests.TEST, IndependenceTests.ALPHA, IndependenceTests.MISSING, MAX_DEPTH, SKELETON);
     }

@@ -30,7 +30,7 @@ public final class HillClimbLearner implements Learner {
     /** The learner id. */
     public static final String ID = "hill-climbing";
 
-    static final String TABU_LENGTH = "tabu-length";
+    static final String TABU_LENGTH = "tabu_length";
     static final String PATIENCE = "patience";
     static final String RESTARTS = "restarts";
     static final String PERTURBATION = "perturbation";

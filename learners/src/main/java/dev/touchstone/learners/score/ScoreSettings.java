@@ -19,7 +19,7 @@ final class ScoreSettings {
     static final String SCORE = "score";
     static final String PENALTY = "penalty";
     static final String ESS = "ess";
-    static final String MAX_PARENTS = "max-parents";
+    static final String MAX_PARENTS = "max_parents";
 
     static final String AUTO = "auto";
     static final String BIC = "bic";
