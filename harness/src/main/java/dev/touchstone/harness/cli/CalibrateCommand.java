@@ -1,0 +1,222 @@
+package dev.touchstone.harness.cli;
+
+import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.data.VariableKind;
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.learner.LearnerException;
+import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.harness.calibrate.Calibration;
+import dev.touchstone.harness.calibrate.CalibrationOutcome;
+import dev.touchstone.harness.calibrate.CalibrationSettings;
+import dev.touchstone.harness.calibrate.CalibrationSummary;
+import dev.touchstone.harness.calibrate.TruthGraphs;
+import dev.touchstone.harness.catalog.LearnerCatalog;
+import dev.touchstone.harness.execution.LocalExecutor;
+import dev.touchstone.harness.execution.Progress;
+import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.io.DataCsv;
+import dev.touchstone.harness.io.GraphCsv;
+import dev.touchstone.harness.io.GraphJson;
+import dev.touchstone.reports.calibration.CalibrationReport;
+import dev.touchstone.reports.calibration.CalibrationView;
+import dev.touchstone.reports.calibration.SizeAnswer;
+import dev.touchstone.reports.tables.Numbers;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+/**
+ * {@code touchstone calibrate}: how reliable are these learners on data of this size and
+ * shape? Fits truths to the data, simulates, runs, bootstraps and writes the report.
+ */
+@Command(name = "calibrate", description = "Estimate how well learners would do on data like yours: fit truths to"
+        + " your data, simulate data sets of its size and shape, run the learners, bootstrap your data.")
+final class CalibrateCommand implements Callable<Integer> {
+
+    @Option(names = "--data", required = true, paramLabel = "FILE", description = "Your data (CSV with a header row).")
+    Path data;
+
+    @Option(names = "--learners", split = ",", paramLabel = "ID", description = "Learners to calibrate (default: pc,ges).")
+    List<String> learners = List.of("pc", "ges");
+
+    @Option(names = "--graph", paramLabel = "FILE", description = "The truth DAG to fit (JSON, or a CSV edge list"
+            + " ending in .csv); default: learned from the data by --truth-learner.")
+    Path graph;
+
+    @Option(names = "--truth-learner", paramLabel = "ID", description = "Learner that learns the truth graph when"
+            + " --graph is not given (default: ges).")
+    String truthLearner = "ges";
+
+    @Option(names = "--samples", split = ",", paramLabel = "N", description = "Sample sizes to simulate (default:"
+            + " n/2, n, 2n, 4n for data of n rows).")
+    List<Integer> samples;
+
+    @Option(names = "--replicates", paramLabel = "R", description = "Simulated data sets per sample size (default: 50).")
+    int replicates = 50;
+
+    @Option(names = "--variants", paramLabel = "V", description = "Perturbed truths besides the fitted one (default: 4).")
+    int variants = 4;
+
+    @Option(names = "--bootstrap", paramLabel = "B", description = "Bootstrap resamples of your data (default: 50).")
+    int bootstrap = 50;
+
+    @Option(names = "--discrete", split = ",", paramLabel = "NAME", description = "Columns to read as discrete.")
+    List<String> discrete = List.of();
+
+    @Option(names = "--continuous", split = ",", paramLabel = "NAME", description = "Columns to read as continuous.")
+    List<String> continuous = List.of();
+
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./calibration).")
+    Path out = Path.of("calibration");
+
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+    Integer threads;
+
+    @Option(names = "--seed", paramLabel = "S", description = "Root seed (default: 1).")
+    long seed = 1;
+
+    @Option(names = "--seconds", paramLabel = "S", description = "Time limit per run (default: 60).")
+    double seconds = 60;
+
+    @Option(names = "--quiet", description = "Print no progress.")
+    boolean quiet;
+
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter stdout = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        int n = threads == null ? LocalExecutor.defaultThreads() : threads;
+        if (n < 1 || replicates < 1 || variants < 0 || bootstrap < 0 || !(seconds > 0)) {
+            throw new UsageException("--threads and --replicates must be at least 1, --variants and --bootstrap at"
+                    + " least 0, --seconds positive");
+        }
+        Map<String, VariableKind> declared = new LinkedHashMap<>();
+        discrete.forEach(c -> declared.put(c.trim(), VariableKind.DISCRETE));
+        for (String c : continuous) {
+            if (declared.put(c.trim(), VariableKind.CONTINUOUS) != null) {
+                throw new UsageException("column '" + c.trim() + "' is given both --discrete and --continuous");
+            }
+        }
+        DataCsv.Result read = DataCsv.read(data, declared);
+        DataSet d = read.data();
+        if (d.rows() < 4) {
+            throw new UsageException(data + ": " + d.rows() + " rows; calibration needs at least 4");
+        }
+        LearnerCatalog catalog = new Toolkit(null, null).learners;
+        List<CalibrationSettings.Choice> choices = new ArrayList<>();
+        for (String id : learners) {
+            choices.add(choice(catalog, id.trim(), "--learners"));
+        }
+        Duration limit = Duration.ofNanos((long) (seconds * 1e9));
+        List<Integer> sizes = samples == null ? CalibrationSettings.defaultSamples(d.rows()) : samples;
+        for (int s : sizes) {
+            if (s < 2) {
+                throw new UsageException("--samples: " + s + " is not a sample size of at least 2");
+            }
+        }
+        CalibrationSettings settings = new CalibrationSettings(choices, sizes, replicates, variants, bootstrap, seed,
+                n, limit);
+        err.print(read.describeKinds());
+        Graph truth;
+        List<String> truthLines = new ArrayList<>();
+        String learnedBy = null;
+        try {
+            if (graph != null) {
+                Graph g = graph.toString().toLowerCase(Locale.ROOT).endsWith(".csv")
+                        ? GraphCsv.read(graph, d.names(), GraphClass.DAG) : GraphJson.read(graph, GraphClass.DAG);
+                truth = TruthGraphs.given(g, d, graph.toString());
+                truthLines.add("Truth graph given in " + graph + " (" + truth.edgeCount() + " edges).");
+            } else {
+                CalibrationSettings.Choice c = choice(catalog, truthLearner, "--truth-learner");
+                truth = TruthGraphs.learned(c, d, seed, limit);
+                learnedBy = c.id();
+                truthLines.add("Truth graph learned from the data by " + c.id() + " with default parameters ("
+                        + truth.edgeCount() + " edges; a CPDAG is extended to one of its DAGs).");
+            }
+        } catch (IllegalArgumentException | LearnerException e) {
+            throw new UsageException(e.getMessage(), e);
+        }
+        truthLines.add("Truth edges: " + (truth.edgeCount() == 0 ? "none" : String.join(", ",
+                TruthGraphs.edgeLines(truth))) + ".");
+        err.printf(Locale.ROOT, "truth: %d edges; %d truths, %d runs on %d threads%n", truth.edgeCount(),
+                variants + 1, (replicates * sizes.size() + bootstrap) * choices.size(), n);
+        err.flush();
+        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, System.console() != null,
+                System.console() != null ? 0.2 : 5.0);
+        CalibrationOutcome o;
+        try {
+            o = Calibration.run(d, truth, settings, progress);
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(data + ": " + e.getMessage(), e);
+        }
+        List<String> dataLines = new ArrayList<>();
+        dataLines.add(String.format(Locale.ROOT, "%s: %,d rows, %d columns (%s data); %d columns have missing"
+                + " cells.", data.getFileName(), d.rows(), d.columns(), d.kind().name().toLowerCase(Locale.ROOT),
+                missingColumns(d)));
+        for (DataCsv.ColumnKind k : read.columns()) {
+            dataLines.add(k.describe());
+        }
+        CalibrationView view = CalibrationSummary.view(o, "Calibration of " + String.join(", ", learners) + " on "
+                + data.getFileName(), dataLines, truthLines, learnedBy);
+        Files.createDirectories(out);
+        AtomicFiles.writeString(out.resolve("calibration.html"), CalibrationReport.html(view));
+        AtomicFiles.writeString(out.resolve("calibration.md"), CalibrationReport.markdown(view));
+        AtomicFiles.writeString(out.resolve("calibration-runs.csv"), CalibrationRunsCsv.render(o));
+        for (CalibrationView.Expectation e : view.expectations()) {
+            if (e.metric().equals("orientation_precision") || e.metric().equals("adjacency_f1")) {
+                stdout.printf(Locale.ROOT, "%s at %,d rows: %s expected %s (10%%–90%%: %s – %s)%n", e.learner(),
+                        view.analystRows(), e.metric(), Numbers.format(e.mean()), Numbers.format(e.low()),
+                        Numbers.format(e.high()));
+            }
+        }
+        for (String learner : view.learners()) {
+            List<CalibrationView.SizePoint> pts = new ArrayList<>();
+            for (CalibrationView.SizePoint p : view.curve()) {
+                if (p.learner().equals(learner) && p.metric().equals(view.target().metric())) {
+                    pts.add(p);
+                }
+            }
+            stdout.println(SizeAnswer.sentence(learner, pts, view.target(), view.analystRows()));
+        }
+        for (String w : view.warnings()) {
+            stdout.println("warning: " + w);
+        }
+        stdout.printf(Locale.ROOT, "report: %s%n", out.resolve("calibration.html"));
+        stdout.flush();
+        return Main.DONE;
+    }
+
+    private static int missingColumns(DataSet d) {
+        int n = 0;
+        for (int j = 0; j < d.columns(); j++) {
+            n += d.missingCount(j) > 0 ? 1 : 0;
+        }
+        return n;
+    }
+
+    private static CalibrationSettings.Choice choice(LearnerCatalog catalog, String id, String option) {
+        LearnerCatalog.Entry e = catalog.find(id);
+        if (e == null) {
+            throw new UsageException(option + ": unknown learner '" + id + "' (available: "
+                    + String.join(", ", catalog.ids()) + ")");
+        }
+        ParameterValues values = ParameterValues.resolve("learner " + id, e.learner().description().parameters(),
+                Map.of());
+        return new CalibrationSettings.Choice(e.learner(), values);
+    }
+}
