@@ -1,0 +1,61 @@
+package dev.touchstone.reports.calibration;
+
+import dev.touchstone.reports.Cautions;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+class CalibrationReportTest {
+
+    static CalibrationView.SizePoint p(int rows, double mean) {
+        return new CalibrationView.SizePoint("pc", "orientation_precision", rows, mean, mean - 0.1, mean + 0.1);
+    }
+
+    @Test
+    @DisplayName("rows to reach a target: linear interpolation in log(rows), worked by hand")
+    void interpolation() {
+        // Between 400 (0.7) and 1600 (0.9), 0.8 lies half-way in log scale: √(400·1600) = 800.
+        assertEquals(800.0, SizeAnswer.rowsToReach(List.of(p(200, 0.6), p(400, 0.7), p(1600, 0.9)), 0.8));
+        // A quarter of the way from 0.7 to 0.9 in log(rows) from 400 to 1600: 400 · 4^0.25 ≈ 565.7 → 566.
+        assertEquals(566.0, SizeAnswer.rowsToReach(List.of(p(400, 0.7), p(1600, 0.9)), 0.75));
+        assertNull(SizeAnswer.rowsToReach(List.of(p(400, 0.5), p(800, 0.6)), 0.8));
+        assertEquals(400.0, SizeAnswer.rowsToReach(List.of(p(800, 0.95), p(400, 0.85)), 0.8));
+        CalibrationView.Target t = new CalibrationView.Target("orientation_precision", 0.8);
+        assertTrue(SizeAnswer.sentence("pc", List.of(p(400, 0.5), p(800, 0.6)), t, 400)
+                .contains("does not reach a mean orientation_precision 0.800 within the sizes tried (up to 800 rows)"));
+        assertTrue(SizeAnswer.sentence("pc", List.of(p(200, 0.6), p(400, 0.7), p(1600, 0.9)), t, 400)
+                .contains("about 800 rows (about 2.0 times your 400 rows"));
+        assertTrue(SizeAnswer.sentence("pc", List.of(p(200, 0.9), p(400, 0.95)), t, 400)
+                .contains("already at the smallest size tried (200 rows)"));
+    }
+
+    @Test
+    @DisplayName("the report opens with the cautions of design §12 and states warnings before any figure")
+    void cautionsFirst() {
+        CalibrationView v = new CalibrationView("Calibration", List.of("data.csv: 400 rows"), List.of("truth given"),
+                List.of("MCAR"), List.of("x is missing in 30% of rows."), 400, List.of("pc"),
+                List.of(new CalibrationView.Expectation("pc", "orientation_precision", 0.7, 0.5, 0.9, 0.72, 10, 0)),
+                List.of(p(200, 0.6), p(400, 0.7), p(1600, 0.9)),
+                new CalibrationView.Target("orientation_precision", 0.8),
+                List.of(new CalibrationView.EdgeRow("pc", "a", "b", true, 0.9, 0.5, 0.8, 0.4)),
+                List.of(new CalibrationView.Check("a", "continuous", 400, 0.0, 0.1, 0.2, 0.5, null)),
+                List.of("seed 1"));
+        String html = CalibrationReport.html(v);
+        String md = CalibrationReport.markdown(v);
+        for (String line : Cautions.LINES) {
+            String escaped = dev.touchstone.reports.html.HtmlPage.escape(line);
+            assertTrue(html.indexOf(escaped) > 0 && html.indexOf(escaped) < html.indexOf("x is missing"), line);
+            assertTrue(md.indexOf(line) > 0 && md.indexOf(line) < md.indexOf("x is missing"), line);
+        }
+        assertTrue(md.indexOf("x is missing") < md.indexOf("## What to expect at 400 rows"));
+        assertTrue(md.contains("| pc | orientation_precision | 0.700 | 0.500 – 0.900 | 0.720 | 10 | 0 |"), md);
+        assertTrue(md.contains("| pc | a → b | yes | 0.900 | 0.500 | 0.800 | 0.400 |"), md);
+        assertTrue(md.contains("about 800 rows"), md);
+        assertTrue(html.contains("<svg"), "chart of orientation precision against rows");
+    }
+}
