@@ -52,16 +52,7 @@ final class Logistic {
             cfg[i] = StructureFit.config(data, dis, strides, rows[i]);
             counts[cfg[i]][y[i]]++;
         }
-        double[][] a = new double[configs][k];
-        for (int c = 0; c < configs; c++) {
-            double total = 0;
-            for (double n : counts[c]) {
-                total += n;
-            }
-            for (int j = 0; j < k; j++) {
-                a[c][j] = Math.log((counts[c][j] + StructureFit.SMOOTHING) / (total + StructureFit.SMOOTHING * k));
-            }
-        }
+        double[][] a = StructureFit.logSmoothed(counts);
         double[][] b = new double[k][q];
         double[][] ga = new double[configs][k];
         double[][] gb = new double[k][q];

@@ -187,18 +187,25 @@ public final class StructureFit {
         for (int r : rows) {
             counts[config(data, dis, strides, r)][y[r]]++;
         }
-        double[][] logTable = new double[configs][k];
-        for (int c = 0; c < configs; c++) {
+        return new FittedNode.Categorical(data.variable(v).name(), rows.length, data.variable(v).categories(),
+                names(data, dis), logSmoothed(counts), List.of(), new double[0], new double[0], new double[k][0]);
+    }
+
+    /** The log of (count + α) / (total + α·K), row by row. */
+    static double[][] logSmoothed(double[][] counts) {
+        double[][] out = new double[counts.length][];
+        for (int c = 0; c < counts.length; c++) {
+            int k = counts[c].length;
             double total = 0;
             for (double n : counts[c]) {
                 total += n;
             }
+            out[c] = new double[k];
             for (int j = 0; j < k; j++) {
-                logTable[c][j] = Math.log((counts[c][j] + SMOOTHING) / (total + SMOOTHING * k));
+                out[c][j] = Math.log((counts[c][j] + SMOOTHING) / (total + SMOOTHING * k));
             }
         }
-        return new FittedNode.Categorical(data.variable(v).name(), rows.length, data.variable(v).categories(),
-                names(data, dis), logTable, List.of(), new double[0], new double[0], new double[k][0]);
+        return out;
     }
 
     static int[] strides(DataSet data, List<Integer> dis) {

@@ -10,18 +10,21 @@ final class MixedMechanisms {
     }
 
     /**
-     * Continuous: X = Σ w_k z_k + Σ shift_k[code_k] + σ ε, with z_k the continuous parents
-     * centred and scaled by pilot moments; one normal draw per row.
+     * Continuous: X = intercept + Σ w_k z_k + Σ shift_k[code_k] + σ ε, with z_k the continuous
+     * parents centred and scaled by pilot moments (drawn models: intercept 0; models assembled
+     * from fitted parameters: mean 0 and scale 1, so z_k is the parent itself); one normal draw
+     * per row.
      */
     record Continuous(int node, int[] continuousParents, double[] parentMean, double[] parentSd, double[] weights,
-                      int[] discreteParents, double[][] shifts, double noiseScale) implements NodeMechanism {
+                      int[] discreteParents, double[][] shifts, double noiseScale, double intercept)
+            implements NodeMechanism {
 
         @Override
         public void fill(Object[] columns, int rows, UniformRandomProvider stream) {
             ZigguratSampler.NormalizedGaussian eps = ZigguratSampler.NormalizedGaussian.of(stream);
             double[] out = new double[rows];
             for (int r = 0; r < rows; r++) {
-                out[r] = noiseScale * eps.sample();
+                out[r] = intercept + noiseScale * eps.sample();
             }
             for (int k = 0; k < continuousParents.length; k++) {
                 double[] x = (double[]) columns[continuousParents[k]];

@@ -68,7 +68,7 @@ final class MixedModels {
                         shifts[k][c] = weights.draw(random);
                     }
                 }
-                m = new MixedMechanisms.Continuous(v, cp, pm, ps, w, dp, shifts, scales.draw(random));
+                m = new MixedMechanisms.Continuous(v, cp, pm, ps, w, dp, shifts, scales.draw(random), 0.0);
             } else {
                 int[] pc = new int[dp.length];
                 for (int k = 0; k < dp.length; k++) {

@@ -3,8 +3,6 @@ package dev.touchstone.generators.models;
 import dev.touchstone.core.data.CovarianceMatrix;
 import dev.touchstone.core.data.Variable;
 import dev.touchstone.core.graph.Graph;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 
 import java.util.Arrays;
 import java.util.List;
@@ -65,8 +63,11 @@ public final class ModelAssembly {
             for (int k = 0; k < s.length; k++) {
                 s[k] = shifts[k].clone();
             }
-            mechanisms[v] = new Gaussian(v, intercept, indices(continuousParents), weights.clone(),
-                    indices(discreteParents), s, noiseSd);
+            double[] zero = new double[continuousParents.size()];
+            double[] one = new double[continuousParents.size()];
+            Arrays.fill(one, 1.0);
+            mechanisms[v] = new MixedMechanisms.Continuous(v, indices(continuousParents), zero, one, weights.clone(),
+                    indices(discreteParents), s, noiseSd, intercept);
             return this;
         }
 
@@ -149,35 +150,6 @@ public final class ModelAssembly {
             }
             return new NodeWiseModel(dag, kindId, variables.clone(), mechanisms.clone(), null, null, null,
                     Optional::<CovarianceMatrix>empty);
-        }
-    }
-
-    /** The continuous mechanism with an intercept; one normal draw per row. */
-    private record Gaussian(int node, double intercept, int[] continuousParents, double[] weights,
-                            int[] discreteParents, double[][] shifts, double noiseSd) implements NodeMechanism {
-
-        @Override
-        public void fill(Object[] columns, int rows, UniformRandomProvider stream) {
-            ZigguratSampler.NormalizedGaussian eps = ZigguratSampler.NormalizedGaussian.of(stream);
-            double[] out = new double[rows];
-            for (int r = 0; r < rows; r++) {
-                out[r] = intercept + noiseSd * eps.sample();
-            }
-            for (int k = 0; k < continuousParents.length; k++) {
-                double[] x = (double[]) columns[continuousParents[k]];
-                double w = weights[k];
-                for (int r = 0; r < rows; r++) {
-                    out[r] += w * x[r];
-                }
-            }
-            for (int k = 0; k < discreteParents.length; k++) {
-                int[] c = (int[]) columns[discreteParents[k]];
-                double[] s = shifts[k];
-                for (int r = 0; r < rows; r++) {
-                    out[r] += s[c[r]];
-                }
-            }
-            columns[node] = out;
         }
     }
 }

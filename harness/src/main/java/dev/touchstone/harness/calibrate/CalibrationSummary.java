@@ -70,16 +70,16 @@ public final class CalibrationSummary {
             for (String metric : CalibrationSettings.METRICS) {
                 double[] all = values(o, learner, metric, at, false);
                 double[] fitted = values(o, learner, metric, at, true);
-                int notOk = notOk(o, learner, at);
+                int notOk = count(o, learner, at, false);
                 expectations.add(new CalibrationView.Expectation(learner, metric, mean(all), quantile(all, 0.1),
-                        quantile(all, 0.9), mean(fitted), okCount(o, learner, at), notOk));
+                        quantile(all, 0.9), mean(fitted), count(o, learner, at, true), notOk));
                 for (int n : sorted(o.settings().samples())) {
                     double[] v = values(o, learner, metric, n, false);
                     curve.add(new CalibrationView.SizePoint(learner, metric, n, mean(v), quantile(v, 0.1),
                             quantile(v, 0.9)));
                 }
             }
-            int bad = notOk(o, learner, at);
+            int bad = count(o, learner, at, false);
             if (bad > 0) {
                 warnings.add(String.format(Locale.ROOT, "%s did not finish on %d of the simulated data sets of %,d"
                         + " rows (failed, timed out or skipped); its expectations cover only the others.", learner,
@@ -259,22 +259,12 @@ public final class CalibrationSummary {
         return a;
     }
 
-    private static int okCount(CalibrationOutcome o, String learner, int rows) {
-        int n = 0;
-        for (CalibrationOutcome.Run r : o.runs()) {
-            if (!r.isBootstrap() && r.rows() == rows && r.learner().equals(learner) && r.result() != null
-                    && r.result().status() == RunStatus.OK) {
-                n++;
-            }
-        }
-        return n;
-    }
-
-    private static int notOk(CalibrationOutcome o, String learner, int rows) {
+    /** Simulated runs of a learner at a size that finished ok ({@code ok}) or did not. */
+    private static int count(CalibrationOutcome o, String learner, int rows, boolean ok) {
         int n = 0;
         for (CalibrationOutcome.Run r : o.runs()) {
             if (!r.isBootstrap() && r.rows() == rows && r.learner().equals(learner)
-                    && (r.result() == null || r.result().status() != RunStatus.OK)) {
+                    && (r.result() != null && r.result().status() == RunStatus.OK) == ok) {
                 n++;
             }
         }
