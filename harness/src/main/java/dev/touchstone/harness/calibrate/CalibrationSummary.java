@@ -96,7 +96,8 @@ public final class CalibrationSummary {
         for (FittedTruth t : o.truths()) {
             truths.add(t.name() + ": " + t.dag().edgeCount() + " edges; " + t.description());
         }
-        return new CalibrationView(title, dataLines, truths, assumptions(o), warnings, at, learners, expectations,
+        return new CalibrationView(title, dataLines, truths, assumptions(o), warnings, o.data().rows(), at, learners,
+                expectations,
                 curve, TARGET, edges(o, learners, at), checks(o.diagnostics()), settingsLines(o));
     }
 

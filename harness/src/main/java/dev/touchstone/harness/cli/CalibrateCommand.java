@@ -5,6 +5,7 @@ import dev.touchstone.core.data.VariableKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.LearnerException;
+import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.harness.calibrate.Calibration;
 import dev.touchstone.harness.calibrate.CalibrationOutcome;
@@ -50,6 +51,10 @@ final class CalibrateCommand implements Callable<Integer> {
 
     @Option(names = "--learners", split = ",", paramLabel = "ID", description = "Learners to calibrate (default: pc,ges).")
     List<String> learners = List.of("pc", "ges");
+
+    @Option(names = "--set", paramLabel = "ID.NAME=VALUE", description = "A learner's parameter value, e.g."
+            + " pc.alpha=0.01; repeat for several (also applies to --truth-learner of that id).")
+    List<String> settings = List.of();
 
     @Option(names = "--graph", paramLabel = "FILE", description = "The truth DAG to fit (JSON, or a CSV edge list"
             + " ending in .csv); default: learned from the data by --truth-learner.")
@@ -118,9 +123,15 @@ final class CalibrateCommand implements Callable<Integer> {
             throw new UsageException(data + ": " + d.rows() + " rows; calibration needs at least 4");
         }
         LearnerCatalog catalog = new Toolkit(null, null).learners;
+        Map<String, Map<String, String>> raw = parameterSettings();
         List<CalibrationSettings.Choice> choices = new ArrayList<>();
         for (String id : learners) {
-            choices.add(choice(catalog, id.trim(), "--learners"));
+            choices.add(choice(catalog, id.trim(), "--learners", raw));
+        }
+        for (String id : raw.keySet()) {
+            if (!learners.contains(id) && !id.equals(truthLearner)) {
+                throw new UsageException("--set: learner '" + id + "' is not among --learners or --truth-learner");
+            }
         }
         Duration limit = Duration.ofNanos((long) (seconds * 1e9));
         List<Integer> sizes = samples == null ? CalibrationSettings.defaultSamples(d.rows()) : samples;
@@ -142,11 +153,11 @@ final class CalibrateCommand implements Callable<Integer> {
                 truth = TruthGraphs.given(g, d, graph.toString());
                 truthLines.add("Truth graph given in " + graph + " (" + truth.edgeCount() + " edges).");
             } else {
-                CalibrationSettings.Choice c = choice(catalog, truthLearner, "--truth-learner");
+                CalibrationSettings.Choice c = choice(catalog, truthLearner, "--truth-learner", raw);
                 truth = TruthGraphs.learned(c, d, seed, limit);
                 learnedBy = c.id();
-                truthLines.add("Truth graph learned from the data by " + c.id() + " with default parameters ("
-                        + truth.edgeCount() + " edges; a CPDAG is extended to one of its DAGs).");
+                truthLines.add("Truth graph learned from the data by " + c.id() + " (" + truth.edgeCount()
+                        + " edges; a CPDAG is extended to one of its DAGs).");
             }
         } catch (IllegalArgumentException | LearnerException e) {
             throw new UsageException(e.getMessage(), e);
@@ -180,7 +191,7 @@ final class CalibrateCommand implements Callable<Integer> {
         for (CalibrationView.Expectation e : view.expectations()) {
             if (e.metric().equals("orientation_precision") || e.metric().equals("adjacency_f1")) {
                 stdout.printf(Locale.ROOT, "%s at %,d rows: %s expected %s (10%%–90%%: %s – %s)%n", e.learner(),
-                        view.analystRows(), e.metric(), Numbers.format(e.mean()), Numbers.format(e.low()),
+                        view.expectedAt(), e.metric(), Numbers.format(e.mean()), Numbers.format(e.low()),
                         Numbers.format(e.high()));
             }
         }
@@ -209,14 +220,34 @@ final class CalibrateCommand implements Callable<Integer> {
         return n;
     }
 
-    private static CalibrationSettings.Choice choice(LearnerCatalog catalog, String id, String option) {
+    /** The {@code --set} values by learner id. */
+    private Map<String, Map<String, String>> parameterSettings() {
+        Map<String, Map<String, String>> out = new LinkedHashMap<>();
+        for (String s : settings) {
+            int dot = s.indexOf('.');
+            int eq = s.indexOf('=');
+            if (dot <= 0 || eq < dot + 2) {
+                throw new UsageException("--set " + s + ": expected ID.NAME=VALUE, e.g. pc.alpha=0.01");
+            }
+            out.computeIfAbsent(s.substring(0, dot).trim(), k -> new LinkedHashMap<>())
+                    .put(s.substring(dot + 1, eq).trim(), s.substring(eq + 1).trim());
+        }
+        return out;
+    }
+
+    private static CalibrationSettings.Choice choice(LearnerCatalog catalog, String id, String option,
+                                                     Map<String, Map<String, String>> raw) {
         LearnerCatalog.Entry e = catalog.find(id);
         if (e == null) {
             throw new UsageException(option + ": unknown learner '" + id + "' (available: "
                     + String.join(", ", catalog.ids()) + ")");
         }
-        ParameterValues values = ParameterValues.resolve("learner " + id, e.learner().description().parameters(),
-                Map.of());
-        return new CalibrationSettings.Choice(e.learner(), values);
+        try {
+            ParameterValues values = ParameterValues.resolve("learner " + id, e.learner().description().parameters(),
+                    raw.getOrDefault(id, Map.of()));
+            return new CalibrationSettings.Choice(e.learner(), values);
+        } catch (ParameterException ex) {
+            throw new UsageException("--set: " + ex.getMessage(), ex);
+        }
     }
 }

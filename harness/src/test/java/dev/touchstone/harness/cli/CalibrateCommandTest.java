@@ -80,7 +80,7 @@ class CalibrateCommandTest {
         Files.writeString(data, csv.toString());
         Path out = tmp.resolve("out");
         CliTest.Result r = CliTest.cli("calibrate", "--data", data.toString(), "--discrete", "smoke,lung,bronc,dysp",
-                "--learners", "pc", "--replicates", "4", "--variants", "1", "--bootstrap", "3", "--threads", "2",
+                "--learners", "pc", "--set", "pc.alpha=0.05", "--replicates", "4", "--variants", "1", "--bootstrap", "3", "--threads", "2",
                 "--samples", "200,400", "--out", out.toString());
         assertEquals(0, r.status(), r.err());
         assertTrue(r.err().contains("smoke: discrete (declared)"), r.err());
@@ -104,6 +104,9 @@ class CalibrateCommandTest {
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "no-such-learner");
         assertEquals(2, r.status());
         assertTrue(r.err().contains("--learners: unknown learner 'no-such-learner'"), r.err());
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "pc.alpha=7");
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("error: --set: ") && r.err().contains("alpha"), r.err());
         Path graph = tmp.resolve("g.json");
         GraphJson.write(graph, dev.touchstone.core.graph.Graph.empty(List.of("a", "c")));
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--graph", graph.toString());

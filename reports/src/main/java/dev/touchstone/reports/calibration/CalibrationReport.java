@@ -43,7 +43,10 @@ public final class CalibrationReport {
         }
         page.section("data", "Your data");
         page.list(v.dataLines());
-        page.section("expected", String.format(Locale.ROOT, "What to expect at %,d rows", v.analystRows()));
+        page.section("expected", String.format(Locale.ROOT, "What to expect at %,d rows", v.expectedAt()));
+        if (v.expectedAt() != v.analystRows()) {
+            page.note(nearest(v));
+        }
         page.paragraph("Each learner was run on data sets simulated from truths fitted to your data (and perturbed"
                 + " variants), of your size and shape. The mean is the expected value; the 10%–90% range is where"
                 + " most single data sets fall.");
@@ -89,7 +92,10 @@ public final class CalibrationReport {
         }
         sb.append("## Your data\n\n");
         bullets(sb, v.dataLines());
-        sb.append(String.format(Locale.ROOT, "## What to expect at %,d rows%n%n", v.analystRows()));
+        sb.append(String.format(Locale.ROOT, "## What to expect at %,d rows%n%n", v.expectedAt()));
+        if (v.expectedAt() != v.analystRows()) {
+            sb.append(nearest(v)).append("\n\n");
+        }
         sb.append(MarkdownTable.render(CalibrationTables.expectations(v))).append('\n');
         sb.append("## With more (or fewer) rows\n\n");
         bullets(sb, CalibrationTables.answers(v));
@@ -106,6 +112,11 @@ public final class CalibrationReport {
         bullets(sb, v.truthLines());
         bullets(sb, v.settings());
         return sb.toString();
+    }
+
+    private static String nearest(CalibrationView v) {
+        return String.format(Locale.ROOT, "Your data have %,d rows, a size not simulated; %,d is the nearest size"
+                + " simulated.", v.analystRows(), v.expectedAt());
     }
 
     private static void bullets(StringBuilder sb, List<String> lines) {

@@ -12,6 +12,8 @@ import java.util.List;
  * @param assumptions  what the simulation assumes, in plain words
  * @param warnings     plain warnings from the checks of the fitted model
  * @param analystRows  the data's number of rows
+ * @param expectedAt   the simulated size the expectations are given at (the data's rows when
+ *                     simulated, otherwise the nearest size simulated)
  * @param learners     the learner ids, in order
  * @param expectations expected metric values at the analyst's number of rows
  * @param curve        metric values at every simulated size
@@ -21,7 +23,7 @@ import java.util.List;
  * @param settings     how the calibration was run (sizes, replicates, seed, threads), one line each
  */
 public record CalibrationView(String title, List<String> dataLines, List<String> truthLines, List<String> assumptions,
-                              List<String> warnings, int analystRows, List<String> learners,
+                              List<String> warnings, int analystRows, int expectedAt, List<String> learners,
                               List<Expectation> expectations, List<SizePoint> curve, Target target,
                               List<EdgeRow> edges, List<Check> checks, List<String> settings) {
 

@@ -38,7 +38,7 @@ class CalibrationReportTest {
     @DisplayName("the report opens with the cautions of design §12 and states warnings before any figure")
     void cautionsFirst() {
         CalibrationView v = new CalibrationView("Calibration", List.of("data.csv: 400 rows"), List.of("truth given"),
-                List.of("MCAR"), List.of("x is missing in 30% of rows."), 400, List.of("pc"),
+                List.of("MCAR"), List.of("x is missing in 30% of rows."), 400, 400, List.of("pc"),
                 List.of(new CalibrationView.Expectation("pc", "orientation_precision", 0.7, 0.5, 0.9, 0.72, 10, 0)),
                 List.of(p(200, 0.6), p(400, 0.7), p(1600, 0.9)),
                 new CalibrationView.Target("orientation_precision", 0.8),
