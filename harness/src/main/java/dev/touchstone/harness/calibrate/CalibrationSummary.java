@@ -218,25 +218,19 @@ public final class CalibrationSummary {
     }
 
     private static Double adjacent(List<Graph> graphs, int a, int b) {
-        if (graphs.isEmpty()) {
-            return null;
-        }
-        int n = 0;
-        for (Graph g : graphs) {
-            n += g.adjacent(a, b) ? 1 : 0;
-        }
-        return n / (double) graphs.size();
+        return share(graphs, g -> g.adjacent(a, b));
     }
 
     private static Double directed(List<Graph> graphs, int from, int to) {
+        return share(graphs, g -> g.hasDirected(from, to));
+    }
+
+    /** The fraction of graphs with the property, null when there are none. */
+    private static Double share(List<Graph> graphs, java.util.function.Predicate<Graph> property) {
         if (graphs.isEmpty()) {
             return null;
         }
-        int n = 0;
-        for (Graph g : graphs) {
-            n += g.hasDirected(from, to) ? 1 : 0;
-        }
-        return n / (double) graphs.size();
+        return graphs.stream().filter(property).count() / (double) graphs.size();
     }
 
     /** Values of a metric over ok simulated runs of a learner at a size (fitted truth only, or all truths). */
