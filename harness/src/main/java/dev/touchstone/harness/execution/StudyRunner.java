@@ -218,7 +218,7 @@ public final class StudyRunner {
 
     private static Provenance provenance(Plan plan, String studyText, int threads, Instant started, Instant finished,
                                          Map<String, Integer> counts) {
-        var v = dev.touchstone.harness.cli.VersionInfo.current();
+        var v = dev.touchstone.harness.version.VersionInfo.current();
         return new Provenance(v.version(), v.commit() + (v.dirty() ? "-dirty" : ""), plan.study().name(),
                 plan.hash(), Canonical.hash(studyText), threads, started, finished, counts);
     }
