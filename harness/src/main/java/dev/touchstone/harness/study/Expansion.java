@@ -56,26 +56,14 @@ public final class Expansion {
     }
 
     private List<TruthSetting> truths(Study study) {
-        List<List<TruthSetting.Choice>> perSection = new ArrayList<>();
-        for (ComponentSpec c : study.truth()) {
-            List<TruthSetting.Choice> choices = new ArrayList<>();
-            for (String kindName : c.kinds()) {
-                TruthCatalog.Kind kind = catalog.section(c.section()).kind(kindName);
-                for (Map<String, Object> given : product(c.axes())) {
-                    ParameterValues values;
-                    try {
-                        values = ParameterValues.resolve(c.section() + " " + kindName, kind.parameters(), given);
-                    } catch (ParameterException e) {
-                        throw new StudyException(placeOf(study, "truth", c.section()), "truth." + c.section() + "."
-                                + e.parameter(), e.getMessage());
-                    }
-                    choices.add(new TruthSetting.Choice(c.section(), kindName, values, given));
-                }
-            }
-            perSection.add(choices);
-        }
         List<TruthSetting> out = new ArrayList<>();
-        combine(perSection, 0, new ArrayList<>(), out);
+        for (int b = 0; b < study.truths().size(); b++) {
+            List<List<TruthSetting.Choice>> perSection = new ArrayList<>();
+            for (ComponentSpec c : study.truths().get(b)) {
+                perSection.add(choices(study, b, c));
+            }
+            combine(perSection, 0, new ArrayList<>(), out);
+        }
         for (TruthSetting t : out) {
             try {
                 catalog.checkCombination(t);
@@ -85,6 +73,26 @@ public final class Expansion {
             }
         }
         return out;
+    }
+
+    private List<TruthSetting.Choice> choices(Study study, int block, ComponentSpec c) {
+        List<TruthSetting.Choice> choices = new ArrayList<>();
+        for (String kindName : c.kinds()) {
+            TruthCatalog.Kind kind = catalog.section(c.section()).kind(kindName);
+            for (Map<String, Object> given : product(c.axes())) {
+                ParameterValues values;
+                try {
+                    values = ParameterValues.resolve(c.section() + " " + kindName, kind.parameters(), given);
+                } catch (ParameterException e) {
+                    String where = study.truths().size() > 1 ? "truth[" + block + "]." : "truth.";
+                    throw new StudyException(placeOf(study, "truth", c.section()), where + c.section() + "."
+                            + e.parameter(), e.getMessage());
+                }
+                choices.add(new TruthSetting.Choice(c.section(), kindName, values, given,
+                        catalog.fingerprint(c.section(), kindName, values)));
+            }
+        }
+        return choices;
     }
 
     private static void combine(List<List<TruthSetting.Choice>> perSection, int i, List<TruthSetting.Choice> prefix,

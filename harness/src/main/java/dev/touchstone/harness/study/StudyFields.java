@@ -45,8 +45,9 @@ public final class StudyFields {
                     "The root of every random choice; each draw's seed derives from it and the draw's coordinates."),
             new Field(REPLICATES, "integer", false, "1",
                     "Independent draws of graph, parameters and data per setting, 1 to " + MAX_REPLICATES + "."),
-            new Field(TRUTH, "map", true, null,
-                    "What to simulate: one sub-section per part of the truth (see below). A list of values expands into a grid."),
+            new Field(TRUTH, "map or list of maps", true, null,
+                    "What to simulate: one sub-section per part of the truth (see below). A list of values expands into a grid;"
+                            + " a list of such maps runs several grids side by side."),
             new Field(SAMPLES, "list", true, null,
                     "Sample sizes: whole numbers of at least " + MIN_SAMPLES + ", and/or `oracle` (infinite sample)."),
             new Field(LEARNERS, "list", true, null,

@@ -33,14 +33,18 @@ public final class StudyWriter {
         }
         m.put(StudyFields.SEED, s.seed());
         m.put(StudyFields.REPLICATES, s.replicates());
-        Map<String, Object> truth = new LinkedHashMap<>();
-        for (ComponentSpec c : s.truth()) {
-            Map<String, Object> section = new LinkedHashMap<>();
-            section.put(c.kindField(), c.kinds().size() == 1 ? c.kind() : c.kinds());
-            c.axes().forEach((k, v) -> section.put(k, v.size() == 1 ? v.get(0) : v));
-            truth.put(c.section(), section);
+        List<Object> blocks = new ArrayList<>();
+        for (List<ComponentSpec> block : s.truths()) {
+            Map<String, Object> truth = new LinkedHashMap<>();
+            for (ComponentSpec c : block) {
+                Map<String, Object> section = new LinkedHashMap<>();
+                section.put(c.kindField(), c.kinds().size() == 1 ? c.kind() : c.kinds());
+                c.axes().forEach((k, v) -> section.put(k, v.size() == 1 ? v.get(0) : v));
+                truth.put(c.section(), section);
+            }
+            blocks.add(truth);
         }
-        m.put(StudyFields.TRUTH, truth);
+        m.put(StudyFields.TRUTH, blocks.size() == 1 ? blocks.get(0) : blocks);
         List<Object> samples = new ArrayList<>();
         for (SampleSize n : s.samples()) {
             samples.add(n.isOracle() ? SampleSize.ORACLE_WORD : n.rows());
