@@ -82,8 +82,17 @@ public final class HtmlReport {
         page.subheading("Headline");
         page.note("Mean over all ok runs of each configuration (pooled over settings) with a 95% bootstrap interval;"
                 + " the best value of each column is highlighted. n/a: undefined (for example a ratio with a zero"
-                + " denominator).");
-        page.table(view.headline());
+                + " denominator)." + (data.groupCoordinates().isEmpty() ? "" : " One table per kind of truth, so"
+                + " that every mean in a table comes from the same settings."));
+        for (StudyView.Headline h : view.headlines()) {
+            if (!h.title().isEmpty()) {
+                page.subheading("Headline: " + h.title());
+            }
+            page.table(h.table());
+            for (String line : h.notRun()) {
+                page.note("Not run here: " + line);
+            }
+        }
     }
 
     private static void metricCharts(HtmlPage page, StudyView view) {

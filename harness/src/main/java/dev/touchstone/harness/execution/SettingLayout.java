@@ -18,8 +18,9 @@ import java.util.Set;
 /**
  * The coordinates a study's settings are written with: one column per truth section (its
  * kind), one per truth parameter the study gives, and {@code samples}. With several truth
- * blocks the columns are the union of theirs; a setting leaves empty what its block does
- * not have (a network's setting has no {@code graph} or {@code nodes}). A parameter keeps
+ * blocks the columns are the union of theirs; a setting has no coordinate for what its
+ * block lacks (a network's setting has no {@code graph} or {@code nodes}), written as an
+ * empty cell. A parameter keeps
  * its plain name unless another section uses the same one, in which case both are
  * prefixed with their section ({@code model_scale}, {@code missing_scale}).
  */
@@ -70,13 +71,17 @@ public final class SettingLayout {
         TruthSetting t = run.truth();
         for (String s : sections) {
             TruthSetting.Choice c = t.choice(s);
-            m.put(s, c == null ? "" : c.kind());
+            if (c != null) {
+                m.put(s, c.kind());
+            }
         }
         columnByParameter.forEach((key, column) -> {
             int dot = key.indexOf('.');
             TruthSetting.Choice c = t.choice(key.substring(0, dot));
             Object v = c == null ? null : c.values().asMap().get(key.substring(dot + 1));
-            m.put(column, v == null ? "" : Canonical.value(v));
+            if (v != null) {
+                m.put(column, Canonical.value(v));
+            }
         });
         m.put(SAMPLES, run.sample().word());
         return new Setting(m);

@@ -12,6 +12,7 @@ import dev.touchstone.harness.execution.SettingLayout;
 import dev.touchstone.harness.execution.Simulator;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.study.ComponentSpec;
 import dev.touchstone.harness.study.LearnerConfig;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.RunDefinition;
@@ -66,6 +67,29 @@ public final class StudyReports {
     }
 
     /**
+     * The truth sections that tell a study's truth blocks apart (those some block leaves
+     * out, such as {@code graph} and {@code network}); the headline gets one table per
+     * block through them. Empty for a study with one block.
+     */
+    static List<String> blockSections(Plan plan) {
+        List<List<ComponentSpec>> blocks = plan.study().truths();
+        if (blocks.size() < 2) {
+            return List.of();
+        }
+        java.util.Set<String> all = new java.util.LinkedHashSet<>();
+        for (List<ComponentSpec> block : blocks) {
+            block.forEach(c -> all.add(c.section()));
+        }
+        List<String> out = new ArrayList<>();
+        for (String section : all) {
+            if (!blocks.stream().allMatch(b -> b.stream().anyMatch(c -> c.section().equals(section)))) {
+                out.add(section);
+            }
+        }
+        return out;
+    }
+
+    /**
      * The report data of a study.
      *
      * @param runs    the recorded runs in plan order (fewer than the plan's when partial)
@@ -84,6 +108,7 @@ public final class StudyReports {
                 .provenance(provenance)
                 .scaleBaselines(SCALE_BASELINES)
                 .coordinates(SettingLayout.SAMPLES, "nodes")
+                .groupBy(blockSections(plan))
                 .summarizer(values -> Summaries.of(values.stream().mapToDouble(Double::doubleValue).toArray(),
                         Seeds.random(Seeds.derive(statsSeed, "pooled"))));
         for (String m : metrics) {
