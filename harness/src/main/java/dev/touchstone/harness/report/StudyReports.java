@@ -1,7 +1,6 @@
 package dev.touchstone.harness.report;
 
 import dev.touchstone.core.graph.Graph;
-import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
@@ -187,7 +186,7 @@ public final class StudyReports {
         try {
             LearnerInput input = rep.input(run.sample());
             run.config().learner().description().checkAccepts(input);
-            return run.config().learner().learn(input, Knowledge.none(), run.config().values(),
+            return run.config().learner().learn(input, rep.knowledge(run.config().knowledge()), run.config().values(),
                     RunContext.of(run.learnerSeed(), run.limit(), 1));
         } catch (RuntimeException e) {
             return null;

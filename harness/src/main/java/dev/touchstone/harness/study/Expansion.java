@@ -128,7 +128,7 @@ public final class Expansion {
                     }
                 });
                 LearnerConfig c = new LearnerConfig(out.size(), e.id(), learner, values, varied,
-                        fingerprints.apply(e.use()));
+                        fingerprints.apply(e.use()), e.knowledge());
                 LearnerConfig same = byCanonical.putIfAbsent(c.canonical(), c);
                 if (same != null) {
                     throw new StudyException(e.place(), "learners." + e.id(), "the configuration " + c.label()

@@ -28,6 +28,7 @@ public final class StudyFields {
     public static final String ENTRY_ID = "id";
     public static final String ENTRY_USE = "use";
     public static final String ENTRY_WITH = "with";
+    public static final String ENTRY_KNOWLEDGE = "knowledge";
 
     /** Keys of {@code limits}. */
     public static final String LIMIT_SECONDS = "seconds";

@@ -342,7 +342,8 @@ public final class StudyReader {
             throw StudyException.at(item, "expected a learner id or {id: …, use: …, with: {…}}, found "
                     + item.describe());
         }
-        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH));
+        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH,
+                StudyFields.ENTRY_KNOWLEDGE));
         Node useNode = required(item, StudyFields.ENTRY_USE);
         LearnerCatalog.Entry found = findLearner(useNode, text(useNode));
         Node idNode = item.get(StudyFields.ENTRY_ID);
@@ -369,7 +370,27 @@ public final class StudyReader {
                         "learner " + d.id() + " needs this parameter (allowed: " + spec.allowed() + ")");
             }
         }
-        return new LearnerEntry(id, found.id(), axes, item.place());
+        return new LearnerEntry(id, found.id(), axes, knowledge(item.get(StudyFields.ENTRY_KNOWLEDGE), d),
+                item.place());
+    }
+
+    /** The entry's {@code knowledge}: none (default) or tiers, which the learner must honour. */
+    private static KnowledgeSource knowledge(Node node, LearnerDescription d) {
+        if (node == null || node.isNull()) {
+            return KnowledgeSource.NONE;
+        }
+        String word = text(node);
+        KnowledgeSource k = KnowledgeSource.of(word);
+        if (k == null) {
+            throw StudyException.at(node, "unknown knowledge '" + word + "' (allowed: "
+                    + String.join(", ", KnowledgeSource.words()) + ")");
+        }
+        if (k == KnowledgeSource.TIERS && !d.knowledge().contains(dev.touchstone.core.learner.KnowledgeUse.TIERS)) {
+            throw StudyException.at(node, "learner " + d.id() + " does not honour tiers (it honours: "
+                    + (d.knowledge().isEmpty() ? "no knowledge" : String.join(", ", d.knowledge().stream()
+                    .map(dev.touchstone.core.learner.KnowledgeUse::word).toList())) + ")");
+        }
+        return k;
     }
 
     private LearnerCatalog.Entry findLearner(Node node, String use) {

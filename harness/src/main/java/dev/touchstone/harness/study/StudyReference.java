@@ -56,6 +56,10 @@ public final class StudyReference {
                 .append(" entry's name in results (default: the learner id) and must be unique. Each parameter in")
                 .append(" `with` takes one value or a list; a list makes one configuration per value, named")
                 .append(" `id[parameter=value]`. Parameters and their ranges are those the learner declares.")
+                .append(" `knowledge: tiers` hands the runs the tiers the truth comes with (the layers of the")
+                .append(" `layered` graph family, over the observed variables) as background knowledge; the learner")
+                .append(" must honour tiers (see `touchstone learners`), and truths without tiers give no knowledge.")
+                .append(" The default, `knowledge: none`, gives none.")
                 .append(" Two entries with the same learner and values are refused.\n\n");
         sb.append("## Sample sizes\n\n")
                 .append("`samples` lists whole numbers of at least ").append(StudyFields.MIN_SAMPLES)

@@ -60,6 +60,9 @@ public final class StudyWriter {
                 e.axes().forEach((k, v) -> with.put(k, v.size() == 1 ? v.get(0) : v));
                 entry.put(StudyFields.ENTRY_WITH, with);
             }
+            if (e.knowledge() != KnowledgeSource.NONE) {
+                entry.put(StudyFields.ENTRY_KNOWLEDGE, e.knowledge().word());
+            }
             learners.add(entry);
         }
         m.put(StudyFields.LEARNERS, learners);

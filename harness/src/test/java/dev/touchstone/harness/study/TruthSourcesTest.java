@@ -151,6 +151,12 @@ class TruthSourcesTest {
                         + "  model: {kind: linear-gaussian}\n", "truth", 5,
                         new String[] {"needs a graph file"}),
                 Arguments.of("empty truth list", "truth: []\n", "truth", 4, new String[] {"an empty list gives no truth"}),
+                Arguments.of("unknown knowledge", "truth: {network: sprinkler}\nsamples: [50]\nlearners:\n"
+                        + "  - {use: empty-test, knowledge: layers}\n", "learners[0].knowledge", 7,
+                        new String[] {"unknown knowledge 'layers'", "allowed: none, tiers"}),
+                Arguments.of("tiers for a learner that ignores them", "truth: {network: sprinkler}\nsamples: [50]\n"
+                        + "learners:\n  - {use: empty-test, knowledge: tiers}\n", "learners[0].knowledge", 7,
+                        new String[] {"learner empty-test does not honour tiers"}),
                 Arguments.of("bad block in a truth list", "truth:\n  - network: sprinkler\n  - network: sprinkler\n"
                         + "    model: {kind: linear-gaussian}\n", "truth[1].model", 7,
                         new String[] {"not allowed together with truth[1].network"}));
@@ -161,7 +167,7 @@ class TruthSourcesTest {
     @DisplayName("a bad network or graph file is refused at its file, line and column")
     void refused(String name, String truth, String field, int line, String[] words) throws IOException {
         Path file = tmp.resolve("study.yaml");
-        Files.writeString(file, HEAD + truth + TAIL);
+        Files.writeString(file, HEAD + truth + (truth.contains("learners:") ? "" : TAIL));
         StudyException e = assertThrows(StudyException.class, () -> plan(file), name);
         String m = e.getMessage();
         assertEquals(field, e.field(), m);
@@ -184,5 +190,72 @@ class TruthSourcesTest {
         assertEquals(5, e.place().line(), e.getMessage());
         assertTrue(e.getMessage().contains("cycle.csv"), e.getMessage());
         assertEquals(-1, e.getMessage().indexOf('\n'), e.getMessage());
+    }
+
+    /** A learner honouring tiers that returns the empty graph and remembers the knowledge it was given. */
+    private static final class TierSpy implements dev.touchstone.core.learner.Learner {
+        final java.util.List<dev.touchstone.core.knowledge.Knowledge> seen =
+                java.util.Collections.synchronizedList(new java.util.ArrayList<>());
+        private final dev.touchstone.core.learner.LearnerDescription d =
+                dev.touchstone.core.learner.LearnerDescription.builder("tier-spy").summary("records its knowledge")
+                        .publication("test only").family(dev.touchstone.core.learner.LearnerFamily.BASELINE)
+                        .accepts(dev.touchstone.core.data.DataKind.CONTINUOUS)
+                        .returns(dev.touchstone.core.graph.GraphClass.CPDAG)
+                        .missingValues(dev.touchstone.core.learner.MissingValues.REJECTS)
+                        .knowledge(dev.touchstone.core.learner.KnowledgeUse.TIERS).build();
+
+        @Override
+        public dev.touchstone.core.learner.LearnerDescription description() {
+            return d;
+        }
+
+        @Override
+        public dev.touchstone.core.learner.Estimate learn(dev.touchstone.core.learner.LearnerInput input,
+                                                        dev.touchstone.core.knowledge.Knowledge k,
+                                                        dev.touchstone.core.param.ParameterValues p,
+                                                        dev.touchstone.core.learner.RunContext c) {
+            seen.add(k);
+            return dev.touchstone.core.learner.Estimate.of(Graph.empty(input.variableNames()),
+                    dev.touchstone.core.graph.GraphClass.CPDAG);
+        }
+    }
+
+    @Test
+    @DisplayName("knowledge: tiers hands a layered truth's layers (observed variables only) to the runs; none by default")
+    void tiersAsKnowledge() throws IOException {
+        TierSpy spy = new TierSpy();
+        var catalog = dev.touchstone.harness.catalog.LearnerCatalog.builder()
+                .add(spy, dev.touchstone.harness.catalog.LearnerCatalog.Origin.BUILT_IN, "test").build();
+        Path file = tmp.resolve("layers.yaml");
+        Files.writeString(file, "name: t\nseed: 3\ntruth:\n  graph: {family: layered, nodes: 9, layers: 3}\n"
+                + "  model: {kind: linear-gaussian}\n  hidden: 1\nsamples: [40]\nlearners:\n"
+                + "  - {id: with-tiers, use: tier-spy, knowledge: tiers}\n  - {id: plain, use: tier-spy}\n");
+        Study study = new StudyReader(TRUTH, catalog, TestWorld.METRICS).read(file);
+        Plan p = new Expansion(TRUTH).expand(study, catalog);
+        assertNotEquals(p.runs().get(0).key(), p.runs().get(1).key(), "knowledge is part of the run key");
+        var layout = new dev.touchstone.harness.execution.SettingLayout(p);
+        var performer = new dev.touchstone.harness.execution.RunPerformer(TestWorld.SCORER, layout);
+        var rep = new dev.touchstone.harness.execution.GeneratorSimulator().draw(p.truths().get(0),
+                p.runs().get(0).seeds(), 40);
+        performer.perform(p.runs().get(0), rep);
+        performer.perform(p.runs().get(1), rep);
+        SimulatedTruth drawn = GeneratorTruthCatalog.simulation(p.truths().get(0))
+                .drawTruth(p.runs().get(0).seeds().replicateSeed());
+        List<List<String>> expected = new java.util.ArrayList<>();
+        for (List<String> tier : drawn.knowledge().tiers()) {
+            if (!tier.isEmpty()) {
+                expected.add(tier);
+            }
+        }
+        assertEquals(3, drawn.knowledge().tiers().size(), "three layers, three tiers (generators' own check)");
+        assertEquals(expected, spy.seen.get(0).tiers(), "the run with knowledge: tiers gets the layers");
+        assertEquals(8, spy.seen.get(0).variables().size(), "the hidden variable is in no tier");
+        assertTrue(spy.seen.get(1).isEmpty(), "the default entry gets no knowledge");
+
+        Path normalised = tmp.resolve("n.yaml");
+        Files.writeString(normalised, StudyWriter.yaml(study));
+        assertTrue(Files.readString(normalised).contains("knowledge: tiers"));
+        assertEquals(p.runs().get(0).key(), new Expansion(TRUTH).expand(
+                new StudyReader(TRUTH, catalog, TestWorld.METRICS).read(normalised), catalog).runs().get(0).key());
     }
 }
