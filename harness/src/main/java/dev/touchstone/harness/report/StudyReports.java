@@ -12,6 +12,7 @@ import dev.touchstone.harness.execution.Simulator;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.io.AtomicFiles;
 import dev.touchstone.harness.study.ComponentSpec;
+import dev.touchstone.harness.study.ExtraMetric;
 import dev.touchstone.harness.study.LearnerConfig;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.RunDefinition;
@@ -97,7 +98,7 @@ public final class StudyReports {
     public static ReportData gather(Plan plan, List<RunResult> runs, boolean partial, Simulator simulator,
                                     Aggregator aggregator, Map<String, String> provenance) {
         long statsSeed = Seeds.derive(plan.study().seed(), "statistics");
-        List<String> metrics = plan.study().metrics();
+        List<String> metrics = plan.study().allMetrics();
         ReportData.Builder b = ReportData.builder(plan.study().name())
                 .description(plan.study().description())
                 .partial(partial)
@@ -111,7 +112,8 @@ public final class StudyReports {
                 .summarizer(values -> Summaries.of(values.stream().mapToDouble(Double::doubleValue).toArray(),
                         Seeds.random(Seeds.derive(statsSeed, "pooled"))));
         for (String m : metrics) {
-            MetricRegistry.find(m).map(Metric::direction).filter(d -> d != Direction.NONE)
+            ExtraMetric extra = ExtraMetric.parse(m);
+            MetricRegistry.find(extra == null ? m : extra.base()).map(Metric::direction).filter(d -> d != Direction.NONE)
                     .ifPresent(d -> b.direction(m, d == Direction.HIGHER_IS_BETTER));
         }
         if (plan.reference() != null) {

@@ -46,7 +46,7 @@ public final class Expansion {
             for (int rep = 0; rep < study.replicates(); rep++) {
                 for (SampleSize n : study.samples()) {
                     for (LearnerConfig c : configs) {
-                        runs.add(new RunDefinition(runs.size(), t, rep, n, c, study.seed(), study.metrics(),
+                        runs.add(new RunDefinition(runs.size(), t, rep, n, c, study.seed(), study.allMetrics(),
                                 study.limits().perRun()));
                     }
                 }

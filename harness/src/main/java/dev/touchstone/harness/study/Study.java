@@ -20,17 +20,24 @@ import java.util.List;
  * @param metrics     the metrics to compute, in file order
  * @param limits      per-run time limit and grid size limit
  * @param compareTo   the learner entry every other is compared with, or null
+ * @param scoreAgainst extra truth classes every estimate is also scored against (may be empty)
  * @param source      the file's tree, kept to write the study back out normalised
  */
 public record Study(String name, String description, long seed, int replicates, List<List<ComponentSpec>> truths,
                     List<SampleSize> samples, List<LearnerEntry> learners, List<String> metrics, Limits limits,
-                    String compareTo, Node source) {
+                    String compareTo, List<dev.touchstone.core.graph.GraphClass> scoreAgainst, Node source) {
 
     public Study {
         truths = truths.stream().map(List::copyOf).toList();
         samples = List.copyOf(samples);
         learners = List.copyOf(learners);
         metrics = List.copyOf(metrics);
+        scoreAgainst = List.copyOf(scoreAgainst);
+    }
+
+    /** The metrics every run computes: the study's, then those against the {@code score_against} truths. */
+    public List<String> allMetrics() {
+        return ExtraMetric.expand(metrics, scoreAgainst);
     }
 
     /** The learner entry with this id, or null. */

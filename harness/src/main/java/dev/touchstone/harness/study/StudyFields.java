@@ -23,6 +23,7 @@ public final class StudyFields {
     public static final String METRICS = "metrics";
     public static final String LIMITS = "limits";
     public static final String COMPARE_TO = "compare_to";
+    public static final String SCORE_AGAINST = "score_against";
 
     /** Keys of a learner entry. */
     public static final String ENTRY_ID = "id";
@@ -58,7 +59,12 @@ public final class StudyFields {
             new Field(LIMITS, "map", false, "no time limit; max_runs " + Limits.DEFAULT_MAX_RUNS,
                     "`seconds`: time limit of one run; `max_runs`: largest grid accepted."),
             new Field(COMPARE_TO, "text", false, "none",
-                    "The id of the learner entry every other is compared with (paired, per setting and metric)."));
+                    "The id of the learner entry every other is compared with (paired, per setting and metric)."),
+            new Field(SCORE_AGAINST, "list", false, "none",
+                    "Extra truths to score every estimate against, besides the one of its own class: any of dag,"
+                            + " cpdag, mag, pag. Each adds the columns METRIC_vs_CLASS (e.g. shd_vs_cpdag) for every"
+                            + " structural metric; undefined (empty) where that truth does not exist, such as a DAG"
+                            + " or CPDAG when variables are hidden."));
 
     private StudyFields() {
     }

@@ -1,5 +1,6 @@
 package dev.touchstone.harness.study;
 
+import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
@@ -73,8 +74,9 @@ public final class StudyReader {
         List<String> metricNames = metrics(root.get(StudyFields.METRICS));
         Limits limits = limits(root.get(StudyFields.LIMITS));
         String compareTo = compareTo(root.get(StudyFields.COMPARE_TO), entries);
+        List<GraphClass> scoreAgainst = scoreAgainst(root.get(StudyFields.SCORE_AGAINST));
         Study study = new Study(name, description, seed, replicates, truthSpecs, samples, entries, metricNames,
-                limits, compareTo, root);
+                limits, compareTo, scoreAgainst, root);
         checkSize(root, study);
         return study;
     }
@@ -476,6 +478,27 @@ public final class StudyReader {
         }
         throw StudyException.at(node, "no learner entry has the id '" + id + "' (ids: "
                 + String.join(", ", entries.stream().map(LearnerEntry::id).toList()) + ")");
+    }
+
+    private static List<GraphClass> scoreAgainst(Node node) {
+        if (node == null || node.isNull()) {
+            return List.of();
+        }
+        List<String> allowed = List.of("dag", "cpdag", "mag", "pag");
+        List<GraphClass> out = new ArrayList<>();
+        for (Node item : node.isList() ? node.items() : List.of(node)) {
+            String word = text(item);
+            if (!allowed.contains(word)) {
+                throw StudyException.at(item, "unknown graph class '" + word + "' (allowed: "
+                        + String.join(", ", allowed) + ")");
+            }
+            GraphClass c = GraphClass.parse(word);
+            if (out.contains(c)) {
+                throw StudyException.at(item, "the class " + word + " is listed twice");
+            }
+            out.add(c);
+        }
+        return out;
     }
 
     private static void checkSize(Node root, Study study) {

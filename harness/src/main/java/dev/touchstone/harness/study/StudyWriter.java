@@ -76,6 +76,9 @@ public final class StudyWriter {
         if (s.compareTo() != null) {
             m.put(StudyFields.COMPARE_TO, s.compareTo());
         }
+        if (!s.scoreAgainst().isEmpty()) {
+            m.put(StudyFields.SCORE_AGAINST, s.scoreAgainst().stream().map(c -> c.word()).toList());
+        }
         try {
             return "# The study as run, normalised by touchstone: every field explicit.\n" + YAML.writeValueAsString(m);
         } catch (JsonProcessingException e) {

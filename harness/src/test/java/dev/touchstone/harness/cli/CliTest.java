@@ -261,4 +261,39 @@ class CliTest {
         assertEquals(2, cli("run").status());
         assertEquals(2, cli("frobnicate").status());
     }
+
+    @Test
+    @DisplayName("score_against adds METRIC_vs_CLASS columns to runs.csv and rows to summary.csv")
+    void scoreAgainst() throws IOException {
+        Path study = tmp.resolve("extra.yaml");
+        Files.writeString(study, "name: extra\nseed: 3\nreplicates: 2\ntruth:\n"
+                + "  graph: {family: erdos-renyi, nodes: 5, mean_degree: 2}\n  model: {kind: linear-gaussian}\n"
+                + "samples: [60]\nlearners: [pc, empty]\nmetrics: [shd, seconds]\nscore_against: [dag, pag]\n"
+                + "compare_to: empty\n");
+        Path out = tmp.resolve("extra-out");
+        Result r = cli("run", study.toString(), "--out", out.toString(), "--quiet", "--threads", "1");
+        assertEquals(0, r.status(), r.err());
+        String header = Files.readAllLines(out.resolve("runs.csv")).get(0);
+        assertTrue(header.contains("shd,shd_vs_dag,shd_vs_pag"), header);
+        assertFalse(header.contains("seconds_vs_"), "measured metrics have no truth: " + header);
+        String summary = Files.readString(out.resolve("summary.csv"));
+        assertTrue(summary.contains(",shd_vs_pag,"), summary);
+        assertTrue(Files.readString(out.resolve("comparisons.csv")).contains(",shd_vs_dag,"));
+        assertTrue(Files.readString(out.resolve("study.yaml")).contains("score_against"));
+        // By hand: an empty estimate differs from the truth on every true edge's pair, and a DAG and its CPDAG share
+        // one skeleton, so the empty graph's SHD against the true DAG equals its SHD against the true CPDAG.
+        List<String> cols = List.of(header.split(","));
+        int config = cols.indexOf("configuration");
+        int shd = cols.indexOf("shd");
+        int shdDag = cols.indexOf("shd_vs_dag");
+        int checked = 0;
+        for (String line : Files.readAllLines(out.resolve("runs.csv")).subList(1, 5)) {
+            String[] cells = line.split(",", -1);
+            if (cells[config].equals("empty")) {
+                assertEquals(cells[shd], cells[shdDag], line);
+                checked++;
+            }
+        }
+        assertEquals(2, checked);
+    }
 }
