@@ -43,7 +43,7 @@ final class StudyView {
     }
 
     /** Each configuration's summary of each metric over the ok runs that pass {@code in}. */
-    private Map<String, Map<String, Summary>> pool(Predicate<RunResult> in) {
+    Map<String, Map<String, Summary>> pool(Predicate<RunResult> in) {
         Map<String, Map<String, Summary>> out = new LinkedHashMap<>();
         for (String config : learnerOf.keySet()) {
             Map<String, Summary> byMetric = new LinkedHashMap<>();

@@ -126,4 +126,36 @@ class HtmlReportTest {
         String style = d.select("style").html();
         assertTrue(style.contains(".table-wrap{max-width:100%;overflow-x:auto}"), style);
     }
+
+    @Test
+    @org.junit.jupiter.api.DisplayName("the scale-baseline warning compares on the settings where the baseline ran")
+    void scaleBaselineJudgedOnItsOwnSettings() {
+        // Worked by hand: 'sorter' (a scale baseline) ran on the continuous setting only, with shd 3; the others
+        // scored 2 and 2.5 there (median 2.25, so the baseline is worse: no warning), but 10 and 12 on the discrete
+        // setting, where pooling over both would give them 6 and 7.25 and wrongly make 3 look competitive.
+        java.util.List<dev.touchstone.metrics.results.RunResult> runs = java.util.List.of(
+                shdRun("1", "continuous", "sorter", 3.0), shdRun("2", "continuous", "a", 2.0),
+                shdRun("3", "continuous", "b", 2.5), shdRun("4", "discrete", "sorter", null),
+                shdRun("5", "discrete", "a", 10.0), shdRun("6", "discrete", "b", 12.0));
+        ReportData.Builder b = ReportData.builder("baseline").metrics(java.util.List.of("shd"))
+                .direction("shd", false).runs(runs).summarizer(ReportFixtures::meanOnly)
+                .scaleBaselines(java.util.Set.of("sorter"));
+        assertEquals(null, HtmlReport.competitiveBaseline(new StudyView(b.build())));
+        java.util.List<dev.touchstone.metrics.results.RunResult> better = new java.util.ArrayList<>(runs);
+        better.set(0, shdRun("1", "continuous", "sorter", 2.0));
+        String w = HtmlReport.competitiveBaseline(new StudyView(b.runs(better).build()));
+        assertTrue(w != null && w.contains("reaches 2") && w.contains("(2.25) on the same settings"), w);
+    }
+
+    private static dev.touchstone.metrics.results.RunResult shdRun(String key, String setting, String config,
+                                                                 Double shd) {
+        boolean ok = shd != null;
+        dev.touchstone.core.graph.GraphClass cpdag = dev.touchstone.core.graph.GraphClass.CPDAG;
+        return new dev.touchstone.metrics.results.RunResult(key,
+                dev.touchstone.metrics.results.Setting.of("data", setting), 0, config, config, java.util.Map.of(), 1,
+                ok ? dev.touchstone.metrics.results.RunStatus.OK : dev.touchstone.metrics.results.RunStatus.SKIPPED,
+                ok ? null : "does not accept discrete data", ok ? cpdag : null, ok ? cpdag : null,
+                ok ? java.util.Map.of("shd", shd) : java.util.Map.of(),
+                new dev.touchstone.metrics.results.Timings(null, null, null, null, null));
+    }
 }
