@@ -17,6 +17,7 @@ import dev.touchstone.reports.tables.Numbers;
 import dev.touchstone.reports.tables.Table;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -82,8 +83,17 @@ public final class HtmlReport {
         page.subheading("Headline");
         page.note("Mean over all ok runs of each configuration (pooled over settings) with a 95% bootstrap interval;"
                 + " the best value of each column is highlighted. n/a: undefined (for example a ratio with a zero"
-                + " denominator).");
-        page.table(view.headline());
+                + " denominator)." + (data.groupCoordinates().isEmpty() ? "" : " One table per kind of truth, so"
+                + " that every mean in a table comes from the same settings."));
+        for (StudyView.Headline h : view.headlines()) {
+            if (!h.title().isEmpty()) {
+                page.subheading("Headline: " + h.title());
+            }
+            page.table(h.table());
+            for (String line : h.notRun()) {
+                page.note("Not run here: " + line);
+            }
+        }
     }
 
     private static void metricCharts(HtmlPage page, StudyView view) {
@@ -273,7 +283,9 @@ public final class HtmlReport {
 
     /**
      * A warning when a scale-artefact baseline does at least as well as the median of the other
-     * configurations on the first chosen metric that has a direction; null otherwise.
+     * configurations on the first chosen metric that has a direction; null otherwise. Everyone's
+     * mean is pooled over the settings where the baseline has ok runs, so a baseline skipped on
+     * some data (say, discrete) is not compared with means that include those settings.
      */
     static String competitiveBaseline(StudyView view) {
         ReportData data = view.data();
@@ -288,32 +300,38 @@ public final class HtmlReport {
             return null;
         }
         boolean higher = data.higherIsBetter(metric);
-        List<Double> others = new ArrayList<>();
-        Map<String, Double> baselines = new LinkedHashMap<>();
-        for (String c : view.configurations()) {
-            Double mean = view.pooled(c, metric).mean();
-            if (mean == null) {
+        for (String b : view.configurations()) {
+            if (!data.scaleBaselines().contains(view.learnerOf(b))) {
                 continue;
             }
-            if (data.scaleBaselines().contains(view.learnerOf(c))) {
-                baselines.put(c, mean);
-            } else {
-                others.add(mean);
+            Set<Setting> ran = new HashSet<>();
+            for (RunResult r : data.runs()) {
+                if (r.configurationId().equals(b) && r.isOk()) {
+                    ran.add(r.setting());
+                }
             }
-        }
-        if (baselines.isEmpty() || others.isEmpty()) {
-            return null;
-        }
-        others.sort(Double::compare);
-        double median = others.size() % 2 == 1 ? others.get(others.size() / 2)
-                : (others.get(others.size() / 2 - 1) + others.get(others.size() / 2)) / 2;
-        for (var b : baselines.entrySet()) {
-            boolean asGood = higher ? b.getValue() >= median : b.getValue() <= median;
+            Map<String, Map<String, Summary>> pool = view.pool(r -> ran.contains(r.setting()));
+            Double mine = pool.get(b).get(metric).mean();
+            List<Double> others = new ArrayList<>();
+            for (String c : view.configurations()) {
+                Double mean = pool.get(c).get(metric).mean();
+                if (mean != null && !data.scaleBaselines().contains(view.learnerOf(c))) {
+                    others.add(mean);
+                }
+            }
+            if (mine == null || others.isEmpty()) {
+                continue;
+            }
+            others.sort(Double::compare);
+            double median = others.size() % 2 == 1 ? others.get(others.size() / 2)
+                    : (others.get(others.size() / 2 - 1) + others.get(others.size() / 2)) / 2;
+            boolean asGood = higher ? mine >= median : mine <= median;
             if (asGood) {
-                return "The scale-artefact baseline " + b.getKey() + " reaches " + Numbers.format(b.getValue())
+                return "The scale-artefact baseline " + b + " reaches " + Numbers.format(mine)
                         + " on " + metric + ", at least as good as the median of the other learners ("
-                        + Numbers.format(median) + "). The simulated data likely reward sorting by scale rather than"
-                        + " causal discovery; consider standardised data before drawing conclusions.";
+                        + Numbers.format(median) + ") on the same settings. The simulated data likely reward sorting"
+                        + " by scale rather than causal discovery; consider standardised data before drawing"
+                        + " conclusions.";
             }
         }
         return null;

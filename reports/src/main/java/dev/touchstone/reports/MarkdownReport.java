@@ -11,9 +11,26 @@ public final class MarkdownReport {
     private MarkdownReport() {
     }
 
-    /** The headline table alone (each configuration's pooled mean of each metric), in Markdown. */
+    /** The headline tables alone (each configuration's pooled mean of each metric), in Markdown. */
     public static String headline(ReportData data) {
-        return MarkdownTable.render(new StudyView(data).headline());
+        return headlines(new StudyView(data));
+    }
+
+    private static String headlines(StudyView view) {
+        StringBuilder sb = new StringBuilder();
+        for (StudyView.Headline h : view.headlines()) {
+            if (!h.title().isEmpty()) {
+                sb.append(sb.length() == 0 ? "" : "\n").append("### ").append(h.title()).append("\n\n");
+            }
+            sb.append(MarkdownTable.render(h.table()));
+            if (!h.notRun().isEmpty()) {
+                sb.append('\n');
+                for (String line : h.notRun()) {
+                    sb.append("Not run here: ").append(line).append("\n");
+                }
+            }
+        }
+        return sb.toString();
     }
 
     public static String render(ReportData data) {
@@ -25,8 +42,11 @@ public final class MarkdownReport {
         }
         sb.append("## Headline\n\n");
         sb.append("Mean of each metric over all ok runs of each learner configuration, with a 95% bootstrap")
-                .append(" interval; the best value of each column is in bold. n/a: undefined.\n\n");
-        sb.append(MarkdownTable.render(view.headline())).append('\n');
+                .append(" interval; the best value of each column is in bold. n/a: undefined.")
+                .append(view.data().groupCoordinates().isEmpty() ? "" : " One table per kind of truth, so that every"
+                        + " mean in a table comes from the same settings.")
+                .append("\n\n");
+        sb.append(headlines(view)).append('\n');
         if (!data.comparisons().isEmpty()) {
             sb.append("## Paired comparison with ").append(data.reference()).append("\n\n");
             sb.append("Differences are configuration minus reference on identical data sets; Wilcoxon signed-rank")

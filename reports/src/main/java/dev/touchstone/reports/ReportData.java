@@ -47,6 +47,7 @@ public final class ReportData {
     private final Set<String> scaleBaselines;
     private final String sampleCoordinate;
     private final String sizeCoordinate;
+    private final List<String> groupCoordinates;
 
     private ReportData(Builder b) {
         this.studyName = b.studyName;
@@ -66,6 +67,7 @@ public final class ReportData {
         this.scaleBaselines = Set.copyOf(b.scaleBaselines);
         this.sampleCoordinate = b.sampleCoordinate;
         this.sizeCoordinate = b.sizeCoordinate;
+        this.groupCoordinates = b.groupCoordinates;
     }
 
     public static Builder builder(String studyName) {
@@ -144,6 +146,11 @@ public final class ReportData {
     }
 
     /** The setting coordinate holding the graph size (default {@code nodes}). */
+    /** Coordinates splitting the headline into groups; empty for one table. */
+    public List<String> groupCoordinates() {
+        return groupCoordinates;
+    }
+
     public String sizeCoordinate() {
         return sizeCoordinate;
     }
@@ -167,6 +174,7 @@ public final class ReportData {
         private Set<String> scaleBaselines = Set.of();
         private String sampleCoordinate = "samples";
         private String sizeCoordinate = "nodes";
+        private List<String> groupCoordinates = List.of();
 
         private Builder(String studyName) {
             this.studyName = Objects.requireNonNull(studyName);
@@ -245,6 +253,16 @@ public final class ReportData {
         public Builder coordinates(String sample, String size) {
             this.sampleCoordinate = sample;
             this.sizeCoordinate = size;
+            return this;
+        }
+
+        /**
+         * Coordinates whose values split the headline into one table per group (for example
+         * the truth's kind when a study runs random graphs beside a named network); empty
+         * for one table over all settings.
+         */
+        public Builder groupBy(List<String> coordinates) {
+            this.groupCoordinates = List.copyOf(coordinates);
             return this;
         }
 

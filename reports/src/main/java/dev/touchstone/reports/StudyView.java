@@ -16,6 +16,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Predicate;
 
 /**
  * The derived views shared by the HTML and Markdown reports (one place for each: the
@@ -38,20 +39,27 @@ final class StudyView {
         for (AggregateRow a : data.summary()) {
             learnerOf.putIfAbsent(a.configurationId(), a.learnerId());
         }
+        pooled.putAll(pool(r -> true));
+    }
+
+    /** Each configuration's summary of each metric over the ok runs that pass {@code in}. */
+    Map<String, Map<String, Summary>> pool(Predicate<RunResult> in) {
+        Map<String, Map<String, Summary>> out = new LinkedHashMap<>();
         for (String config : learnerOf.keySet()) {
             Map<String, Summary> byMetric = new LinkedHashMap<>();
             for (String metric : data.metrics()) {
                 List<Double> values = new ArrayList<>();
                 for (RunResult r : data.runs()) {
-                    Double v = r.configurationId().equals(config) ? r.value(metric) : null;
+                    Double v = r.configurationId().equals(config) && in.test(r) ? r.value(metric) : null;
                     if (v != null) {
                         values.add(v);
                     }
                 }
                 byMetric.put(metric, data.summarize(values));
             }
-            pooled.put(config, byMetric);
+            out.put(config, byMetric);
         }
+        return out;
     }
 
     ReportData data() {
@@ -115,10 +123,53 @@ final class StudyView {
     }
 
     /**
-     * Each configuration's pooled mean of each chosen metric with its 95% interval; the best
-     * value of each column (by the metric's direction) is marked, ties all marked.
+     * One headline table: its title ("" when the study has one group), the table, and one
+     * line per configuration that has no ok run in it but was skipped (with the reason).
      */
-    Table headline() {
+    record Headline(String title, Table table, List<String> notRun) {
+    }
+
+    /**
+     * The headline tables: one over all runs, or, when the data name coordinates to group
+     * by ({@link ReportData#groupCoordinates()}), one per group of settings, so that means
+     * are pooled only over settings where the configurations ran on the same data (a
+     * learner skipped on discrete data does not get a mean that leaves those out beside
+     * others' means that include them).
+     */
+    List<Headline> headlines() {
+        if (data.groupCoordinates().isEmpty()) {
+            return List.of(headline("", r -> true));
+        }
+        Set<String> groups = new LinkedHashSet<>();
+        for (Setting s : settings()) {
+            groups.add(group(s));
+        }
+        List<Headline> out = new ArrayList<>();
+        for (String g : groups) {
+            out.add(headline(g, r -> group(r.setting()).equals(g)));
+        }
+        return out;
+    }
+
+    /** The group of a setting: its non-empty values of the grouping coordinates. */
+    private String group(Setting s) {
+        List<String> parts = new ArrayList<>();
+        for (String c : data.groupCoordinates()) {
+            String v = s.get(c);
+            if (v != null && !v.isEmpty()) {
+                parts.add(c + " " + v);
+            }
+        }
+        return String.join(", ", parts);
+    }
+
+    /**
+     * Each configuration's pooled mean of each chosen metric with its 95% interval over the
+     * runs that pass {@code in}; the best value of each column (by the metric's direction)
+     * is marked, ties all marked.
+     */
+    private Headline headline(String title, Predicate<RunResult> in) {
+        Map<String, Map<String, Summary>> pool = pool(in);
         List<String> cols = new ArrayList<>();
         cols.add("learner configuration");
         cols.add("ok runs");
@@ -131,34 +182,39 @@ final class StudyView {
                 continue;
             }
             for (String c : configurations()) {
-                Double mean = pooled(c, m).mean();
+                Double mean = pool.get(c).get(m).mean();
                 if (mean != null) {
                     best.merge(m, mean, (a, b) -> higher ? Math.max(a, b) : Math.min(a, b));
                 }
             }
         }
+        List<String> notRun = new ArrayList<>();
         for (String c : configurations()) {
+            int ok = 0;
+            String skipped = null;
+            for (RunResult r : data.runs()) {
+                if (r.configurationId().equals(c) && in.test(r)) {
+                    ok += r.isOk() ? 1 : 0;
+                    if (r.status() == RunStatus.SKIPPED && skipped == null) {
+                        skipped = r.message();
+                    }
+                }
+            }
+            if (ok == 0 && skipped != null) {
+                notRun.add(c + ": skipped (" + skipped + ")");
+                continue;
+            }
             List<Cell> row = new ArrayList<>();
             row.add(Cell.of(c));
-            row.add(Cell.of(Integer.toString(okRuns(c))));
+            row.add(Cell.of(Integer.toString(ok)));
             for (String m : data.metrics()) {
-                Summary s = pooled(c, m);
+                Summary s = pool.get(c).get(m);
                 boolean isBest = s.mean() != null && best.containsKey(m) && s.mean().equals(best.get(m));
                 row.add(new Cell(Numbers.withInterval(s.mean(), s.low(), s.high()), isBest));
             }
             t.row(row);
         }
-        return t.build();
-    }
-
-    int okRuns(String config) {
-        int n = 0;
-        for (RunResult r : data.runs()) {
-            if (r.configurationId().equals(config) && r.isOk()) {
-                n++;
-            }
-        }
-        return n;
+        return new Headline(title, t.build(), notRun);
     }
 
     /** The paired comparisons as a table (differences are configuration − reference). */

@@ -119,8 +119,9 @@ public final class Calibration {
             sizes.add(SampleSize.of(n));
         }
         Study study = new Study("calibrate", "", settings.seed(), settings.replicates(),
-                List.of(new ComponentSpec("truth", "kind", kinds, Map.of())), sizes, List.of(),
-                CalibrationSettings.METRICS, new Limits(settings.limit(), Limits.DEFAULT_MAX_RUNS), null, null);
+                List.of(List.of(new ComponentSpec("truth", "kind", kinds, Map.of()))), sizes, List.of(),
+                CalibrationSettings.METRICS, new Limits(settings.limit(), Limits.DEFAULT_MAX_RUNS), null, List.of(),
+                null);
         Plan plan = new Plan(study, settingsList, configs, runs);
         RunPerformer performer = new RunPerformer(new MetricsScorer(), new SettingLayout(plan));
         Simulator simulator = simulator(truths, fitted.dag(), data);

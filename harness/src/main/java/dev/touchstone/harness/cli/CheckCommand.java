@@ -2,6 +2,7 @@ package dev.touchstone.harness.cli;
 
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.LearnerConfig;
+import dev.touchstone.harness.study.GeneratorTruthCatalog;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.SampleSize;
 import dev.touchstone.harness.study.TruthSetting;
@@ -57,8 +58,7 @@ final class CheckCommand implements Callable<Integer> {
         long cells = 0;
         int rows = StudyRunner.largestRows(plan);
         for (TruthSetting t : plan.truths()) {
-            Object nodes = t.choice("graph").values().asMap().get("nodes");
-            long p = nodes instanceof Number ? ((Number) nodes).longValue() : 0;
+            long p = GeneratorTruthCatalog.simulation(t).drawTruth(0L).dag().observedIndices().length;
             cells += p * rows * (long) s.replicates();
         }
         out.printf(Locale.ROOT, "work: %,d replicates to draw (%,d rows each, about %,d data cells in all);"

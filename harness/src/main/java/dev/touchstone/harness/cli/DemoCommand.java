@@ -1,8 +1,5 @@
 package dev.touchstone.harness.cli;
 
-import dev.touchstone.harness.execution.Journal;
-import dev.touchstone.harness.execution.LocalExecutor;
-import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.metrics.results.RunStatus;
@@ -54,15 +51,7 @@ final class DemoCommand implements Callable<Integer> {
         Toolkit kit = new Toolkit(null, null);
         Path file = study != null ? study : bundledStudy();
         Plan plan = kit.plan(kit.readStudy(file));
-        int n = threads == null ? LocalExecutor.defaultThreads() : threads;
-        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, System.console() != null,
-                System.console() != null ? 0.2 : 5.0);
-        StudyRunner.Outcome o;
-        try {
-            o = kit.runner().run(plan, new StudyRunner.Options(out, n, progress, quiet ? null : err));
-        } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {
-            throw new UsageException(e.getMessage(), e);
-        }
+        StudyRunner.Outcome o = kit.run(plan, out, threads, quiet, err);
         ReportData data = kit.reportData(plan, out);
         Path html = dev.touchstone.harness.report.StudyReports.write(out, data);
         w.printf(Locale.ROOT, "demo study '%s': %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped)%n%n",

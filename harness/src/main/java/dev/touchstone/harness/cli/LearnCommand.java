@@ -19,7 +19,6 @@ import picocli.CommandLine.Option;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.time.Duration;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -68,14 +67,7 @@ final class LearnCommand implements Callable<Integer> {
                     + String.join(", ", catalog.ids()) + ")");
         }
         LearnerDescription d = entry.learner().description();
-        Map<String, String> raw = new LinkedHashMap<>();
-        for (String s : settings) {
-            int eq = s.indexOf('=');
-            if (eq <= 0) {
-                throw new UsageException("--set " + s + ": expected NAME=VALUE");
-            }
-            raw.put(s.substring(0, eq).trim(), s.substring(eq + 1).trim());
-        }
+        Map<String, String> raw = Settings.parse(settings);
         ParameterValues values;
         try {
             values = ParameterValues.resolve("learner " + d.id(), d.parameters(), raw);

@@ -1,5 +1,6 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.BadInputException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -12,7 +13,7 @@ import java.io.PrintWriter;
  */
 @Command(name = "touchstone",
         mixinStandardHelpOptions = true,
-        versionProvider = VersionInfo.Provider.class,
+        versionProvider = VersionProvider.class,
         description = "Benchmark causal-discovery learners against known truth.",
         subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LearnersCommand.class,
                 LearnCommand.class, SimulateCommand.class, ScoreCommand.class, ReportCommand.class,
@@ -54,7 +55,7 @@ public final class Main implements Runnable {
             if (debug) {
                 ex.printStackTrace(err);
             }
-            if (ex instanceof UsageException) {
+            if (ex instanceof BadInputException) {
                 err.println("error: " + ex.getMessage());
                 return BAD_INPUT;
             }

@@ -1,8 +1,5 @@
 package dev.touchstone.harness.cli;
 
-import dev.touchstone.harness.execution.Journal;
-import dev.touchstone.harness.execution.LocalExecutor;
-import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.metrics.results.RunStatus;
@@ -46,19 +43,8 @@ final class RunCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Toolkit kit = new Toolkit(learnersFile, plugins);
         Plan plan = kit.plan(kit.readStudy(study));
-        int n = threads == null ? LocalExecutor.defaultThreads() : threads;
-        if (n < 1) {
-            throw new UsageException("--threads must be at least 1, got " + n);
-        }
         Path folder = this.out != null ? this.out : Path.of(plan.study().name() + "-results");
-        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, System.console() != null,
-                System.console() != null ? 0.2 : 5.0);
-        StudyRunner.Outcome o;
-        try {
-            o = kit.runner().run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
-        } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {
-            throw new UsageException(e.getMessage(), e);
-        }
+        StudyRunner.Outcome o = kit.run(plan, folder, threads, quiet, err);
         out.printf(Locale.ROOT, "done: %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped; %,d done now);"
                         + " results in %s%n", o.total(), o.count(RunStatus.OK), o.count(RunStatus.FAILED),
                 o.count(RunStatus.TIMEOUT), o.count(RunStatus.SKIPPED), o.performed(), folder);

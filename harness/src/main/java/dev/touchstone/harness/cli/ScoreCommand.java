@@ -9,7 +9,7 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.algorithms.Ancestry;
 import dev.touchstone.harness.io.GraphCsv;
-import dev.touchstone.harness.io.GraphJson;
+import dev.touchstone.harness.io.GraphFiles;
 import dev.touchstone.metrics.scoring.Scorer;
 import dev.touchstone.metrics.truth.Truth;
 import dev.touchstone.metrics.truth.TruthSelection;
@@ -115,11 +115,10 @@ public final class ScoreCommand implements Callable<Integer> {
     }
 
     private static Graph read(Path file, GraphClass expected, List<String> variables) throws IOException {
-        if (file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".csv")) {
-            return variables == null ? GraphCsv.readWithVariablesFromEdges(file, List.of(), expected)
-                    : GraphCsv.read(file, variables, expected);
+        if (variables != null && GraphFiles.isCsv(file)) {
+            return GraphCsv.read(file, variables, expected);
         }
-        return GraphJson.read(file, expected);
+        return GraphFiles.read(file, expected);
     }
 
     /** DAG when every edge is directed and acyclic, CPDAG when only tails and arrows (no ↔) occur, else PAG. */

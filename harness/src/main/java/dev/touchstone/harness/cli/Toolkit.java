@@ -2,8 +2,11 @@ package dev.touchstone.harness.cli;
 
 import dev.touchstone.harness.catalog.LearnerCatalog;
 import dev.touchstone.harness.execution.GeneratorSimulator;
+import dev.touchstone.harness.execution.Journal;
+import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.MetricsAggregator;
 import dev.touchstone.harness.execution.MetricsScorer;
+import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.outside.CommandLearner;
 import dev.touchstone.harness.outside.CommandSpec;
@@ -19,6 +22,7 @@ import dev.touchstone.harness.study.StudyException;
 import dev.touchstone.harness.study.StudyReader;
 import dev.touchstone.harness.study.TruthCatalog;
 
+import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.List;
@@ -87,5 +91,25 @@ final class Toolkit {
 
     StudyRunner runner() {
         return new StudyRunner(new GeneratorSimulator(), new MetricsScorer(), new MetricsAggregator());
+    }
+
+    /**
+     * Runs (or resumes) a plan into {@code folder} with {@code threads} workers (null: all
+     * cores), showing progress on {@code err} unless {@code quiet}: live on a terminal,
+     * plain periodic lines otherwise. Bad thread counts and unusable folders or journals are
+     * bad input (exit 2).
+     */
+    StudyRunner.Outcome run(Plan plan, Path folder, Integer threads, boolean quiet, PrintWriter err) {
+        int n = threads == null ? LocalExecutor.defaultThreads() : threads;
+        if (n < 1) {
+            throw new UsageException("--threads must be at least 1, got " + n);
+        }
+        boolean terminal = System.console() != null;
+        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, terminal, terminal ? 0.2 : 5.0);
+        try {
+            return runner().run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
+        } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {
+            throw new UsageException(e.getMessage(), e);
+        }
     }
 }

@@ -1,5 +1,6 @@
 package dev.touchstone.harness.execution;
 
+import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.generators.SimulatedTruth;
 import dev.touchstone.harness.study.GeneratorTruthCatalog;
 import dev.touchstone.harness.study.ReplicateSeeds;
@@ -16,6 +17,20 @@ public final class GeneratorSimulator implements Simulator {
     public Replicate draw(TruthSetting truth, ReplicateSeeds seeds, int rows) {
         SimulatedTruth t = GeneratorTruthCatalog.simulation(truth).drawTruth(seeds.replicateSeed());
         return new Replicate(t.dag(), rows > 0 ? t.sample(rows).data() : null,
-                t.populationCovariance().orElse(null));
+                t.populationCovariance().orElse(null), tiersOnly(t.knowledge()));
+    }
+
+    /** The tiers of the truth's knowledge (what {@code knowledge: tiers} hands to runs). */
+    static Knowledge tiersOnly(Knowledge k) {
+        if (k.tiers().isEmpty()) {
+            return Knowledge.none();
+        }
+        Knowledge.Builder b = Knowledge.builder();
+        for (java.util.List<String> tier : k.tiers()) {
+            if (!tier.isEmpty()) {
+                b.tier(tier);
+            }
+        }
+        return b.build();
     }
 }

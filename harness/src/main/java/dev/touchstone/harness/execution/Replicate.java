@@ -3,8 +3,10 @@ package dev.touchstone.harness.execution;
 import dev.touchstone.core.data.CovarianceMatrix;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.Oracle;
+import dev.touchstone.harness.study.KnowledgeSource;
 import dev.touchstone.harness.study.SampleSize;
 
 import java.util.Objects;
@@ -20,6 +22,7 @@ public final class Replicate {
     private final Graph trueDag;
     private final DataSet data;
     private final CovarianceMatrix populationCovariance;
+    private final Knowledge tiers;
     private volatile Oracle oracle;
 
     /**
@@ -28,9 +31,22 @@ public final class Replicate {
      * @param populationCovariance the exact covariance over the observed variables, or null
      */
     public Replicate(Graph trueDag, DataSet data, CovarianceMatrix populationCovariance) {
+        this(trueDag, data, populationCovariance, Knowledge.none());
+    }
+
+    /**
+     * @param tiers the truth's tiers over the observed variables (e.g. a layered graph's layers), or none
+     */
+    public Replicate(Graph trueDag, DataSet data, CovarianceMatrix populationCovariance, Knowledge tiers) {
         this.trueDag = Objects.requireNonNull(trueDag, "trueDag");
         this.data = data;
         this.populationCovariance = populationCovariance;
+        this.tiers = Objects.requireNonNull(tiers, "tiers");
+    }
+
+    /** The knowledge a run of this configuration receives: the truth's tiers, or none. */
+    public Knowledge knowledge(KnowledgeSource source) {
+        return source == KnowledgeSource.TIERS ? tiers : Knowledge.none();
     }
 
     public Graph trueDag() {

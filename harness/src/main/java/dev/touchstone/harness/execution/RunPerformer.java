@@ -1,7 +1,6 @@
 package dev.touchstone.harness.execution;
 
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.Learner;
@@ -80,7 +79,8 @@ public final class RunPerformer {
         long t0 = System.nanoTime();
         Estimate estimate;
         try {
-            estimate = learner.learn(input, Knowledge.none(), run.config().values(), context);
+            estimate = learner.learn(input, replicate.knowledge(run.config().knowledge()), run.config().values(),
+                    context);
             if (estimate == null) {
                 throw new LearnerException("learner " + d.id() + " returned no estimate");
             }

@@ -13,7 +13,7 @@ import java.util.Map;
 public interface Scorer {
 
     /** The metrics the runner measures itself and the scorer never sees. */
-    List<String> MEASURED = List.of("seconds", "cpu_seconds", "allocated_mb", "tests", "scores");
+    List<String> MEASURED = dev.touchstone.harness.study.MetricCatalog.MEASURED;
 
     /**
      * @param replicate the truth

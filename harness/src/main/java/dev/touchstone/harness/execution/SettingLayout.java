@@ -17,7 +17,10 @@ import java.util.Set;
 
 /**
  * The coordinates a study's settings are written with: one column per truth section (its
- * kind), one per truth parameter the study gives, and {@code samples}. A parameter keeps
+ * kind), one per truth parameter the study gives, and {@code samples}. With several truth
+ * blocks the columns are the union of theirs; a setting has no coordinate for what its
+ * block lacks (a network's setting has no {@code graph} or {@code nodes}), written as an
+ * empty cell. A parameter keeps
  * its plain name unless another section uses the same one, in which case both are
  * prefixed with their section ({@code model_scale}, {@code missing_scale}).
  */
@@ -30,19 +33,26 @@ public final class SettingLayout {
     private final Map<String, String> columnByParameter = new LinkedHashMap<>();
 
     public SettingLayout(Plan plan) {
-        Map<String, Integer> uses = new HashMap<>();
-        for (ComponentSpec c : plan.study().truth()) {
-            sections.add(c.section());
-            for (String p : c.axes().keySet()) {
-                uses.merge(p, 1, Integer::sum);
+        Map<String, Set<String>> sectionsByParameter = new HashMap<>();
+        for (List<ComponentSpec> block : plan.study().truths()) {
+            for (ComponentSpec c : block) {
+                if (!sections.contains(c.section())) {
+                    sections.add(c.section());
+                }
+                for (String p : c.axes().keySet()) {
+                    sectionsByParameter.computeIfAbsent(p, k -> new HashSet<>()).add(c.section());
+                }
             }
         }
         Set<String> reserved = new HashSet<>(sections);
         reserved.add(SAMPLES);
-        for (ComponentSpec c : plan.study().truth()) {
-            for (String p : c.axes().keySet()) {
-                String column = uses.get(p) > 1 || reserved.contains(p) ? c.section() + "_" + p : p;
-                columnByParameter.put(c.section() + "." + p, column);
+        for (List<ComponentSpec> block : plan.study().truths()) {
+            for (ComponentSpec c : block) {
+                for (String p : c.axes().keySet()) {
+                    String column = sectionsByParameter.get(p).size() > 1 || reserved.contains(p)
+                            ? c.section() + "_" + p : p;
+                    columnByParameter.putIfAbsent(c.section() + "." + p, column);
+                }
             }
         }
     }
@@ -60,12 +70,18 @@ public final class SettingLayout {
         Map<String, String> m = new LinkedHashMap<>();
         TruthSetting t = run.truth();
         for (String s : sections) {
-            m.put(s, t.choice(s).kind());
+            TruthSetting.Choice c = t.choice(s);
+            if (c != null) {
+                m.put(s, c.kind());
+            }
         }
         columnByParameter.forEach((key, column) -> {
             int dot = key.indexOf('.');
             TruthSetting.Choice c = t.choice(key.substring(0, dot));
-            m.put(column, Canonical.value(c.values().get(key.substring(dot + 1))));
+            Object v = c == null ? null : c.values().asMap().get(key.substring(dot + 1));
+            if (v != null) {
+                m.put(column, Canonical.value(v));
+            }
         });
         m.put(SAMPLES, run.sample().word());
         return new Setting(m);

@@ -142,7 +142,7 @@ public final class StudyRunner {
             byStatus.merge(res.status(), 1, Integer::sum);
         }
         List<String> structural = new ArrayList<>();
-        for (String m : plan.study().metrics()) {
+        for (String m : plan.study().allMetrics()) {
             if (!Scorer.MEASURED.contains(m)) {
                 structural.add(m);
             }
@@ -151,10 +151,10 @@ public final class StudyRunner {
         OutputFiles.write(out.resolve(RUNS_FILE), ResultTables.runs(columns, structural, ordered));
         long statsSeed = dev.touchstone.core.random.Seeds.derive(plan.study().seed(), "statistics");
         OutputFiles.write(out.resolve(SUMMARY_FILE), ResultTables.summary(columns,
-                aggregator.summarise(list, plan.study().metrics(), statsSeed)));
+                aggregator.summarise(list, plan.study().allMetrics(), statsSeed)));
         var reference = plan.reference();
         OutputFiles.write(out.resolve(COMPARISONS_FILE), ResultTables.comparisons(columns, reference == null
-                ? List.of() : aggregator.compare(list, plan.study().metrics(), reference.label(), statsSeed)));
+                ? List.of() : aggregator.compare(list, plan.study().allMetrics(), reference.label(), statsSeed)));
         Map<String, Integer> counts = new LinkedHashMap<>();
         counts.put("total", plan.runs().size());
         for (RunStatus s : RunStatus.values()) {
@@ -218,7 +218,7 @@ public final class StudyRunner {
 
     private static Provenance provenance(Plan plan, String studyText, int threads, Instant started, Instant finished,
                                          Map<String, Integer> counts) {
-        var v = dev.touchstone.harness.cli.VersionInfo.current();
+        var v = dev.touchstone.harness.version.VersionInfo.current();
         return new Provenance(v.version(), v.commit() + (v.dirty() ? "-dirty" : ""), plan.study().name(),
                 plan.hash(), Canonical.hash(studyText), threads, started, finished, counts);
     }

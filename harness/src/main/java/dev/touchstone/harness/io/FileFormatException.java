@@ -1,6 +1,6 @@
 package dev.touchstone.harness.io;
 
-import dev.touchstone.harness.cli.UsageException;
+import dev.touchstone.harness.BadInputException;
 
 import java.nio.file.Path;
 
@@ -9,7 +9,7 @@ import java.nio.file.Path;
  * file, the place in it (line, column, field or edge) and what is wrong, so the command
  * line prints it as {@code error: …} with exit status 2.
  */
-public final class FileFormatException extends UsageException {
+public final class FileFormatException extends BadInputException {
     private static final long serialVersionUID = 1L;
 
     private final transient Path file;

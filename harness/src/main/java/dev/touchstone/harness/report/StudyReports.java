@@ -1,7 +1,6 @@
 package dev.touchstone.harness.report;
 
 import dev.touchstone.core.graph.Graph;
-import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
@@ -12,6 +11,8 @@ import dev.touchstone.harness.execution.SettingLayout;
 import dev.touchstone.harness.execution.Simulator;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.study.ComponentSpec;
+import dev.touchstone.harness.study.ExtraMetric;
 import dev.touchstone.harness.study.LearnerConfig;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.RunDefinition;
@@ -66,6 +67,29 @@ public final class StudyReports {
     }
 
     /**
+     * The truth sections that tell a study's truth blocks apart (those some block leaves
+     * out, such as {@code graph} and {@code network}); the headline gets one table per
+     * block through them. Empty for a study with one block.
+     */
+    static List<String> blockSections(Plan plan) {
+        List<List<ComponentSpec>> blocks = plan.study().truths();
+        if (blocks.size() < 2) {
+            return List.of();
+        }
+        java.util.Set<String> all = new java.util.LinkedHashSet<>();
+        for (List<ComponentSpec> block : blocks) {
+            block.forEach(c -> all.add(c.section()));
+        }
+        List<String> out = new ArrayList<>();
+        for (String section : all) {
+            if (!blocks.stream().allMatch(b -> b.stream().anyMatch(c -> c.section().equals(section)))) {
+                out.add(section);
+            }
+        }
+        return out;
+    }
+
+    /**
      * The report data of a study.
      *
      * @param runs    the recorded runs in plan order (fewer than the plan's when partial)
@@ -74,7 +98,7 @@ public final class StudyReports {
     public static ReportData gather(Plan plan, List<RunResult> runs, boolean partial, Simulator simulator,
                                     Aggregator aggregator, Map<String, String> provenance) {
         long statsSeed = Seeds.derive(plan.study().seed(), "statistics");
-        List<String> metrics = plan.study().metrics();
+        List<String> metrics = plan.study().allMetrics();
         ReportData.Builder b = ReportData.builder(plan.study().name())
                 .description(plan.study().description())
                 .partial(partial)
@@ -84,10 +108,12 @@ public final class StudyReports {
                 .provenance(provenance)
                 .scaleBaselines(SCALE_BASELINES)
                 .coordinates(SettingLayout.SAMPLES, "nodes")
+                .groupBy(blockSections(plan))
                 .summarizer(values -> Summaries.of(values.stream().mapToDouble(Double::doubleValue).toArray(),
                         Seeds.random(Seeds.derive(statsSeed, "pooled"))));
         for (String m : metrics) {
-            MetricRegistry.find(m).map(Metric::direction).filter(d -> d != Direction.NONE)
+            ExtraMetric extra = ExtraMetric.parse(m);
+            MetricRegistry.find(extra == null ? m : extra.base()).map(Metric::direction).filter(d -> d != Direction.NONE)
                     .ifPresent(d -> b.direction(m, d == Direction.HIGHER_IS_BETTER));
         }
         if (plan.reference() != null) {
@@ -162,7 +188,7 @@ public final class StudyReports {
         try {
             LearnerInput input = rep.input(run.sample());
             run.config().learner().description().checkAccepts(input);
-            return run.config().learner().learn(input, Knowledge.none(), run.config().values(),
+            return run.config().learner().learn(input, rep.knowledge(run.config().knowledge()), run.config().values(),
                     RunContext.of(run.learnerSeed(), run.limit(), 1));
         } catch (RuntimeException e) {
             return null;

@@ -46,7 +46,7 @@ public final class Expansion {
             for (int rep = 0; rep < study.replicates(); rep++) {
                 for (SampleSize n : study.samples()) {
                     for (LearnerConfig c : configs) {
-                        runs.add(new RunDefinition(runs.size(), t, rep, n, c, study.seed(), study.metrics(),
+                        runs.add(new RunDefinition(runs.size(), t, rep, n, c, study.seed(), study.allMetrics(),
                                 study.limits().perRun()));
                     }
                 }
@@ -56,26 +56,14 @@ public final class Expansion {
     }
 
     private List<TruthSetting> truths(Study study) {
-        List<List<TruthSetting.Choice>> perSection = new ArrayList<>();
-        for (ComponentSpec c : study.truth()) {
-            List<TruthSetting.Choice> choices = new ArrayList<>();
-            for (String kindName : c.kinds()) {
-                TruthCatalog.Kind kind = catalog.section(c.section()).kind(kindName);
-                for (Map<String, Object> given : product(c.axes())) {
-                    ParameterValues values;
-                    try {
-                        values = ParameterValues.resolve(c.section() + " " + kindName, kind.parameters(), given);
-                    } catch (ParameterException e) {
-                        throw new StudyException(placeOf(study, "truth", c.section()), "truth." + c.section() + "."
-                                + e.parameter(), e.getMessage());
-                    }
-                    choices.add(new TruthSetting.Choice(c.section(), kindName, values, given));
-                }
-            }
-            perSection.add(choices);
-        }
         List<TruthSetting> out = new ArrayList<>();
-        combine(perSection, 0, new ArrayList<>(), out);
+        for (int b = 0; b < study.truths().size(); b++) {
+            List<List<TruthSetting.Choice>> perSection = new ArrayList<>();
+            for (ComponentSpec c : study.truths().get(b)) {
+                perSection.add(choices(study, b, c));
+            }
+            combine(perSection, 0, new ArrayList<>(), out);
+        }
         for (TruthSetting t : out) {
             try {
                 catalog.checkCombination(t);
@@ -85,6 +73,26 @@ public final class Expansion {
             }
         }
         return out;
+    }
+
+    private List<TruthSetting.Choice> choices(Study study, int block, ComponentSpec c) {
+        List<TruthSetting.Choice> choices = new ArrayList<>();
+        for (String kindName : c.kinds()) {
+            TruthCatalog.Kind kind = catalog.section(c.section()).kind(kindName);
+            for (Map<String, Object> given : product(c.axes())) {
+                ParameterValues values;
+                try {
+                    values = ParameterValues.resolve(c.section() + " " + kindName, kind.parameters(), given);
+                } catch (ParameterException e) {
+                    String where = study.truths().size() > 1 ? "truth[" + block + "]." : "truth.";
+                    throw new StudyException(placeOf(study, "truth", c.section()), where + c.section() + "."
+                            + e.parameter(), e.getMessage());
+                }
+                choices.add(new TruthSetting.Choice(c.section(), kindName, values, given,
+                        catalog.fingerprint(c.section(), kindName, values)));
+            }
+        }
+        return choices;
     }
 
     private static void combine(List<List<TruthSetting.Choice>> perSection, int i, List<TruthSetting.Choice> prefix,
@@ -120,7 +128,7 @@ public final class Expansion {
                     }
                 });
                 LearnerConfig c = new LearnerConfig(out.size(), e.id(), learner, values, varied,
-                        fingerprints.apply(e.use()));
+                        fingerprints.apply(e.use()), e.knowledge());
                 LearnerConfig same = byCanonical.putIfAbsent(c.canonical(), c);
                 if (same != null) {
                     throw new StudyException(e.place(), "learners." + e.id(), "the configuration " + c.label()

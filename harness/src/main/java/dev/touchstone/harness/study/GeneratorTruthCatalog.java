@@ -11,16 +11,36 @@ import dev.touchstone.generators.missing.MissingnessMechanism;
 import dev.touchstone.generators.missing.MissingnessMechanisms;
 import dev.touchstone.generators.models.ModelKind;
 import dev.touchstone.generators.models.ModelKinds;
+import dev.touchstone.generators.networks.ReferenceNetwork;
+import dev.touchstone.generators.networks.ReferenceNetworks;
+import dev.touchstone.harness.io.FileFormatException;
+import dev.touchstone.harness.io.GraphFiles;
 
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.HexFormat;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
- * The truth catalogue over the generators' registries: {@code graph} (key {@code family}),
+ * The truth catalogue over the generators' registries: {@code network} (key {@code name}; a
+ * built-in reference network that brings its own graph and model, so {@code network:
+ * sprinkler} stands in for {@code graph} and {@code model}), {@code graph} (key {@code family}),
  * {@code model} ({@code kind}), {@code hidden} ({@code kind}, default {@code none};
  * {@code hidden: 2} means {@code {kind: random, count: 2}}) and {@code missing}
  * ({@code mechanism}, default {@code none}). Parameters are the generators' own
  * declarations, so study files, listings and the reference page follow them.
+ *
+ * <p>The {@code given} graph family names a graph file (JSON or CSV edge list) relative to
+ * the study file; {@link #bind} reads it when the study is read (so a bad file is reported
+ * at the study's line and column), keeps its absolute path, and {@link #fingerprint} puts a
+ * digest of its bytes into the run keys, so editing the file recomputes its runs.
  *
  * <p>Cross-field rules are checked by building each setting's {@link Simulation} and drawing
  * one truth from a fixed seed, so a rule the generators enforce only when drawing (say, more
@@ -29,19 +49,28 @@ import java.util.List;
  */
 public final class GeneratorTruthCatalog implements TruthCatalog {
 
+    public static final String NETWORK = "network";
     public static final String GRAPH = "graph";
     public static final String MODEL = "model";
     public static final String HIDDEN = "hidden";
     public static final String MISSING = "missing";
 
+    /** The given graph family's parameter naming the file. */
+    static final String GIVEN_FILE = "file";
+
     private final List<Section> sections;
 
     public GeneratorTruthCatalog() {
+        List<Kind> networks = new ArrayList<>();
+        for (ReferenceNetwork n : ReferenceNetworks.all()) {
+            networks.add(new Kind(n.id(), n.title() + " (" + n.source() + ")" + (n.notes() == null
+                    || n.notes().isEmpty() ? "" : ". Note: " + n.notes()), List.of()));
+        }
         List<Kind> families = new ArrayList<>();
         for (GraphFamily f : GraphFamilies.all()) {
-            if (!f.id().equals(GivenGraphFamily.ID)) { // needs a graph file, not yet wired to studies
-                families.add(new Kind(f.id(), f.summary(), f.parameters()));
-            }
+            families.add(new Kind(f.id(), f.id().equals(GivenGraphFamily.ID)
+                    ? "a fixed DAG read from a graph file (JSON, or a CSV edge list when the name ends in .csv);"
+                    + " a relative path is read from the study file's folder" : f.summary(), f.parameters()));
         }
         List<Kind> models = new ArrayList<>();
         for (ModelKind k : ModelKinds.all()) {
@@ -56,6 +85,10 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
             missing.add(new Kind(m.id(), m.summary(), m.parameters()));
         }
         sections = List.of(
+                new Section(NETWORK, "name", null, null, "name",
+                        "A built-in reference network with its own graph and parameters, used instead of `graph` and"
+                                + " `model` (a bare name or list of names is enough: `network: sprinkler`).",
+                        networks, List.of(GRAPH, MODEL)),
                 new Section(GRAPH, "family", null, null, null,
                         "The random graph family the true DAG is drawn from, with its parameters.", families),
                 new Section(MODEL, "kind", null, null, null,
@@ -81,25 +114,118 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
         }
     }
 
+    @Override
+    public Object bind(String section, String kind, String parameter, Object value, Path baseDir) {
+        if (!isGraphFile(section, kind, parameter)) {
+            return value;
+        }
+        String text = value.toString().trim();
+        if (text.isEmpty()) {
+            throw new IllegalArgumentException("the given graph family needs a graph file (JSON or CSV edge list)");
+        }
+        Path file = baseDir.resolve(text).toAbsolutePath().normalize();
+        given(file.toString());
+        return file.toString();
+    }
+
+    @Override
+    public String fingerprint(String section, String kind, ParameterValues values) {
+        if (!section.equals(GRAPH) || !kind.equals(GivenGraphFamily.ID)
+                || values.get(GIVEN_FILE).toString().isBlank()) {
+            return ""; // no file: refused with a clear message by checkCombination
+        }
+        return given(values.get(GIVEN_FILE).toString()).digest();
+    }
+
+    private static boolean isGraphFile(String section, String kind, String parameter) {
+        return section.equals(GRAPH) && kind.equals(GivenGraphFamily.ID) && parameter.equals(GIVEN_FILE);
+    }
+
+
+    /** A graph file as read, with the digest of its bytes. */
+    private record GivenGraph(GivenGraphFamily family, String digest) {
+    }
+
+    /** Parsed graph files by path and digest: a file edited while the tool runs is read again. */
+    private static final Map<String, GivenGraph> GIVEN = new ConcurrentHashMap<>();
+
+    /**
+     * The DAG in a graph file as it is now (parsed once per path and content).
+     *
+     * @throws IllegalArgumentException naming the file and what is wrong with it
+     */
+    private static GivenGraph given(String path) {
+        Path file = Path.of(path);
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new IllegalArgumentException(path + ": no such graph file");
+        } catch (IOException e) {
+            throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
+        }
+        String digest = digest(bytes);
+        GivenGraph g = GIVEN.get(path + "#" + digest);
+        if (g != null) {
+            return g;
+        }
+        try {
+            g = new GivenGraph(GivenGraphFamily.of(GraphFiles.read(file, null)), digest);
+        } catch (IOException e) {
+            throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
+        } catch (FileFormatException e) {
+            throw new IllegalArgumentException(e.getMessage());
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException(path + ": " + e.getMessage());
+        }
+        GIVEN.putIfAbsent(path + "#" + digest, g);
+        return g;
+    }
+
+    /** The graph of a given-graph choice, refusing a file that changed since the study was read. */
+    private static GivenGraphFamily given(TruthSetting.Choice g) {
+        String path = g.values().get(GIVEN_FILE).toString();
+        if (path.isBlank()) {
+            throw new IllegalArgumentException("the given graph family needs a graph file: set graph.file to a JSON"
+                    + " or CSV edge-list file");
+        }
+        GivenGraph found = given(path);
+        if (!g.fingerprint().isEmpty() && !found.digest().equals(g.fingerprint())) {
+            throw new IllegalStateException(g.values().get(GIVEN_FILE) + ": the graph file changed since the study"
+                    + " was read; read the study again");
+        }
+        return found.family();
+    }
+
+    private static String digest(byte[] bytes) {
+        try {
+            byte[] d = MessageDigest.getInstance("SHA-256").digest(bytes);
+            return HexFormat.of().formatHex(d, 0, 8);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this Java", e);
+        }
+    }
+
     /** The generators' recipe for a truth setting. */
     public static Simulation simulation(TruthSetting t) {
+        TruthSetting.Choice n = t.choice(NETWORK);
         TruthSetting.Choice g = t.choice(GRAPH);
         TruthSetting.Choice m = t.choice(MODEL);
         TruthSetting.Choice h = t.choice(HIDDEN);
         TruthSetting.Choice x = t.choice(MISSING);
-        Simulation.Builder b = Simulation.builder()
-                .graph(GraphFamilies.byId(g.kind()), g.values())
-                .model(ModelKinds.byId(m.kind()), m.values());
+        Simulation.Builder b = Simulation.builder();
+        if (n != null) {
+            b.network(ReferenceNetworks.byId(n.kind()));
+        } else {
+            GraphFamily family = g.kind().equals(GivenGraphFamily.ID) ? given(g) : GraphFamilies.byId(g.kind());
+            b.graph(family, g.values()).model(ModelKinds.byId(m.kind()), m.values());
+        }
         if (h != null) {
-            b.hidden(HiddenOptions.byId(h.kind()), values(h));
+            b.hidden(HiddenOptions.byId(h.kind()), h.values());
         }
         if (x != null) {
-            b.missing(MissingnessMechanisms.byId(x.kind()), values(x));
+            b.missing(MissingnessMechanisms.byId(x.kind()), x.values());
         }
         return b.build();
-    }
-
-    private static ParameterValues values(TruthSetting.Choice c) {
-        return c.values();
     }
 }

@@ -15,12 +15,20 @@ import java.util.Map;
  * @param values  all parameter values
  * @param varied  the values of parameters the entry gave several values for (they name the configuration)
  * @param fingerprint what defines the learner beyond its id and parameters (e.g. an external command line); may be empty
+ * @param knowledge   the background knowledge its runs receive
  */
 public record LearnerConfig(int index, String entryId, Learner learner, ParameterValues values,
-                            Map<String, Object> varied, String fingerprint) {
+                            Map<String, Object> varied, String fingerprint, KnowledgeSource knowledge) {
 
     public LearnerConfig {
         varied = Map.copyOf(varied);
+        knowledge = knowledge == null ? KnowledgeSource.NONE : knowledge;
+    }
+
+    /** A configuration whose runs get no background knowledge. */
+    public LearnerConfig(int index, String entryId, Learner learner, ParameterValues values,
+                         Map<String, Object> varied, String fingerprint) {
+        this(index, entryId, learner, values, varied, fingerprint, KnowledgeSource.NONE);
     }
 
     public String use() {
@@ -58,8 +66,13 @@ public record LearnerConfig(int index, String entryId, Learner learner, Paramete
         return sb.toString();
     }
 
-    /** What defines this configuration, for run keys: the learner id, its values and its fingerprint. */
+    /**
+     * What defines this configuration, for run keys: the learner id, its values, its
+     * fingerprint and (when it gets any) its knowledge. Runs without knowledge keep the keys
+     * they had before knowledge could be given.
+     */
     public String canonical() {
-        return use() + "{" + parametersText() + "}" + (fingerprint.isEmpty() ? "" : "#" + fingerprint);
+        return use() + "{" + parametersText() + "}" + (fingerprint.isEmpty() ? "" : "#" + fingerprint)
+                + (knowledge == KnowledgeSource.NONE ? "" : "+knowledge=" + knowledge.word());
     }
 }

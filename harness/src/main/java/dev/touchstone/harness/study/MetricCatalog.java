@@ -8,6 +8,9 @@ import java.util.List;
  */
 public interface MetricCatalog {
 
+    /** The metrics the runner measures itself (time, memory, counters), not computed from graphs. */
+    List<String> MEASURED = List.of("seconds", "cpu_seconds", "allocated_mb", "tests", "scores");
+
     /** Every known metric name, in a stable order. */
     List<String> names();
 

@@ -11,23 +11,33 @@ import java.util.List;
  * @param description free text saying what the study is for (may be empty)
  * @param seed        the root of every random choice in the study
  * @param replicates  independent draws of graph, parameters and data per setting
- * @param truth       one component per truth section, in the catalogue's order
+ * @param truths      the truth blocks: each is one component per truth section given (in the
+ *                    catalogue's order) and expands into its own grid; a study usually has
+ *                    one, and a list under {@code truth} gives several whose settings are
+ *                    run side by side (say random graphs and a named network)
  * @param samples     the sample sizes, in file order
  * @param learners    the learner entries, in file order
  * @param metrics     the metrics to compute, in file order
  * @param limits      per-run time limit and grid size limit
  * @param compareTo   the learner entry every other is compared with, or null
+ * @param scoreAgainst extra truth classes every estimate is also scored against (may be empty)
  * @param source      the file's tree, kept to write the study back out normalised
  */
-public record Study(String name, String description, long seed, int replicates, List<ComponentSpec> truth,
+public record Study(String name, String description, long seed, int replicates, List<List<ComponentSpec>> truths,
                     List<SampleSize> samples, List<LearnerEntry> learners, List<String> metrics, Limits limits,
-                    String compareTo, Node source) {
+                    String compareTo, List<dev.touchstone.core.graph.GraphClass> scoreAgainst, Node source) {
 
     public Study {
-        truth = List.copyOf(truth);
+        truths = truths.stream().map(List::copyOf).toList();
         samples = List.copyOf(samples);
         learners = List.copyOf(learners);
         metrics = List.copyOf(metrics);
+        scoreAgainst = List.copyOf(scoreAgainst);
+    }
+
+    /** The metrics every run computes: the study's, then those against the {@code score_against} truths. */
+    public List<String> allMetrics() {
+        return ExtraMetric.expand(metrics, scoreAgainst);
     }
 
     /** The learner entry with this id, or null. */
@@ -40,13 +50,17 @@ public record Study(String name, String description, long seed, int replicates, 
         return null;
     }
 
-    /** The number of truth settings (combinations over every truth axis), before sample sizes. */
+    /** The number of truth settings (combinations over every truth axis, summed over blocks), before sample sizes. */
     public long truthCombinations() {
-        long n = 1;
-        for (ComponentSpec c : truth) {
-            n = Math.multiplyExact(n, c.combinations());
+        long total = 0;
+        for (List<ComponentSpec> block : truths) {
+            long n = 1;
+            for (ComponentSpec c : block) {
+                n = Math.multiplyExact(n, c.combinations());
+            }
+            total = Math.addExact(total, n);
         }
-        return n;
+        return total;
     }
 
     /** The number of learner configurations. */

@@ -23,11 +23,13 @@ public final class StudyFields {
     public static final String METRICS = "metrics";
     public static final String LIMITS = "limits";
     public static final String COMPARE_TO = "compare_to";
+    public static final String SCORE_AGAINST = "score_against";
 
     /** Keys of a learner entry. */
     public static final String ENTRY_ID = "id";
     public static final String ENTRY_USE = "use";
     public static final String ENTRY_WITH = "with";
+    public static final String ENTRY_KNOWLEDGE = "knowledge";
 
     /** Keys of {@code limits}. */
     public static final String LIMIT_SECONDS = "seconds";
@@ -45,8 +47,9 @@ public final class StudyFields {
                     "The root of every random choice; each draw's seed derives from it and the draw's coordinates."),
             new Field(REPLICATES, "integer", false, "1",
                     "Independent draws of graph, parameters and data per setting, 1 to " + MAX_REPLICATES + "."),
-            new Field(TRUTH, "map", true, null,
-                    "What to simulate: one sub-section per part of the truth (see below). A list of values expands into a grid."),
+            new Field(TRUTH, "map or list of maps", true, null,
+                    "What to simulate: one sub-section per part of the truth (see below). A list of values expands into a grid;"
+                            + " a list of such maps runs several grids side by side."),
             new Field(SAMPLES, "list", true, null,
                     "Sample sizes: whole numbers of at least " + MIN_SAMPLES + ", and/or `oracle` (infinite sample)."),
             new Field(LEARNERS, "list", true, null,
@@ -56,7 +59,12 @@ public final class StudyFields {
             new Field(LIMITS, "map", false, "no time limit; max_runs " + Limits.DEFAULT_MAX_RUNS,
                     "`seconds`: time limit of one run; `max_runs`: largest grid accepted."),
             new Field(COMPARE_TO, "text", false, "none",
-                    "The id of the learner entry every other is compared with (paired, per setting and metric)."));
+                    "The id of the learner entry every other is compared with (paired, per setting and metric)."),
+            new Field(SCORE_AGAINST, "list", false, "none",
+                    "Extra truths to score every estimate against, besides the one of its own class: any of dag,"
+                            + " cpdag, mag, pag. Each adds the columns METRIC_vs_CLASS (e.g. shd_vs_cpdag) for every"
+                            + " structural metric; undefined (empty) where that truth does not exist, such as a DAG"
+                            + " or CPDAG when variables are hidden."));
 
     private StudyFields() {
     }

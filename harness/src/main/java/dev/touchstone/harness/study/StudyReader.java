@@ -1,5 +1,6 @@
 package dev.touchstone.harness.study;
 
+import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
@@ -45,11 +46,17 @@ public final class StudyReader {
 
     /** Reads and validates a study file. */
     public Study read(Path file) {
-        return read(NodeReader.read(file));
+        Path parent = file.toAbsolutePath().normalize().getParent();
+        return read(NodeReader.read(file), parent != null ? parent : Path.of("").toAbsolutePath());
     }
 
-    /** Validates a parsed study. */
+    /** Validates a parsed study whose relative paths resolve against the working folder. */
     public Study read(Node root) {
+        return read(root, Path.of("").toAbsolutePath());
+    }
+
+    /** Validates a parsed study whose relative paths (e.g. a graph file) resolve against {@code baseDir}. */
+    public Study read(Node root, Path baseDir) {
         checkKeys(root, StudyFields.names());
         String name = text(required(root, StudyFields.NAME));
         if (!NAME.matcher(name).matches()) {
@@ -61,43 +68,91 @@ public final class StudyReader {
         long seed = integer(required(root, StudyFields.SEED), Long.MIN_VALUE, Long.MAX_VALUE);
         Node repNode = root.get(StudyFields.REPLICATES);
         int replicates = repNode == null ? 1 : (int) integer(repNode, 1, StudyFields.MAX_REPLICATES);
-        List<ComponentSpec> truthSpecs = truth(required(root, StudyFields.TRUTH));
+        List<List<ComponentSpec>> truthSpecs = truths(required(root, StudyFields.TRUTH), baseDir);
         List<SampleSize> samples = samples(required(root, StudyFields.SAMPLES));
         List<LearnerEntry> entries = learners(required(root, StudyFields.LEARNERS));
         List<String> metricNames = metrics(root.get(StudyFields.METRICS));
         Limits limits = limits(root.get(StudyFields.LIMITS));
         String compareTo = compareTo(root.get(StudyFields.COMPARE_TO), entries);
+        List<GraphClass> scoreAgainst = scoreAgainst(root.get(StudyFields.SCORE_AGAINST));
         Study study = new Study(name, description, seed, replicates, truthSpecs, samples, entries, metricNames,
-                limits, compareTo, root);
+                limits, compareTo, scoreAgainst, root);
         checkSize(root, study);
         return study;
     }
 
     // ---- truth
 
-    private List<ComponentSpec> truth(Node node) {
-        requireMap(node);
-        List<String> sectionNames = truth.sections().stream().map(TruthCatalog.Section::name).toList();
-        checkKeys(node, sectionNames);
-        List<ComponentSpec> out = new ArrayList<>();
-        for (TruthCatalog.Section section : truth.sections()) {
-            Node s = node.get(section.name());
-            if (s == null || s.isNull()) {
-                if (section.defaultKind() == null) {
-                    throw new StudyException(node.place(), path(node, section.name()),
-                            "this field is required (allowed " + section.kindField() + ": "
-                                    + String.join(", ", section.kindNames()) + ")");
-                }
-                out.add(new ComponentSpec(section.name(), section.kindField(), section.defaultKind(), Map.of()));
-                continue;
-            }
-            out.add(component(section, s));
+    /** The {@code truth} field: one map, or a list of maps each expanding into its own grid. */
+    private List<List<ComponentSpec>> truths(Node node, Path baseDir) {
+        if (!node.isList()) {
+            return List.of(truth(node, baseDir));
+        }
+        if (node.items().isEmpty()) {
+            throw StudyException.at(node, "an empty list gives no truth (give a map such as {graph: …, model: …},"
+                    + " or a list of them)");
+        }
+        List<List<ComponentSpec>> out = new ArrayList<>();
+        for (Node item : node.items()) {
+            out.add(truth(item, baseDir));
         }
         return out;
     }
 
-    private ComponentSpec component(TruthCatalog.Section section, Node node) {
+    private List<ComponentSpec> truth(Node node, Path baseDir) {
+        requireMap(node);
+        List<String> sectionNames = truth.sections().stream().map(TruthCatalog.Section::name).toList();
+        checkKeys(node, sectionNames);
+        Set<String> replaced = new HashSet<>();
+        for (TruthCatalog.Section section : truth.sections()) {
+            Node s = node.get(section.name());
+            if (s != null && !s.isNull()) {
+                for (String other : section.replaces()) {
+                    if (node.get(other) != null) {
+                        throw new StudyException(node.keyPlace(other), path(node, other), "not allowed together with "
+                                + path(node, section.name()) + " (the " + section.name() + " brings its own "
+                                + String.join(" and ", section.replaces()) + ")");
+                    }
+                }
+                replaced.addAll(section.replaces());
+            }
+        }
+        List<ComponentSpec> out = new ArrayList<>();
+        for (TruthCatalog.Section section : truth.sections()) {
+            Node s = node.get(section.name());
+            if (s == null || s.isNull()) {
+                if (section.optional() || replaced.contains(section.name())) {
+                    continue;
+                }
+                if (section.defaultKind() == null) {
+                    throw new StudyException(node.place(), path(node, section.name()),
+                            "this field is required (allowed " + section.kindField() + ": "
+                                    + String.join(", ", section.kindNames()) + ")" + alternatives(section));
+                }
+                out.add(new ComponentSpec(section.name(), section.kindField(), section.defaultKind(), Map.of()));
+                continue;
+            }
+            out.add(component(section, s, baseDir));
+        }
+        return out;
+    }
+
+    /** ", or give truth.network instead" for a section another one can stand in for. */
+    private String alternatives(TruthCatalog.Section section) {
+        List<String> by = new ArrayList<>();
+        for (TruthCatalog.Section other : truth.sections()) {
+            if (other.replaces().contains(section.name())) {
+                by.add(other.name());
+            }
+        }
+        return by.isEmpty() ? "" : ", or give " + String.join(" or ", by) + " instead";
+    }
+
+    private ComponentSpec component(TruthCatalog.Section section, Node node, Path baseDir) {
         if (!node.isMap()) {
+            if (section.bareValueIsKind()) {
+                return new ComponentSpec(section.name(), section.kindField(), kinds(section, node), Map.of());
+            }
             if (section.shorthand() == null) {
                 throw StudyException.at(node, "expected a map such as {" + section.kindField() + ": "
                         + section.kindNames().get(0) + ", …}, found " + node.describe());
@@ -109,32 +164,15 @@ public final class StudyReader {
             return new ComponentSpec(section.name(), section.kindField(), kind.name(), axes);
         }
         Node kindNode = node.get(section.kindField());
-        List<String> kindNames = new ArrayList<>();
-        List<Node> kindNodes = new ArrayList<>();
+        List<String> kindNames;
         if (kindNode == null) {
             if (section.defaultKind() == null) {
                 throw new StudyException(node.place(), path(node, section.kindField()),
                         "this field is required (allowed: " + String.join(", ", section.kindNames()) + ")");
             }
-            kindNames.add(section.defaultKind());
-            kindNodes.add(node);
+            kindNames = List.of(section.defaultKind());
         } else {
-            for (Node k : kindNode.isList() ? kindNode.items() : List.of(kindNode)) {
-                String name = text(k);
-                if (section.kind(name) == null) {
-                    throw StudyException.at(k, "unknown " + section.name() + " " + section.kindField() + " '"
-                            + name + "' (allowed: " + String.join(", ", section.kindNames()) + ")");
-                }
-                if (kindNames.contains(name)) {
-                    throw StudyException.at(k, "the " + section.kindField() + " " + name + " is listed twice");
-                }
-                kindNames.add(name);
-                kindNodes.add(k);
-            }
-            if (kindNames.isEmpty()) {
-                throw StudyException.at(kindNode, "an empty list gives no " + section.kindField() + " (allowed: "
-                        + String.join(", ", section.kindNames()) + ")");
-            }
+            kindNames = kinds(section, kindNode);
         }
         Map<String, Node> flat = new LinkedHashMap<>();
         Map<String, Node.Place> keyPlaces = new LinkedHashMap<>();
@@ -151,7 +189,7 @@ public final class StudyReader {
                             + e.getKey() + "' of " + section.name() + " " + kindName + " (allowed: "
                             + (allowed.isEmpty() ? "none" : String.join(", ", allowed)) + ")");
                 }
-                List<Object> v = axis(e.getValue(), spec);
+                List<Object> v = bind(section, kindName, e.getKey(), e.getValue(), axis(e.getValue(), spec), baseDir);
                 if (values == null) {
                     values = v;
                 }
@@ -159,6 +197,42 @@ public final class StudyReader {
             axes.put(e.getKey(), values);
         }
         return new ComponentSpec(section.name(), section.kindField(), kindNames, axes);
+    }
+
+    /** The kind names a node gives (one word or a list), each checked against the section. */
+    private static List<String> kinds(TruthCatalog.Section section, Node kindNode) {
+        List<String> kindNames = new ArrayList<>();
+        for (Node k : kindNode.isList() ? kindNode.items() : List.of(kindNode)) {
+            String name = text(k);
+            if (section.kind(name) == null) {
+                throw StudyException.at(k, "unknown " + section.name() + " " + section.kindField() + " '"
+                        + name + "' (allowed: " + String.join(", ", section.kindNames()) + ")");
+            }
+            if (kindNames.contains(name)) {
+                throw StudyException.at(k, "the " + section.kindField() + " " + name + " is listed twice");
+            }
+            kindNames.add(name);
+        }
+        if (kindNames.isEmpty()) {
+            throw StudyException.at(kindNode, "an empty list gives no " + section.kindField() + " (allowed: "
+                    + String.join(", ", section.kindNames()) + ")");
+        }
+        return kindNames;
+    }
+
+    /** Lets the catalogue check and bind values that name something outside the file (a graph file). */
+    private List<Object> bind(TruthCatalog.Section section, String kind, String parameter, Node node,
+                              List<Object> values, Path baseDir) {
+        List<Node> items = node.isList() ? node.items() : List.of(node);
+        List<Object> out = new ArrayList<>();
+        for (int i = 0; i < values.size(); i++) {
+            try {
+                out.add(truth.bind(section.name(), kind, parameter, values.get(i), baseDir));
+            } catch (IllegalArgumentException | dev.touchstone.harness.BadInputException e) {
+                throw StudyException.at(items.get(i), e.getMessage());
+            }
+        }
+        return out;
     }
 
     /** Nested maps name grouped parameters: {@code edge_weight: {low: 0.5}} is the parameter {@code edge_weight_low}. */
@@ -270,7 +344,8 @@ public final class StudyReader {
             throw StudyException.at(item, "expected a learner id or {id: …, use: …, with: {…}}, found "
                     + item.describe());
         }
-        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH));
+        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH,
+                StudyFields.ENTRY_KNOWLEDGE));
         Node useNode = required(item, StudyFields.ENTRY_USE);
         LearnerCatalog.Entry found = findLearner(useNode, text(useNode));
         Node idNode = item.get(StudyFields.ENTRY_ID);
@@ -297,7 +372,27 @@ public final class StudyReader {
                         "learner " + d.id() + " needs this parameter (allowed: " + spec.allowed() + ")");
             }
         }
-        return new LearnerEntry(id, found.id(), axes, item.place());
+        return new LearnerEntry(id, found.id(), axes, knowledge(item.get(StudyFields.ENTRY_KNOWLEDGE), d),
+                item.place());
+    }
+
+    /** The entry's {@code knowledge}: none (default) or tiers, which the learner must honour. */
+    private static KnowledgeSource knowledge(Node node, LearnerDescription d) {
+        if (node == null || node.isNull()) {
+            return KnowledgeSource.NONE;
+        }
+        String word = text(node);
+        KnowledgeSource k = KnowledgeSource.of(word);
+        if (k == null) {
+            throw StudyException.at(node, "unknown knowledge '" + word + "' (allowed: "
+                    + String.join(", ", KnowledgeSource.words()) + ")");
+        }
+        if (k == KnowledgeSource.TIERS && !d.knowledge().contains(dev.touchstone.core.learner.KnowledgeUse.TIERS)) {
+            throw StudyException.at(node, "learner " + d.id() + " does not honour tiers (it honours: "
+                    + (d.knowledge().isEmpty() ? "no knowledge" : String.join(", ", d.knowledge().stream()
+                    .map(dev.touchstone.core.learner.KnowledgeUse::word).toList())) + ")");
+        }
+        return k;
     }
 
     private LearnerCatalog.Entry findLearner(Node node, String use) {
@@ -383,6 +478,27 @@ public final class StudyReader {
         }
         throw StudyException.at(node, "no learner entry has the id '" + id + "' (ids: "
                 + String.join(", ", entries.stream().map(LearnerEntry::id).toList()) + ")");
+    }
+
+    private static List<GraphClass> scoreAgainst(Node node) {
+        if (node == null || node.isNull()) {
+            return List.of();
+        }
+        List<String> allowed = List.of("dag", "cpdag", "mag", "pag");
+        List<GraphClass> out = new ArrayList<>();
+        for (Node item : node.isList() ? node.items() : List.of(node)) {
+            String word = text(item);
+            if (!allowed.contains(word)) {
+                throw StudyException.at(item, "unknown graph class '" + word + "' (allowed: "
+                        + String.join(", ", allowed) + ")");
+            }
+            GraphClass c = GraphClass.parse(word);
+            if (out.contains(c)) {
+                throw StudyException.at(item, "the class " + word + " is listed twice");
+            }
+            out.add(c);
+        }
+        return out;
     }
 
     private static void checkSize(Node root, Study study) {

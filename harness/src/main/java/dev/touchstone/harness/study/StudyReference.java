@@ -56,6 +56,10 @@ public final class StudyReference {
                 .append(" entry's name in results (default: the learner id) and must be unique. Each parameter in")
                 .append(" `with` takes one value or a list; a list makes one configuration per value, named")
                 .append(" `id[parameter=value]`. Parameters and their ranges are those the learner declares.")
+                .append(" `knowledge: tiers` hands the runs the tiers the truth comes with (the layers of the")
+                .append(" `layered` graph family, over the observed variables) as background knowledge; the learner")
+                .append(" must honour tiers (see `touchstone learners`), and truths without tiers give no knowledge.")
+                .append(" The default, `knowledge: none`, gives none.")
                 .append(" Two entries with the same learner and values are refused.\n\n");
         sb.append("## Sample sizes\n\n")
                 .append("`samples` lists whole numbers of at least ").append(StudyFields.MIN_SAMPLES)
@@ -72,16 +76,29 @@ public final class StudyReference {
                 .append("`truth` has one sub-section per part of the simulation. Each is a map naming its kind and")
                 .append(" giving parameter values; a grouped value such as `edge_weight: {low: 0.5, high: 2}` means")
                 .append(" the parameters `edge_weight_low` and `edge_weight_high`. The kind itself may be a list")
-                .append(" (every listed kind must then accept every parameter given).\n\n");
+                .append(" (every listed kind must then accept every parameter given).\n\n")
+                .append("`truth` may also be a list of such maps (blocks). Each block expands into its own grid and")
+                .append(" the study runs the settings of all blocks side by side, for example random graphs and a")
+                .append(" named network:\n\n```yaml\ntruth:\n  - graph: {family: erdos-renyi, nodes: [8, 16]}\n")
+                .append("    model: {kind: linear-gaussian}\n  - network: community-garden\n```\n\n")
+                .append("A path in a study file (the `file` of the `given` graph family) is read relative to the")
+                .append(" study file's folder; the normalised `study.yaml` of a study's output names it absolutely,")
+                .append(" and run keys include a digest of the file's bytes, so editing the graph file recomputes")
+                .append(" its runs on resume.\n\n");
         for (TruthCatalog.Section s : truth.sections()) {
             sb.append("### `truth.").append(s.name()).append("`\n\n").append(s.meaning()).append(" The kind is named by `")
                     .append(s.kindField()).append("`");
             if (s.defaultKind() != null) {
                 sb.append("; when the section is left out it is `").append(s.defaultKind()).append("`");
+            } else if (s.optional()) {
+                sb.append("; when it is given, `").append(String.join("` and `", s.replaces()))
+                        .append("` must be left out");
             } else {
-                sb.append("; the section is required");
+                sb.append("; the section is required").append(replacedBy(truth, s.name()));
             }
-            if (s.shorthand() != null) {
+            if (s.bareValueIsKind()) {
+                sb.append(". A bare name or list of names means `{").append(s.kindField()).append(": NAME}`");
+            } else if (s.shorthand() != null) {
                 sb.append(". A bare value or list means `{").append(s.kindField()).append(": ").append(s.shorthandKind())
                         .append(", ").append(s.shorthand()).append(": VALUE}`");
             }
@@ -96,6 +113,16 @@ public final class StudyReference {
             sb.append("| `").append(m).append("` | ").append(cell(metrics.meaning(m))).append(" |\n");
         }
         sb.append("\nDefault when `metrics` is left out: ").append(String.join(", ", metrics.defaults())).append(".\n");
+        return sb.toString();
+    }
+
+    private static String replacedBy(TruthCatalog truth, String section) {
+        StringBuilder sb = new StringBuilder();
+        for (TruthCatalog.Section other : truth.sections()) {
+            if (other.replaces().contains(section)) {
+                sb.append(" unless `").append(other.name()).append("` is given");
+            }
+        }
         return sb.toString();
     }
 

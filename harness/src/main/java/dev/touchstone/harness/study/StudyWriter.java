@@ -33,14 +33,18 @@ public final class StudyWriter {
         }
         m.put(StudyFields.SEED, s.seed());
         m.put(StudyFields.REPLICATES, s.replicates());
-        Map<String, Object> truth = new LinkedHashMap<>();
-        for (ComponentSpec c : s.truth()) {
-            Map<String, Object> section = new LinkedHashMap<>();
-            section.put(c.kindField(), c.kinds().size() == 1 ? c.kind() : c.kinds());
-            c.axes().forEach((k, v) -> section.put(k, v.size() == 1 ? v.get(0) : v));
-            truth.put(c.section(), section);
+        List<Object> blocks = new ArrayList<>();
+        for (List<ComponentSpec> block : s.truths()) {
+            Map<String, Object> truth = new LinkedHashMap<>();
+            for (ComponentSpec c : block) {
+                Map<String, Object> section = new LinkedHashMap<>();
+                section.put(c.kindField(), c.kinds().size() == 1 ? c.kind() : c.kinds());
+                c.axes().forEach((k, v) -> section.put(k, v.size() == 1 ? v.get(0) : v));
+                truth.put(c.section(), section);
+            }
+            blocks.add(truth);
         }
-        m.put(StudyFields.TRUTH, truth);
+        m.put(StudyFields.TRUTH, blocks.size() == 1 ? blocks.get(0) : blocks);
         List<Object> samples = new ArrayList<>();
         for (SampleSize n : s.samples()) {
             samples.add(n.isOracle() ? SampleSize.ORACLE_WORD : n.rows());
@@ -56,6 +60,9 @@ public final class StudyWriter {
                 e.axes().forEach((k, v) -> with.put(k, v.size() == 1 ? v.get(0) : v));
                 entry.put(StudyFields.ENTRY_WITH, with);
             }
+            if (e.knowledge() != KnowledgeSource.NONE) {
+                entry.put(StudyFields.ENTRY_KNOWLEDGE, e.knowledge().word());
+            }
             learners.add(entry);
         }
         m.put(StudyFields.LEARNERS, learners);
@@ -68,6 +75,9 @@ public final class StudyWriter {
         m.put(StudyFields.LIMITS, limits);
         if (s.compareTo() != null) {
             m.put(StudyFields.COMPARE_TO, s.compareTo());
+        }
+        if (!s.scoreAgainst().isEmpty()) {
+            m.put(StudyFields.SCORE_AGAINST, s.scoreAgainst().stream().map(c -> c.word()).toList());
         }
         try {
             return "# The study as run, normalised by touchstone: every field explicit.\n" + YAML.writeValueAsString(m);

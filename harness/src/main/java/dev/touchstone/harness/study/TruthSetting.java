@@ -19,10 +19,19 @@ public record TruthSetting(int index, List<Choice> choices) {
         choices = List.copyOf(choices);
     }
 
-    /** A section's kind and values. {@code given} holds only the values the study wrote (for output columns). */
-    public record Choice(String section, String kind, ParameterValues values, Map<String, Object> given) {
+    /**
+     * A section's kind and values. {@code given} holds only the values the study wrote (for
+     * output columns); {@code fingerprint} is what else defines the choice (e.g. a digest of
+     * a graph file), "" for nothing.
+     */
+    public record Choice(String section, String kind, ParameterValues values, Map<String, Object> given,
+                         String fingerprint) {
         public Choice {
             given = Map.copyOf(given);
+        }
+
+        public Choice(String section, String kind, ParameterValues values, Map<String, Object> given) {
+            this(section, kind, values, given, "");
         }
 
         /** E.g. {@code graph=erdos-renyi{nodes=20,mean_degree=2.0}}. */
@@ -36,7 +45,8 @@ public record TruthSetting(int index, List<Choice> choices) {
                 first = false;
                 sb.append(e.getKey()).append('=').append(Canonical.value(e.getValue()));
             }
-            return sb.append('}').toString();
+            sb.append('}');
+            return fingerprint.isEmpty() ? sb.toString() : sb.append('#').append(fingerprint).toString();
         }
     }
 

@@ -153,11 +153,106 @@ class CliTest {
         var data = dev.touchstone.harness.io.DataCsv.read(one.resolve("data.csv")).data();
         assertEquals(1000, data.rows());
         assertEquals(10, data.columns());
-        var dag = GraphJson.read(one.resolve("dag.json"));
+        var dag = GraphJson.read(one.resolve("truth.json"));
         assertEquals(data.names(), dag.names());
-        assertTrue(Files.exists(one.resolve("cpdag.json")));
-        assertTrue(Files.exists(one.resolve("pag.json")));
+        for (String f : List.of("truth.dot", "cpdag.json", "pag.json", "audit.json")) {
+            assertTrue(Files.exists(one.resolve(f)), f);
+        }
         assertEquals(9, Files.readAllLines(out.resolve("replicates.csv")).size());
+    }
+
+    @Test
+    @DisplayName("simulate from options writes one truth: data, truth graphs and the audit, the draw of replicate 0 of the same study")
+    void simulateFromOptions() throws IOException {
+        Path out = tmp.resolve("one");
+        Result r = cli("simulate", "--graph", "erdos-renyi", "--set", "nodes=12", "--set", "mean_degree=2",
+                "--model", "linear-gaussian", "--samples", "300", "--seed", "5", "--out", out.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.out().startsWith("wrote 300 rows of 12 variables"), r.out());
+        var data = dev.touchstone.harness.io.DataCsv.read(out.resolve("data.csv")).data();
+        assertEquals(300, data.rows());
+        var dag = GraphJson.read(out.resolve("truth.json"));
+        assertEquals(data.names(), dag.names());
+        for (String f : List.of("truth.dot", "cpdag.json", "pag.json")) {
+            assertTrue(Files.exists(out.resolve(f)), f);
+        }
+        assertFalse(Files.exists(out.resolve("mag.json")), "nothing hidden, no MAG");
+        var audit = new com.fasterxml.jackson.databind.ObjectMapper().readTree(out.resolve("audit.json").toFile());
+        var expected = dev.touchstone.generators.audit.SortabilityAudit.of(dag, data);
+        assertEquals(expected.varsortability(), audit.get("varsortability").asDouble(), 1e-12,
+                "audit.json is the generators' audit of the files written");
+        assertEquals(expected.r2Sortability(), audit.get("r2_sortability").asDouble(), 1e-12);
+
+        Path study = tmp.resolve("same.yaml");
+        Files.writeString(study, "name: same\nseed: 5\ntruth:\n  graph: {family: erdos-renyi, nodes: 12, mean_degree: 2}\n"
+                + "  model: {kind: linear-gaussian}\nsamples: [300]\nlearners: [empty]\n");
+        Path viaStudy = tmp.resolve("via-study");
+        assertEquals(0, cli("simulate", study.toString(), "--out", viaStudy.toString()).status());
+        assertEquals(Files.readString(viaStudy.resolve("t0-r0/data.csv")), Files.readString(out.resolve("data.csv")),
+                "options and study with the same seed and truth draw the same data");
+    }
+
+    @Test
+    @DisplayName("simulate --network writes a reference network's discrete data; hidden variables give a MAG and an undefined audit")
+    void simulateNetwork() throws IOException {
+        Path out = tmp.resolve("garden");
+        Result r = cli("simulate", "--network", "community-garden", "--hidden", "1", "--samples", "200",
+                "--out", out.toString());
+        assertEquals(0, r.status(), r.err());
+        var dag = GraphJson.read(out.resolve("truth.json"));
+        assertEquals(dev.touchstone.generators.networks.ReferenceNetworks.communityGarden().dag().names(), dag.names());
+        assertEquals(1, dag.hiddenNames().size());
+        var data = dev.touchstone.harness.io.DataCsv.read(out.resolve("data.csv")).data();
+        assertEquals(dag.size() - 1, data.columns(), "the hidden variable is left out of the data");
+        assertTrue(Files.exists(out.resolve("mag.json")));
+        assertFalse(Files.exists(out.resolve("cpdag.json")));
+        var audit = new com.fasterxml.jackson.databind.ObjectMapper().readTree(out.resolve("audit.json").toFile());
+        assertTrue(audit.get("varsortability").isNull(), "sortability is undefined on discrete data: " + audit);
+    }
+
+    @Test
+    @DisplayName("simulate with a given graph file draws data on that DAG")
+    void simulateGivenGraph() throws IOException {
+        var g = dev.touchstone.core.graph.Graph.builder(List.of("a", "b", "c"));
+        g.addDirected(0, 1);
+        g.addDirected(2, 1);
+        Path file = tmp.resolve("g.json");
+        GraphJson.write(file, g.freeze());
+        Path out = tmp.resolve("given");
+        Result r = cli("simulate", "--graph", "given", "--set", "file=" + file, "--samples", "50", "--out",
+                out.toString());
+        assertEquals(0, r.status(), r.err());
+        assertEquals(g.freeze(), GraphJson.read(out.resolve("truth.json")));
+    }
+
+    @Test
+    @DisplayName("bad simulate options give exit 2 and one line naming the option")
+    void simulateBadOptions() {
+        String o = tmp.resolve("bad").toString();
+        String[][] cases = {
+                {"--set nodez=3", "--set", "nodez=3", "--out", o},
+                {"--set nodes=many", "--set", "nodes=many", "--out", o},
+                {"--set nodes", "--set", "nodes", "--out", o},
+                {"--graph: unknown graph family 'ring'", "--graph", "ring", "--out", o},
+                {"--model: unknown model kind", "--model", "cubic", "--out", o},
+                {"--graph: cannot be combined with --network", "--network", "sprinkler", "--graph", "erdos-renyi",
+                        "--out", o},
+                {"--network: unknown network name 'kitchen'", "--network", "kitchen", "--out", o},
+                {"--samples: 1 is not a sample size", "--samples", "1", "--out", o},
+                {"--set graph.rate=2: unknown parameter", "--missing", "mcar", "--set", "graph.rate=2", "--out", o},
+                {"do not fit together", "--set", "nodes=4", "--hidden", "9", "--out", o},
+                {"--graph: describes one truth and cannot be combined with a STUDY",
+                        ROOT.resolve("scenarios/demo.yaml").toString(), "--graph", "star", "--out", o}};
+        for (String[] c : cases) {
+            String[] args = new String[c.length];
+            args[0] = "simulate";
+            System.arraycopy(c, 1, args, 1, c.length - 1);
+            Result r = cli(args);
+            assertEquals(2, r.status(), c[0] + ": " + r.err());
+            assertTrue(r.err().startsWith("error: ") && r.err().contains(c[0]), c[0] + ": " + r.err());
+            assertEquals(1, r.err().lines().count(), r.err());
+        }
+        assertFalse(Files.exists(tmp.resolve("bad")), "nothing is written for bad options");
     }
 
     @Test
@@ -165,5 +260,40 @@ class CliTest {
     void usage() {
         assertEquals(2, cli("run").status());
         assertEquals(2, cli("frobnicate").status());
+    }
+
+    @Test
+    @DisplayName("score_against adds METRIC_vs_CLASS columns to runs.csv and rows to summary.csv")
+    void scoreAgainst() throws IOException {
+        Path study = tmp.resolve("extra.yaml");
+        Files.writeString(study, "name: extra\nseed: 3\nreplicates: 2\ntruth:\n"
+                + "  graph: {family: erdos-renyi, nodes: 5, mean_degree: 2}\n  model: {kind: linear-gaussian}\n"
+                + "samples: [60]\nlearners: [pc, empty]\nmetrics: [shd, seconds]\nscore_against: [dag, pag]\n"
+                + "compare_to: empty\n");
+        Path out = tmp.resolve("extra-out");
+        Result r = cli("run", study.toString(), "--out", out.toString(), "--quiet", "--threads", "1");
+        assertEquals(0, r.status(), r.err());
+        String header = Files.readAllLines(out.resolve("runs.csv")).get(0);
+        assertTrue(header.contains("shd,shd_vs_dag,shd_vs_pag"), header);
+        assertFalse(header.contains("seconds_vs_"), "measured metrics have no truth: " + header);
+        String summary = Files.readString(out.resolve("summary.csv"));
+        assertTrue(summary.contains(",shd_vs_pag,"), summary);
+        assertTrue(Files.readString(out.resolve("comparisons.csv")).contains(",shd_vs_dag,"));
+        assertTrue(Files.readString(out.resolve("study.yaml")).contains("score_against"));
+        // By hand: an empty estimate differs from the truth on every true edge's pair, and a DAG and its CPDAG share
+        // one skeleton, so the empty graph's SHD against the true DAG equals its SHD against the true CPDAG.
+        List<String> cols = List.of(header.split(","));
+        int config = cols.indexOf("configuration");
+        int shd = cols.indexOf("shd");
+        int shdDag = cols.indexOf("shd_vs_dag");
+        int checked = 0;
+        for (String line : Files.readAllLines(out.resolve("runs.csv")).subList(1, 5)) {
+            String[] cells = line.split(",", -1);
+            if (cells[config].equals("empty")) {
+                assertEquals(cells[shd], cells[shdDag], line);
+                checked++;
+            }
+        }
+        assertEquals(2, checked);
     }
 }

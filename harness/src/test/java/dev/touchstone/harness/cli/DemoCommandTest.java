@@ -47,6 +47,15 @@ class DemoCommandTest {
         assertEquals("0", r[0], r[2]);
         assertTrue(r[1].contains("| learner configuration | ok runs | shd |"), r[1]);
         assertTrue(r[1].contains("| pc |") && r[1].contains("| ges |") && r[1].contains("| empty |"), r[1]);
+        int garden = r[1].indexOf("### network community-garden");
+        assertTrue(r[1].indexOf("### graph erdos-renyi") >= 0 && garden > 0, "one headline per kind of truth: " + r[1]);
+        String gardenTable = r[1].substring(garden);
+        assertTrue(gardenTable.contains("| pc |") && gardenTable.contains("| ges |"),
+                "PC and GES pick a discrete test and score on the garden: " + r[1]);
+        assertTrue(gardenTable.contains("Not run here: lingam: skipped")
+                && gardenTable.contains("does not accept discrete data"), "continuous-only learners are skipped, with the"
+                + " reason: " + r[1]);
+        assertTrue(r[1].contains(" skipped)"), r[1]);
         assertTrue(r[1].contains("report: "), r[1]);
         for (String f : new String[] {"report.html", "report.md", "runs.csv", "summary.csv", "comparisons.csv",
                 "journal.jsonl", "provenance.json", "study.yaml"}) {

@@ -93,6 +93,8 @@ class MalformedStudyTest {
                                 "raise limits.max_runs"}),
                 Arguments.of("compare_to unknown", HEAD + GOOD_TRUTH + TAIL + "compare_to: pc\n", "compare_to", 8,
                         new String[] {"no learner entry has the id 'pc'", "empty-test"}),
+                Arguments.of("score_against an unknown class", HEAD + GOOD_TRUTH + TAIL + "score_against: [dag, tree]\n",
+                        "score_against[1]", 8, new String[] {"unknown graph class 'tree'", "allowed: dag, cpdag, mag, pag"}),
                 Arguments.of("replicates zero", HEAD + "replicates: 0\n" + GOOD_TRUTH + TAIL, "replicates", 3,
                         new String[] {"outside the allowed range [1, 100000]"}),
                 Arguments.of("seed not a number", "name: t\nseed: forty-two\n" + GOOD_TRUTH + TAIL, "seed", 2,

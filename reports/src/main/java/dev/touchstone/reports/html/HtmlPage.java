@@ -20,6 +20,11 @@ public final class HtmlPage {
             "h1{font-size:1.6em;margin:.6em 0 .2em}h2{font-size:1.25em;margin-top:1.8em;border-bottom:1px solid #ccc}",
             "h3{font-size:1.05em;margin-top:1.2em}",
             "table{border-collapse:collapse;margin:.6em 0;font-size:.88em}",
+            // A table wider than the page (many metrics) scrolls inside its own box instead of
+            // widening the page; the first column (the learner) stays in view while it scrolls.
+            ".table-wrap{max-width:100%;overflow-x:auto}",
+            ".table-wrap td:first-child,.table-wrap th:first-child{position:sticky;left:0;background:#fff}",
+            ".table-wrap th:first-child{background:#f0f0f0}",
             "th,td{border:1px solid #ccc;padding:3px 7px;text-align:left;vertical-align:top}",
             "th{background:#f0f0f0}td.best{font-weight:bold;background:#eef5ee}",
             ".note{color:#555;font-size:.9em}",
@@ -89,7 +94,7 @@ public final class HtmlPage {
     }
 
     public HtmlPage table(Table t) {
-        body.append("<table>\n<thead><tr>");
+        body.append("<div class=\"table-wrap\"><table>\n<thead><tr>");
         for (String c : t.columns()) {
             body.append("<th>").append(escape(c)).append("</th>");
         }
@@ -101,7 +106,7 @@ public final class HtmlPage {
             }
             body.append("</tr>\n");
         }
-        body.append("</tbody></table>\n");
+        body.append("</tbody></table></div>\n");
         return this;
     }
 

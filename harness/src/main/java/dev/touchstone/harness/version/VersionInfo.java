@@ -1,6 +1,4 @@
-package dev.touchstone.harness.cli;
-
-import picocli.CommandLine;
+package dev.touchstone.harness.version;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -60,15 +58,5 @@ public final class VersionInfo {
 
     private static String clean(String s) {
         return s == null || s.isBlank() || s.startsWith("${") ? "unknown" : s;
-    }
-
-    /** Supplies {@code --version} to picocli. */
-    public static final class Provider implements CommandLine.IVersionProvider {
-        @Override
-        public String[] getVersion() {
-            return new String[] {CURRENT.toString(),
-                    "Java " + System.getProperty("java.version") + ", " + System.getProperty("os.name") + " "
-                            + System.getProperty("os.arch")};
-        }
     }
 }
