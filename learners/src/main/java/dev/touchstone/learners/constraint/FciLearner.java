@@ -44,8 +44,11 @@ import java.util.Map;
  * the PAG core builds from the latent projection ({@code Pags.of}; Zhang 2008, Theorem 4
  * as cited from memory; checked in the tests).
  *
- * <p>A pair made non-adjacent by knowledge alone has no separating set; its triples count
- * as non-colliders in R0 and R4 (as PC treats them).
+ * <p>Knowledge ({@link PagKnowledge}): required pairs are never tested and end as required;
+ * pairs forbidden both ways are tested like the others (unlike PC, which drops them before
+ * any test) and removed after the Possible-D-Sep step, so that a separating set is known
+ * whenever the tests find one. Only a forbidden pair the tests leave adjacent has none; its
+ * triples then count as non-colliders in R0 and R4.
  *
  * <p>Cost: the adjacency search as in PC, then the Possible-D-Sep tests, exponential in the
  * size of Possible-D-Sep (bounded by {@code max_depth} and {@code possible_dsep_length}),
@@ -100,7 +103,10 @@ public final class FciLearner implements Learner {
         IndependenceTest test = ConstraintParameters.test(input, parameters);
         int maxDepth = parameters.getInt(ConstraintParameters.MAX_DEPTH.name());
         SkeletonVariant variant = SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name()));
-        Skeleton skeleton = new AdjacencySearch(test, ki, variant, maxDepth, context).run();
+        // Pairs forbidden by knowledge are tested like any other and removed only at the end, so that
+        // their separating sets are known: guessing "non-collider" for them would let R1 put wrong tails.
+        KnowledgeIndex searchKnowledge = ConstraintParameters.knowledge(requiredOnly(knowledge), names);
+        Skeleton skeleton = new AdjacencySearch(test, searchKnowledge, variant, maxDepth, context).run();
         PagRules rules = "possible".equals(parameters.getString(SELECTION_BIAS.name()))
                 ? PagRules.complete() : PagRules.withoutSelectionBias();
         // Knowledge-removed pairs have no separating set: their triples count as non-colliders.
@@ -115,6 +121,7 @@ public final class FciLearner implements Learner {
             removed = new PossibleDsepSearch(test, ki, maxDepth,
                     parameters.getInt(POSSIBLE_DSEP_LENGTH.name()), context).run(skeleton, first);
         }
+        removeForbidden(skeleton, ki);
         MutableGraph g = circles(names, skeleton);
         PagKnowledge.apply(g, ki);
         rules.orientColliders(g, info);
@@ -124,6 +131,25 @@ public final class FciLearner implements Learner {
         extras.put("possible_dsep_removed", (double) removed);
         extras.put("circle_marks", (double) circleMarks(g));
         return new Estimate(g.freeze(), GraphClass.PAG, extras);
+    }
+
+    private static Knowledge requiredOnly(Knowledge knowledge) {
+        Knowledge.Builder b = Knowledge.builder();
+        for (Knowledge.DirectedPair d : knowledge.required()) {
+            b.require(d.from(), d.to());
+        }
+        return b.build();
+    }
+
+    /** Removes the pairs the knowledge forbids both ways that the tests left adjacent (no separating set). */
+    private static void removeForbidden(Skeleton s, KnowledgeIndex knowledge) {
+        for (int a = 0; a < s.size(); a++) {
+            for (int b : s.neighbours(a)) {
+                if (a < b && knowledge.adjacencyForbidden(a, b)) {
+                    s.remove(a, b, null);
+                }
+            }
+        }
     }
 
     /** The skeleton's adjacencies as edges ∘–∘. */
