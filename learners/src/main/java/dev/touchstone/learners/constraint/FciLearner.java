@@ -1,6 +1,5 @@
 package dev.touchstone.learners.constraint;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.Mark;
@@ -9,13 +8,9 @@ import dev.touchstone.core.graph.algorithms.PagRules;
 import dev.touchstone.core.graph.algorithms.SeparationInfo;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
-import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
@@ -68,25 +63,16 @@ public final class FciLearner implements Learner {
     private static final LearnerDescription DESCRIPTION = describe();
 
     private static LearnerDescription describe() {
-        LearnerDescription.Builder b = LearnerDescription.builder("fci")
+        LearnerDescription.Builder b = ConstraintParameters.describe("fci", GraphClass.PAG)
                 .summary("FCI: PC adjacency search, Possible-D-Sep step and Zhang's complete orientation rules;"
                         + " returns a PAG and allows hidden common causes")
                 .publication("Spirtes, Glymour and Scheines (2000), Causation, Prediction, and Search, 2nd ed.;"
                         + " Zhang (2008), Artificial Intelligence 172; Colombo et al. (2012), Annals of Statistics 40")
-                .family(LearnerFamily.CONSTRAINT)
-                .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
-                .returns(GraphClass.PAG)
-                .missingValues(MissingValues.CONFIGURABLE)
-                .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
-                .oracle(OracleUse.INDEPENDENCE)
                 .assumption("acyclic causal structure over observed and hidden variables")
                 .assumption("causal Markov condition and faithfulness")
                 .assumption("hidden common causes allowed; selection bias only with selection_bias = possible")
                 .assumption("the independence test fits the data (e.g. Gaussian for fisher-z)");
-        for (ParameterSpec s : ConstraintParameters.shared()) {
-            b.parameter(s);
-        }
-        return b.parameter(POSSIBLE_DSEP).parameter(POSSIBLE_DSEP_LENGTH).parameter(SELECTION_BIAS).build();
+        return ConstraintParameters.build(b, POSSIBLE_DSEP, POSSIBLE_DSEP_LENGTH, SELECTION_BIAS);
     }
 
     @Override
