@@ -15,29 +15,34 @@ import java.util.concurrent.ConcurrentLinkedQueue;
  * the set being recorded as their separating set (Spirtes, Glymour and Scheines 2000,
  * §6.7; Zhang 2008, AI 172, §3.1).
  *
- * <p>Possible-D-Sep(x) in the graph after R0 is the set of v ≠ x joined to x by a path on
- * which every inner vertex b, with neighbours a and c on the path, is a collider
- * (a *→ b ←* c) or lies in a triangle (a and c adjacent) (Colombo, Maathuis, Kalisch and
- * Richardson 2012, Ann. Stat. 40, Definition 3.3, from memory). It is computed here by a
- * breadth-first search over directed edges (a, b): this finds every vertex reachable by a
- * <em>walk</em> with that property, a superset of the path definition. A superset is still
- * correct: it only adds candidate conditioning sets, and with a perfect oracle an edge is
- * removed only when a separating set exists, which Spirtes et al. show lies inside
- * Possible-D-Sep whenever x and y are not adjacent in the MAG. An optional bound on the walk
- * length trades completeness for speed.
+ * <p>Possible-D-Sep(x, y) in the graph after R0 is taken as the set of v ≠ x joined to x by a
+ * path on which every inner vertex b, with neighbours a and c on the path, is a collider
+ * (a *→ b ←* c) or lies in a triangle (a and c adjacent), and every vertex is a possible
+ * ancestor of x or y. The path condition is the Possible-D-Sep of Spirtes, Glymour and
+ * Scheines (2000) as restated by Colombo, Maathuis, Kalisch and Richardson (2012, Ann. Stat.
+ * 40, Definition 3.3; from memory). The ancestor condition comes from what Possible-D-Sep
+ * stands in for: D-Sep(x, y), the vertices joined to x by a collider path <em>all of whose
+ * vertices are ancestors of x or y</em>, separates x and y when they are not adjacent in the
+ * MAG (Spirtes, Meek and Richardson 1999; from memory). Possible ancestors are read off the R0
+ * graph (a path into x or y with no arrowhead at the end nearer the start); R0's arrowheads
+ * are sound under a perfect oracle, so every true ancestor qualifies. The set is computed by
+ * a breadth-first search over directed edges (a, b), which follows walks, a superset of the
+ * path definition: a superset only adds candidate sets, and an edge is removed only when a
+ * test separates. An optional bound on the walk length trades completeness for speed.
  *
- * <p>Order independence: all Possible-D-Sep sets are computed once, from the graph after
- * R0, and every edge is tested against them and against the adjacencies at the start of the
- * phase; removals are applied at the end (as in the order-independent FCI of Colombo and
- * Maathuis 2014). So the edges removed do not depend on the order of the variables and the
- * edges' tests run on {@link RunContext#threads()} threads.
+ * <p>Order independence: every pair's set is computed from the graph after R0, and every edge is
+ * tested against it and against the adjacencies at the start of the phase; removals are
+ * applied at the end (as in the order-independent FCI of Colombo and Maathuis 2014). So the
+ * edges removed do not depend on the order of the variables and the edges' tests run on
+ * {@link RunContext#threads()} threads.
  *
  * <p>Tests saved: a conditioning set contained in adj(x) \ {y} (adjacencies at the start of
  * the phase) was already tried by the adjacency search, which tried every subset of the
  * final neighbourhoods up to {@code max_depth}, so it is skipped. Sets are tried by
  * increasing size, first from x's side then from y's, in lexicographic order of positions.
  *
- * <p>Cost: one search of O(Σ deg²) per vertex for the sets; then, per edge, up to
+ * <p>Cost: per edge, one O(|V| + |E|) search for the possible ancestors and two of O(Σ deg²)
+ * for the sets; then up to
  * Σ_{ℓ ≤ d} C(|pds|, ℓ) tests for d = {@code max_depth} (unbounded: 2^|pds|), the dominant
  * term on dense or heavily confounded graphs. The deadline is checked before every edge and
  * every 64 sets.
@@ -70,14 +75,12 @@ final class PossibleDsepSearch {
      */
     int run(Skeleton s, MutableGraph g) {
         int p = s.size();
-        int[][] pds = new int[p][];
         int[][] nb = new int[p][];
-        Walker walker = new Walker(g);
         for (int v = 0; v < p; v++) {
-            context.checkDeadline();
             nb[v] = s.neighbours(v);
-            pds[v] = walker.possibleDsep(v);
         }
+        context.checkDeadline();
+        R0Graph r0 = new R0Graph(g);
         int pairs = 0;
         for (int x = 0; x < p; x++) {
             for (int y : nb[x]) {
@@ -102,7 +105,7 @@ final class PossibleDsepSearch {
         Queue<EdgeWorker> workers = new ConcurrentLinkedQueue<>();
         try {
             ParallelLoop.run(pairs, context.threads(), () -> {
-                EdgeWorker w = new EdgeWorker(s, pds, xs, ys, found);
+                EdgeWorker w = new EdgeWorker(s, new Walker(r0), xs, ys, found);
                 workers.add(w);
                 return w;
             });
@@ -121,21 +124,15 @@ final class PossibleDsepSearch {
         return removed;
     }
 
-    /** Breadth-first search over directed edges of the R0 graph; reuses its arrays between start vertices. */
-    private final class Walker {
-        private final int p;
-        private final int[][] nbr;
-        private final int[] offset;
+    /** An immutable snapshot of the graph after R0: sorted adjacencies and where the arrowheads are. */
+    private static final class R0Graph {
+        final int p;
+        final int[][] nbr;
+        final int[] offset;
+        final boolean[][] arrowAt;
         private final boolean[] adjacency;
-        private final boolean[][] arrowAt;
-        private final int[] seenState;
-        private final int[] seenVertex;
-        private final int[] queueFrom;
-        private final int[] queueSlot;
-        private final int[] queueLength;
-        private int stamp;
 
-        Walker(MutableGraph g) {
+        R0Graph(MutableGraph g) {
             this.p = g.size();
             this.nbr = new int[p][];
             this.offset = new int[p + 1];
@@ -150,7 +147,7 @@ final class PossibleDsepSearch {
                 }
                 offset[v + 1] = offset[v] + row.length;
             }
-            // Adjacency as a bit-per-pair matrix only where it stays small; binary search otherwise.
+            // A p × p adjacency table only where it stays small (≤ 16 MB); binary search otherwise.
             this.adjacency = (long) p * p <= 16_000_000L ? new boolean[p * p] : null;
             if (adjacency != null) {
                 for (int v = 0; v < p; v++) {
@@ -159,59 +156,113 @@ final class PossibleDsepSearch {
                     }
                 }
             }
-            int states = offset[p];
-            this.seenState = new int[states];
-            this.seenVertex = new int[p];
-            this.queueFrom = new int[states];
-            this.queueSlot = new int[states];
-            this.queueLength = new int[states];
         }
 
-        private boolean adjacent(int a, int b) {
+        boolean adjacent(int a, int b) {
             return adjacency != null ? adjacency[a * p + b] : Arrays.binarySearch(nbr[a], b) >= 0;
         }
 
-        /** Possible-D-Sep(x), ascending, x excluded. */
+        /** Whether the mark at {@code at} on its edge with {@code other} is an arrowhead. */
+        boolean arrow(int at, int other) {
+            return arrowAt[at][Arrays.binarySearch(nbr[at], other)];
+        }
+    }
+
+    /** The searches over the R0 graph; one per thread, reusing its arrays between pairs. */
+    private final class Walker {
+        private final R0Graph r;
+        private final int[] seenState;
+        private final int[] seenVertex;
+        private final int[] ancestor;
+        private final int[] queueFrom;
+        private final int[] queueSlot;
+        private final int[] queueLength;
+        private final int[] out;
+        private int stamp;
+        private int pairStamp;
+
+        Walker(R0Graph r) {
+            this.r = r;
+            int states = r.offset[r.p];
+            this.seenState = new int[states];
+            this.seenVertex = new int[r.p];
+            this.ancestor = new int[r.p];
+            this.queueFrom = new int[Math.max(states, r.p)];
+            this.queueSlot = new int[states];
+            this.queueLength = new int[states];
+            this.out = new int[r.p];
+        }
+
+        /**
+         * Marks the possible ancestors of x and y: the vertices with a path into x or y on which no
+         * edge has an arrowhead at the end nearer the start. R0's arrowheads are sound under a
+         * perfect oracle, so every true ancestor is among them.
+         */
+        void possibleAncestors(int x, int y) {
+            pairStamp++;
+            int head = 0;
+            int tail = 0;
+            ancestor[x] = pairStamp;
+            ancestor[y] = pairStamp;
+            queueFrom[tail++] = x;
+            queueFrom[tail++] = y;
+            while (head < tail) {
+                int w = queueFrom[head++];
+                for (int u : r.nbr[w]) {
+                    if (ancestor[u] != pairStamp && !r.arrow(u, w)) {
+                        ancestor[u] = pairStamp;
+                        queueFrom[tail++] = u;
+                    }
+                }
+            }
+        }
+
+        /**
+         * Possible-D-Sep(x, y), ascending, x excluded, after {@link #possibleAncestors(int, int)}:
+         * the vertices joined to x by a walk whose vertices are possible ancestors of x or y and
+         * whose inner vertices are colliders on it or lie in a triangle with their two neighbours.
+         */
         int[] possibleDsep(int x) {
             stamp++;
             seenVertex[x] = stamp;
             int head = 0;
             int tail = 0;
-            int[] out = new int[p];
             int count = 0;
             // A state is the edge (a, b) by which the walk entered b: a = queueFrom, b = nbr[a][slot].
-            for (int i = 0; i < nbr[x].length; i++) {
-                seenState[offset[x] + i] = stamp;
+            for (int i = 0; i < r.nbr[x].length; i++) {
+                int b = r.nbr[x][i];
+                if (ancestor[b] != pairStamp) {
+                    continue;
+                }
+                seenState[r.offset[x] + i] = stamp;
                 queueFrom[tail] = x;
                 queueSlot[tail] = i;
                 queueLength[tail] = 1;
                 tail++;
-                int b = nbr[x][i];
-                if (seenVertex[b] != stamp) {
-                    seenVertex[b] = stamp;
-                    out[count++] = b;
-                }
+                seenVertex[b] = stamp;
+                out[count++] = b;
             }
             while (head < tail) {
                 int a = queueFrom[head];
-                int b = nbr[a][queueSlot[head]];
+                int b = r.nbr[a][queueSlot[head]];
                 int length = queueLength[head];
                 head++;
                 if (length >= maxLength) {
                     continue;
                 }
-                int ab = Arrays.binarySearch(nbr[b], a);
-                boolean arrowAtBFromA = arrowAt[b][ab];
-                for (int j = 0; j < nbr[b].length; j++) {
-                    int c = nbr[b][j];
-                    if (c == a || c == x || seenState[offset[b] + j] == stamp) {
+                boolean arrowAtBFromA = r.arrow(b, a);
+                int[] around = r.nbr[b];
+                for (int j = 0; j < around.length; j++) {
+                    int c = around[j];
+                    int state = r.offset[b] + j;
+                    if (c == a || c == x || seenState[state] == stamp || ancestor[c] != pairStamp) {
                         continue;
                     }
-                    boolean collider = arrowAtBFromA && arrowAt[b][j];
-                    if (!collider && !adjacent(a, c)) {
+                    boolean collider = arrowAtBFromA && r.arrowAt[b][j];
+                    if (!collider && !r.adjacent(a, c)) {
                         continue;
                     }
-                    seenState[offset[b] + j] = stamp;
+                    seenState[state] = stamp;
                     queueFrom[tail] = b;
                     queueSlot[tail] = j;
                     queueLength[tail] = length + 1;
@@ -231,16 +282,16 @@ final class PossibleDsepSearch {
     /** Tests the edges against their Possible-D-Sep sets; one per thread. */
     private final class EdgeWorker implements java.util.function.IntConsumer {
         private final Skeleton s;
-        private final int[][] pds;
+        private final Walker walker;
         private final int[] xs;
         private final int[] ys;
         private final int[][] found;
         private final SubsetSearch subsets = new SubsetSearch(test);
         private long tests;
 
-        EdgeWorker(Skeleton s, int[][] pds, int[] xs, int[] ys, int[][] found) {
+        EdgeWorker(Skeleton s, Walker walker, int[] xs, int[] ys, int[][] found) {
             this.s = s;
-            this.pds = pds;
+            this.walker = walker;
             this.xs = xs;
             this.ys = ys;
             this.found = found;
@@ -251,6 +302,7 @@ final class PossibleDsepSearch {
             context.checkDeadline();
             int x = xs[i];
             int y = ys[i];
+            walker.possibleAncestors(x, y);
             int[] sep = separate(x, y);
             if (sep == null) {
                 sep = separate(y, x);
@@ -260,7 +312,7 @@ final class PossibleDsepSearch {
 
         /** A subset of Possible-D-Sep(x) \ {y}, not inside adj(x), separating x and y; or null. */
         private int[] separate(int x, int y) {
-            int[] cand = without(pds[x], y);
+            int[] cand = without(walker.possibleDsep(x), y);
             boolean anyNew = false;
             for (int v : cand) {
                 anyNew |= !s.adjacent(x, v);
