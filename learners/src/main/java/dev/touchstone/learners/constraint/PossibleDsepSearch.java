@@ -30,11 +30,12 @@ import java.util.concurrent.ConcurrentLinkedQueue;
  * path definition: a superset only adds candidate sets, and an edge is removed only when a
  * test separates. An optional bound on the walk length trades completeness for speed.
  *
- * <p>Order independence: every pair's set is computed from the graph after R0, and every edge is
- * tested against it and against the adjacencies at the start of the phase; removals are
- * applied at the end (as in the order-independent FCI of Colombo and Maathuis 2014). So the
- * edges removed do not depend on the order of the variables and the edges' tests run on
- * {@link RunContext#threads()} threads.
+ * <p>Order: every pair's set is computed from the graph after R0, and every edge is tested
+ * against it and against the adjacencies at the start of the phase; removals are applied at
+ * the end (as in the order-independent FCI of Colombo and Maathuis 2014). So, given the R0
+ * graph, the edges removed do not depend on the order in which edges are visited, and the
+ * edges' tests run on {@link RunContext#threads()} threads. The R0 graph itself comes from
+ * recorded separating sets, which with finite samples can depend on the column order.
  *
  * <p>Tests saved: a conditioning set contained in adj(x) \ {y} (adjacencies at the start of
  * the phase) was already tried by the adjacency search, which tried every subset of the
