@@ -82,17 +82,15 @@ public final class FciLearner implements Learner {
 
     @Override
     public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        List<String> names = input.variableNames();
-        KnowledgeIndex ki = ConstraintParameters.knowledge(knowledge, names);
-        context.checkDeadline();
-        IndependenceTest test = ConstraintParameters.test(input, parameters);
-        int maxDepth = parameters.getInt(ConstraintParameters.MAX_DEPTH.name());
-        SkeletonVariant variant = SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name()));
+        SearchInputs in = SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context);
+        List<String> names = in.names();
+        KnowledgeIndex ki = in.knowledge();
+        IndependenceTest test = in.test();
+        int maxDepth = in.maxDepth();
         // Pairs forbidden by knowledge are tested like any other and removed only at the end, so that
         // their separating sets are known: guessing "non-collider" for them would let R1 put wrong tails.
         KnowledgeIndex searchKnowledge = ConstraintParameters.knowledge(requiredOnly(knowledge), names);
-        Skeleton skeleton = new AdjacencySearch(test, searchKnowledge, variant, maxDepth, context).run();
+        Skeleton skeleton = new AdjacencySearch(test, searchKnowledge, in.variant(), maxDepth, context).run();
         PagRules rules = "possible".equals(parameters.getString(SELECTION_BIAS.name()))
                 ? PagRules.complete() : PagRules.withoutSelectionBias();
         // Knowledge-removed pairs have no separating set: their triples count as non-colliders.

@@ -14,7 +14,6 @@ import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.learners.independence.IndependenceTest;
 
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 
 /**
@@ -68,18 +67,15 @@ public final class PcLearner implements Learner {
 
     @Override
     public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        List<String> names = input.variableNames();
-        KnowledgeIndex ki = ConstraintParameters.knowledge(knowledge, names);
-        context.checkDeadline();
-        IndependenceTest test = ConstraintParameters.test(input, parameters);
-        int maxDepth = parameters.getInt(ConstraintParameters.MAX_DEPTH.name());
-        SkeletonVariant variant = SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name()));
-        Skeleton skeleton = new AdjacencySearch(test, ki, variant, maxDepth, context).run();
+        SearchInputs in = SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context);
+        KnowledgeIndex ki = in.knowledge();
+        IndependenceTest test = in.test();
+        int maxDepth = in.maxDepth();
+        Skeleton skeleton = new AdjacencySearch(test, ki, in.variant(), maxDepth, context).run();
         ColliderOrientation colliders = new ColliderOrientation(skeleton, test, ki,
                 ColliderRule.parse(parameters.getString(COLLIDERS.name())),
                 ConflictRule.parse(parameters.getString(CONFLICTS.name())), maxDepth, context);
-        MutableGraph g = colliders.orient(names);
+        MutableGraph g = colliders.orient(in.names());
         context.checkDeadline();
         MeekRules.Outcome meek = MeekRules.apply(g, knowledge);
         Map<String, Double> extras = new LinkedHashMap<>();
