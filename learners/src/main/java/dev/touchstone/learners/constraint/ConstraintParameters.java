@@ -1,8 +1,15 @@
 package dev.touchstone.learners.constraint;
 
+import dev.touchstone.core.data.DataKind;
+import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.KnowledgeUse;
+import dev.touchstone.core.learner.LearnerDescription;
+import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.MissingValues;
+import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.learners.independence.IndependenceTest;
@@ -11,7 +18,7 @@ import dev.touchstone.learners.independence.MissingPolicy;
 
 import java.util.List;
 
-/** The parameter declarations PC and FCI share, and the steps that read them, in one place. */
+/** The parameter declarations and description PC and FCI share, and the steps that read them, in one place. */
 final class ConstraintParameters {
 
     static final ParameterSpec MAX_DEPTH = ParameterSpec.integer("max_depth", -1, -1, 1000,
@@ -26,6 +33,31 @@ final class ConstraintParameters {
     /** The shared declarations: test, alpha, missing, max_depth, skeleton. */
     static List<ParameterSpec> shared() {
         return List.of(IndependenceTests.TEST, IndependenceTests.ALPHA, IndependenceTests.MISSING, MAX_DEPTH, SKELETON);
+    }
+
+    /**
+     * A description with what PC and FCI declare alike: the constraint family, every data kind,
+     * configurable missing values, all three kinds of knowledge, the independence oracle.
+     */
+    static LearnerDescription.Builder describe(String id, GraphClass returns) {
+        return LearnerDescription.builder(id)
+                .family(LearnerFamily.CONSTRAINT)
+                .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
+                .returns(returns)
+                .missingValues(MissingValues.CONFIGURABLE)
+                .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
+                .oracle(OracleUse.INDEPENDENCE);
+    }
+
+    /** Adds the shared parameters, then the learner's {@code own}, and builds. */
+    static LearnerDescription build(LearnerDescription.Builder b, ParameterSpec... own) {
+        for (ParameterSpec s : shared()) {
+            b.parameter(s);
+        }
+        for (ParameterSpec s : own) {
+            b.parameter(s);
+        }
+        return b.build();
     }
 
     static IndependenceTest test(LearnerInput input, ParameterValues values) {

@@ -1,25 +1,19 @@
 package dev.touchstone.learners.constraint;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.graph.algorithms.MeekRules;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
-import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.learners.independence.IndependenceTest;
 
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 
 /**
@@ -54,25 +48,16 @@ public final class PcLearner implements Learner {
     private static final LearnerDescription DESCRIPTION = describe();
 
     private static LearnerDescription describe() {
-        LearnerDescription.Builder b = LearnerDescription.builder("pc")
+        LearnerDescription.Builder b = ConstraintParameters.describe("pc", GraphClass.CPDAG)
                 .summary("PC: adjacency search by conditional independence tests, then colliders and Meek's rules;"
                         + " original or order-independent skeleton, sepset, conservative or majority colliders")
                 .publication("Spirtes, Glymour and Scheines (2000), Causation, Prediction, and Search, 2nd ed.;"
                         + " Colombo and Maathuis (2014), JMLR 15; Ramsey, Zhang and Spirtes (2006), UAI")
-                .family(LearnerFamily.CONSTRAINT)
-                .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
-                .returns(GraphClass.CPDAG)
-                .missingValues(MissingValues.CONFIGURABLE)
-                .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
-                .oracle(OracleUse.INDEPENDENCE)
                 .assumption("acyclic causal structure")
                 .assumption("causal Markov condition and faithfulness")
                 .assumption("no hidden common causes and no selection bias")
                 .assumption("the independence test fits the data (e.g. Gaussian for fisher-z)");
-        for (ParameterSpec s : ConstraintParameters.shared()) {
-            b.parameter(s);
-        }
-        return b.parameter(COLLIDERS).parameter(CONFLICTS).build();
+        return ConstraintParameters.build(b, COLLIDERS, CONFLICTS);
     }
 
     @Override
@@ -82,18 +67,15 @@ public final class PcLearner implements Learner {
 
     @Override
     public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        List<String> names = input.variableNames();
-        KnowledgeIndex ki = ConstraintParameters.knowledge(knowledge, names);
-        context.checkDeadline();
-        IndependenceTest test = ConstraintParameters.test(input, parameters);
-        int maxDepth = parameters.getInt(ConstraintParameters.MAX_DEPTH.name());
-        SkeletonVariant variant = SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name()));
-        Skeleton skeleton = new AdjacencySearch(test, ki, variant, maxDepth, context).run();
+        SearchInputs in = SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context);
+        KnowledgeIndex ki = in.knowledge();
+        IndependenceTest test = in.test();
+        int maxDepth = in.maxDepth();
+        Skeleton skeleton = new AdjacencySearch(test, ki, in.variant(), maxDepth, context).run();
         ColliderOrientation colliders = new ColliderOrientation(skeleton, test, ki,
                 ColliderRule.parse(parameters.getString(COLLIDERS.name())),
                 ConflictRule.parse(parameters.getString(CONFLICTS.name())), maxDepth, context);
-        MutableGraph g = colliders.orient(names);
+        MutableGraph g = colliders.orient(in.names());
         context.checkDeadline();
         MeekRules.Outcome meek = MeekRules.apply(g, knowledge);
         Map<String, Double> extras = new LinkedHashMap<>();
