@@ -89,7 +89,7 @@ public final class Expansion {
                             + e.parameter(), e.getMessage());
                 }
                 choices.add(new TruthSetting.Choice(c.section(), kindName, values, given,
-                        catalog.fingerprint(c.section(), kindName, values)));
+                        catalog.fingerprint(c.section(), kindName, values), catalog.locations(c.section(), kindName)));
             }
         }
         return choices;

@@ -26,6 +26,7 @@ import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
@@ -135,6 +136,11 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
             return ""; // no file: refused with a clear message by checkCombination
         }
         return given(values.get(GIVEN_FILE).toString()).digest();
+    }
+
+    @Override
+    public Set<String> locations(String section, String kind) {
+        return section.equals(GRAPH) && kind.equals(GivenGraphFamily.ID) ? Set.of(GIVEN_FILE) : Set.of();
     }
 
     private static boolean isGraphFile(String section, String kind, String parameter) {

@@ -43,6 +43,14 @@ public interface TruthCatalog {
         return "";
     }
 
+    /**
+     * The parameters of a kind that only locate the content its {@link #fingerprint} digests
+     * (for example a graph file's path): run keys and seeds use the fingerprint instead.
+     */
+    default java.util.Set<String> locations(String section, String kind) {
+        return java.util.Set.of();
+    }
+
     /** The section with this name, or null. */
     default Section section(String name) {
         for (Section s : sections()) {

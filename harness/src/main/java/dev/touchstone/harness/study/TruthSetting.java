@@ -22,12 +22,20 @@ public record TruthSetting(int index, List<Choice> choices) {
     /**
      * A section's kind and values. {@code given} holds only the values the study wrote (for
      * output columns); {@code fingerprint} is what else defines the choice (e.g. a digest of
-     * a graph file), "" for nothing.
+     * a graph file), "" for nothing; {@code locations} names the parameters that only say where
+     * the fingerprinted content lives (a file path). They are left out of the canonical text, so
+     * that moving a study with its graph file to another folder keeps its run keys and seeds.
      */
     public record Choice(String section, String kind, ParameterValues values, Map<String, Object> given,
-                         String fingerprint) {
+                         String fingerprint, java.util.Set<String> locations) {
         public Choice {
             given = Map.copyOf(given);
+            locations = java.util.Set.copyOf(locations);
+        }
+
+        public Choice(String section, String kind, ParameterValues values, Map<String, Object> given,
+                      String fingerprint) {
+            this(section, kind, values, given, fingerprint, java.util.Set.of());
         }
 
         public Choice(String section, String kind, ParameterValues values, Map<String, Object> given) {
@@ -39,6 +47,9 @@ public record TruthSetting(int index, List<Choice> choices) {
             StringBuilder sb = new StringBuilder(section).append('=').append(kind).append('{');
             boolean first = true;
             for (Map.Entry<String, Object> e : values.asMap().entrySet()) {
+                if (locations.contains(e.getKey())) {
+                    continue;
+                }
                 if (!first) {
                     sb.append(',');
                 }

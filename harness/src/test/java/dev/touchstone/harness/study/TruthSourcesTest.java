@@ -17,6 +17,7 @@ import org.junit.jupiter.params.provider.MethodSource;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 
@@ -131,6 +132,26 @@ class TruthSourcesTest {
         assertNotEquals(p.runs().get(0).key(), edited.runs().get(0).key(), "the file's content is in the key");
         assertEquals(p.runs().get(p.runs().size() - 1).key(), edited.runs().get(edited.runs().size() - 1).key(),
                 "runs on the unchanged CSV file keep their keys");
+    }
+
+    @Test
+    @DisplayName("moving a study with its graph file to another folder keeps run keys and seeds (design §6: keys from definitions)")
+    void givenGraphMoved() throws IOException {
+        Graph g = chain("rain", "soil", "slugs", "yield");
+        String yaml = HEAD + "truth:\n  graph: {family: given, file: g.json}\n  model: {kind: linear-gaussian}\n" + TAIL;
+        List<String> keys = new ArrayList<>();
+        List<Long> seeds = new ArrayList<>();
+        for (String folder : List.of("first", "second/deeper")) {
+            Path dir = Files.createDirectories(tmp.resolve(folder));
+            GraphJson.write(dir.resolve("g.json"), g);
+            Path study = dir.resolve("study.yaml");
+            Files.writeString(study, yaml);
+            Plan p = plan(study);
+            keys.add(p.runs().get(0).key());
+            seeds.add(new ReplicateSeeds(p.study().seed(), p.truths().get(0), 0).data());
+        }
+        assertEquals(keys.get(0), keys.get(1), "same content, other folder: same key");
+        assertEquals(seeds.get(0), seeds.get(1), "same content, other folder: same data seed");
     }
 
     /** (case name, truth text from line 4, field expected, line expected, words the message must contain). */
