@@ -83,8 +83,9 @@ public final class StudyReference {
                 .append("    model: {kind: linear-gaussian}\n  - network: community-garden\n```\n\n")
                 .append("A path in a study file (the `file` of the `given` graph family) is read relative to the")
                 .append(" study file's folder; the normalised `study.yaml` of a study's output names it absolutely,")
-                .append(" and run keys include a digest of the file's bytes, so editing the graph file recomputes")
-                .append(" its runs on resume.\n\n");
+                .append(" and run keys and seeds include a digest of the file's bytes instead of its path, so editing")
+                .append(" the graph file recomputes its runs on resume, while moving the study and its graph to another")
+                .append(" folder keeps them.\n\n");
         for (TruthCatalog.Section s : truth.sections()) {
             sb.append("### `truth.").append(s.name()).append("`\n\n").append(s.meaning()).append(" The kind is named by `")
                     .append(s.kindField()).append("`");
