@@ -1,8 +1,11 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.execution.Engine;
+import dev.touchstone.harness.execution.EngineProvider;
 import dev.touchstone.harness.execution.Journal;
 import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.Progress;
+import dev.touchstone.harness.execution.RunRecipe;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.metrics.results.RunStatus;
@@ -34,6 +37,14 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--plugins", paramLabel = "DIR", description = "A folder of plug-in jars with Learner services.")
     Path plugins;
 
+    @Option(names = "--engine", paramLabel = "NAME", description = "Where runs are performed: local (default) or"
+            + " spark (needs the spark module; see docs/spark.md).")
+    String engine = EngineProvider.LOCAL_NAME;
+
+    @Option(names = "--master", paramLabel = "URL", description = "The cluster of the engine, e.g. local[2],"
+            + " spark://host:7077 or yarn (default: the engine's own).")
+    String master;
+
     @Option(names = "--quiet", description = "Print no progress, only the final line.")
     boolean quiet;
 
@@ -55,7 +66,8 @@ final class RunCommand implements Callable<Integer> {
                 System.console() != null ? 0.2 : 5.0);
         StudyRunner.Outcome o;
         try {
-            o = kit.runner().run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
+            o = kit.runner().on(engine(plan)).run(plan, new StudyRunner.Options(folder, n, progress,
+                    quiet ? null : err));
         } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {
             throw new UsageException(e.getMessage(), e);
         }
@@ -65,5 +77,27 @@ final class RunCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "report: %s%n", kit.report(plan, folder, folder));
         out.flush();
         return Main.DONE;
+    }
+
+    /** The engine named by {@code --engine}, configured with {@code --master}. */
+    private Engine engine(Plan plan) {
+        if (engine.equals(EngineProvider.LOCAL_NAME)) {
+            if (master != null) {
+                throw new UsageException("--master is for a cluster engine; the local engine uses --threads");
+            }
+            return Engine.LOCAL;
+        }
+        EngineProvider p = EngineProvider.find(engine, RunCommand.class.getClassLoader());
+        if (p == null) {
+            throw new UsageException("the engine '" + engine + "' is not on the class path (available: "
+                    + String.join(", ", EngineProvider.available(RunCommand.class.getClassLoader()))
+                    + "); for spark build it with `mvn -B -pl spark -am package -DskipTests` and run through"
+                    + " ./touchstone, which then adds it (docs/spark.md)");
+        }
+        try {
+            return p.create(master, plan, RunRecipe.of(plan, learnersFile, plugins));
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage(), e);
+        }
     }
 }

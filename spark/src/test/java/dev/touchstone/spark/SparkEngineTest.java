@@ -1,0 +1,159 @@
+package dev.touchstone.spark;
+
+import dev.touchstone.harness.cli.Main;
+import dev.touchstone.harness.execution.Journal;
+import dev.touchstone.harness.execution.ResultTables;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringReader;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The Spark engine on {@code local[2]} against the local engine, through the command line:
+ * same runs.csv apart from timing columns, resume from a journal the local engine wrote, a
+ * task that dies is retried. The reference is the local engine, whose determinism is
+ * checked in the harness (StudyRunnerTest); the equality itself is design §6's rule that
+ * results do not depend on where or in which order runs are performed.
+ */
+class SparkEngineTest {
+
+    private static final String STUDY = "name: spark-check\nseed: 7\nreplicates: 3\n"
+            + "truth:\n  graph: {family: erdos-renyi, nodes: [5, 7], mean_degree: 2}\n"
+            + "  model: {kind: linear-gaussian}\n"
+            + "samples: [60, 200, oracle]\n"
+            + "learners:\n  - {id: pc, use: pc, with: {alpha: [0.01, 0.05]}}\n  - {id: empty, use: empty}\n"
+            + "  - {id: crash, use: crash-once-test}\n"
+            + "metrics: [shd, adjacency_f1, orientation_f1, seconds]\nlimits: {seconds: 30}\ncompare_to: empty\n";
+
+    @TempDir
+    static Path tmp;
+    private static Path study;
+    private static Path local;
+
+    @BeforeAll
+    static void runLocally() throws IOException {
+        study = tmp.resolve("study.yaml");
+        Files.writeString(study, STUDY);
+        local = tmp.resolve("local");
+        Result r = cli("run", study.toString(), "--out", local.toString(), "--threads", "2", "--quiet");
+        assertEquals(0, r.status, r.err);
+    }
+
+    private record Result(int status, String out, String err) {
+    }
+
+    static Result cli(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int status = Main.execute(args, new PrintWriter(out, true), new PrintWriter(err, true));
+        return new Result(status, out.toString(), err.toString());
+    }
+
+    /** A table without its timing columns, one line per row. */
+    static String withoutTimings(Path csv) throws IOException {
+        StringBuilder sb = new StringBuilder();
+        try (CSVParser p = CSVParser.parse(new StringReader(Files.readString(csv)), CSVFormat.DEFAULT)) {
+            List<CSVRecord> records = p.getRecords();
+            List<String> header = new ArrayList<>();
+            records.get(0).forEach(header::add);
+            for (CSVRecord r : records) {
+                for (int i = 0; i < header.size(); i++) {
+                    if (!ResultTables.TIMING_COLUMNS.contains(header.get(i))) {
+                        sb.append(r.get(i)).append('|');
+                    }
+                }
+                sb.append('\n');
+            }
+        }
+        return sb.toString();
+    }
+
+    /** summary.csv or comparisons.csv without the rows of the timing metric. */
+    private static List<String> withoutTimingRows(Path csv) throws IOException {
+        return Files.readString(csv).lines().filter(l -> !l.contains(",seconds,")).toList();
+    }
+
+    private static long journalLines(Path out) throws IOException {
+        return Files.readString(out.resolve(Journal.FILE_NAME)).lines().count();
+    }
+
+    @Test
+    @DisplayName("local[2] gives the local engine's runs.csv and summary apart from timing columns (design §6)")
+    void sparkEqualsLocal() throws IOException {
+        Path spark = tmp.resolve("spark");
+        Result r = cli("run", study.toString(), "--out", spark.toString(), "--engine", "spark", "--master", "local[2]",
+                "--quiet");
+        assertEquals(0, r.status, r.err);
+        String runs = withoutTimings(local.resolve("runs.csv"));
+        assertEquals(runs, withoutTimings(spark.resolve("runs.csv")));
+        assertTrue(runs.lines().count() > 40, "the study has its runs: " + runs.lines().count());
+        assertTrue(runs.contains("|ok|"), runs);
+        assertEquals(withoutTimingRows(local.resolve("summary.csv")), withoutTimingRows(spark.resolve("summary.csv")));
+        assertEquals(withoutTimingRows(local.resolve("comparisons.csv")),
+                withoutTimingRows(spark.resolve("comparisons.csv")));
+        assertEquals(journalLines(local), journalLines(spark));
+    }
+
+    @Test
+    @DisplayName("a study begun by the local engine is finished on Spark: done runs are kept, the rest done once")
+    void resumeFromLocalJournal() throws IOException {
+        Path mixed = tmp.resolve("mixed");
+        Files.createDirectories(mixed);
+        List<String> lines = Files.readAllLines(local.resolve(Journal.FILE_NAME));
+        int kept = lines.size() / 3;
+        Files.write(mixed.resolve(Journal.FILE_NAME), lines.subList(0, kept));
+        Result r = cli("run", study.toString(), "--out", mixed.toString(), "--engine", "spark", "--master",
+                "local[2]");
+        assertEquals(0, r.status, r.err);
+        assertTrue(r.err.contains(String.format(java.util.Locale.ROOT, "%,d of %,d runs already done", kept,
+                lines.size())), r.err);
+        assertTrue(r.out.contains(String.format(java.util.Locale.ROOT, "%,d done now", lines.size() - kept)), r.out);
+        assertEquals(lines.size(), journalLines(mixed), "no run done twice");
+        assertEquals(withoutTimings(local.resolve("runs.csv")), withoutTimings(mixed.resolve("runs.csv")));
+        List<String> journal = Files.readAllLines(mixed.resolve(Journal.FILE_NAME));
+        assertEquals(lines.subList(0, kept), journal.subList(0, kept), "the local engine's lines are untouched");
+    }
+
+    @Test
+    @DisplayName("a task that dies is retried by Spark (spark.task.maxFailures) and the study completes unchanged")
+    void deadTaskIsRetried() throws IOException {
+        Path retried = tmp.resolve("retried");
+        CrashOnceLearner.ARMED.set(true);
+        Result r = cli("run", study.toString(), "--out", retried.toString(), "--engine", "spark", "--master",
+                "local[2]", "--quiet");
+        assertEquals(0, r.status, r.err);
+        assertTrue(!CrashOnceLearner.ARMED.get(), "the learner did kill one task");
+        assertEquals(withoutTimings(local.resolve("runs.csv")), withoutTimings(retried.resolve("runs.csv")));
+        assertEquals(journalLines(local), journalLines(retried), "the dead task left no line, its retry one per run");
+    }
+
+    @Test
+    @DisplayName("without retries (local[2,1]) a dead task stops the job with one line; a resume finishes the study")
+    void deadTaskWithoutRetriesThenResume() throws IOException {
+        Path out = tmp.resolve("no-retry");
+        CrashOnceLearner.ARMED.set(true);
+        Result r = cli("run", study.toString(), "--out", out.toString(), "--engine", "spark", "--master",
+                "local[2,1]", "--quiet");
+        assertEquals(1, r.status, r.out + r.err);
+        assertTrue(r.err.startsWith("error: the Spark job stopped:") && r.err.contains("run again to resume"), r.err);
+        assertEquals(1, r.err.lines().count(), r.err);
+        Result again = cli("run", study.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(0, again.status, again.err);
+        assertEquals(withoutTimings(local.resolve("runs.csv")), withoutTimings(out.resolve("runs.csv")));
+    }
+}
