@@ -54,7 +54,7 @@ class SparkEngineTest {
         assertEquals(0, r.status, r.err);
     }
 
-    private record Result(int status, String out, String err) {
+    record Result(int status, String out, String err) {
     }
 
     static Result cli(String... args) {

@@ -1,0 +1,68 @@
+#!/usr/bin/env bash
+# Overhead per run of the Spark engine on local[2] against the local engine (2 threads), on
+# the 10,000-run empty-learner study of the harness benchmark (p = 10, n = 100, Erdős–Rényi
+# mean degree 2, linear Gaussian, one run per replicate: the worst case, nothing shared).
+# Each engine also runs the same study with 1 replicate, so fixed costs (JVM start, Spark
+# context start and stop, report) cancel: overhead per run =
+#   ((spark 10k − spark 1) − (local 10k − local 1)) / 9,999.
+# Prints each wall time and the medians over the repetitions.
+#
+# Usage: scripts/scaling/spark-overhead.sh [repetitions]    (run from anywhere)
+set -euo pipefail
+root="$(cd "$(dirname "$0")/../.." && pwd)"
+reps="${1:-3}"
+work="$(mktemp -d)"
+trap 'rm -rf "$work"' EXIT
+
+study() {
+  cat >"$work/study-$1.yaml" <<YAML
+name: spark-overhead-$1
+seed: 1
+replicates: $1
+truth:
+  graph: {family: erdos-renyi, nodes: 10, mean_degree: 2}
+  model: {kind: linear-gaussian}
+samples: [100]
+learners:
+  - {id: e, use: empty}
+metrics: [shd, adjacency_f1, orientation_f1, seconds]
+limits: {max_runs: 20000}
+YAML
+}
+study 1
+study 10000
+"$root/touchstone" run "$work/study-1.yaml" --engine spark --master 'local[2]' --out "$work/warm" --quiet >/dev/null
+
+seconds() { # engine replicates → wall seconds of one whole `touchstone run`
+  local out="$work/out-$1-$2-$RANDOM"
+  local args=(--threads 2)
+  [ "$1" = spark ] && args=(--engine spark --master 'local[2]')
+  local t0 t1
+  t0=$(date +%s.%N)
+  "$root/touchstone" run "$work/study-$2.yaml" --out "$out" --quiet "${args[@]}" >/dev/null 2>&1
+  t1=$(date +%s.%N)
+  rm -rf "$out"
+  echo "$t1 - $t0" | bc -l
+}
+
+median() { sort -g | awk '{a[NR]=$1} END {print (NR % 2) ? a[(NR+1)/2] : (a[NR/2] + a[NR/2+1]) / 2}'; }
+
+declare -A times
+for engine in local spark; do
+  for n in 1 10000; do
+    list=""
+    for _ in $(seq "$reps"); do
+      s=$(seconds "$engine" "$n")
+      list="$list $s"
+      printf '%s %5d replicates: %.2f s\n' "$engine" "$n" "$s"
+    done
+    times[$engine-$n]=$(echo $list | tr ' ' '\n' | median)
+  done
+done
+echo "load average: $(cut -d' ' -f1-3 /proc/loadavg)"
+for k in local-1 local-10000 spark-1 spark-10000; do
+  printf 'median %-12s %.2f s\n' "$k" "${times[$k]}"
+done
+echo "${times[spark-10000]} ${times[spark-1]} ${times[local-10000]} ${times[local-1]}" | awk '{
+  spark = ($1 - $2) / 9999 * 1000; local = ($3 - $4) / 9999 * 1000
+  printf "per run: local %.3f ms, spark local[2] %.3f ms, overhead %.3f ms (ratio %.2f)\n", local, spark, spark - local, spark / local }'
