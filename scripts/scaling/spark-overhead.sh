@@ -7,12 +7,39 @@
 #   ((spark 10k − spark 1) − (local 10k − local 1)) / 9,999.
 # Prints each wall time and the medians over the repetitions.
 #
+# The jars are built once (if missing) and copied aside, so a rebuild in the work tree during
+# the measurement cannot disturb it.
+#
 # Usage: scripts/scaling/spark-overhead.sh [repetitions]    (run from anywhere)
 set -euo pipefail
 root="$(cd "$(dirname "$0")/../.." && pwd)"
 reps="${1:-3}"
 work="$(mktemp -d)"
 trap 'rm -rf "$work"' EXIT
+if [ ! -f "$root/spark/target/touchstone-spark-0.1.0-SNAPSHOT.jar" ] || [ ! -f "$root/harness/target/touchstone.jar" ]; then
+  (cd "$root" && mvn -B -q -DskipTests package -pl spark -am)
+fi
+mkdir -p "$work/lib"
+cp "$root/harness/target/touchstone.jar" "$root/spark/target/touchstone-spark-0.1.0-SNAPSHOT.jar" "$work/"
+cp "$root"/spark/target/lib/*.jar "$work/lib/"
+# The same JVM options as ./touchstone --engine spark.
+opens="-Dlog4j2.configurationFile=touchstone-spark-log4j2.properties -XX:+IgnoreUnrecognizedVMOptions"
+opens="$opens -Djdk.reflect.useDirectMethodHandle=false -Dio.netty.tryReflectionSetAccessible=true"
+for p in java.lang java.lang.invoke java.lang.reflect java.io java.net java.nio java.util java.util.concurrent \
+    java.util.concurrent.atomic jdk.internal.ref sun.nio.ch sun.nio.cs sun.security.action sun.util.calendar; do
+  opens="$opens --add-opens=java.base/$p=ALL-UNNAMED"
+done
+touchstone() { # engine, then the arguments of `touchstone`
+  local engine="$1"
+  shift
+  if [ "$engine" = spark ]; then
+    # shellcheck disable=SC2086
+    java -Djava.awt.headless=true $opens -cp "$work/touchstone.jar:$work/touchstone-spark-0.1.0-SNAPSHOT.jar:$work/lib/*" \
+      dev.touchstone.harness.cli.Main "$@" --engine spark --master 'local[2]'
+  else
+    java -Djava.awt.headless=true -jar "$work/touchstone.jar" "$@" --threads 2
+  fi
+}
 
 study() {
   cat >"$work/study-$1.yaml" <<YAML
@@ -31,15 +58,13 @@ YAML
 }
 study 1
 study 10000
-"$root/touchstone" run "$work/study-1.yaml" --engine spark --master 'local[2]' --out "$work/warm" --quiet >/dev/null
+touchstone spark run "$work/study-1.yaml" --out "$work/warm" --quiet >/dev/null
 
 seconds() { # engine replicates → wall seconds of one whole `touchstone run`
   local out="$work/out-$1-$2-$RANDOM"
-  local args=(--threads 2)
-  [ "$1" = spark ] && args=(--engine spark --master 'local[2]')
   local t0 t1
   t0=$(date +%s.%N)
-  "$root/touchstone" run "$work/study-$2.yaml" --out "$out" --quiet "${args[@]}" >/dev/null 2>&1
+  touchstone "$1" run "$work/study-$2.yaml" --out "$out" --quiet >/dev/null 2>&1
   t1=$(date +%s.%N)
   rm -rf "$out"
   echo "$t1 - $t0" | bc -l

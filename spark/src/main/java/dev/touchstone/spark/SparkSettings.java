@@ -46,6 +46,10 @@ final class SparkSettings {
         conf.setIfMissing("spark.app.name", "touchstone " + studyName);
         conf.setIfMissing(MAX_FAILURES, "4");
         conf.setIfMissing("spark.ui.showConsoleProgress", "false");
+        // Task results are journal lines handed on as each task ends, not one collected
+        // result; Spark's default cap of 1g on their total would stop a study of about
+        // 1.3 million runs (800 bytes a line), so the cap is off unless the user sets one.
+        conf.setIfMissing("spark.driver.maxResultSize", "0");
         String m = master != null ? master : conf.get("spark.master", "local[*]");
         if (isLocal(m)) {
             conf.setIfMissing("spark.ui.enabled", "false");
