@@ -39,6 +39,7 @@ class SparkEngineTest {
             + "samples: [60, 200, oracle]\n"
             + "learners:\n  - {id: pc, use: pc, with: {alpha: [0.01, 0.05]}}\n  - {id: empty, use: empty}\n"
             + "  - {id: crash, use: crash-once-test}\n"
+            + "  - {id: other, use: crash-once-test, with: {outcome: [fail, timeout]}}\n"
             + "metrics: [shd, adjacency_f1, orientation_f1, seconds]\nlimits: {seconds: 30}\ncompare_to: empty\n";
 
     @TempDir
@@ -97,8 +98,11 @@ class SparkEngineTest {
         assertEquals(0, r.status, r.err);
         List<Map<String, String>> runs = withoutTimings(local.resolve("runs.csv"));
         assertEquals(runs, withoutTimings(spark.resolve("runs.csv")));
-        assertEquals(72, runs.size(), "2 settings x 3 replicates x 3 sample sizes x 4 configurations");
-        assertTrue(runs.stream().allMatch(row -> row.get("status").equals("ok")), runs.toString());
+        assertEquals(108, runs.size(), "2 settings x 3 replicates x 3 sample sizes x 6 configurations");
+        assertEquals(18, runs.stream().filter(row -> row.get("status").equals("failed")
+                && row.get("message").equals("test: this run fails")).count(), "failed runs recorded as locally");
+        assertEquals(18, runs.stream().filter(row -> row.get("status").equals("timeout")).count());
+        assertEquals(72, runs.stream().filter(row -> row.get("status").equals("ok")).count());
         assertTrue(runs.stream().anyMatch(row -> !row.get("shd").equals("0")), "pc finds edges");
         assertEquals(withoutTimingRows(local.resolve("summary.csv")), withoutTimingRows(spark.resolve("summary.csv")));
         assertEquals(withoutTimingRows(local.resolve("comparisons.csv")),
