@@ -28,7 +28,7 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./<study name>-results).")
     Path out;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads of the local engine (default: all cores).")
     Integer threads;
 
     @Option(names = "--learners", paramLabel = "FILE", description = "A learners file declaring external command learners.")
