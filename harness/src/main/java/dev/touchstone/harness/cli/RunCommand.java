@@ -1,5 +1,8 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.execution.Engine;
+import dev.touchstone.harness.execution.EngineProvider;
+import dev.touchstone.harness.execution.RunRecipe;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.metrics.results.RunStatus;
@@ -22,7 +25,7 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./<study name>-results).")
     Path out;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads of the local engine (default: all cores).")
     Integer threads;
 
     @Option(names = "--learners", paramLabel = "FILE", description = "A learners file declaring external command learners.")
@@ -30,6 +33,14 @@ final class RunCommand implements Callable<Integer> {
 
     @Option(names = "--plugins", paramLabel = "DIR", description = "A folder of plug-in jars with Learner services.")
     Path plugins;
+
+    @Option(names = "--engine", paramLabel = "NAME", description = "Where runs are performed: local (default) or"
+            + " spark (needs the spark module; see docs/spark.md).")
+    String engine = EngineProvider.LOCAL_NAME;
+
+    @Option(names = "--master", paramLabel = "URL", description = "The cluster of the engine, e.g. local[2],"
+            + " spark://host:7077 or yarn (default: the engine's own).")
+    String master;
 
     @Option(names = "--quiet", description = "Print no progress, only the final line.")
     boolean quiet;
@@ -44,12 +55,34 @@ final class RunCommand implements Callable<Integer> {
         Toolkit kit = new Toolkit(learnersFile, plugins);
         Plan plan = kit.plan(kit.readStudy(study));
         Path folder = this.out != null ? this.out : Path.of(plan.study().name() + "-results");
-        StudyRunner.Outcome o = kit.run(plan, folder, threads, quiet, err);
+        StudyRunner.Outcome o = kit.run(plan, folder, threads, quiet, err, engine(plan));
         out.printf(Locale.ROOT, "done: %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped; %,d done now);"
                         + " results in %s%n", o.total(), o.count(RunStatus.OK), o.count(RunStatus.FAILED),
                 o.count(RunStatus.TIMEOUT), o.count(RunStatus.SKIPPED), o.performed(), folder);
         out.printf(Locale.ROOT, "report: %s%n", kit.report(plan, folder, folder));
         out.flush();
         return Main.DONE;
+    }
+
+    /** The engine named by {@code --engine}, configured with {@code --master}. */
+    private Engine engine(Plan plan) {
+        if (engine.equals(EngineProvider.LOCAL_NAME)) {
+            if (master != null) {
+                throw new UsageException("--master is for a cluster engine; the local engine uses --threads");
+            }
+            return Engine.LOCAL;
+        }
+        EngineProvider p = EngineProvider.find(engine, RunCommand.class.getClassLoader());
+        if (p == null) {
+            throw new UsageException("the engine '" + engine + "' is not on the class path (available: "
+                    + String.join(", ", EngineProvider.available(RunCommand.class.getClassLoader()))
+                    + "); for spark build it with `mvn -B -pl spark -am package -DskipTests` and run through"
+                    + " ./touchstone, which then adds it (docs/spark.md)");
+        }
+        try {
+            return p.create(master, plan, RunRecipe.of(plan, learnersFile, plugins));
+        } catch (IllegalArgumentException e) {
+            throw new UsageException(e.getMessage(), e);
+        }
     }
 }

@@ -2,16 +2,16 @@ package dev.touchstone.harness.cli;
 
 import dev.touchstone.harness.catalog.LearnerCatalog;
 import dev.touchstone.harness.execution.GeneratorSimulator;
+import dev.touchstone.harness.execution.Engine;
 import dev.touchstone.harness.execution.Journal;
 import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.MetricsAggregator;
 import dev.touchstone.harness.execution.MetricsScorer;
 import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.execution.StudyRunner;
-import dev.touchstone.harness.outside.CommandLearner;
 import dev.touchstone.harness.outside.CommandSpec;
 import dev.touchstone.harness.outside.LearnersFile;
-import dev.touchstone.harness.outside.PluginLoader;
+import dev.touchstone.harness.outside.LearnerSources;
 import dev.touchstone.harness.study.Expansion;
 import dev.touchstone.harness.study.GeneratorTruthCatalog;
 import dev.touchstone.harness.study.MetricCatalog;
@@ -24,9 +24,7 @@ import dev.touchstone.harness.study.TruthCatalog;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 
 /**
  * Wires the command line to the real parts: learner catalogue (built in, plug-ins from
@@ -38,28 +36,19 @@ final class Toolkit {
     final LearnerCatalog learners;
     final TruthCatalog truth = new GeneratorTruthCatalog();
     final MetricCatalog metrics = new RegistryMetricCatalog();
-    private final Map<String, String> fingerprints = new HashMap<>();
+    private final LearnerSources sources;
 
     Toolkit(Path learnersFile, Path pluginDir) {
-        LearnerCatalog.Builder b = LearnerCatalog.builder()
-                .addServices(Toolkit.class.getClassLoader(), LearnerCatalog.Origin.BUILT_IN, "built in");
         try {
-            if (pluginDir != null) {
-                PluginLoader.addPlugins(b, pluginDir);
-            }
-            if (learnersFile != null) {
-                List<CommandSpec> specs = LearnersFile.read(learnersFile);
-                for (CommandSpec s : specs) {
-                    b.addCommand(new CommandLearner(s), learnersFile.toString());
-                    fingerprints.put(s.description().id(), s.fingerprint());
-                }
-            }
+            List<CommandSpec> commands = learnersFile == null ? List.of() : LearnersFile.read(learnersFile);
+            this.sources = LearnerSources.gather(Toolkit.class.getClassLoader(), pluginDir, commands,
+                    learnersFile == null ? null : learnersFile.toString());
         } catch (StudyException e) {
             throw new UsageException(e.getMessage(), e);
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage(), e);
         }
-        this.learners = b.build();
+        this.learners = sources.catalog();
     }
 
     Study readStudy(Path file) {
@@ -72,7 +61,7 @@ final class Toolkit {
 
     Plan plan(Study study) {
         try {
-            return new Expansion(truth, id -> fingerprints.getOrDefault(id, "")).expand(study, learners);
+            return new Expansion(truth, sources::fingerprint).expand(study, learners);
         } catch (StudyException e) {
             throw new UsageException(e.getMessage(), e);
         }
@@ -100,6 +89,11 @@ final class Toolkit {
      * bad input (exit 2).
      */
     StudyRunner.Outcome run(Plan plan, Path folder, Integer threads, boolean quiet, PrintWriter err) {
+        return run(plan, folder, threads, quiet, err, Engine.LOCAL);
+    }
+
+    /** As {@link #run(Plan, Path, Integer, boolean, PrintWriter)}, on the given engine. */
+    StudyRunner.Outcome run(Plan plan, Path folder, Integer threads, boolean quiet, PrintWriter err, Engine engine) {
         int n = threads == null ? LocalExecutor.defaultThreads() : threads;
         if (n < 1) {
             throw new UsageException("--threads must be at least 1, got " + n);
@@ -107,7 +101,7 @@ final class Toolkit {
         boolean terminal = System.console() != null;
         Progress progress = quiet ? Progress.quiet() : Progress.lines(err, terminal, terminal ? 0.2 : 5.0);
         try {
-            return runner().run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
+            return runner().on(engine).run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
         } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {
             throw new UsageException(e.getMessage(), e);
         }

@@ -23,7 +23,7 @@ import java.util.function.Consumer;
  * deadline (and, for external commands, by killing the process tree). Cost: the runs'
  * own, plus a few microseconds per run for hand-out and bookkeeping.
  */
-public final class LocalExecutor {
+public final class LocalExecutor implements RunExecutor {
 
     private final int threads;
     private final Simulator simulator;
@@ -57,6 +57,7 @@ public final class LocalExecutor {
      *             finite sample size, whatever subset of runs is being done, so that data are
      *             the same on resume), 0 for oracle-only studies
      */
+    @Override
     public void execute(List<RunDefinition> runs, int rows, Consumer<RunResult> sink) {
         Map<RunDefinition.ReplicateId, RunDefinition> firstOf = new HashMap<>();
         for (RunDefinition r : runs) {

@@ -45,11 +45,22 @@ public final class StudyRunner {
     private final Simulator simulator;
     private final Scorer scorer;
     private final Aggregator aggregator;
+    private final Engine engine;
 
     public StudyRunner(Simulator simulator, Scorer scorer, Aggregator aggregator) {
+        this(simulator, scorer, aggregator, Engine.LOCAL);
+    }
+
+    private StudyRunner(Simulator simulator, Scorer scorer, Aggregator aggregator, Engine engine) {
         this.simulator = simulator;
         this.scorer = scorer;
         this.aggregator = aggregator;
+        this.engine = engine;
+    }
+
+    /** The same runner performing runs on another engine; journal, resume and outputs are unchanged. */
+    public StudyRunner on(Engine other) {
+        return new StudyRunner(simulator, scorer, aggregator, java.util.Objects.requireNonNull(other, "engine"));
     }
 
     /**
@@ -113,7 +124,7 @@ public final class StudyRunner {
                 java.util.Collections.shuffle(todo, new java.util.Random(options.shuffle()));
             }
             RunPerformer performer = new RunPerformer(scorer, layout);
-            LocalExecutor executor = new LocalExecutor(options.threads(), simulator, performer);
+            RunExecutor executor = engine.executor(options.threads(), simulator, performer);
             Map<String, Integer> indexByKey = new LinkedHashMap<>();
             for (RunDefinition r : todo) {
                 indexByKey.put(r.key(), r.index());

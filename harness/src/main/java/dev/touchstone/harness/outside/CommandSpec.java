@@ -15,12 +15,21 @@ import java.util.List;
  * @param output      the graph format the command writes
  * @param dir         the folder the learners file is in
  * @param source      the learners file, for messages
+ * @param onWorkers   whether the learners file says the command is installed on the workers of
+ *                    a cluster engine too (field {@code installed_on_workers}); not part of the
+ *                    fingerprint, since it does not change what the command computes
  */
 public record CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Path dir,
-                          String source) {
+                          String source, boolean onWorkers) {
 
     public CommandSpec {
         command = List.copyOf(command);
+    }
+
+    /** A command installed on this machine only. */
+    public CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Path dir,
+                       String source) {
+        this(description, command, output, dir, source, false);
     }
 
     /** The graph formats a command may write (design §10). */

@@ -31,6 +31,7 @@ import java.util.Set;
  *     returns: cpdag          # dag, cpdag, mag or pag
  *     accepts: [continuous]   # continuous, discrete, mixed
  *     missing_values: rejects # or own-method (the command handles empty cells itself)
+ *     installed_on_workers: false # true: the command is installed on a cluster's workers too
  *     parameters:
  *       - {name: alpha, type: real, default: 0.05, min: 0, max: 1, meaning: significance level}
  * </pre>
@@ -40,7 +41,7 @@ import java.util.Set;
 public final class LearnersFile {
 
     static final List<String> ENTRY_FIELDS = List.of("id", "summary", "publication", "command", "output", "returns",
-            "accepts", "missing_values", "parameters");
+            "accepts", "missing_values", "parameters", "installed_on_workers");
     static final List<String> PARAMETER_FIELDS = List.of("name", "type", "default", "min", "max", "choices", "meaning");
     private static final Set<String> RESERVED = Set.of("data", "output", "seed", "dir", "workdir");
 
@@ -50,6 +51,17 @@ public final class LearnersFile {
     /** Reads and checks a learners file. */
     public static List<CommandSpec> read(Path file) {
         return read(NodeReader.read(file), file.toAbsolutePath().getParent(), file.toString());
+    }
+
+    /**
+     * Reads and checks the text of a learners file (as shipped to a cluster's workers).
+     *
+     * @param source the file's name as given, for messages; a name ending in {@code .json} is read as JSON
+     * @param dir    the folder the file was in, for {@code {dir}}
+     */
+    public static List<CommandSpec> read(String source, String text, Path dir) {
+        boolean json = source.toLowerCase(Locale.ROOT).endsWith(".json");
+        return read(NodeReader.read(source, text, json), dir, source);
     }
 
     static List<CommandSpec> read(Node root, Path dir, String source) {
@@ -176,7 +188,15 @@ public final class LearnersFile {
                 throw StudyException.at(of, "unknown output format '" + w + "' (allowed: json, csv)");
             }
         }
-        return new CommandSpec(b.build(), command, format, dir, source);
+        boolean onWorkers = false;
+        Node ow = e.get("installed_on_workers");
+        if (ow != null && !ow.isNull()) {
+            if (!(ow.value() instanceof Boolean)) {
+                throw StudyException.at(ow, "expected true or false, found " + ow.describe());
+            }
+            onWorkers = (Boolean) ow.value();
+        }
+        return new CommandSpec(b.build(), command, format, dir, source, onWorkers);
     }
 
     private static ParameterSpec parameter(Node p) {
