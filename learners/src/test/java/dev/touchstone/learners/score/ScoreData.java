@@ -13,15 +13,15 @@ import java.util.Map;
 /**
  * Seeded data for the score tests, drawn with the generators module's models (its own
  * checks cover them): linear Gaussian equations with its default weights ±[0.5, 2] and
- * unit noise, and discrete networks with two categories.
+ * unit noise, and discrete networks with two categories. Public for the baseline tests.
  */
-final class ScoreData {
+public final class ScoreData {
 
     private ScoreData() {
     }
 
     /** n rows of the linear Gaussian model on a given DAG. */
-    static DataSet linearGaussian(Graph dag, int rows, long seed) {
+    public static DataSet linearGaussian(Graph dag, int rows, long seed) {
         return Simulation.builder()
                 .graph(GivenGraphFamily.of(dag), Map.of())
                 .model(ModelKinds.byId("linear-gaussian"), Map.of())
@@ -45,7 +45,7 @@ final class ScoreData {
     static DataSet binary(Graph dag, int rows, long seed) {
         return Simulation.builder()
                 .graph(GivenGraphFamily.of(dag), Map.of())
-                .model(ModelKinds.byId("discrete-network"), Map.of("categories_low", 2, "categories_high", 2))
+                .model(ModelKinds.byId("discrete"), Map.of("categories_low", 2, "categories_high", 2))
                 .build().drawTruth(seed).sample(rows).data();
     }
 }
