@@ -126,8 +126,7 @@ class GesFiniteSampleTest {
      */
     private static Pdag naivePhase(BicScore bic, DataSet data, Pdag start, boolean forward) {
         int p = data.columns();
-        GesSearch search = new GesSearch(bic, KnowledgeIndex.of(Knowledge.none(), data.names()),
-                new CpdagCompletion(data.names(), Knowledge.none()), -1, RunContext.unlimited(1));
+        GesSearch search = ScoreTesting.gesSearch(bic, data.names());
         Pdag graph = start;
         while (true) {
             search.startAt(graph);

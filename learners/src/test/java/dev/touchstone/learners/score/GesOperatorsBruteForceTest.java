@@ -4,8 +4,6 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.graph.algorithms.Cpdags;
-import dev.touchstone.core.knowledge.Knowledge;
-import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.testing.RandomDags;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -63,8 +61,7 @@ class GesOperatorsBruteForceTest {
             Graph state = RandomDags.erdosRenyi(p, 1.5 + (seed % 4) * 0.5, 900 + seed);
             Pdag current = Pdag.of(Cpdags.of(state));
             List<boolean[][]> members = classMembers(current);
-            GesSearch search = new GesSearch(bic, KnowledgeIndex.of(Knowledge.none(), names),
-                    new CpdagCompletion(names, Knowledge.none()), -1, RunContext.unlimited(1));
+            GesSearch search = ScoreTesting.gesSearch(bic, names);
             search.startAt(current);
             for (int x0 = 0; x0 < p; x0++) {
                 for (int y0 = 0; y0 < p; y0++) {
