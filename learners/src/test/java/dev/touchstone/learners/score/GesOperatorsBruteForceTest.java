@@ -23,7 +23,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * which the parents of Y among its undirected neighbours are exactly NA_{Y,X} ∪ T, and
  * Delete(X, Y, H) as removing X → Y from a DAG G of the class in which they are exactly
  * (NA_{Y,X} \ H) plus X when X — Y; the operator is valid when such a G exists (and, for
- * Insert, G + X → Y is acyclic). The brute force lists every DAG of the class (every
+ * Insert, G + X → Y is acyclic) — the definitions as we recall them (from memory), matching
+ * the score-change formulas of theorems 15 and 17. The brute force lists every DAG of the class (every
  * orientation of the undirected edges that is acyclic and keeps the CPDAG's v-structures,
  * the definition of a consistent extension, Dor and Tarsi 1992) and derives the valid
  * operators, the class each one reaches (the CPDAG of G ± the edge, Chickering 1995) and
