@@ -55,6 +55,10 @@ public final class ScoreCache implements LocalScore {
     public double localScore(int node, int[] parents) {
         int[] sorted = parents.clone();
         Arrays.sort(sorted);
+        if (!score.worthCaching(sorted.length)) {
+            context.countScores(1);
+            return score.localScore(node, sorted);
+        }
         Key key = new Key(node, sorted);
         Double v = memo.get(key);
         if (v != null) {
