@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Scaling of GES with p (linear Gaussian data, Erdős–Rényi DAGs of mean degree 2).
-# Usage: scripts/scaling/score.sh [threads] [rows] [p ...]
+# Usage: [PENALTY=c] scripts/scaling/score.sh [threads] [rows] [p ...]
+# PENALTY is the BIC penalty multiplier (default 1, the classical BIC).
 # Builds the benchmarks jar if it is missing; prints CSV (see GesScaling for the columns).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
@@ -15,4 +16,4 @@ jar=benchmarks/target/benchmarks.jar
 if [ ! -f "$jar" ]; then
   mvn -B -q -Pbench package -DskipTests
 fi
-exec java -Xmx4g -cp "$jar" dev.touchstone.benchmarks.score.GesScaling "$threads" "$rows" "${sizes[@]}"
+exec java -Xmx4g -Dpenalty="${PENALTY:-1}" -cp "$jar" dev.touchstone.benchmarks.score.GesScaling "$threads" "$rows" "${sizes[@]}"

@@ -1,10 +1,13 @@
 package dev.touchstone.benchmarks.score;
 
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.graph.algorithms.DagExtension;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.score.BicScore;
 import dev.touchstone.learners.score.GesLearner;
 
 import java.util.Locale;
@@ -15,8 +18,13 @@ import java.util.Map;
  * data (Erdős–Rényi, mean degree 2, n rows) for each p given and prints one line per p with
  * the wall time, the CPU time of the calling thread (robust to a loaded machine when
  * threads = 1), the time of the covariance (the irreducible part of the input work), the
- * number of local-score evaluations and the moves. Usage:
- * {@code GesScaling threads rows p1 p2 ...}.
+ * number of local-score evaluations, the moves, the edge counts of estimate and truth, and
+ * the BIC (with the run's penalty) of a DAG in the estimated class and of the
+ * true DAG, so that over-fitting can be told from a search stuck below the truth. Usage:
+ * {@code GesScaling threads rows p1 p2 ...}; the system property {@code penalty} sets the BIC
+ * penalty multiplier (default 1). The CPU time of the whole process is printed too: on a
+ * shared, loaded machine that time divided by the threads used is a floor for the wall time
+ * the run would need on idle cores.
  */
 public final class GesScaling {
 
@@ -27,13 +35,18 @@ public final class GesScaling {
         int threads = Integer.parseInt(args[0]);
         int rows = Integer.parseInt(args[1]);
         GesLearner ges = new GesLearner();
-        ParameterValues values = ParameterValues.resolve("ges", ges.description().parameters(), Map.of());
-        System.out.println("p,rows,threads,seconds,main_thread_cpu_seconds,covariance_seconds,score_evaluations,forward_moves,backward_moves,edges,true_edges");
+        double penalty = Double.parseDouble(System.getProperty("penalty", "1"));
+        ParameterValues values = ParameterValues.resolve("ges", ges.description().parameters(),
+                Map.of("penalty", penalty));
+        java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
+        com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
+                java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        System.out.println("p,rows,threads,penalty,seconds,process_cpu_seconds,main_thread_cpu_seconds,covariance_seconds,score_evaluations,forward_moves,backward_moves,edges,true_edges,estimate_bic,true_bic");
         for (int a = 2; a < args.length; a++) {
             int p = Integer.parseInt(args[a]);
             LinearGaussianFixture f = LinearGaussianFixture.of(p, 2.0, rows, 1000 + p);
-            java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
             long c0 = mx.getCurrentThreadCpuTime();
+            long pc0 = os.getProcessCpuTime();
             long t0 = System.nanoTime();
             f.data.covariance();
             long t1 = System.nanoTime();
@@ -41,9 +54,21 @@ public final class GesScaling {
             Estimate e = ges.learn(LearnerInput.of(f.data), Knowledge.none(), values, ctx);
             long t2 = System.nanoTime();
             long c2 = mx.getCurrentThreadCpuTime();
-            System.out.println(String.format(Locale.ROOT, "%d,%d,%d,%.3f,%.3f,%.3f,%d,%.0f,%.0f,%d,%d", p, rows, threads,
-                    (t2 - t0) / 1e9, (c2 - c0) / 1e9, (t1 - t0) / 1e9, ctx.scores(), e.extras().get("forward-moves"),
-                    e.extras().get("backward-moves"), e.graph().edgeCount(), f.dag.edgeCount()));
+            long pc2 = os.getProcessCpuTime();
+            BicScore bic = BicScore.of(f.data.covariance(), penalty);
+            System.out.println(String.format(Locale.ROOT, "%d,%d,%d,%.2f,%.3f,%.3f,%.3f,%.3f,%d,%.0f,%.0f,%d,%d,%.1f,%.1f", p,
+                    rows, threads, penalty, (t2 - t0) / 1e9, (pc2 - pc0) / 1e9, (c2 - c0) / 1e9, (t1 - t0) / 1e9, ctx.scores(),
+                    e.extras().get("forward-moves"), e.extras().get("backward-moves"), e.graph().edgeCount(),
+                    f.dag.edgeCount(), dagScore(bic, DagExtension.of(e.graph())), dagScore(bic, f.dag)));
         }
+    }
+
+    /** The decomposable BIC of a DAG: the sum of its nodes' local scores given their parents. */
+    private static double dagScore(BicScore bic, Graph dag) {
+        double s = 0;
+        for (int v = 0; v < dag.size(); v++) {
+            s += bic.localScore(v, dag.parents(v));
+        }
+        return s;
     }
 }

@@ -1,16 +1,12 @@
 package dev.touchstone.learners.baseline;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
-import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterValues;
 
@@ -23,15 +19,8 @@ import dev.touchstone.core.param.ParameterValues;
  */
 public final class EmptyGraphLearner implements Learner {
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder("empty")
-            .summary("returns the graph with no edges: the floor any learner must beat")
-            .publication("common practice")
-            .family(LearnerFamily.BASELINE)
-            .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
-            .returns(GraphClass.CPDAG)
-            .missingValues(MissingValues.OWN_METHOD)
-            .oracle(OracleUse.INDEPENDENCE)
-            .assumption("none: it ignores the data")
+    private static final LearnerDescription DESCRIPTION = DataFreeBaseline.describe("empty",
+            "returns the graph with no edges: the floor any learner must beat", "common practice", GraphClass.CPDAG)
             .build();
 
     @Override

@@ -1,6 +1,5 @@
 package dev.touchstone.learners.baseline;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
@@ -8,10 +7,7 @@ import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
-import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
@@ -25,15 +21,10 @@ import org.apache.commons.rng.UniformRandomProvider;
  */
 public final class RandomDagLearner implements Learner {
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder("random-dag")
-            .summary("returns a random DAG of a given expected density: the chance level of a comparison")
-            .publication("common practice (Erdős and Rényi 1959 random graphs, oriented along a random order)")
-            .family(LearnerFamily.BASELINE)
-            .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
-            .returns(GraphClass.DAG)
-            .missingValues(MissingValues.OWN_METHOD)
-            .oracle(OracleUse.INDEPENDENCE)
-            .assumption("none: it ignores the data")
+    private static final LearnerDescription DESCRIPTION = DataFreeBaseline.describe("random-dag",
+                    "returns a random DAG of a given expected density: the chance level of a comparison",
+                    "common practice (Erdős and Rényi 1959 random graphs, oriented along a random order)",
+                    GraphClass.DAG)
             .parameter(ParameterSpec.real("mean_degree", 2.0, 0.0, 1000.0,
                     "expected number of edges at each variable; set it to the truth's to match its density"))
             .build();

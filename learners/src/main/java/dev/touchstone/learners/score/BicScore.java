@@ -106,6 +106,15 @@ public final class BicScore implements LocalScore {
         return logLikelihood - penaltyPerParameter * (parents.length + 2);
     }
 
+    /**
+     * Up to 2 parents a BIC term costs less than a lookup in a large memo (about 30–80 ns
+     * against 45–100 ns, LocalScoreBenchmark; docs/dev/score.md), so those are not cached.
+     */
+    @Override
+    public boolean worthCaching(int parentCount) {
+        return parentCount > 2;
+    }
+
     /** Σ_YY − Σ_YP Σ_PP⁻¹ Σ_PY, the residual variance of Y given P under the covariance (divisor as given). */
     double residualVariance(int y, int[] parents) {
         int k = parents.length;

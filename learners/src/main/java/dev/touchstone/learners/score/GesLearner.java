@@ -1,19 +1,13 @@
 package dev.touchstone.learners.score;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
-import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 
 import java.util.List;
@@ -33,25 +27,14 @@ public final class GesLearner implements Learner {
     private static final LearnerDescription DESCRIPTION = describe();
 
     private static LearnerDescription describe() {
-        LearnerDescription.Builder b = LearnerDescription.builder(ID)
-                .summary("greedy equivalence search: forward insertions then backward deletions over Markov"
-                        + " equivalence classes, maximising a decomposable score")
-                .publication("Chickering (2002), Optimal structure identification with greedy search,"
-                        + " Journal of Machine Learning Research 3")
-                .family(LearnerFamily.SCORE)
-                .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
-                .returns(GraphClass.CPDAG)
-                .missingValues(MissingValues.LIST_WISE)
-                .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
-                .assumption("acyclic causal structure")
-                .assumption("no hidden confounders")
-                .assumption("the score's model: linear Gaussian (bic), multinomial (bdeu) or conditional Gaussian (cg-bic)")
+        return ScoreSettings.describe(ID,
+                        "greedy equivalence search: forward insertions then backward deletions over Markov"
+                                + " equivalence classes, maximising a decomposable score",
+                        "Chickering (2002), Optimal structure identification with greedy search,"
+                                + " Journal of Machine Learning Research 3",
+                        GraphClass.CPDAG)
                 .assumption("a consistent score and faithfulness for the large-sample guarantee")
-                .oracle(OracleUse.COVARIANCE);
-        for (ParameterSpec s : ScoreSettings.specs()) {
-            b.parameter(s);
-        }
-        return b.build();
+                .build();
     }
 
     @Override

@@ -1,18 +1,13 @@
 package dev.touchstone.learners.score;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerException;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
-import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
@@ -38,25 +33,14 @@ public final class HillClimbLearner implements Learner {
     private static final LearnerDescription DESCRIPTION = describe();
 
     private static LearnerDescription describe() {
-        LearnerDescription.Builder b = LearnerDescription.builder(ID)
-                .summary("greedy search over DAGs with edge additions, removals and reversals, a tabu list and"
-                        + " seeded random restarts, maximising a decomposable score")
-                .publication("common practice; moves and score updates as in Heckerman, Geiger and Chickering (1995),"
-                        + " Machine Learning 20; tabu search after Glover (1989)")
-                .family(LearnerFamily.SCORE)
-                .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
-                .returns(GraphClass.DAG)
-                .missingValues(MissingValues.LIST_WISE)
-                .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
-                .assumption("acyclic causal structure")
-                .assumption("no hidden confounders")
-                .assumption("the score's model: linear Gaussian (bic), multinomial (bdeu) or conditional Gaussian (cg-bic)")
+        LearnerDescription.Builder b = ScoreSettings.describe(ID,
+                        "greedy search over DAGs with edge additions, removals and reversals, a tabu list and"
+                                + " seeded random restarts, maximising a decomposable score",
+                        "common practice; moves and score updates as in Heckerman, Geiger and Chickering (1995),"
+                                + " Machine Learning 20; tabu search after Glover (1989)",
+                        GraphClass.DAG)
                 .assumption("the DAG returned is one member of its equivalence class; its orientations within"
-                        + " the class are not identified by the data")
-                .oracle(OracleUse.COVARIANCE);
-        for (ParameterSpec s : ScoreSettings.specs()) {
-            b.parameter(s);
-        }
+                        + " the class are not identified by the data");
         b.parameter(ParameterSpec.integer(TABU_LENGTH, 10, 0, 10000,
                 "number of recent moves whose inverse may not be taken (0: no tabu list)"));
         b.parameter(ParameterSpec.integer(PATIENCE, 10, 0, 100000,

@@ -30,6 +30,14 @@ public interface LocalScore {
      */
     double localScore(int node, int[] parents);
 
+    /**
+     * Whether a memo ({@link ScoreCache}) pays off for parent sets of this size: false when
+     * evaluating is about as cheap as a hash lookup. Default true.
+     */
+    default boolean worthCaching(int parentCount) {
+        return true;
+    }
+
     /** A short description for messages and estimates, e.g. {@code bic(penalty=1.0)}. */
     String describe();
 }

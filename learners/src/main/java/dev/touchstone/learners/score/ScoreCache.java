@@ -10,7 +10,9 @@ import java.util.concurrent.ConcurrentHashMap;
  * A thread-safe memo in front of a {@link LocalScore}, keyed by the node and its parent
  * set (order of the parents does not matter), that counts every evaluation of the
  * underlying score in {@link RunContext#countScores(long)} (cache hits are not counted:
- * the counter measures the scoring work done).
+ * the counter measures the scoring work done). Parent sets for which the score says a memo
+ * does not pay ({@link LocalScore#worthCaching(int)}; small BIC terms) are evaluated
+ * directly and counted every time.
  *
  * <p>The memo is bounded: when it holds more than {@code capacity} entries it is emptied
  * and starts again, which keeps memory flat on large searches at the price of some
@@ -55,6 +57,10 @@ public final class ScoreCache implements LocalScore {
     public double localScore(int node, int[] parents) {
         int[] sorted = parents.clone();
         Arrays.sort(sorted);
+        if (!score.worthCaching(sorted.length)) {
+            context.countScores(1);
+            return score.localScore(node, sorted);
+        }
         Key key = new Key(node, sorted);
         Double v = memo.get(key);
         if (v != null) {

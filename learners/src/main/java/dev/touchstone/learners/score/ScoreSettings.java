@@ -2,6 +2,12 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.learner.KnowledgeUse;
+import dev.touchstone.core.learner.LearnerDescription;
+import dev.touchstone.core.learner.LearnerFamily;
+import dev.touchstone.core.learner.MissingValues;
+import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.param.ParameterSpec;
@@ -10,8 +16,9 @@ import dev.touchstone.core.param.ParameterValues;
 import java.util.List;
 
 /**
- * The parameters every score-based learner shares (which local score, its penalty or prior
- * strength, the parent-set bound) and the one place that turns them and the input into a
+ * What every score-based learner shares: its declaration (data kinds, knowledge, oracle,
+ * assumptions of the scores) and parameters (which local score, its penalty or prior
+ * strength, the parent-set bound), and the one place that turns them and the input into a
  * {@link LocalScore}.
  */
 final class ScoreSettings {
@@ -27,6 +34,29 @@ final class ScoreSettings {
     static final String CG_BIC = "cg-bic";
 
     private ScoreSettings() {
+    }
+
+    /**
+     * A description builder with the declaration every score-based learner shares filled in,
+     * the score parameters included; the caller adds its own assumptions and parameters.
+     */
+    static LearnerDescription.Builder describe(String id, String summary, String publication, GraphClass returns) {
+        LearnerDescription.Builder b = LearnerDescription.builder(id)
+                .summary(summary)
+                .publication(publication)
+                .family(LearnerFamily.SCORE)
+                .accepts(DataKind.CONTINUOUS, DataKind.DISCRETE, DataKind.MIXED)
+                .returns(returns)
+                .missingValues(MissingValues.LIST_WISE)
+                .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
+                .assumption("acyclic causal structure")
+                .assumption("no hidden confounders")
+                .assumption("the score's model: linear Gaussian (bic), multinomial (bdeu) or conditional Gaussian (cg-bic)")
+                .oracle(OracleUse.COVARIANCE);
+        for (ParameterSpec s : specs()) {
+            b.parameter(s);
+        }
+        return b;
     }
 
     static List<ParameterSpec> specs() {

@@ -9,7 +9,7 @@ import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.testing.RandomDags;
-import dev.touchstone.core.testing.SmallData;
+import dev.touchstone.learners.score.ScoreData;
 import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -72,7 +72,7 @@ class SortingBaselinesTest {
         int graphs = 12;
         for (int s = 0; s < graphs; s++) {
             Graph truth = RandomDags.erdosRenyi(10, 2.0, 100 + s);
-            DataSet raw = SmallData.linearGaussian(truth, 3000, 200 + s);
+            DataSet raw = ScoreData.linearGaussian(truth, 3000, 200 + s);
             rawRight += recallAndOrientation(truth, learn(new VarianceSortLearner(), raw))[1];
             stdRight += recallAndOrientation(truth, learn(new VarianceSortLearner(), standardised(raw)))[1];
         }
@@ -86,7 +86,7 @@ class SortingBaselinesTest {
     @DisplayName("The sparse regression finds the true parents of a sink once the order is right (common practice)")
     void regressionStepRecoversParents() {
         Graph truth = RandomDags.erdosRenyi(8, 2.0, 5);
-        DataSet raw = SmallData.linearGaussian(truth, 20000, 6);
+        DataSet raw = ScoreData.linearGaussian(truth, 20000, 6);
         double[] rec = recallAndOrientation(truth, learn(new VarianceSortLearner(), raw));
         assertTrue(rec[0] > 0.85, "adjacency recall " + rec[0]);
     }
@@ -95,7 +95,7 @@ class SortingBaselinesTest {
     @DisplayName("R² of each variable on all others equals Commons Math OLS R² (Commons Math 3.6.1)")
     void r2MatchesOrdinaryLeastSquares() {
         Graph truth = RandomDags.erdosRenyi(6, 2.0, 9);
-        DataSet d = SmallData.linearGaussian(truth, 2000, 10);
+        DataSet d = ScoreData.linearGaussian(truth, 2000, 10);
         double[] r2 = R2SortLearner.r2(d.covariance());
         int p = d.columns();
         for (int j = 0; j < p; j++) {
@@ -120,7 +120,7 @@ class SortingBaselinesTest {
     @DisplayName("The random DAG baseline has the asked-for expected density (binomial mean, 5 standard errors)")
     void randomDagDensity() {
         java.util.List<String> names = RandomDags.names(40);
-        DataSet d = SmallData.linearGaussian(Graph.empty(names), 10, 1);
+        DataSet d = ScoreData.linearGaussian(Graph.empty(names), 10, 1);
         Learner l = new RandomDagLearner();
         long edges = 0;
         int runs = 50;

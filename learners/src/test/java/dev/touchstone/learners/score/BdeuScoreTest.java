@@ -5,7 +5,6 @@ import dev.touchstone.core.data.Variable;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.core.testing.RandomDags;
-import dev.touchstone.core.testing.SmallData;
 import org.apache.commons.math3.special.Gamma;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.junit.jupiter.api.DisplayName;
@@ -52,7 +51,7 @@ class BdeuScoreTest {
             if (twin == null) {
                 continue;
             }
-            DataSet data = SmallData.binary(RandomDags.erdosRenyi(7, 3.0, seed + 500), 200, seed);
+            DataSet data = ScoreData.binary(RandomDags.erdosRenyi(7, 3.0, seed + 500), 200, seed);
             BdeuScore bdeu = BdeuScore.of(data, 1.0 + seed % 5);
             double a = ScoreTesting.dagScore(bdeu, dag);
             double b = ScoreTesting.dagScore(bdeu, twin);

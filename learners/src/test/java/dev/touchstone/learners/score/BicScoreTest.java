@@ -5,7 +5,6 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.core.testing.RandomDags;
-import dev.touchstone.core.testing.SmallData;
 import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.junit.jupiter.api.DisplayName;
@@ -25,7 +24,7 @@ class BicScoreTest {
     @DisplayName("log-likelihood part equals the Gaussian log-likelihood of Commons Math OLS residuals (Commons Math 3.6.1)")
     void matchesOrdinaryLeastSquares() {
         Graph dag = RandomDags.erdosRenyi(8, 3.0, 21);
-        DataSet data = SmallData.linearGaussian(dag, 300, 4);
+        DataSet data = ScoreData.linearGaussian(dag, 300, 4);
         int n = data.rows();
         BicScore bic = BicScore.of(data.covariance(), 1.0);
         UniformRandomProvider rng = Seeds.random(99);
@@ -61,7 +60,7 @@ class BicScoreTest {
     @Test
     @DisplayName("empty parent set: the log-likelihood of the MLE variance (common practice)")
     void emptyParentSet() {
-        DataSet data = SmallData.linearGaussian(RandomDags.erdosRenyi(3, 1.0, 2), 50, 3);
+        DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(3, 1.0, 2), 50, 3);
         double[] y = data.continuous(1);
         double mean = 0;
         for (double v : y) {
@@ -79,7 +78,7 @@ class BicScoreTest {
     @Test
     @DisplayName("the penalty multiplier scales the (|P| + 2)/2 · ln n term only (Schwarz 1978)")
     void penaltyMultiplier() {
-        DataSet data = SmallData.linearGaussian(RandomDags.erdosRenyi(5, 2.0, 8), 200, 1);
+        DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(5, 2.0, 8), 200, 1);
         int[] pa = {0, 2};
         double s1 = BicScore.of(data.covariance(), 1.0).localScore(4, pa);
         double s3 = BicScore.of(data.covariance(), 3.0).localScore(4, pa);
@@ -96,7 +95,7 @@ class BicScoreTest {
             if (twin == null) {
                 continue;
             }
-            DataSet data = SmallData.linearGaussian(RandomDags.erdosRenyi(7, 3.0, seed + 1000), 150, seed);
+            DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(7, 3.0, seed + 1000), 150, seed);
             BicScore bic = BicScore.of(data.covariance(), 1.5);
             double a = ScoreTesting.dagScore(bic, dag);
             double b = ScoreTesting.dagScore(bic, twin);
@@ -109,7 +108,7 @@ class BicScoreTest {
     @Test
     @DisplayName("with the population covariance the score stands for 1e9 rows (documented oracle sample size)")
     void oracleSampleSize() {
-        DataSet data = SmallData.linearGaussian(RandomDags.erdosRenyi(4, 2.0, 8), 100, 1);
+        DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(4, 2.0, 8), 100, 1);
         CovarianceMatrix c = data.covariance();
         CovarianceMatrix population = CovarianceMatrix.of(c.names(), c.toArray(), CovarianceMatrix.INFINITE_SAMPLE);
         BicScore bic = BicScore.of(population, 1.0);
@@ -122,7 +121,7 @@ class BicScoreTest {
     @Test
     @DisplayName("collinear parents: a duplicated parent adds nothing to the fit (common practice: pseudo-inverse)")
     void collinearParents() {
-        DataSet base = SmallData.linearGaussian(RandomDags.erdosRenyi(3, 2.0, 5), 100, 2);
+        DataSet base = ScoreData.linearGaussian(RandomDags.erdosRenyi(3, 2.0, 5), 100, 2);
         DataSet data = DataSet.builder(100).continuous("A", base.continuous(0)).continuous("B", base.continuous(1))
                 .continuous("A2", base.continuous(0).clone()).build();
         BicScore bic = BicScore.of(data.covariance(), 1.0);
@@ -134,7 +133,7 @@ class BicScoreTest {
     @Test
     @DisplayName("bad input gets one clear message")
     void rejectsBadInput() {
-        DataSet data = SmallData.linearGaussian(RandomDags.erdosRenyi(3, 1.0, 2), 50, 3);
+        DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(3, 1.0, 2), 50, 3);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> BicScore.of(data.covariance(), 0));
         assertTrue(e.getMessage().contains("penalty multiplier"), e.getMessage());
         DataSet constant = DataSet.builder(3).continuous("flat", new double[] {1, 1, 1}).build();

@@ -4,7 +4,6 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.data.Variable;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.core.testing.RandomDags;
-import dev.touchstone.core.testing.SmallData;
 import org.apache.commons.math3.stat.descriptive.moment.Variance;
 import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
 import org.apache.commons.rng.UniformRandomProvider;
@@ -44,7 +43,7 @@ class ConditionalGaussianScoreTest {
     @Test
     @DisplayName("all continuous: equals the linear Gaussian BIC (Andrews, Ramsey and Cooper 2018, §3)")
     void continuousCaseIsBic() {
-        DataSet data = SmallData.linearGaussian(RandomDags.erdosRenyi(6, 2.5, 3), 250, 7);
+        DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(6, 2.5, 3), 250, 7);
         ConditionalGaussianScore cg = ConditionalGaussianScore.of(data, 1.0);
         BicScore bic = BicScore.of(data.covariance(), 1.0);
         int[][] sets = {{}, {0}, {1, 2}, {0, 3, 4}, {0, 1, 2, 4}};

@@ -13,7 +13,6 @@ import dev.touchstone.core.learner.Oracle;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.testing.RandomDags;
-import dev.touchstone.core.testing.SmallData;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -69,7 +68,7 @@ class GesLearnerTest {
     @DisplayName("results do not depend on the thread count (design: determinism)")
     void threadCountDoesNotMatter() {
         Graph dag = RandomDags.erdosRenyi(40, 2.0, 5);
-        DataSet data = SmallData.linearGaussian(dag, 500, 3);
+        DataSet data = ScoreData.linearGaussian(dag, 500, 3);
         Graph one = run(LearnerInput.of(data), Knowledge.none(), Map.of(), 1).graph();
         Graph two = run(LearnerInput.of(data), Knowledge.none(), Map.of(), 2).graph();
         assertEquals(one, two);
@@ -79,7 +78,7 @@ class GesLearnerTest {
     @DisplayName("from 5,000 rows of the sprinkler network GES finds its CPDAG (Chickering 2002, large-sample behaviour)")
     void sprinklerFromData() {
         Graph truth = HillClimbLearnerTest.sprinkler();
-        DataSet data = SmallData.linearGaussian(truth, 5000, 17);
+        DataSet data = ScoreData.linearGaussian(truth, 5000, 17);
         assertEquals(cpdagOfTruth(truth), run(LearnerInput.of(data), Knowledge.none(), Map.of(), 1).graph());
     }
 
@@ -87,7 +86,7 @@ class GesLearnerTest {
     @DisplayName("discrete data with BDeu: finds the equivalence class of a small binary chain-and-collider model")
     void discreteWithBdeu() {
         Graph truth = HillClimbLearnerTest.sprinkler();
-        DataSet data = SmallData.binary(truth, 20000, 4);
+        DataSet data = ScoreData.binary(truth, 20000, 4);
         Graph got = run(LearnerInput.of(data), Knowledge.none(), Map.of("score", "bdeu", "ess", 10.0), 1).graph();
         assertEquals(cpdagOfTruth(truth), got);
     }

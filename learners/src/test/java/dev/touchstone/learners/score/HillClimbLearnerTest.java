@@ -10,7 +10,6 @@ import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.testing.RandomDags;
-import dev.touchstone.core.testing.SmallData;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -44,7 +43,7 @@ class HillClimbLearnerTest {
     @DisplayName("recovers the sprinkler DAG's equivalence class from 5,000 rows (Verma and Pearl 1990 criterion)")
     void recoversSprinkler() {
         Graph truth = sprinkler();
-        DataSet data = SmallData.linearGaussian(truth, 5000, 17);
+        DataSet data = ScoreData.linearGaussian(truth, 5000, 17);
         Graph got = learn(data, Knowledge.none(), Map.of(), 1).graph();
         assertTrue(Equivalence.markovEquivalent(truth, got), "got " + got);
     }
@@ -55,7 +54,7 @@ class HillClimbLearnerTest {
         int ok = 0;
         for (long seed = 1; seed <= 10; seed++) {
             Graph truth = RandomDags.erdosRenyi(7, 2.0, seed);
-            DataSet data = SmallData.linearGaussian(truth, 5000, seed + 100);
+            DataSet data = ScoreData.linearGaussian(truth, 5000, seed + 100);
             Graph got = learn(data, Knowledge.none(), Map.of("restarts", 5), seed).graph();
             if (Equivalence.markovEquivalent(truth, got)) {
                 ok++;
@@ -68,7 +67,7 @@ class HillClimbLearnerTest {
     @DisplayName("honours tiers, required and forbidden edges")
     void honoursKnowledge() {
         Graph truth = sprinkler();
-        DataSet data = SmallData.linearGaussian(truth, 3000, 5);
+        DataSet data = ScoreData.linearGaussian(truth, 3000, 5);
         Knowledge k = Knowledge.builder()
                 .tier(List.of("slippery", "wet"))
                 .tier(List.of("season", "sprinkler", "rain"))
@@ -89,7 +88,7 @@ class HillClimbLearnerTest {
     @Test
     @DisplayName("the same seed gives the same DAG; the result is acyclic")
     void deterministic() {
-        DataSet data = SmallData.linearGaussian(RandomDags.erdosRenyi(9, 3.0, 4), 300, 8);
+        DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(9, 3.0, 4), 300, 8);
         Graph a = learn(data, Knowledge.none(), Map.of("restarts", 4), 11).graph();
         Graph b = learn(data, Knowledge.none(), Map.of("restarts", 4), 11).graph();
         assertTrue(a.equals(b));

@@ -2,11 +2,21 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.MutableGraph;
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.RunContext;
+
+import java.util.List;
 
 /** Helpers shared by the score tests. */
 final class ScoreTesting {
 
     private ScoreTesting() {
+    }
+
+    /** A GES search over this score with no knowledge and no parent bound, for enumerating operators. */
+    static GesSearch gesSearch(LocalScore score, List<String> names) {
+        return new GesSearch(score, KnowledgeIndex.of(Knowledge.none(), names),
+                new CpdagCompletion(names, Knowledge.none()), -1, RunContext.unlimited(1));
     }
 
     /** The decomposable score of a DAG: the sum of the local scores of its nodes given their parents. */
