@@ -110,7 +110,7 @@ public final class FciLearner implements Learner {
         PagKnowledge.apply(g, ki);
         rules.orientColliders(g, info);
         context.checkDeadline();
-        rules.close(g, info);
+        rules.close(g, info, context::checkDeadline);
         Map<String, Double> extras = new LinkedHashMap<>();
         extras.put("possible_dsep_removed", (double) removed);
         extras.put("circle_marks", (double) circleMarks(g));

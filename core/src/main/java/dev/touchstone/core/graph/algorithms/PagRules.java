@@ -91,21 +91,30 @@ public final class PagRules {
      * calls a collider, puts arrowheads at {@code b}. Returns the number of marks changed.
      */
     public int orientColliders(MutableGraph g, SeparationInfo info) {
-        Run run = new Run(g, info);
+        Run run = new Run(g, info, () -> { });
         run.r0();
         return run.changes;
     }
 
     /** Applies the rules to closure; returns the number of marks changed. */
     public int close(MutableGraph g, SeparationInfo info) {
-        Run run = new Run(g, info);
+        return close(g, info, () -> { });
+    }
+
+    /**
+     * As {@link #close(MutableGraph, SeparationInfo)}, calling {@code checkpoint} before every
+     * pass over the rules, so that a caller with a deadline can stop a long closure (by
+     * throwing from it; the graph is then left part-way oriented).
+     */
+    public int close(MutableGraph g, SeparationInfo info, Runnable checkpoint) {
+        Run run = new Run(g, info, checkpoint);
         run.close();
         return run.changes;
     }
 
     /** R0, then the rules to closure; returns the number of marks changed. */
     public int orient(MutableGraph g, SeparationInfo info) {
-        Run run = new Run(g, info);
+        Run run = new Run(g, info, () -> { });
         run.r0();
         run.close();
         return run.changes;
@@ -114,6 +123,7 @@ public final class PagRules {
     private final class Run {
         private final MutableGraph g;
         private final SeparationInfo info;
+        private final Runnable checkpoint;
         private final int n;
         // The rules never change adjacencies, so a sorted snapshot of them, with a mirror of
         // the marks kept in step with g, makes adjacency and mark look-ups O(log degree).
@@ -130,9 +140,10 @@ public final class PagRules {
         private final int[] path;
         private int changes;
 
-        Run(MutableGraph g, SeparationInfo info) {
+        Run(MutableGraph g, SeparationInfo info, Runnable checkpoint) {
             this.g = g;
             this.info = info;
+            this.checkpoint = checkpoint;
             this.n = g.size();
             this.nbr = new int[n][];
             this.marks = new Mark[n][];
@@ -227,6 +238,7 @@ public final class PagRules {
             while (true) {
                 boolean changed;
                 do {
+                    checkpoint.run();
                     changed = false;
                     if (rules.contains(Rule.R1)) {
                         changed |= r1();

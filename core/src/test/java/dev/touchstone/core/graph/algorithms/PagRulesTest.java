@@ -51,6 +51,23 @@ class PagRulesTest {
     }
 
     @Test
+    @DisplayName("close calls its checkpoint before every pass, and a checkpoint that throws stops it (deadline seam)")
+    void checkpoint() {
+        int[] calls = {0};
+        MutableGraph g = graph(NAMES, "A o-> B; B o-o C").toMutable();
+        PagRules.only(PagRules.Rule.R1).close(g, UNUSED, () -> calls[0]++);
+        // R1 fires in the first pass; a second pass confirms nothing changes any more.
+        assertEquals(2, calls[0]);
+        assertEquals(graph(NAMES, "A o-> B; B --> C"), g.freeze());
+        MutableGraph h = graph(NAMES, "A o-> B; B o-o C").toMutable();
+        org.junit.jupiter.api.Assertions.assertThrows(IllegalStateException.class,
+                () -> PagRules.complete().close(h, UNUSED, () -> {
+                    throw new IllegalStateException("deadline");
+                }));
+        assertEquals(graph(NAMES, "A o-> B; B o-o C"), h.freeze(), "stopped before the first pass");
+    }
+
+    @Test
     @DisplayName("R1: A *→ B o−* C, A and C not adjacent ⇒ B → C (Zhang 2008)")
     void r1() {
         check(PagRules.Rule.R1, "A o-> B; B o-o C", "A o-> B; B --> C");
