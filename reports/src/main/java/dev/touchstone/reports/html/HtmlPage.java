@@ -26,7 +26,7 @@ public final class HtmlPage {
             ".table-wrap td:first-child,.table-wrap th:first-child{position:sticky;left:0;background:#fff}",
             ".table-wrap th:first-child{background:#f0f0f0}",
             "th,td{border:1px solid #ccc;padding:3px 7px;text-align:left;vertical-align:top}",
-            "th{background:#f0f0f0}td.best{font-weight:bold;background:#eef5ee}",
+            "th{background:#f0f0f0}td.best{font-weight:bold;background:#eef5ee}td.num{white-space:nowrap}",
             ".note{color:#555;font-size:.9em}",
             ".warning{border-left:4px solid #c60;background:#fff6ec;padding:6px 10px;margin:.8em 0}",
             ".caution{border:1px solid #999;background:#f7f7f7;padding:6px 14px;margin:1em 0}",
@@ -102,12 +102,23 @@ public final class HtmlPage {
         for (List<Cell> row : t.rows()) {
             body.append("<tr>");
             for (Cell c : row) {
-                body.append(c.best() ? "<td class=\"best\">" : "<td>").append(escape(c.text())).append("</td>");
+                String classes = (c.best() ? "best " : "") + (numeric(c.text()) ? "num" : "");
+                body.append(classes.isEmpty() ? "<td>" : "<td class=\"" + classes.trim() + "\">")
+                        .append(escape(c.text())).append("</td>");
             }
             body.append("</tr>\n");
         }
         body.append("</tbody></table></div>\n");
         return this;
+    }
+
+    /** A value, or a value with its interval, which reads badly when wrapped inside a narrow column. */
+    private static boolean numeric(String text) {
+        if (text.isEmpty()) {
+            return false;
+        }
+        char c = text.charAt(0);
+        return Character.isDigit(c) || c == '-' || c == '\u2212' || text.startsWith("n/a");
     }
 
     /** An inline SVG picture (as produced by this module's charts) with a caption. */

@@ -35,6 +35,16 @@ class HtmlPageTest {
     }
 
     @Test
+    void valuesWithIntervalsDoNotWrapButWordsDo() {
+        String html = new HtmlPage("t").table(Table.builder(List.of("learner", "shd", "ratio"))
+                .row(List.of(Cell.of("pc"), new Cell("3.67 [2.67, 4.70]", true), Cell.of("n/a"))).build()).render();
+        Document d = Jsoup.parse(html);
+        assertEquals(List.of("3.67 [2.67, 4.70]", "n/a"), d.select("td.num").eachText());
+        assertEquals("3.67 [2.67, 4.70]", d.select("td.best.num").text());
+        assertTrue(html.contains("td.num{white-space:nowrap}"));
+    }
+
+    @Test
     void onlySvgMayBeInsertedAsMarkup() {
         assertThrows(IllegalArgumentException.class, () -> new HtmlPage("t").figure("<script>x</script>", "bad"));
     }
