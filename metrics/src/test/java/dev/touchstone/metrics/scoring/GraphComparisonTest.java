@@ -150,7 +150,7 @@ class GraphComparisonTest {
         for (String name : List.of("shd", "adjacency_precision", "adjacency_recall", "adjacency_f1", "orientation_precision",
                 "orientation_recall", "orientation_f1", "directed_tpr", "directed_fdr", "directed_fpr", "sid", "sid_lower",
                 "sid_upper", "exact", "edges", "seconds", "cpu_seconds", "allocated_mb", "tests", "scores",
-                "tail_precision", "tail_recall")) {
+                "tail_precision", "tail_recall", "adjacency_fpr", "wrong_arrowheads", "undirected_edges")) {
             Metric m = MetricRegistry.get(name);
             assertEquals(name, m.name());
             assertTrue(!m.appliesTo().isEmpty() && !m.definition().isBlank());
