@@ -102,6 +102,19 @@ final class BundledStudy {
     }
 
     /**
+     * Asserts a significant paired difference {@code configuration − reference} in the given direction
+     * (sign +1: larger, −1: smaller) at the 5% level, and returns the comparison row.
+     */
+    ComparisonRow assertShift(List<RunResult> runs, String configuration, String reference, String metric, int sign) {
+        ComparisonRow c = compare(runs, configuration, reference, metric);
+        if (!(Math.signum(c.meanDifference()) == sign && c.pValue() != null && c.pValue() < 0.05)) {
+            throw new AssertionError(metric + ", " + configuration + " − " + reference + ": expected a significant "
+                    + (sign > 0 ? "increase" : "decrease") + ", got " + c);
+        }
+        return c;
+    }
+
+    /**
      * Pairs one configuration with itself across a coordinate of the grid (sample size, standardisation,
      * missingness mechanism …): each run is relabelled {@code configuration@axis=value} and the axis is dropped
      * from its setting. Valid as a paired design because settings that differ only in such an axis share the
