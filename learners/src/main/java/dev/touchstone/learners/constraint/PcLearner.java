@@ -42,7 +42,9 @@ import java.util.Map;
  *   drawn from the run's seed and this number, and the estimate is mapped back to the given
  *   order. A grid of order seeds shows how much a variant depends on variable order, the
  *   question of Colombo and Maathuis (2014, §2); with the oracle the order cannot matter to the
- *   result (the correctness theorem), so it is ignored there.</li>
+ *   result (the correctness theorem), so it is ignored there. The shuffled view shares the
+ *   data's columns but not its cached statistics, so a run with an order seed computes its
+ *   own covariance (O(n·p²) more).</li>
  * </ul>
  * After the colliders, Meek's rules (Meek 1995, "Causal inference and causal explanation
  * with background knowledge", UAI) orient what follows, honouring the knowledge.
