@@ -1,5 +1,7 @@
 package dev.touchstone.learners.constraint;
 
+import dev.touchstone.core.graph.Edge;
+import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.graph.algorithms.MeekRules;
@@ -11,9 +13,13 @@ import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
 
+import org.apache.commons.rng.sampling.PermutationSampler;
+
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -26,7 +32,14 @@ import java.util.Map;
  *   <li>{@code colliders}: the sepset rule, the conservative rule (Ramsey, Zhang and Spirtes
  *   2006, UAI) or the majority rule (Colombo and Maathuis 2014);</li>
  *   <li>{@code conflicts}: how two colliders that disagree about one edge are resolved
- *   ({@link ConflictRule}).</li>
+ *   ({@link ConflictRule});</li>
+ *   <li>{@code order_seed}: when above 0, the search sees the data's columns in a random order
+ *   drawn from the run's seed and this number, and the estimate is mapped back to the given
+ *   order. A grid of order seeds shows how much a variant depends on variable order, the
+ *   question of Colombo and Maathuis (2014, §2); with the oracle the order cannot matter to the
+ *   result (the correctness theorem), so it is ignored there. The shuffled view shares the
+ *   data's columns but not its cached statistics, so a run with an order seed computes its
+ *   own covariance (O(n·p²) more).</li>
  * </ul>
  * After the colliders, Meek's rules (Meek 1995, "Causal inference and causal explanation
  * with background knowledge", UAI) orient what follows, honouring the knowledge.
@@ -45,6 +58,10 @@ public final class PcLearner implements Learner {
             ConflictRule.words(), "colliders disagreeing about an edge: keep-first (in variable order) or "
                     + "drop-both (the edge stays undirected; order-independent)");
 
+    static final ParameterSpec ORDER_SEED = ParameterSpec.integer("order_seed", 0, 0, 1_000_000,
+            "0: search the variables in the order given; above 0: in a random order drawn from the run's seed and "
+                    + "this number (to show order dependence; Colombo and Maathuis 2014)");
+
     private static final LearnerDescription DESCRIPTION = describe();
 
     private static LearnerDescription describe() {
@@ -57,7 +74,7 @@ public final class PcLearner implements Learner {
                 .assumption("causal Markov condition and faithfulness")
                 .assumption("no hidden common causes and no selection bias")
                 .assumption("the independence test fits the data (e.g. Gaussian for fisher-z)");
-        return ConstraintParameters.build(b, COLLIDERS, CONFLICTS);
+        return ConstraintParameters.build(b, COLLIDERS, CONFLICTS, ORDER_SEED);
     }
 
     @Override
@@ -67,6 +84,28 @@ public final class PcLearner implements Learner {
 
     @Override
     public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
+        DESCRIPTION.checkAccepts(input);
+        int orderSeed = parameters.getInt(ORDER_SEED.name());
+        if (orderSeed == 0 || input.isOracle()) {
+            return learnInOrder(input, knowledge, parameters, context);
+        }
+        int[] order = PermutationSampler.natural(input.variableNames().size());
+        PermutationSampler.shuffle(Seeds.random(Seeds.derive(context.seed(), "column-order", orderSeed)), order);
+        Estimate e = learnInOrder(LearnerInput.of(input.data().select(order)), knowledge, parameters, context);
+        return new Estimate(inOrder(e.graph(), input.variableNames()), e.graphClass(), e.extras());
+    }
+
+    /** The same graph with its variables listed in {@code names}' order. */
+    private static Graph inOrder(Graph g, List<String> names) {
+        MutableGraph m = Graph.builder(names);
+        for (Edge e : g.edges()) {
+            m.addEdge(names.indexOf(g.name(e.a())), names.indexOf(g.name(e.b())), e.atA(), e.atB());
+        }
+        return m.freeze();
+    }
+
+    private Estimate learnInOrder(LearnerInput input, Knowledge knowledge, ParameterValues parameters,
+                                  RunContext context) {
         SearchInputs in = SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context);
         KnowledgeIndex ki = in.knowledge();
         IndependenceTest test = in.test();

@@ -15,12 +15,12 @@ public final class MetricRegistry {
 
     private static final List<StructuralMetric> STRUCTURAL = List.of(
             StructuralHammingDistance.INSTANCE,
-            AdjacencyPrecision.INSTANCE, AdjacencyRecall.INSTANCE, AdjacencyF1.INSTANCE,
-            OrientationPrecision.INSTANCE, OrientationRecall.INSTANCE, OrientationF1.INSTANCE,
+            AdjacencyPrecision.INSTANCE, AdjacencyRecall.INSTANCE, AdjacencyF1.INSTANCE, AdjacencyFalsePositiveRate.INSTANCE,
+            OrientationPrecision.INSTANCE, OrientationRecall.INSTANCE, OrientationF1.INSTANCE, WrongArrowheads.INSTANCE,
             TailPrecision.INSTANCE, TailRecall.INSTANCE,
             DirectedTruePositiveRate.INSTANCE, DirectedFalseDiscoveryRate.INSTANCE, DirectedFalsePositiveRate.INSTANCE,
             Sid.INSTANCE, SidLower.INSTANCE, SidUpper.INSTANCE,
-            ExactMatch.INSTANCE, EdgeCount.INSTANCE);
+            ExactMatch.INSTANCE, EdgeCount.INSTANCE, UndirectedEdges.INSTANCE);
 
     private static final List<Measurement> MEASUREMENTS = List.of(
             Measurement.SECONDS, Measurement.CPU_SECONDS, Measurement.ALLOCATED_MB, Measurement.TESTS, Measurement.SCORES);

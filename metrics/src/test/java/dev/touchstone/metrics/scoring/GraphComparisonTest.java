@@ -1,5 +1,6 @@
 package dev.touchstone.metrics.scoring;
 
+import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.Mark;
@@ -88,6 +89,46 @@ class GraphComparisonTest {
     }
 
     @Test
+    @DisplayName("adjacency_fpr, wrong_arrowheads and undirected_edges equal a pair-by-pair count from their definitions (Kalisch and Bühlmann 2007; Ramsey, Zhang and Spirtes 2006), seeded random DAG truths and PDAG estimates")
+    void newCountsMatchDefinitions() {
+        for (int seed = 0; seed < 200; seed++) {
+            int n = 2 + seed % 12;
+            Graph truth = RandomDags.erdosRenyi(n, 2, seed);
+            // an estimate with directed and undirected edges (a PDAG): a random DAG with every third edge undirected
+            MutableGraph m = Graph.builder(truth.names());
+            List<Edge> edges = RandomDags.erdosRenyi(n, 2.5, 50_000 + seed).edges();
+            for (int k = 0; k < edges.size(); k++) {
+                Edge x = edges.get(k);
+                m.addEdge(x.a(), x.b(), k % 3 == 0 ? Mark.TAIL : x.atA(), k % 3 == 0 ? Mark.TAIL : x.atB());
+            }
+            Graph est = m.freeze();
+            long extra = 0;
+            long nonAdjacent = 0;
+            long wrong = 0;
+            long undirected = 0;
+            for (int a = 0; a < n; a++) {
+                for (int b = 0; b < n; b++) {
+                    if (a == b) {
+                        continue;
+                    }
+                    if (est.markAt(b, a) == Mark.ARROW && !(truth.adjacent(a, b) && truth.markAt(b, a) == Mark.ARROW)) {
+                        wrong++;
+                    }
+                    if (a < b) {
+                        nonAdjacent += truth.adjacent(a, b) ? 0 : 1;
+                        extra += est.adjacent(a, b) && !truth.adjacent(a, b) ? 1 : 0;
+                        undirected += est.hasUndirected(a, b) ? 1 : 0;
+                    }
+                }
+            }
+            Map<String, Double> v = Scorer.scoreAll(Truth.of(truth, GraphClass.DAG), est, GraphClass.CPDAG);
+            assertEquals(nonAdjacent == 0 ? null : (double) extra / nonAdjacent, v.get("adjacency_fpr"), "seed " + seed);
+            assertEquals((double) wrong, v.get("wrong_arrowheads"), "seed " + seed);
+            assertEquals((double) undirected, v.get("undirected_edges"), "seed " + seed);
+        }
+    }
+
+    @Test
     @DisplayName("SHD is a metric on graphs of one class: zero iff equal, symmetric, triangle inequality (seeded random DAGs and mixed graphs)")
     void shdIsAMetric() {
         for (int seed = 0; seed < 300; seed++) {
@@ -150,7 +191,7 @@ class GraphComparisonTest {
         for (String name : List.of("shd", "adjacency_precision", "adjacency_recall", "adjacency_f1", "orientation_precision",
                 "orientation_recall", "orientation_f1", "directed_tpr", "directed_fdr", "directed_fpr", "sid", "sid_lower",
                 "sid_upper", "exact", "edges", "seconds", "cpu_seconds", "allocated_mb", "tests", "scores",
-                "tail_precision", "tail_recall")) {
+                "tail_precision", "tail_recall", "adjacency_fpr", "wrong_arrowheads", "undirected_edges")) {
             Metric m = MetricRegistry.get(name);
             assertEquals(name, m.name());
             assertTrue(!m.appliesTo().isEmpty() && !m.definition().isBlank());

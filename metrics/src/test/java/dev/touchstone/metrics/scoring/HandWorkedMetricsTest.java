@@ -56,6 +56,12 @@ class HandWorkedMetricsTest {
         assertEquals(6.0, m.get("sid_upper"));
         assertEquals(0.0, m.get("exact"));
         assertEquals(3.0, m.get("edges"));
+        // Skeleton FPR (Kalisch and Bühlmann 2007): 6 pairs, 3 true, so 3 non-adjacent in the truth;
+        // of those the estimate joins {A,D} only: 1/3.
+        assertEquals(1.0 / 3, m.get("adjacency_fpr"), EPS);
+        // Wrong arrowheads: 3 estimated, 1 correct (B on {A,B}): 2. A DAG has no undirected edge.
+        assertEquals(2.0, m.get("wrong_arrowheads"));
+        assertEquals(0.0, m.get("undirected_edges"));
         // tails are scored for MAG and PAG estimates only
         assertNull(m.get("tail_precision"));
         assertNull(m.get("tail_recall"));
@@ -96,6 +102,12 @@ class HandWorkedMetricsTest {
         assertTrue(m.get("sid_lower") <= m.get("sid_upper"));
         assertEquals(0.0, m.get("exact"));
         assertEquals(6.0, m.get("edges"));
+        // Skeleton FPR: 10 pairs, 5 true, 5 non-adjacent; the estimate joins sprinkler—rain only: 1/5.
+        assertEquals(1.0 / 5, m.get("adjacency_fpr"), EPS);
+        // Wrong arrowheads: rain (season→rain; truth undirected) and wet on {wet,slippery} (truth's arrow at slippery): 2.
+        assertEquals(2.0, m.get("wrong_arrowheads"));
+        // Undirected: season—sprinkler, rain—wet, sprinkler—rain: 3.
+        assertEquals(3.0, m.get("undirected_edges"));
     }
 
     @Test
@@ -145,6 +157,11 @@ class HandWorkedMetricsTest {
         assertNull(m.get("sid_lower"));
         assertEquals(0.0, m.get("exact"));
         assertEquals(4.0, m.get("edges"));
+        // Skeleton FPR: 6 pairs, 3 true, 3 non-adjacent; {A,D} added: 1/3. Wrong arrowheads: C on {B,C}, D on {A,D}: 2.
+        assertEquals(1.0 / 3, m.get("adjacency_fpr"), EPS);
+        assertEquals(2.0, m.get("wrong_arrowheads"));
+        // circles are not tails: undirected_edges is declared for DAG and CPDAG estimates only
+        assertNull(m.get("undirected_edges"));
     }
 
     @Test
@@ -176,5 +193,7 @@ class HandWorkedMetricsTest {
         // a truth joining every pair leaves no negatives: FPR undefined
         Graph full = Graph.builder(v).addDirected(0, 1).addDirected(1, 2).addDirected(0, 2).freeze();
         assertNull(Scorer.scoreAll(Truth.of(full, GraphClass.DAG), empty, GraphClass.DAG).get("directed_fpr"));
+        assertNull(Scorer.scoreAll(Truth.of(full, GraphClass.DAG), empty, GraphClass.DAG).get("adjacency_fpr"));
+        assertEquals(0.0, m.get("adjacency_fpr"));  // nothing added over 3 non-edges
     }
 }
