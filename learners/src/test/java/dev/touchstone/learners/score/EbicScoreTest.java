@@ -2,7 +2,6 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.data.CovarianceMatrix;
 import dev.touchstone.core.data.DataSet;
-import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.core.testing.RandomDags;
 import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
@@ -30,7 +29,7 @@ class EbicScoreTest {
             EbicScore ebic = EbicScore.of(bic, 0.0);
             for (int trial = 0; trial < 50; trial++) {
                 int y = rng.nextInt(9);
-                int[] parents = randomParents(rng, 9, y, rng.nextInt(6));
+                int[] parents = ScoreTesting.randomParents(rng, 9, y, rng.nextInt(6));
                 assertEquals(bic.localScore(y, parents), ebic.localScore(y, parents), 0.0);
             }
         }
@@ -66,21 +65,8 @@ class EbicScoreTest {
     @DisplayName("Markov-equivalent DAGs (a covered edge reversed) get equal EBIC: the extra term depends only on"
             + " the parent-set size, and a covered-edge reversal keeps the sizes (Chickering 1995)")
     void scoreEquivalence() {
-        int checked = 0;
-        for (long seed = 1; seed <= 60; seed++) {
-            Graph dag = RandomDags.erdosRenyi(7, 2.5, seed);
-            Graph twin = ScoreTesting.reverseACoveredEdge(dag);
-            if (twin == null) {
-                continue;
-            }
-            DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(7, 3.0, seed + 1000), 150, seed);
-            EbicScore ebic = EbicScore.of(BicScore.of(data.covariance(), 1.0), 1.0);
-            double a = ScoreTesting.dagScore(ebic, dag);
-            double b = ScoreTesting.dagScore(ebic, twin);
-            assertEquals(a, b, 1e-9 * Math.abs(a), "seed " + seed + ": " + dag + " vs " + twin);
-            checked++;
-        }
-        assertTrue(checked >= 30, "too few DAGs with a covered edge: " + checked);
+        ScoreTesting.assertCoveredReversalsScoreEqual(seed -> EbicScore.of(BicScore.of(ScoreData.linearGaussian(
+                RandomDags.erdosRenyi(7, 3.0, seed + 1000), 150, seed).covariance(), 1.0), 1.0));
     }
 
     @Test
@@ -92,24 +78,5 @@ class EbicScoreTest {
             assertTrue(e.getMessage().contains("gamma"), e.getMessage());
         }
         assertTrue(EbicScore.of(bic, 0.5).describe().startsWith("ebic(gamma=0.5"));
-    }
-
-    private static int[] randomParents(UniformRandomProvider rng, int p, int y, int k) {
-        int[] pool = new int[p - 1];
-        int m = 0;
-        for (int v = 0; v < p; v++) {
-            if (v != y) {
-                pool[m++] = v;
-            }
-        }
-        int[] parents = new int[k];
-        for (int i = 0; i < k; i++) {
-            int j = i + rng.nextInt(m - i);
-            int t = pool[i];
-            pool[i] = pool[j];
-            pool[j] = t;
-            parents[i] = pool[i];
-        }
-        return parents;
     }
 }

@@ -58,14 +58,7 @@ class GesExtendedBicTest {
         for (long seed = 1; seed <= 3; seed++) {
             DataSet data = ScoreData.linearGaussian(p, 0.0, ROWS, 40 + seed);
             EbicScore ebic = EbicScore.of(BicScore.of(data.covariance(), 1.0), GAMMA);
-            int here = 0;
-            for (int i = 0; i < p; i++) {
-                for (int j = i + 1; j < p; j++) {
-                    if (ebic.localScore(j, new int[] {i}) > ebic.localScore(j, new int[0])) {
-                        here++;
-                    }
-                }
-            }
+            int here = ScoreTesting.singleEdgeImprovements(ebic, p);
             int edges = learn(GES, LearnerInput.of(data), "ebic").edgeCount();
             int bicEdges = learn(GES, LearnerInput.of(data), "bic").edgeCount();
             String line = "seed " + seed + ": " + here + " improving pairs, " + edges + " edges (bic " + bicEdges + ")";
