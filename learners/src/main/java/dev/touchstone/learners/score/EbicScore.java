@@ -25,8 +25,8 @@ import java.util.List;
  * binomial form's marginal cost ln((p − 1 − k)/(k + 1)) falls with k and turns negative once
  * k &gt; (p − 2)/2, rewarding large parent sets on small graphs; and (b) since
  * C(p − 1, k) ≤ (p − 1)^k the linear form is never weaker, so the false-edge side of
- * Chen and Chen's consistency argument holds a fortiori. For sparse graphs (k small) the two
- * differ by ln k! per node, at most ln 2 for two parents.
+ * Chen and Chen's consistency argument holds a fortiori (our reasoning). For sparse graphs
+ * (k small) the two differ by about ln k! per node, about ln 2 for two parents.
  *
  * <p><b>Properties.</b> The extra term depends only on k (and the fixed p), so the score stays
  * decomposable and score-equivalent: a covered-edge reversal keeps the multiset of parent-set

@@ -6,6 +6,7 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.algorithms.Cpdags;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Learner;
+import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.Oracle;
 import dev.touchstone.core.learner.RunContext;
@@ -21,6 +22,7 @@ import java.util.List;
 import java.util.Map;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -143,5 +145,14 @@ class GesExtendedBicTest {
         }
         assertTrue(learnedEdges <= 1.2 * trueEdges && learnedEdges >= 0.8 * trueEdges,
                 learnedEdges + " learned vs " + trueEdges + " true");
+    }
+
+    @Test
+    @DisplayName("ebic on discrete data is refused with one clear line naming the learner and the score")
+    void refusesDiscreteData() {
+        DataSet binary = ScoreData.binary(RandomDags.erdosRenyi(4, 1.5, 3), 100, 3);
+        LearnerException e = assertThrows(LearnerException.class,
+                () -> learn(GES, LearnerInput.of(binary), "ebic"));
+        assertTrue(e.getMessage().contains("learner ges: score ebic needs continuous data"), e.getMessage());
     }
 }
