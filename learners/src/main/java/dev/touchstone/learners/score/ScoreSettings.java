@@ -25,11 +25,13 @@ final class ScoreSettings {
 
     static final String SCORE = "score";
     static final String PENALTY = "penalty";
+    static final String GAMMA = "gamma";
     static final String ESS = "ess";
     static final String MAX_PARENTS = "max_parents";
 
     static final String AUTO = "auto";
     static final String BIC = "bic";
+    static final String EBIC = "ebic";
     static final String BDEU = "bdeu";
     static final String CG_BIC = "cg-bic";
 
@@ -51,7 +53,7 @@ final class ScoreSettings {
                 .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
                 .assumption("acyclic causal structure")
                 .assumption("no hidden confounders")
-                .assumption("the score's model: linear Gaussian (bic), multinomial (bdeu) or conditional Gaussian (cg-bic)")
+                .assumption("the score's model: linear Gaussian (bic, ebic), multinomial (bdeu) or conditional Gaussian (cg-bic)")
                 .oracle(OracleUse.COVARIANCE);
         for (ParameterSpec s : specs()) {
             b.parameter(s);
@@ -61,10 +63,12 @@ final class ScoreSettings {
 
     static List<ParameterSpec> specs() {
         return List.of(
-                ParameterSpec.choice(SCORE, AUTO, List.of(AUTO, BIC, BDEU, CG_BIC),
-                        "local score: bic (continuous), bdeu (discrete), cg-bic (mixed); auto picks by data kind"),
+                ParameterSpec.choice(SCORE, AUTO, List.of(AUTO, BIC, EBIC, BDEU, CG_BIC),
+                        "local score: bic or ebic (continuous), bdeu (discrete), cg-bic (mixed); auto picks by data kind"),
                 ParameterSpec.real(PENALTY, 1.0, 0.01, 100.0,
-                        "multiplier of the BIC penalty (bic and cg-bic; 1 is the classical BIC)"),
+                        "multiplier of the BIC penalty (bic, ebic and cg-bic; 1 is the classical BIC)"),
+                ParameterSpec.real(GAMMA, 0.5, 0.0, 1.0,
+                        "extended BIC's edge-prior weight: each parent costs 2·gamma·ln(p−1) more (ebic; 0 is the BIC)"),
                 ParameterSpec.real(ESS, 1.0, 0.001, 10000.0, "equivalent sample size of the BDeu prior (bdeu)"),
                 ParameterSpec.integer(MAX_PARENTS, -1, -1, 1000,
                         "largest parent set a move may create; -1 for no limit"));
@@ -80,11 +84,11 @@ final class ScoreSettings {
         double penalty = values.getDouble(PENALTY);
         try {
             if (input.isOracle()) {
-                if (!name.equals(AUTO) && !name.equals(BIC)) {
+                if (!name.equals(AUTO) && !name.equals(BIC) && !name.equals(EBIC)) {
                     throw new LearnerException("learner " + learnerId + ": score " + name
-                            + " cannot use the oracle (it gives a covariance; use bic)");
+                            + " cannot use the oracle (it gives a covariance; use bic or ebic)");
                 }
-                return BicScore.of(input.oracle().populationCovariance(), penalty);
+                return gaussian(name, BicScore.of(input.oracle().populationCovariance(), penalty), values);
             }
             DataSet data = input.data();
             DataKind kind = data.kind();
@@ -95,6 +99,9 @@ final class ScoreSettings {
                 case BIC:
                     requireKind(learnerId, name, kind, DataKind.CONTINUOUS);
                     return BicScore.of(data.covariance(), penalty);
+                case EBIC:
+                    requireKind(learnerId, name, kind, DataKind.CONTINUOUS);
+                    return gaussian(name, BicScore.of(data.covariance(), penalty), values);
                 case BDEU:
                     requireKind(learnerId, name, kind, DataKind.DISCRETE);
                     return BdeuScore.of(data, values.getDouble(ESS));
@@ -104,6 +111,11 @@ final class ScoreSettings {
         } catch (IllegalArgumentException e) {
             throw new LearnerException("learner " + learnerId + ": " + e.getMessage(), e);
         }
+    }
+
+    /** The BIC, or the extended BIC over it when the parameters ask for ebic. */
+    private static LocalScore gaussian(String name, BicScore bic, ParameterValues values) {
+        return name.equals(EBIC) ? EbicScore.of(bic, values.getDouble(GAMMA)) : bic;
     }
 
     /** The parent-set bound, −1 for none. */

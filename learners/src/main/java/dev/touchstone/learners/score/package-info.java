@@ -1,2 +1,2 @@
-/** Score-based learners (GES, hill climbing) and the decomposable local scores they search with (BIC, BDeu, conditional Gaussian BIC). */
+/** Score-based learners (GES, hill climbing) and the decomposable local scores they search with (BIC, extended BIC, BDeu, conditional Gaussian BIC). */
 package dev.touchstone.learners.score;

@@ -51,14 +51,7 @@ class GesFiniteSampleTest {
         for (long seed = 1; seed <= 3; seed++) {
             DataSet data = ScoreData.linearGaussian(p, 0.0, ROWS, 40 + seed);
             BicScore bic = BicScore.of(data.covariance(), 1.0);
-            int here = 0;
-            for (int i = 0; i < p; i++) {
-                for (int j = i + 1; j < p; j++) {
-                    if (bic.localScore(j, new int[] {i}) > bic.localScore(j, new int[0])) {
-                        here++;
-                    }
-                }
-            }
+            int here = ScoreTesting.singleEdgeImprovements(bic, p);
             int edges = learn(data).edgeCount();
             // GES's local optimum holds every single-edge improvement, and only few edges more
             assertTrue(edges >= here - 2 && edges <= here + 3 + here / 5,
