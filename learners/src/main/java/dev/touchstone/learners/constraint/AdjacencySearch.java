@@ -11,9 +11,14 @@ import java.util.Arrays;
  * ℓ-subset of the neighbours of x (or of y), recording that set (Spirtes, Glymour and
  * Scheines 2000, §5.4.2; in the order-independent form of Colombo and Maathuis 2014).
  *
- * <p>Background knowledge: a pair whose both directions are forbidden is removed before
- * any test (it is never tested and gets no separating set); a pair with a required edge
- * is never tested, so it is never removed.
+ * <p>Background knowledge: a pair with a required edge is never tested, so it is never
+ * removed. A pair whose both directions are forbidden is tested like any other, so that
+ * its separating set is known whenever the tests find one, and removed afterwards only if
+ * the tests left it adjacent ({@link #run()} does that at the end; FCI calls
+ * {@link #searchKeepingForbidden()} and {@link #removeForbidden} after its Possible-D-Sep
+ * step). Removing such a pair untested would leave it without a separating set, and its
+ * unshielded triples would have to be guessed non-colliders, from which Meek's R1 (or FCI's
+ * R1) can orient edges wrongly; see {@code PcKnowledgeTest} for a case.
  *
  * <p>Cost: at most O(p² · C(d, ℓ)) tests at level ℓ for maximum degree d; for sparse
  * truths the number of tests grows roughly as p² at level 0 and as p · d^(ℓ+1) after.
@@ -40,18 +45,16 @@ final class AdjacencySearch {
         this.context = context;
     }
 
+    /** The skeleton with every pair forbidden both ways removed (those the tests kept have no separating set). */
     Skeleton run() {
-        int p = test.variables();
-        Skeleton s = new Skeleton(p);
-        if (!knowledge.isEmpty()) {
-            for (int a = 0; a < p; a++) {
-                for (int b = a + 1; b < p; b++) {
-                    if (knowledge.adjacencyForbidden(a, b)) {
-                        s.remove(a, b, null);
-                    }
-                }
-            }
-        }
+        Skeleton s = searchKeepingForbidden();
+        removeForbidden(s, knowledge);
+        return s;
+    }
+
+    /** The skeleton the tests leave, forbidden pairs included; the caller removes them with {@link #removeForbidden}. */
+    Skeleton searchKeepingForbidden() {
+        Skeleton s = new Skeleton(test.variables());
         context.checkDeadline();
         if (variant == SkeletonVariant.ORIGINAL) {
             original(s);
@@ -193,6 +196,20 @@ final class AdjacencySearch {
                 }
             }
             return m;
+        }
+    }
+
+    /** Removes the pairs the knowledge forbids both ways that are still adjacent (they get no separating set). */
+    static void removeForbidden(Skeleton s, KnowledgeIndex knowledge) {
+        if (knowledge.isEmpty()) {
+            return;
+        }
+        for (int a = 0; a < s.size(); a++) {
+            for (int b : s.neighbours(a)) {
+                if (a < b && knowledge.adjacencyForbidden(a, b)) {
+                    s.remove(a, b, null);
+                }
+            }
         }
     }
 
