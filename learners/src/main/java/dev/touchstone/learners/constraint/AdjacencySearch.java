@@ -179,6 +179,13 @@ final class AdjacencySearch {
             context.checkDeadline();
             int x = xs[i];
             int y = ys[i];
+            if (level == 0) {
+                // The empty set is the only candidate on either side: one test, and no candidate list
+                // (copying x's ~p neighbours for each of the ~p²/2 pairs made level 0 cost O(p³)). Asking
+                // (y, x | ∅) as well would repeat the same question of a symmetric test.
+                found[i] = search.find(x, y, cand, 0, 0);
+                return;
+            }
             int m = fill(nb[x], y);
             int[] sep = search.find(x, y, cand, m, level);
             if (sep == null) {

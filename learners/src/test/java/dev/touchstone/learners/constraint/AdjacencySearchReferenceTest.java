@@ -1,0 +1,154 @@
+package dev.touchstone.learners.constraint;
+
+import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.testing.RandomDags;
+import dev.touchstone.core.testing.SmallData;
+import dev.touchstone.learners.independence.FisherZTest;
+import dev.touchstone.learners.independence.IndependenceTest;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.TreeSet;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The optimised order-independent search (reused scratch arrays, one ∅ test per pair at level 0,
+ * parallel levels) against a direct transcription of the order-independent skeleton of Colombo and
+ * Maathuis (2014, Algorithm 4.1, "PC-stable", from memory) written with boxed lists: same adjacencies
+ * and the same recorded separating set for every pair, on finite-sample Fisher z data where the
+ * tests make mistakes (so that many sets are found late and both sides of a pair matter).
+ */
+class AdjacencySearchReferenceTest {
+
+    @Test
+    @DisplayName("order-independent search = PC-stable written out (Colombo and Maathuis 2014, Alg. 4.1): adjacencies and sepsets, 12 data sets, depth limits, 1 and 2 threads")
+    void optimisedSearchEqualsTheDirectOne() {
+        int removedWithSets = 0;
+        int setsOfTwoOrMore = 0;
+        for (int rep = 0; rep < 12; rep++) {
+            Graph dag = rep % 2 == 0 ? RandomDags.erdosRenyi(30, 3.0, 310 + rep) : RandomDags.scaleFree(30, 2, 310 + rep);
+            DataSet data = SmallData.linearGaussian(dag, 120 + 40 * rep, 330 + rep);
+            FisherZTest test = FisherZTest.of(data, 0.05);
+            int maxDepth = rep % 3 == 2 ? 1 : -1;
+            Skeleton fast = new AdjacencySearch(test, new KnowledgeIndex(Knowledge.none(), data.names()),
+                    SkeletonVariant.ORDER_INDEPENDENT, maxDepth, RunContext.of(1, null, 1 + rep % 2)).run();
+            List<Integer>[][] reference = reference(test, maxDepth);
+            for (int a = 0; a < 30; a++) {
+                for (int b = a + 1; b < 30; b++) {
+                    List<Integer> sep = reference[a][b];
+                    assertEquals(sep == null, fast.adjacent(a, b), "data " + rep + " pair " + a + "," + b);
+                    if (sep != null) {
+                        int[] expected = sep.stream().mapToInt(Integer::intValue).toArray();
+                        assertArrayEquals(expected, fast.sepset(a, b), "data " + rep + " pair " + a + "," + b);
+                        removedWithSets++;
+                        setsOfTwoOrMore += expected.length >= 2 ? 1 : 0;
+                    }
+                }
+            }
+        }
+        assertTrue(removedWithSets > 2000 && setsOfTwoOrMore > 20, removedWithSets + " removed, " + setsOfTwoOrMore);
+    }
+
+    /**
+     * PC-stable as written: per level, freeze every adjacency set; for each adjacent pair x &lt; y try the
+     * ℓ-subsets of a(x) \ {y}, then of a(y) \ {x}, in lexicographic order; record the first that separates;
+     * remove the level's separated pairs at its end; stop when no pair has ℓ candidates on either side.
+     * Returns the separating set of every removed pair (null: adjacent).
+     */
+    @SuppressWarnings("unchecked")
+    private static List<Integer>[][] reference(IndependenceTest test, int maxDepth) {
+        int p = test.variables();
+        List<TreeSet<Integer>> adj = new ArrayList<>();
+        for (int v = 0; v < p; v++) {
+            TreeSet<Integer> all = new TreeSet<>();
+            for (int w = 0; w < p; w++) {
+                if (w != v) {
+                    all.add(w);
+                }
+            }
+            adj.add(all);
+        }
+        List<Integer>[][] sep = new List[p][p];
+        for (int level = 0; maxDepth < 0 || level <= maxDepth; level++) {
+            List<TreeSet<Integer>> frozen = new ArrayList<>();
+            for (TreeSet<Integer> a : adj) {
+                frozen.add(new TreeSet<>(a));
+            }
+            boolean any = false;
+            for (int x = 0; x < p; x++) {
+                for (int y : frozen.get(x)) {
+                    if (y < x) {
+                        continue;
+                    }
+                    List<Integer> cx = new ArrayList<>(frozen.get(x));
+                    cx.remove(Integer.valueOf(y));
+                    List<Integer> cy = new ArrayList<>(frozen.get(y));
+                    cy.remove(Integer.valueOf(x));
+                    if (cx.size() < level && cy.size() < level) {
+                        continue;
+                    }
+                    any = true;
+                    List<Integer> found = firstSeparating(test, x, y, cx, level);
+                    if (found == null) {
+                        found = firstSeparating(test, y, x, cy, level);
+                    }
+                    if (found != null) {
+                        sep[x][y] = found;
+                        adj.get(x).remove(y);
+                        adj.get(y).remove(x);
+                    }
+                }
+            }
+            if (!any) {
+                break;
+            }
+        }
+        return sep;
+    }
+
+    private static List<Integer> firstSeparating(IndependenceTest test, int x, int y, List<Integer> cand, int size) {
+        for (List<Integer> s : subsets(cand, size)) {
+            if (test.independent(x, y, s.stream().mapToInt(Integer::intValue).toArray())) {
+                return s;
+            }
+        }
+        return null;
+    }
+
+    /** All subsets of the given size, in lexicographic order of positions (recursive, boxed). */
+    private static List<List<Integer>> subsets(List<Integer> cand, int size) {
+        List<List<Integer>> out = new ArrayList<>();
+        extend(cand, size, 0, new ArrayList<>(), out);
+        return out;
+    }
+
+    private static void extend(List<Integer> cand, int size, int from, List<Integer> prefix, List<List<Integer>> out) {
+        if (prefix.size() == size) {
+            out.add(new ArrayList<>(prefix));
+            return;
+        }
+        for (int i = from; i < cand.size(); i++) {
+            prefix.add(cand.get(i));
+            extend(cand, size, i + 1, prefix, out);
+            prefix.remove(prefix.size() - 1);
+        }
+    }
+
+    @Test
+    @DisplayName("the subsets helper of the reference enumerates C(5, 2) = 10 sets in lexicographic order (common practice)")
+    void referenceSubsets() {
+        List<List<Integer>> s = subsets(Arrays.asList(4, 7, 8, 9, 11), 2);
+        assertEquals(10, s.size());
+        assertEquals(List.of(4, 7), s.get(0));
+        assertEquals(List.of(9, 11), s.get(9));
+    }
+}
