@@ -22,10 +22,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The optimised order-independent search (reused scratch arrays, one ∅ test per pair at level 0,
- * parallel levels) against a direct transcription of the order-independent skeleton of Colombo and
+ * parallel levels) and the collider rules' set enumeration (duplicates across the two sides skipped
+ * without a set of seen sets) against a direct transcription of the order-independent skeleton of Colombo and
  * Maathuis (2014, Algorithm 4.1, "PC-stable", from memory) written with boxed lists: same adjacencies
  * and the same recorded separating set for every pair, on finite-sample Fisher z data where the
- * tests make mistakes (so that many sets are found late and both sides of a pair matter).
+ * tests make mistakes (so that many sets are found late and both sides of a pair matter), and
+ * the conservative and majority rules against their definitions with boxed sets.
  */
 class AdjacencySearchReferenceTest {
 
@@ -56,6 +58,89 @@ class AdjacencySearchReferenceTest {
             }
         }
         assertTrue(removedWithSets > 2000 && setsOfTwoOrMore > 20, removedWithSets + " removed, " + setsOfTwoOrMore);
+    }
+
+    @Test
+    @DisplayName("conservative and majority rules = their definitions with every distinct separating set collected in a boxed set (Ramsey, Zhang and Spirtes 2006; Colombo and Maathuis 2014): colliders, ambiguous triples, tests")
+    void colliderRulesEqualTheDirectOnes() {
+        int ambiguousSeen = 0;
+        for (int rep = 0; rep < 6; rep++) {
+            Graph dag = RandomDags.erdosRenyi(25, 3.0, 360 + rep);
+            DataSet data = SmallData.linearGaussian(dag, 100 + 30 * rep, 370 + rep);
+            FisherZTest test = FisherZTest.of(data, 0.05);
+            KnowledgeIndex none = new KnowledgeIndex(Knowledge.none(), data.names());
+            Skeleton s = new AdjacencySearch(test, none, SkeletonVariant.ORDER_INDEPENDENT, -1,
+                    RunContext.of(1, null, 1)).run();
+            for (ColliderRule rule : List.of(ColliderRule.CONSERVATIVE, ColliderRule.MAJORITY)) {
+                RunContext ctx = RunContext.of(1, null, 1);
+                ColliderOrientation fast = new ColliderOrientation(s, test, none, rule, ConflictRule.KEEP_FIRST, -1, ctx);
+                fast.orient(data.names());
+                long[] expected = directColliderCounts(s, test, rule);
+                assertEquals(expected[0], fast.counts().colliders(), "data " + rep + " " + rule);
+                assertEquals(expected[1], fast.counts().ambiguous(), "data " + rep + " " + rule);
+                assertEquals(expected[2], ctx.tests(), "data " + rep + " " + rule);
+                ambiguousSeen += fast.counts().ambiguous();
+            }
+        }
+        assertTrue(ambiguousSeen > 0, "no ambiguous triple: the case the rules differ on never occurred");
+    }
+
+    /** {colliders, ambiguous triples, tests}: every distinct subset of adj(x)\{y} or adj(y)\{x} tested once per pair. */
+    private static long[] directColliderCounts(Skeleton s, IndependenceTest test, ColliderRule rule) {
+        int p = s.size();
+        long colliders = 0;
+        long ambiguous = 0;
+        java.util.Map<List<Integer>, List<List<Integer>>> cache = new java.util.HashMap<>();
+        long[] tests = new long[1];
+        for (int z = 0; z < p; z++) {
+            for (int x = 0; x < p; x++) {
+                for (int y = x + 1; y < p; y++) {
+                    if (!s.adjacent(x, z) || !s.adjacent(y, z) || s.adjacent(x, y)) {
+                        continue;
+                    }
+                    List<List<Integer>> sets = cache.computeIfAbsent(List.of(x, y), k -> separating(s, test, k.get(0), k.get(1), tests));
+                    Integer middle = z;
+                    long with = sets.stream().filter(set -> set.contains(middle)).count();
+                    Boolean collider;
+                    if (sets.isEmpty()) {
+                        collider = null;
+                    } else if (rule == ColliderRule.CONSERVATIVE) {
+                        collider = with == 0 ? Boolean.TRUE : with == sets.size() ? Boolean.FALSE : null;
+                    } else {
+                        collider = 2 * with < sets.size() ? Boolean.TRUE : 2 * with > sets.size() ? Boolean.FALSE : null;
+                    }
+                    if (collider == null) {
+                        ambiguous++;
+                    } else if (collider) {
+                        colliders++;
+                    }
+                }
+            }
+        }
+        return new long[] {colliders, ambiguous, tests[0]};
+    }
+
+    private static List<List<Integer>> separating(Skeleton s, IndependenceTest test, int x, int y, long[] tests) {
+        java.util.Set<List<Integer>> distinct = new java.util.LinkedHashSet<>();
+        for (int[] side : new int[][] {{x, y}, {y, x}}) {
+            List<Integer> cand = new ArrayList<>();
+            for (int v : s.neighbours(side[0])) {
+                if (v != side[1]) {
+                    cand.add(v);
+                }
+            }
+            for (int size = 0; size <= cand.size(); size++) {
+                distinct.addAll(subsets(cand, size));
+            }
+        }
+        List<List<Integer>> out = new ArrayList<>();
+        for (List<Integer> set : distinct) {
+            tests[0]++;
+            if (test.independent(x, y, set.stream().mapToInt(Integer::intValue).toArray())) {
+                out.add(set);
+            }
+        }
+        return out;
     }
 
     /**
