@@ -33,9 +33,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class PcKnowledgeTest {
 
     private static Graph learn(LearnerInput input, Knowledge k, String skeleton) {
-        PcLearner pc = new PcLearner();
-        return pc.learn(input, k, ParameterValues.resolve("pc", pc.description().parameters(),
-                Map.of("skeleton", skeleton, "alpha", 0.05)), RunContext.of(3, null, 2)).graph();
+        return learnWith(input, k, skeleton, "sepset");
     }
 
     @Test
@@ -164,6 +162,6 @@ class PcKnowledgeTest {
     private static Graph learnWith(LearnerInput input, Knowledge k, String skeleton, String colliders) {
         PcLearner pc = new PcLearner();
         return pc.learn(input, k, ParameterValues.resolve("pc", pc.description().parameters(),
-                Map.of("skeleton", skeleton, "colliders", colliders)), RunContext.of(3, null, 2)).graph();
+                Map.of("skeleton", skeleton, "colliders", colliders, "alpha", 0.05)), RunContext.of(3, null, 2)).graph();
     }
 }
