@@ -1,8 +1,8 @@
 #!/usr/bin/env bash
 # How order-independent PC (Fisher z, alpha = 0.01, mean degree 2, 2 threads) scales with
-# the number of variables p and the sample size n. For every setting it prints one line:
+# the number of variables p and the sample size n. For every setting it prints two lines:
 # the number of independence tests and edges of a run, and the median single-shot time of
-# the measured runs (covariance included). The machine's load is printed before and after,
+# the measured runs, for the whole run (covariance included) and for the covariance alone. The machine's load is printed before and after,
 # since a shared machine makes absolute times noisy; compare within one run of the script.
 #
 # Usage: scripts/scaling/constraint.sh [iterations]    (run from the repository root)
@@ -17,8 +17,10 @@ fi
 run() {
   # shellcheck disable=SC2086
   java ${JMH_JAVA_OPTS:-} -jar "$jar" -f 1 -wi 1 -i "$iterations" -bm ss -tu ms "$@" \
-      'constraint.PcBenchmark.orderIndependentPc' \
-    | awk '/^\[pc / { run = $0 } /p\(50\.0000\) =/ { printf "%-44s median %8.1f ms\n", run, $3 }'
+      'constraint.PcBenchmark' \
+    | awk '/^# Benchmark:/ { n = split($3, part, "."); what = part[n] }
+           /^\[pc / { run = $0 }
+           /p\(50\.0000\) =/ { printf "%-44s %-18s median %8.1f ms\n", run, what, $3 }'
 }
 echo "load before: $(cut -d' ' -f1-3 /proc/loadavg) (2 cores)"
 echo "== growth with p (n = 1000)"
