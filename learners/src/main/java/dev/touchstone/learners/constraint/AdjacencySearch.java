@@ -27,6 +27,8 @@ import java.util.Arrays;
  */
 final class AdjacencySearch {
 
+    private static final int[] NO_CANDIDATES = new int[0];
+
     private final IndependenceTest test;
     private final KnowledgeIndex knowledge;
     private final SkeletonVariant variant;
@@ -75,6 +77,17 @@ final class AdjacencySearch {
                     for (int y : around) {
                         context.checkDeadline();
                         if (!s.adjacent(x, y) || knowledge.adjacencyRequired(x, y)) {
+                            continue;
+                        }
+                        if (level == 0) {
+                            // Only ∅ to try: no candidate list (O(p) per pair), and (y, x | ∅) would repeat
+                            // the question (x, y | ∅) already asked when x < y, of a symmetric test.
+                            if (x < y) {
+                                any = true;
+                                if (search.find(x, y, NO_CANDIDATES, 0, 0) != null) {
+                                    s.remove(x, y, NO_CANDIDATES);
+                                }
+                            }
                             continue;
                         }
                         int[] cand = without(s.neighbours(x), y);

@@ -61,6 +61,85 @@ class AdjacencySearchReferenceTest {
     }
 
     @Test
+    @DisplayName("original search = PC's adjacency step written out (SGS 2000 §5.4.2): adjacencies and sepsets, 8 data sets")
+    void originalSearchEqualsTheDirectOne() {
+        int removed = 0;
+        for (int rep = 0; rep < 8; rep++) {
+            Graph dag = RandomDags.erdosRenyi(30, 3.0, 340 + rep);
+            DataSet data = SmallData.linearGaussian(dag, 120 + 40 * rep, 350 + rep);
+            FisherZTest test = FisherZTest.of(data, 0.05);
+            int maxDepth = rep % 4 == 3 ? 1 : -1;
+            Skeleton fast = new AdjacencySearch(test, new KnowledgeIndex(Knowledge.none(), data.names()),
+                    SkeletonVariant.ORIGINAL, maxDepth, RunContext.of(1, null, 1)).run();
+            List<Integer>[][] reference = originalReference(test, maxDepth);
+            for (int a = 0; a < 30; a++) {
+                for (int b = a + 1; b < 30; b++) {
+                    List<Integer> sep = reference[a][b] != null ? reference[a][b] : reference[b][a];
+                    assertEquals(sep == null, fast.adjacent(a, b), "data " + rep + " pair " + a + "," + b);
+                    if (sep != null) {
+                        assertArrayEquals(sep.stream().mapToInt(Integer::intValue).toArray(), fast.sepset(a, b),
+                                "data " + rep + " pair " + a + "," + b);
+                        removed++;
+                    }
+                }
+            }
+        }
+        assertTrue(removed > 1500, removed + " removed");
+    }
+
+    /**
+     * The original adjacency step: per level, for x in order and each y adjacent to x at that moment, try
+     * the ℓ-subsets of the current adj(x) \ {y} in lexicographic order and remove x − y at once when one
+     * separates; stop when no pair had ℓ candidates. Separating sets indexed [x][y] as found.
+     */
+    @SuppressWarnings("unchecked")
+    private static List<Integer>[][] originalReference(IndependenceTest test, int maxDepth) {
+        int p = test.variables();
+        List<TreeSet<Integer>> adj = completeGraph(p);
+        List<Integer>[][] sep = new List[p][p];
+        for (int level = 0; maxDepth < 0 || level <= maxDepth; level++) {
+            boolean any = false;
+            for (int x = 0; x < p; x++) {
+                for (int y : new ArrayList<>(adj.get(x))) {
+                    if (!adj.get(x).contains(y)) {
+                        continue;
+                    }
+                    List<Integer> cx = new ArrayList<>(adj.get(x));
+                    cx.remove(Integer.valueOf(y));
+                    if (cx.size() < level) {
+                        continue;
+                    }
+                    any = true;
+                    List<Integer> found = firstSeparating(test, x, y, cx, level);
+                    if (found != null) {
+                        sep[x][y] = found;
+                        adj.get(x).remove(y);
+                        adj.get(y).remove(x);
+                    }
+                }
+            }
+            if (!any) {
+                break;
+            }
+        }
+        return sep;
+    }
+
+    private static List<TreeSet<Integer>> completeGraph(int p) {
+        List<TreeSet<Integer>> adj = new ArrayList<>();
+        for (int v = 0; v < p; v++) {
+            TreeSet<Integer> all = new TreeSet<>();
+            for (int w = 0; w < p; w++) {
+                if (w != v) {
+                    all.add(w);
+                }
+            }
+            adj.add(all);
+        }
+        return adj;
+    }
+
+    @Test
     @DisplayName("conservative and majority rules = their definitions with every distinct separating set collected in a boxed set (Ramsey, Zhang and Spirtes 2006; Colombo and Maathuis 2014): colliders, ambiguous triples, tests")
     void colliderRulesEqualTheDirectOnes() {
         int ambiguousSeen = 0;
@@ -152,16 +231,7 @@ class AdjacencySearchReferenceTest {
     @SuppressWarnings("unchecked")
     private static List<Integer>[][] reference(IndependenceTest test, int maxDepth) {
         int p = test.variables();
-        List<TreeSet<Integer>> adj = new ArrayList<>();
-        for (int v = 0; v < p; v++) {
-            TreeSet<Integer> all = new TreeSet<>();
-            for (int w = 0; w < p; w++) {
-                if (w != v) {
-                    all.add(w);
-                }
-            }
-            adj.add(all);
-        }
+        List<TreeSet<Integer>> adj = completeGraph(p);
         List<Integer>[][] sep = new List[p][p];
         for (int level = 0; maxDepth < 0 || level <= maxDepth; level++) {
             List<TreeSet<Integer>> frozen = new ArrayList<>();
