@@ -32,21 +32,23 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class AdjacencySearchReferenceTest {
 
     @Test
-    @DisplayName("order-independent search = PC-stable written out (Colombo and Maathuis 2014, Alg. 4.1): adjacencies and sepsets, 12 data sets, depth limits, 1 and 2 threads")
+    @DisplayName("order-independent search = PC-stable written out (Colombo and Maathuis 2014, Alg. 4.1) and original search = PC's adjacency step written out (SGS 2000 §5.4.2): adjacencies and sepsets, 20 data sets, depth limits, 1 and 2 threads")
     void optimisedSearchEqualsTheDirectOne() {
         int removedWithSets = 0;
         int setsOfTwoOrMore = 0;
-        for (int rep = 0; rep < 12; rep++) {
+        for (int rep = 0; rep < 20; rep++) {
+            boolean stable = rep < 12;
             Graph dag = rep % 2 == 0 ? RandomDags.erdosRenyi(30, 3.0, 310 + rep) : RandomDags.scaleFree(30, 2, 310 + rep);
-            DataSet data = SmallData.linearGaussian(dag, 120 + 40 * rep, 330 + rep);
+            DataSet data = SmallData.linearGaussian(dag, 120 + 40 * (rep % 12), 330 + rep);
             FisherZTest test = FisherZTest.of(data, 0.05);
             int maxDepth = rep % 3 == 2 ? 1 : -1;
             Skeleton fast = new AdjacencySearch(test, new KnowledgeIndex(Knowledge.none(), data.names()),
-                    SkeletonVariant.ORDER_INDEPENDENT, maxDepth, RunContext.of(1, null, 1 + rep % 2)).run();
-            List<Integer>[][] reference = reference(test, maxDepth);
+                    stable ? SkeletonVariant.ORDER_INDEPENDENT : SkeletonVariant.ORIGINAL, maxDepth,
+                    RunContext.of(1, null, 1 + rep % 2)).run();
+            List<Integer>[][] reference = reference(test, maxDepth, stable);
             for (int a = 0; a < 30; a++) {
                 for (int b = a + 1; b < 30; b++) {
-                    List<Integer> sep = reference[a][b];
+                    List<Integer> sep = reference[a][b] != null ? reference[a][b] : reference[b][a];
                     assertEquals(sep == null, fast.adjacent(a, b), "data " + rep + " pair " + a + "," + b);
                     if (sep != null) {
                         int[] expected = sep.stream().mapToInt(Integer::intValue).toArray();
@@ -57,86 +59,7 @@ class AdjacencySearchReferenceTest {
                 }
             }
         }
-        assertTrue(removedWithSets > 2000 && setsOfTwoOrMore > 20, removedWithSets + " removed, " + setsOfTwoOrMore);
-    }
-
-    @Test
-    @DisplayName("original search = PC's adjacency step written out (SGS 2000 §5.4.2): adjacencies and sepsets, 8 data sets")
-    void originalSearchEqualsTheDirectOne() {
-        int removed = 0;
-        for (int rep = 0; rep < 8; rep++) {
-            Graph dag = RandomDags.erdosRenyi(30, 3.0, 340 + rep);
-            DataSet data = SmallData.linearGaussian(dag, 120 + 40 * rep, 350 + rep);
-            FisherZTest test = FisherZTest.of(data, 0.05);
-            int maxDepth = rep % 4 == 3 ? 1 : -1;
-            Skeleton fast = new AdjacencySearch(test, new KnowledgeIndex(Knowledge.none(), data.names()),
-                    SkeletonVariant.ORIGINAL, maxDepth, RunContext.of(1, null, 1)).run();
-            List<Integer>[][] reference = originalReference(test, maxDepth);
-            for (int a = 0; a < 30; a++) {
-                for (int b = a + 1; b < 30; b++) {
-                    List<Integer> sep = reference[a][b] != null ? reference[a][b] : reference[b][a];
-                    assertEquals(sep == null, fast.adjacent(a, b), "data " + rep + " pair " + a + "," + b);
-                    if (sep != null) {
-                        assertArrayEquals(sep.stream().mapToInt(Integer::intValue).toArray(), fast.sepset(a, b),
-                                "data " + rep + " pair " + a + "," + b);
-                        removed++;
-                    }
-                }
-            }
-        }
-        assertTrue(removed > 1500, removed + " removed");
-    }
-
-    /**
-     * The original adjacency step: per level, for x in order and each y adjacent to x at that moment, try
-     * the ℓ-subsets of the current adj(x) \ {y} in lexicographic order and remove x − y at once when one
-     * separates; stop when no pair had ℓ candidates. Separating sets indexed [x][y] as found.
-     */
-    @SuppressWarnings("unchecked")
-    private static List<Integer>[][] originalReference(IndependenceTest test, int maxDepth) {
-        int p = test.variables();
-        List<TreeSet<Integer>> adj = completeGraph(p);
-        List<Integer>[][] sep = new List[p][p];
-        for (int level = 0; maxDepth < 0 || level <= maxDepth; level++) {
-            boolean any = false;
-            for (int x = 0; x < p; x++) {
-                for (int y : new ArrayList<>(adj.get(x))) {
-                    if (!adj.get(x).contains(y)) {
-                        continue;
-                    }
-                    List<Integer> cx = new ArrayList<>(adj.get(x));
-                    cx.remove(Integer.valueOf(y));
-                    if (cx.size() < level) {
-                        continue;
-                    }
-                    any = true;
-                    List<Integer> found = firstSeparating(test, x, y, cx, level);
-                    if (found != null) {
-                        sep[x][y] = found;
-                        adj.get(x).remove(y);
-                        adj.get(y).remove(x);
-                    }
-                }
-            }
-            if (!any) {
-                break;
-            }
-        }
-        return sep;
-    }
-
-    private static List<TreeSet<Integer>> completeGraph(int p) {
-        List<TreeSet<Integer>> adj = new ArrayList<>();
-        for (int v = 0; v < p; v++) {
-            TreeSet<Integer> all = new TreeSet<>();
-            for (int w = 0; w < p; w++) {
-                if (w != v) {
-                    all.add(w);
-                }
-            }
-            adj.add(all);
-        }
-        return adj;
+        assertTrue(removedWithSets > 3500 && setsOfTwoOrMore > 30, removedWithSets + " removed, " + setsOfTwoOrMore);
     }
 
     @Test
@@ -223,37 +146,42 @@ class AdjacencySearchReferenceTest {
     }
 
     /**
-     * PC-stable as written: per level, freeze every adjacency set; for each adjacent pair x &lt; y try the
-     * ℓ-subsets of a(x) \ {y}, then of a(y) \ {x}, in lexicographic order; record the first that separates;
-     * remove the level's separated pairs at its end; stop when no pair has ℓ candidates on either side.
-     * Returns the separating set of every removed pair (null: adjacent).
+     * The adjacency step as written. PC-stable ({@code stable}): per level, freeze every adjacency set;
+     * for each adjacent pair x &lt; y try the ℓ-subsets of a(x) \ {y}, then of a(y) \ {x}, in lexicographic
+     * order, record the first that separates and remove the level's separated pairs at its end. Original:
+     * for x in order and each y adjacent to x when x's turn starts, try the ℓ-subsets of the current
+     * adj(x) \ {y} and remove x − y at once. Both stop when no pair has ℓ candidates. Returns the
+     * separating set of every removed pair at [x][y] as found (null: adjacent).
      */
     @SuppressWarnings("unchecked")
-    private static List<Integer>[][] reference(IndependenceTest test, int maxDepth) {
+    private static List<Integer>[][] reference(IndependenceTest test, int maxDepth, boolean stable) {
         int p = test.variables();
         List<TreeSet<Integer>> adj = completeGraph(p);
         List<Integer>[][] sep = new List[p][p];
         for (int level = 0; maxDepth < 0 || level <= maxDepth; level++) {
-            List<TreeSet<Integer>> frozen = new ArrayList<>();
-            for (TreeSet<Integer> a : adj) {
-                frozen.add(new TreeSet<>(a));
+            List<TreeSet<Integer>> seen = adj;
+            if (stable) {
+                seen = new ArrayList<>();
+                for (TreeSet<Integer> a : adj) {
+                    seen.add(new TreeSet<>(a));
+                }
             }
             boolean any = false;
             for (int x = 0; x < p; x++) {
-                for (int y : frozen.get(x)) {
-                    if (y < x) {
+                for (int y : new ArrayList<>(seen.get(x))) {
+                    if ((stable && y < x) || !adj.get(x).contains(y)) {
                         continue;
                     }
-                    List<Integer> cx = new ArrayList<>(frozen.get(x));
+                    List<Integer> cx = new ArrayList<>(seen.get(x));
                     cx.remove(Integer.valueOf(y));
-                    List<Integer> cy = new ArrayList<>(frozen.get(y));
+                    List<Integer> cy = new ArrayList<>(seen.get(y));
                     cy.remove(Integer.valueOf(x));
-                    if (cx.size() < level && cy.size() < level) {
+                    if (cx.size() < level && (!stable || cy.size() < level)) {
                         continue;
                     }
                     any = true;
                     List<Integer> found = firstSeparating(test, x, y, cx, level);
-                    if (found == null) {
+                    if (found == null && stable) {
                         found = firstSeparating(test, y, x, cy, level);
                     }
                     if (found != null) {
@@ -268,6 +196,20 @@ class AdjacencySearchReferenceTest {
             }
         }
         return sep;
+    }
+
+    private static List<TreeSet<Integer>> completeGraph(int p) {
+        List<TreeSet<Integer>> adj = new ArrayList<>();
+        for (int v = 0; v < p; v++) {
+            TreeSet<Integer> all = new TreeSet<>();
+            for (int w = 0; w < p; w++) {
+                if (w != v) {
+                    all.add(w);
+                }
+            }
+            adj.add(all);
+        }
+        return adj;
     }
 
     private static List<Integer> firstSeparating(IndependenceTest test, int x, int y, List<Integer> cand, int size) {
