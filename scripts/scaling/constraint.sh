@@ -1,22 +1,30 @@
 #!/usr/bin/env bash
 # How order-independent PC (Fisher z, alpha = 0.01, mean degree 2, 2 threads) scales with
-# the number of variables p and the sample size n. Each line of the "[pc ...]" output gives
-# the number of independence tests and edges of one run next to its first-run time; the
-# JMH table gives the median single-shot time (covariance included) per setting.
+# the number of variables p and the sample size n. For every setting it prints two lines:
+# the number of independence tests and edges of a run, and the median single-shot time of
+# the measured runs, for the whole run (covariance included) and for the covariance alone. The machine's load is printed before and after,
+# since a shared machine makes absolute times noisy; compare within one run of the script.
 #
 # Usage: scripts/scaling/constraint.sh [iterations]    (run from the repository root)
+# JMH_JAVA_OPTS is passed to java (e.g. -Djmh.ignoreLock=true while another JMH run holds the lock).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
-iterations="${1:-3}"
+iterations="${1:-5}"
 jar=benchmarks/target/benchmarks.jar
 if [[ ! -f "$jar" ]]; then
   mvn -B -q -Pbench package -DskipTests
 fi
 run() {
-  java -jar "$jar" -f 1 -wi 1 -i "$iterations" -bm ss -tu ms "$@" 'constraint.PcBenchmark.orderIndependentPc' \
-    | grep -E '^\[pc|^PcBenchmark|^Benchmark'
+  # shellcheck disable=SC2086
+  java ${JMH_JAVA_OPTS:-} -jar "$jar" -f 1 -wi 1 -i "$iterations" -bm ss -tu ms "$@" \
+      'constraint.PcBenchmark' \
+    | awk '/^# Benchmark:/ { n = split($3, part, "."); what = part[n] }
+           /^\[pc / { run = $0 }
+           /p\(50\.0000\) =/ { printf "%-44s %-18s median %8.1f ms\n", run, what, $3 }'
 }
+echo "load before: $(cut -d' ' -f1-3 /proc/loadavg) (2 cores)"
 echo "== growth with p (n = 1000)"
 run -p p=100,250,500,1000,2000 -p n=1000
 echo "== growth with n (p = 1000)"
-run -p p=1000 -p n=250,500,2000,4000
+run -p p=1000 -p n=250,500,1000,2000,4000
+echo "load after: $(cut -d' ' -f1-3 /proc/loadavg)"

@@ -11,9 +11,14 @@ import java.util.Arrays;
  * ℓ-subset of the neighbours of x (or of y), recording that set (Spirtes, Glymour and
  * Scheines 2000, §5.4.2; in the order-independent form of Colombo and Maathuis 2014).
  *
- * <p>Background knowledge: a pair whose both directions are forbidden is removed before
- * any test (it is never tested and gets no separating set); a pair with a required edge
- * is never tested, so it is never removed.
+ * <p>Background knowledge: a pair with a required edge is never tested, so it is never
+ * removed. A pair whose both directions are forbidden is tested like any other, so that
+ * its separating set is known whenever the tests find one, and removed afterwards only if
+ * the tests left it adjacent ({@link #run()} does that at the end; FCI calls
+ * {@link #searchKeepingForbidden()} and {@link #removeForbidden} after its Possible-D-Sep
+ * step). Removing such a pair untested would leave it without a separating set, and its
+ * unshielded triples would have to be guessed non-colliders, from which Meek's R1 (or FCI's
+ * R1) can orient edges wrongly; see {@code PcKnowledgeTest} for a case.
  *
  * <p>Cost: at most O(p² · C(d, ℓ)) tests at level ℓ for maximum degree d; for sparse
  * truths the number of tests grows roughly as p² at level 0 and as p · d^(ℓ+1) after.
@@ -21,6 +26,8 @@ import java.util.Arrays;
  * threads. The deadline is checked before every pair.
  */
 final class AdjacencySearch {
+
+    private static final int[] NO_CANDIDATES = new int[0];
 
     private final IndependenceTest test;
     private final KnowledgeIndex knowledge;
@@ -40,18 +47,16 @@ final class AdjacencySearch {
         this.context = context;
     }
 
+    /** The skeleton with every pair forbidden both ways removed (those the tests kept have no separating set). */
     Skeleton run() {
-        int p = test.variables();
-        Skeleton s = new Skeleton(p);
-        if (!knowledge.isEmpty()) {
-            for (int a = 0; a < p; a++) {
-                for (int b = a + 1; b < p; b++) {
-                    if (knowledge.adjacencyForbidden(a, b)) {
-                        s.remove(a, b, null);
-                    }
-                }
-            }
-        }
+        Skeleton s = searchKeepingForbidden();
+        removeForbidden(s, knowledge);
+        return s;
+    }
+
+    /** The skeleton the tests leave, forbidden pairs included; the caller removes them with {@link #removeForbidden}. */
+    Skeleton searchKeepingForbidden() {
+        Skeleton s = new Skeleton(test.variables());
         context.checkDeadline();
         if (variant == SkeletonVariant.ORIGINAL) {
             original(s);
@@ -72,6 +77,17 @@ final class AdjacencySearch {
                     for (int y : around) {
                         context.checkDeadline();
                         if (!s.adjacent(x, y) || knowledge.adjacencyRequired(x, y)) {
+                            continue;
+                        }
+                        if (level == 0) {
+                            // Only ∅ to try: no candidate list (O(p) per pair), and (y, x | ∅) would repeat
+                            // the question (x, y | ∅) already asked when x < y, of a symmetric test.
+                            if (x < y) {
+                                any = true;
+                                if (search.find(x, y, NO_CANDIDATES, 0, 0) != null) {
+                                    s.remove(x, y, NO_CANDIDATES);
+                                }
+                            }
                             continue;
                         }
                         int[] cand = without(s.neighbours(x), y);
@@ -176,6 +192,13 @@ final class AdjacencySearch {
             context.checkDeadline();
             int x = xs[i];
             int y = ys[i];
+            if (level == 0) {
+                // The empty set is the only candidate on either side: one test, and no candidate list
+                // (copying x's ~p neighbours for each of the ~p²/2 pairs made level 0 cost O(p³)). Asking
+                // (y, x | ∅) as well would repeat the same question of a symmetric test.
+                found[i] = search.find(x, y, cand, 0, 0);
+                return;
+            }
             int m = fill(nb[x], y);
             int[] sep = search.find(x, y, cand, m, level);
             if (sep == null) {
@@ -193,6 +216,20 @@ final class AdjacencySearch {
                 }
             }
             return m;
+        }
+    }
+
+    /** Removes the pairs the knowledge forbids both ways that are still adjacent (they get no separating set). */
+    static void removeForbidden(Skeleton s, KnowledgeIndex knowledge) {
+        if (knowledge.isEmpty()) {
+            return;
+        }
+        for (int a = 0; a < s.size(); a++) {
+            for (int b : s.neighbours(a)) {
+                if (a < b && knowledge.adjacencyForbidden(a, b)) {
+                    s.remove(a, b, null);
+                }
+            }
         }
     }
 

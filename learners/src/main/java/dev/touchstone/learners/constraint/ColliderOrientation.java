@@ -156,7 +156,6 @@ final class ColliderOrientation {
     /** Every distinct subset of adj(x)\{y} and of adj(y)\{x} (sizes up to the depth limit) that separates x and y. */
     private List<int[]> allSeparatingSets(int x, int y) {
         SubsetSearch enumerate = new SubsetSearch(test);
-        Set<List<Integer>> seen = new HashSet<>();
         List<int[]> out = new ArrayList<>();
         long[] tests = new long[1];
         for (int side = 0; side < 2; side++) {
@@ -164,21 +163,18 @@ final class ColliderOrientation {
             int b = side == 0 ? y : x;
             int[] cand = without(skeleton.neighbours(a), b);
             int top = Math.min(maxDepth, cand.length);
+            boolean second = side == 1;
             for (int size = 0; size <= top; size++) {
                 enumerate.forEach(cand, cand.length, size, z -> {
-                    List<Integer> key = new ArrayList<>(z.length);
-                    for (int v : z) {
-                        key.add(v);
-                    }
-                    java.util.Collections.sort(key);
-                    if (seen.contains(key)) {
+                    // x's side tried every subset of adj(x)\{y} up to the depth limit, so a set of y's side
+                    // lying inside adj(x) was tried already: skip it (no boxed set of seen sets needed).
+                    if (second && insideNeighbours(z, x)) {
                         return true;
                     }
                     if ((tests[0] & 63) == 0) {
                         context.checkDeadline();
                     }
                     tests[0]++;
-                    seen.add(key);
                     if (test.independent(x, y, z)) {
                         out.add(z.clone());
                     }
@@ -188,6 +184,16 @@ final class ColliderOrientation {
         }
         context.countTests(tests[0]);
         return out;
+    }
+
+    /** Whether every member of z is adjacent to v. */
+    private boolean insideNeighbours(int[] z, int v) {
+        for (int w : z) {
+            if (!skeleton.adjacent(v, w)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private int keepFirst(MutableGraph g, List<int[]> colliders) {

@@ -40,8 +40,7 @@ import java.util.Map;
  * as cited from memory; checked in the tests).
  *
  * <p>Knowledge ({@link PagKnowledge}): required pairs are never tested and end as required;
- * pairs forbidden both ways are tested like the others (unlike PC, which drops them before
- * any test) and removed after the Possible-D-Sep step, so that a separating set is known
+ * pairs forbidden both ways are tested like the others (as in PC) and removed after the Possible-D-Sep step, so that a separating set is known
  * whenever the tests find one. Only a forbidden pair the tests leave adjacent has none; its
  * triples then count as non-colliders in R0 and R4.
  *
@@ -87,10 +86,9 @@ public final class FciLearner implements Learner {
         KnowledgeIndex ki = in.knowledge();
         IndependenceTest test = in.test();
         int maxDepth = in.maxDepth();
-        // Pairs forbidden by knowledge are tested like any other and removed only at the end, so that
-        // their separating sets are known: guessing "non-collider" for them would let R1 put wrong tails.
-        KnowledgeIndex searchKnowledge = ConstraintParameters.knowledge(requiredOnly(knowledge), names);
-        Skeleton skeleton = new AdjacencySearch(test, searchKnowledge, in.variant(), maxDepth, context).run();
+        // Pairs forbidden by knowledge are tested like any other and removed only after Possible-D-Sep, so
+        // that their separating sets are known: guessing "non-collider" for them would let R1 put wrong tails.
+        Skeleton skeleton = new AdjacencySearch(test, ki, in.variant(), maxDepth, context).searchKeepingForbidden();
         PagRules rules = "possible".equals(parameters.getString(SELECTION_BIAS.name()))
                 ? PagRules.complete() : PagRules.withoutSelectionBias();
         // Knowledge-removed pairs have no separating set: their triples count as non-colliders.
@@ -105,7 +103,7 @@ public final class FciLearner implements Learner {
             removed = new PossibleDsepSearch(test, ki, maxDepth,
                     parameters.getInt(POSSIBLE_DSEP_LENGTH.name()), context).run(skeleton, first);
         }
-        removeForbidden(skeleton, ki);
+        AdjacencySearch.removeForbidden(skeleton, ki);
         MutableGraph g = circles(names, skeleton);
         PagKnowledge.apply(g, ki);
         rules.orientColliders(g, info);
@@ -115,25 +113,6 @@ public final class FciLearner implements Learner {
         extras.put("possible_dsep_removed", (double) removed);
         extras.put("circle_marks", (double) circleMarks(g));
         return new Estimate(g.freeze(), GraphClass.PAG, extras);
-    }
-
-    private static Knowledge requiredOnly(Knowledge knowledge) {
-        Knowledge.Builder b = Knowledge.builder();
-        for (Knowledge.DirectedPair d : knowledge.required()) {
-            b.require(d.from(), d.to());
-        }
-        return b.build();
-    }
-
-    /** Removes the pairs the knowledge forbids both ways that the tests left adjacent (no separating set). */
-    private static void removeForbidden(Skeleton s, KnowledgeIndex knowledge) {
-        for (int a = 0; a < s.size(); a++) {
-            for (int b : s.neighbours(a)) {
-                if (a < b && knowledge.adjacencyForbidden(a, b)) {
-                    s.remove(a, b, null);
-                }
-            }
-        }
     }
 
     /** The skeleton's adjacencies as edges ∘–∘. */

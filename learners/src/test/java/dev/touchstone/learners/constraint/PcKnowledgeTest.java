@@ -4,6 +4,7 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.Mark;
+import dev.touchstone.core.graph.algorithms.Cpdags;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.Oracle;
@@ -20,6 +21,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -31,9 +33,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class PcKnowledgeTest {
 
     private static Graph learn(LearnerInput input, Knowledge k, String skeleton) {
-        PcLearner pc = new PcLearner();
-        return pc.learn(input, k, ParameterValues.resolve("pc", pc.description().parameters(),
-                Map.of("skeleton", skeleton, "alpha", 0.05)), RunContext.of(3, null, 2)).graph();
+        return learnWith(input, k, skeleton, "sepset");
     }
 
     @Test
@@ -92,5 +92,76 @@ class PcKnowledgeTest {
         assertTrue(g.hasDirected(g.index("C"), g.index("A")));
         List<String> none = new ArrayList<>();
         assertTrue(none.isEmpty());
+    }
+
+    /**
+     * Truth a → x ← b, x → z ← y, with knowledge forbidding x – y both ways (true of the truth:
+     * x and y are not adjacent). Removing x – y without a test leaves it no separating set;
+     * guessing the triple x – z – y a non-collider, Meek's R1 then orients a → x – z into
+     * x → z (a, z not adjacent) and x → z – y into z → y (x, y not adjacent), against the
+     * truth's y → z. Testing the pair finds x ⊥ y given ∅, z is outside that set, so x → z ← y
+     * is a collider and the result is the true CPDAG, every edge directed. Reasoned out from
+     * the sepset collider rule (Spirtes, Glymour and Scheines 2000, §5.4.2) and R1 (Meek 1995);
+     * knowledge that only forbids a true non-adjacency orients nothing, so the CPDAG is the
+     * answer (Meek 1995, background knowledge).
+     */
+    @Test
+    @DisplayName("a pair forbidden both ways is still tested: its collider is found and R1 does not orient z -> y (Meek 1995, reasoned out)")
+    void forbiddenPairKeepsItsSeparatingSet() {
+        Graph dag = Graph.builder(List.of("a", "b", "x", "y", "z"))
+                .addDirected(0, 2).addDirected(1, 2).addDirected(2, 4).addDirected(3, 4).freeze();
+        Knowledge k = Knowledge.builder().forbid("x", "y").forbid("y", "x").build();
+        Graph cpdag = Cpdags.of(dag);
+        assertEquals(4, cpdag.edgeCount());
+        for (String skeleton : List.of("order-independent", "original")) {
+            for (String colliders : List.of("sepset", "conservative", "majority")) {
+                Graph g = learnWith(LearnerInput.of(new Oracle(dag, null)), k, skeleton, colliders);
+                assertTrue(g.hasDirected(g.index("y"), g.index("z")), skeleton + "/" + colliders + ": " + g);
+                assertTrue(g.sameEdges(cpdag), skeleton + "/" + colliders + ": " + g + " vs " + cpdag);
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("with the oracle, knowledge forbidding true non-adjacencies both ways leaves the true CPDAG, 60 DAGs (SGS 2000 Thm 5.1; Meek 1995)")
+    void forbiddingTrueNonAdjacenciesChangesNothing() {
+        int forbiddenColliderEnds = 0;
+        for (int rep = 0; rep < 60; rep++) {
+            Graph dag = RandomDags.erdosRenyi(10, 2.5, 900 + rep);
+            UniformRandomProvider rng = Seeds.random(950 + rep);
+            Knowledge.Builder kb = Knowledge.builder();
+            int forbidden = 0;
+            for (int tries = 0; tries < 200 && forbidden < 4; tries++) {
+                int a = rng.nextInt(10);
+                int b = rng.nextInt(10);
+                if (a != b && !dag.adjacent(a, b)) {
+                    kb.forbid(dag.name(a), dag.name(b)).forbid(dag.name(b), dag.name(a));
+                    forbidden++;
+                    forbiddenColliderEnds += commonChildren(dag, a, b);
+                }
+            }
+            Graph cpdag = Cpdags.of(dag);
+            String skeleton = rep % 2 == 0 ? "order-independent" : "original";
+            Graph g = learnWith(LearnerInput.of(new Oracle(dag, null)), kb.build(), skeleton, "sepset");
+            assertTrue(g.sameEdges(cpdag), "DAG " + rep + "\n truth " + cpdag + "\n estimate " + g);
+        }
+        // The case that matters (a forbidden pair with a common child, i.e. a collider's ends) must occur.
+        assertTrue(forbiddenColliderEnds >= 10, "forbidden pairs with a common child: " + forbiddenColliderEnds);
+    }
+
+    private static int commonChildren(Graph dag, int a, int b) {
+        int n = 0;
+        for (int c = 0; c < dag.size(); c++) {
+            if (dag.hasDirected(a, c) && dag.hasDirected(b, c)) {
+                n++;
+            }
+        }
+        return n;
+    }
+
+    private static Graph learnWith(LearnerInput input, Knowledge k, String skeleton, String colliders) {
+        PcLearner pc = new PcLearner();
+        return pc.learn(input, k, ParameterValues.resolve("pc", pc.description().parameters(),
+                Map.of("skeleton", skeleton, "colliders", colliders, "alpha", 0.05)), RunContext.of(3, null, 2)).graph();
     }
 }

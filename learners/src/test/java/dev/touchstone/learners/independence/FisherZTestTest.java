@@ -92,6 +92,31 @@ class FisherZTestTest {
     }
 
     @Test
+    @DisplayName("p-value from Commons Numbers' Erfc = 2Φ(−|z|) from Commons Math's NormalDistribution to 1e-12 relative, |z| up to 35")
+    void pValueTailIsExact() {
+        // 2Φ(−|z|) = erfc(|z|/√2); Commons Math 3.6.1 computes Φ through its own erfc (incomplete gamma), a
+        // different algorithm from Commons Numbers' rational approximations, so agreement checks both.
+        NormalDistribution normal = new NormalDistribution(0, 1);
+        UniformRandomProvider rng = Seeds.random(41);
+        long n = 1000;
+        int checked = 0;
+        for (int rep = 0; rep < 20_000; rep++) {
+            int k = rep % 4;
+            // |z| = atanh(|r|) √(n − k − 3) spread over 0 … 35 (p-values down to about 1e-268).
+            double target = 35.0 * rep / 20_000 + 1e-3 * rng.nextDouble();
+            double r = Math.tanh(target / Math.sqrt(n - k - 3.0)) * (rng.nextBoolean() ? 1 : -1);
+            double zStat = FisherZTest.statistic(r, n, k);
+            double expected = 2 * normal.cumulativeProbability(-Math.abs(zStat));
+            double actual = FisherZTest.pValue(r, n, k);
+            assertEquals(expected, actual, 1e-12 * expected, "r=" + r + " z=" + zStat);
+            checked++;
+        }
+        assertEquals(20_000, checked);
+        assertEquals(1.0, FisherZTest.pValue(0.0, n, 0), 1e-15);
+        assertEquals(1.0, FisherZTest.pValue(Double.NaN, n, 0));
+    }
+
+    @Test
     @DisplayName("the fast decision (threshold on |r|) equals p > alpha")
     void fastDecisionAgreesWithPValue() {
         double[][] cols = TestData.correlated(P, 60, 5);
