@@ -71,6 +71,11 @@ public final class ConditionalGaussianTest implements IndependenceTest {
 
     /** The statistic, degrees of freedom, rows used and p-value of one test. */
     public Result evaluate(int x, int y, int[] z) {
+        if (x > y) { // the same bits for (x, y) and (y, x): see IndependenceTest
+            int t = x;
+            x = y;
+            y = t;
+        }
         int[] all = new int[z.length + 2];
         all[0] = x;
         all[1] = y;

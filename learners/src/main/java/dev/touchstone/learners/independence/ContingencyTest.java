@@ -97,6 +97,11 @@ public final class ContingencyTest implements IndependenceTest {
 
     /** The statistic, degrees of freedom, rows used and p-value of one test. */
     public Result evaluate(int x, int y, int[] z) {
+        if (x > y) { // the same bits for (x, y) and (y, x): see IndependenceTest
+            int t = x;
+            x = y;
+            y = t;
+        }
         int[] cx = codes[x];
         int[] cy = codes[y];
         int kx = cardinality[x];

@@ -9,6 +9,11 @@ package dev.touchstone.learners.independence;
  * them; {@code z} must not contain {@code x} or {@code y}. Counting calls is the caller's
  * job (the learners count through {@code RunContext.countTests}), so a test stays a pure
  * function of its arguments.
+ *
+ * <p>Implementations are symmetric to the bit: {@code (x, y, z)} and {@code (y, x, z)} give
+ * the same p-value and decision. The adjacency search tests each pair once at level 0 and
+ * relies on this; tests whose arithmetic is not symmetric by construction (sums taken in
+ * another order) put the pair in a canonical order first.
  */
 public interface IndependenceTest {
 

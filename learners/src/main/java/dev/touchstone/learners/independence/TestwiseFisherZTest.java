@@ -51,6 +51,11 @@ public final class TestwiseFisherZTest implements IndependenceTest {
 
     @Override
     public double pValue(int x, int y, int[] z) {
+        if (x > y) { // the same bits for (x, y) and (y, x): see IndependenceTest
+            int t = x;
+            x = y;
+            y = t;
+        }
         int k = z.length;
         int q = k + 2;
         double[][] cols = new double[q][];
