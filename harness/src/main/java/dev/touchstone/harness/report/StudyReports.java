@@ -12,11 +12,11 @@ import dev.touchstone.harness.execution.Simulator;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.io.AtomicFiles;
 import dev.touchstone.harness.study.ComponentSpec;
-import dev.touchstone.harness.study.ExtraMetric;
 import dev.touchstone.harness.study.LearnerConfig;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.RunDefinition;
 import dev.touchstone.harness.study.TruthSetting;
+import dev.touchstone.metrics.against.MetricAgainst;
 import dev.touchstone.metrics.aggregate.Summaries;
 import dev.touchstone.metrics.rank.Ranking;
 import dev.touchstone.metrics.results.RankingResult;
@@ -112,8 +112,7 @@ public final class StudyReports {
                 .summarizer(values -> Summaries.of(values.stream().mapToDouble(Double::doubleValue).toArray(),
                         Seeds.random(Seeds.derive(statsSeed, "pooled"))));
         for (String m : metrics) {
-            ExtraMetric extra = ExtraMetric.parse(m);
-            MetricRegistry.find(extra == null ? m : extra.base()).map(Metric::direction).filter(d -> d != Direction.NONE)
+            MetricAgainst.find(m).map(Metric::direction).filter(d -> d != Direction.NONE)
                     .ifPresent(d -> b.direction(m, d == Direction.HIGHER_IS_BETTER));
         }
         if (plan.reference() != null) {
