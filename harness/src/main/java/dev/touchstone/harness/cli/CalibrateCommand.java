@@ -17,11 +17,9 @@ import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.io.AtomicFiles;
 import dev.touchstone.harness.io.DataCsv;
-import dev.touchstone.harness.io.GraphCsv;
-import dev.touchstone.harness.io.GraphJson;
+import dev.touchstone.harness.io.GraphFiles;
 import dev.touchstone.reports.calibration.CalibrationReport;
 import dev.touchstone.reports.calibration.CalibrationView;
-import dev.touchstone.reports.calibration.SizeAnswer;
 import dev.touchstone.reports.tables.Numbers;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -124,12 +122,13 @@ final class CalibrateCommand implements Callable<Integer> {
         }
         LearnerCatalog catalog = new Toolkit(null, null).learners;
         Map<String, Map<String, String>> raw = parameterSettings();
+        List<String> ids = learners.stream().map(String::trim).toList();
         List<CalibrationSettings.Choice> choices = new ArrayList<>();
-        for (String id : learners) {
-            choices.add(choice(catalog, id.trim(), "--learners", raw));
+        for (String id : ids) {
+            choices.add(choice(catalog, id, "--learners", raw));
         }
         for (String id : raw.keySet()) {
-            if (!learners.contains(id) && !id.equals(truthLearner)) {
+            if (!ids.contains(id) && !id.equals(truthLearner)) {
                 throw new UsageException("--set: learner '" + id + "' is not among --learners or --truth-learner");
             }
         }
@@ -148,9 +147,7 @@ final class CalibrateCommand implements Callable<Integer> {
         String learnedBy = null;
         try {
             if (graph != null) {
-                Graph g = graph.toString().toLowerCase(Locale.ROOT).endsWith(".csv")
-                        ? GraphCsv.read(graph, d.names(), GraphClass.DAG) : GraphJson.read(graph, GraphClass.DAG);
-                truth = TruthGraphs.given(g, d, graph.toString());
+                truth = TruthGraphs.given(GraphFiles.read(graph, d.names(), GraphClass.DAG), d, graph.toString());
                 truthLines.add("Truth graph given in " + graph + " (" + truth.edgeCount() + " edges).");
             } else {
                 CalibrationSettings.Choice c = choice(catalog, truthLearner, "--truth-learner", raw);
@@ -182,7 +179,7 @@ final class CalibrateCommand implements Callable<Integer> {
         for (DataCsv.ColumnKind k : read.columns()) {
             dataLines.add(k.describe());
         }
-        CalibrationView view = CalibrationSummary.view(o, "Calibration of " + String.join(", ", learners) + " on "
+        CalibrationView view = CalibrationSummary.view(o, "Calibration of " + String.join(", ", ids) + " on "
                 + data.getFileName(), dataLines, truthLines, learnedBy);
         Files.createDirectories(out);
         AtomicFiles.writeString(out.resolve("calibration.html"), CalibrationReport.html(view));
@@ -195,14 +192,8 @@ final class CalibrateCommand implements Callable<Integer> {
                         Numbers.format(e.high()));
             }
         }
-        for (String learner : view.learners()) {
-            List<CalibrationView.SizePoint> pts = new ArrayList<>();
-            for (CalibrationView.SizePoint p : view.curve()) {
-                if (p.learner().equals(learner) && p.metric().equals(view.target().metric())) {
-                    pts.add(p);
-                }
-            }
-            stdout.println(SizeAnswer.sentence(learner, pts, view.target(), view.analystRows()));
+        for (String answer : CalibrationReport.answers(view)) {
+            stdout.println(answer);
         }
         for (String w : view.warnings()) {
             stdout.println("warning: " + w);
@@ -220,18 +211,17 @@ final class CalibrateCommand implements Callable<Integer> {
         return n;
     }
 
-    /** The {@code --set} values by learner id. */
+    /** The {@code --set ID.NAME=VALUE} values by learner id (read by {@link Settings}, as for the other verbs). */
     private Map<String, Map<String, String>> parameterSettings() {
         Map<String, Map<String, String>> out = new LinkedHashMap<>();
-        for (String s : settings) {
-            int dot = s.indexOf('.');
-            int eq = s.indexOf('=');
-            if (dot <= 0 || eq < dot + 2) {
-                throw new UsageException("--set " + s + ": expected ID.NAME=VALUE, e.g. pc.alpha=0.01");
+        Settings.parse(settings).forEach((name, value) -> {
+            int dot = name.indexOf('.');
+            if (dot <= 0 || dot == name.length() - 1) {
+                throw new UsageException("--set " + name + "=" + value + ": expected ID.NAME=VALUE, e.g. pc.alpha=0.01");
             }
-            out.computeIfAbsent(s.substring(0, dot).trim(), k -> new LinkedHashMap<>())
-                    .put(s.substring(dot + 1, eq).trim(), s.substring(eq + 1).trim());
-        }
+            out.computeIfAbsent(name.substring(0, dot).trim(), k -> new LinkedHashMap<>())
+                    .put(name.substring(dot + 1).trim(), value);
+        });
         return out;
     }
 

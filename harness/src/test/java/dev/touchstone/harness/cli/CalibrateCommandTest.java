@@ -107,6 +107,14 @@ class CalibrateCommandTest {
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "pc.alpha=7");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set: ") && r.err().contains("alpha"), r.err());
+        // as for learn and simulate (Settings), a parameter set twice is refused rather than the last one winning
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "pc.alpha=0.01",
+                "--set", "pc.alpha=0.05");
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("error: --set pc.alpha=0.05: ") && r.err().contains("set twice"), r.err());
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "alpha=0.01");
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("error: --set alpha=0.01: expected ID.NAME=VALUE"), r.err());
         Path graph = tmp.resolve("g.json");
         GraphJson.write(graph, dev.touchstone.core.graph.Graph.empty(List.of("a", "c")));
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--graph", graph.toString());
