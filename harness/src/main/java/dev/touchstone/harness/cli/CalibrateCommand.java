@@ -104,9 +104,12 @@ final class CalibrateCommand implements Callable<Integer> {
         PrintWriter stdout = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         int n = threads == null ? LocalExecutor.defaultThreads() : threads;
-        if (n < 1 || replicates < 1 || variants < 0 || bootstrap < 0 || !(seconds > 0)) {
-            throw new UsageException("--threads and --replicates must be at least 1, --variants and --bootstrap at"
-                    + " least 0, --seconds positive");
+        atLeast("--threads", n, 1);
+        atLeast("--replicates", replicates, 1);
+        atLeast("--variants", variants, 0);
+        atLeast("--bootstrap", bootstrap, 0);
+        if (!(seconds > 0) || Double.isInfinite(seconds)) {
+            throw new UsageException("--seconds: " + seconds + " is not a positive number of seconds");
         }
         Map<String, VariableKind> declared = new LinkedHashMap<>();
         discrete.forEach(c -> declared.put(c.trim(), VariableKind.DISCRETE));
@@ -164,8 +167,7 @@ final class CalibrateCommand implements Callable<Integer> {
         err.printf(Locale.ROOT, "truth: %d edges; %d truths, %d runs on %d threads%n", truth.edgeCount(),
                 variants + 1, (replicates * sizes.size() + bootstrap) * choices.size(), n);
         err.flush();
-        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, System.console() != null,
-                System.console() != null ? 0.2 : 5.0);
+        Progress progress = Toolkit.progress(quiet, err);
         CalibrationOutcome o;
         try {
             o = Calibration.run(d, truth, settings, progress);
@@ -201,6 +203,12 @@ final class CalibrateCommand implements Callable<Integer> {
         stdout.printf(Locale.ROOT, "report: %s%n", out.resolve("calibration.html"));
         stdout.flush();
         return Main.DONE;
+    }
+
+    private static void atLeast(String option, int value, int least) {
+        if (value < least) {
+            throw new UsageException(option + ": " + value + " is less than " + least);
+        }
     }
 
     private static int missingColumns(DataSet d) {

@@ -115,7 +115,10 @@ class CalibrateCommandTest {
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "alpha=0.01");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set alpha=0.01: expected ID.NAME=VALUE"), r.err());
-        Path graph = tmp.resolve("g.json");
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--replicates", "0");
+        assertEquals(2, r.status());
+        assertEquals("error: --replicates: 0 is less than 1", r.err().strip());
+                Path graph = tmp.resolve("g.json");
         GraphJson.write(graph, dev.touchstone.core.graph.Graph.empty(List.of("a", "c")));
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--graph", graph.toString());
         assertEquals(2, r.status());
