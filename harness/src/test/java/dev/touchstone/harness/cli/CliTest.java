@@ -37,6 +37,20 @@ class CliTest {
     }
 
     @Test
+    @DisplayName("every verb answers --help with its usage (exit 0), so the hint after a usage error works")
+    void helpOnEveryVerb() {
+        for (String verb : List.of("run", "check", "learners", "learn", "simulate", "score", "report", "demo",
+                "calibrate")) {
+            Result r = cli(verb, "--help");
+            assertEquals(0, r.status(), verb + ": " + r.err());
+            assertTrue(r.out().startsWith("Usage: touchstone " + verb), r.out());
+        }
+        Result r = cli("run");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("(see 'touchstone run --help')"), r.err());
+    }
+
+    @Test
     @DisplayName("check validates every bundled scenario and prints the grid and the work")
     void checkScenarios() throws IOException {
         List<Path> scenarios = new ArrayList<>();
