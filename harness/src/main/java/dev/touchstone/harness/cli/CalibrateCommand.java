@@ -40,7 +40,7 @@ import java.util.concurrent.Callable;
  * {@code touchstone calibrate}: how reliable are these learners on data of this size and
  * shape? Fits truths to the data, simulates, runs, bootstraps and writes the report.
  */
-@Command(name = "calibrate", description = "Estimate how well learners would do on data like yours: fit truths to"
+@Command(name = "calibrate", sortOptions = false, description = "Estimate how well learners would do on data like yours: fit truths to"
         + " your data, simulate data sets of its size and shape, run the learners, bootstrap your data.")
 final class CalibrateCommand implements Callable<Integer> {
 

@@ -198,7 +198,7 @@ final class SimulateCommand implements Callable<Integer> {
         write(out, rep.trueDag(), rep.data(), t.label());
         PrintWriter w = spec.commandLine().getOut();
         w.printf(Locale.ROOT, "wrote %,d rows of %d variables (%s; seed %d) to %s: %s%n", rows,
-                rep.data().columns(), t.label(), root, out, String.join(", ", files(rep.trueDag())));
+                rep.data().columns(), t.description(), root, out, String.join(", ", files(rep.trueDag())));
         w.flush();
         return Main.DONE;
     }
