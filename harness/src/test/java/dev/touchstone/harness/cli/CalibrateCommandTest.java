@@ -55,6 +55,7 @@ class CalibrateCommandTest {
                 && !html.contains("href=\"http") && !html.contains("src=\"http"), "self-contained");
         assertTrue(md.contains("| pc | either → xray | yes |"), md);
         assertTrue(md.contains("## With more (or fewer) rows"));
+        assertTrue(md.contains("Made by touchstone "), "provenance: the tool's version and commit");
         List<String> runs = Files.readAllLines(out.resolve("calibration-runs.csv"));
         // 6 replicates × 4 sizes × 2 learners + 4 resamples × 2 learners, plus the header.
         assertEquals(1 + 6 * 4 * 2 + 4 * 2, runs.size());
