@@ -237,6 +237,15 @@ class CliTest {
                 out.toString());
         assertEquals(0, r.status(), r.err());
         assertEquals(g.freeze(), GraphJson.read(out.resolve("truth.json")));
+        // As for the random families: the draw of replicate 0 of a study with the same seed and truth. The file's
+        // path is not part of the seeds (its digest is), so the study may name it relative to its own folder.
+        Path study = tmp.resolve("given.yaml");
+        Files.writeString(study, "name: given\nseed: 1\ntruth:\n  graph: {family: given, file: g.json}\n"
+                + "  model: {kind: linear-gaussian}\nsamples: [50]\nlearners: [empty]\n");
+        Path viaStudy = tmp.resolve("given-study");
+        assertEquals(0, cli("simulate", study.toString(), "--out", viaStudy.toString()).status());
+        assertEquals(Files.readString(viaStudy.resolve("t0-r0/data.csv")), Files.readString(out.resolve("data.csv")),
+                "options and study with the same seed and graph file draw the same data");
     }
 
     @Test
