@@ -36,6 +36,7 @@ public record CalibrationSettings(List<Choice> learners, List<Integer> samples, 
 
     /** One learner with its parameter values. */
     public record Choice(Learner learner, ParameterValues values) {
+        /** The learner's id. */
         public String id() {
             return learner.description().id();
         }
