@@ -4,6 +4,7 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.data.VariableKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterValues;
@@ -154,7 +155,11 @@ final class CalibrateCommand implements Callable<Integer> {
                 truthLines.add("Truth graph given in " + graph + " (" + truth.edgeCount() + " edges).");
             } else {
                 CalibrationSettings.Choice c = choice(catalog, truthLearner, "--truth-learner", raw);
-                truth = TruthGraphs.learned(c, d, seed, limit);
+                if (!quiet) {
+                    err.println("learning the truth graph from the data with " + c.id() + " (--graph FILE gives one)");
+                    err.flush();
+                }
+                truth = learnedTruth(c, d, limit);
                 learnedBy = c.id();
                 truthLines.add("Truth graph learned from the data by " + c.id() + " (" + truth.edgeCount()
                         + " edges; a CPDAG is extended to one of its DAGs).");
@@ -203,6 +208,17 @@ final class CalibrateCommand implements Callable<Integer> {
         stdout.printf(Locale.ROOT, "report: %s%n", out.resolve("calibration.html"));
         stdout.flush();
         return Main.DONE;
+    }
+
+    private Graph learnedTruth(CalibrationSettings.Choice c, DataSet d, Duration limit) {
+        try {
+            return TruthGraphs.learned(c, d, seed, limit);
+        } catch (DeadlineExceededException e) {
+            throw new UsageException("--truth-learner " + c.id() + ": did not finish within " + seconds
+                    + " s (--seconds); give --graph FILE or allow more time", e);
+        } catch (IllegalArgumentException | LearnerException e) {
+            throw new UsageException("--truth-learner " + c.id() + ": " + e.getMessage(), e);
+        }
     }
 
     private static void atLeast(String option, int value, int least) {

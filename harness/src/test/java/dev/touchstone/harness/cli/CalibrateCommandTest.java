@@ -116,7 +116,10 @@ class CalibrateCommandTest {
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "alpha=0.01");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set alpha=0.01: expected ID.NAME=VALUE"), r.err());
-        r = CliTest.cli("calibrate", "--data", ok.toString(), "--replicates", "0");
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--truth-learner", "fci");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("error: --truth-learner fci: it returns a pag"), r.err());
+                r = CliTest.cli("calibrate", "--data", ok.toString(), "--replicates", "0");
         assertEquals(2, r.status());
         assertEquals("error: --replicates: 0 is less than 1", r.err().strip());
                 Path graph = tmp.resolve("g.json");
