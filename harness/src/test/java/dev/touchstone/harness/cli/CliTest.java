@@ -200,9 +200,16 @@ class CliTest {
         Path study = tmp.resolve("same.yaml");
         Files.writeString(study, "name: same\nseed: 5\ntruth:\n  graph: {family: erdos-renyi, nodes: 12, mean_degree: 2}\n"
                 + "  model: {kind: linear-gaussian}\nsamples: [300]\nlearners: [empty]\n");
-        Path viaStudy = tmp.resolve("via-study");
-        assertEquals(0, cli("simulate", study.toString(), "--out", viaStudy.toString()).status());
-        assertEquals(Files.readString(viaStudy.resolve("t0-r0/data.csv")), Files.readString(out.resolve("data.csv")),
+        assertSameDrawAsStudy(study, out);
+    }
+
+    /** Options and a study with the same seed and truth draw the same data: replicate 0 of the study. */
+    private void assertSameDrawAsStudy(Path study, Path fromOptions) throws IOException {
+        Path viaStudy = tmp.resolve("via-" + study.getFileName());
+        Result r = cli("simulate", study.toString(), "--out", viaStudy.toString());
+        assertEquals(0, r.status(), r.err());
+        assertEquals(Files.readString(viaStudy.resolve("t0-r0/data.csv")),
+                Files.readString(fromOptions.resolve("data.csv")),
                 "options and study with the same seed and truth draw the same data");
     }
 
@@ -242,10 +249,7 @@ class CliTest {
         Path study = tmp.resolve("given.yaml");
         Files.writeString(study, "name: given\nseed: 1\ntruth:\n  graph: {family: given, file: g.json}\n"
                 + "  model: {kind: linear-gaussian}\nsamples: [50]\nlearners: [empty]\n");
-        Path viaStudy = tmp.resolve("given-study");
-        assertEquals(0, cli("simulate", study.toString(), "--out", viaStudy.toString()).status());
-        assertEquals(Files.readString(viaStudy.resolve("t0-r0/data.csv")), Files.readString(out.resolve("data.csv")),
-                "options and study with the same seed and graph file draw the same data");
+        assertSameDrawAsStudy(study, out);
     }
 
     @Test
