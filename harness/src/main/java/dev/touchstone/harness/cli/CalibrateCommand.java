@@ -31,10 +31,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.Callable;
 
 /**
@@ -127,6 +129,7 @@ final class CalibrateCommand implements Callable<Integer> {
         LearnerCatalog catalog = new Toolkit(null, null).learners;
         Map<String, Map<String, String>> raw = parameterSettings();
         List<String> ids = learners.stream().map(String::trim).toList();
+        once("--learners", ids);
         List<CalibrationSettings.Choice> choices = new ArrayList<>();
         for (String id : ids) {
             choices.add(choice(catalog, id, "--learners", raw));
@@ -143,6 +146,7 @@ final class CalibrateCommand implements Callable<Integer> {
                 throw new UsageException("--samples: " + s + " is not a sample size of at least 2");
             }
         }
+        once("--samples", sizes);
         CalibrationSettings settings = new CalibrationSettings(choices, sizes, replicates, variants, bootstrap, seed,
                 n, limit);
         err.print(read.describeKinds());
@@ -218,6 +222,16 @@ final class CalibrateCommand implements Callable<Integer> {
                     + " s (--seconds); give --graph FILE or allow more time", e);
         } catch (IllegalArgumentException | LearnerException e) {
             throw new UsageException("--truth-learner " + c.id() + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** Refuses a value listed twice: it would make runs with the same coordinates, hence the same keys. */
+    private static void once(String option, List<?> values) {
+        Set<Object> seen = new HashSet<>();
+        for (Object v : values) {
+            if (!seen.add(v)) {
+                throw new UsageException(option + ": " + v + " is listed twice");
+            }
         }
     }
 

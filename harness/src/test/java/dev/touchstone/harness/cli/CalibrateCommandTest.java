@@ -116,7 +116,14 @@ class CalibrateCommandTest {
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "alpha=0.01");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set alpha=0.01: expected ID.NAME=VALUE"), r.err());
-        r = CliTest.cli("calibrate", "--data", ok.toString(), "--truth-learner", "fci");
+        // a size or learner given twice made duplicate runs (same keys), reported as runs that did not finish
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--samples", "4,8,4");
+        assertEquals(2, r.status());
+        assertEquals("error: --samples: 4 is listed twice", r.err().strip());
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc,ges,pc");
+        assertEquals(2, r.status());
+        assertEquals("error: --learners: pc is listed twice", r.err().strip());
+                r = CliTest.cli("calibrate", "--data", ok.toString(), "--truth-learner", "fci");
         assertEquals(2, r.status());
         assertTrue(r.err().contains("error: --truth-learner fci: it returns a pag"), r.err());
                 r = CliTest.cli("calibrate", "--data", ok.toString(), "--replicates", "0");
