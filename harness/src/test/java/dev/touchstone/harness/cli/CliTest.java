@@ -172,7 +172,10 @@ class CliTest {
         for (String f : List.of("truth.dot", "cpdag.json", "pag.json", "audit.json")) {
             assertTrue(Files.exists(one.resolve(f)), f);
         }
-        assertEquals(9, Files.readAllLines(out.resolve("replicates.csv")).size());
+        List<String> index = Files.readAllLines(out.resolve("replicates.csv"));
+        assertEquals(9, index.size());
+        assertEquals("folder,truth_setting,replicate,rows,seed,setting", index.get(0));
+        assertTrue(index.get(1).startsWith("t0-r0,0,0,1000,"), index.get(1));
     }
 
     @Test
