@@ -24,7 +24,6 @@ import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.scoring.Direction;
 import dev.touchstone.metrics.scoring.Metric;
-import dev.touchstone.metrics.scoring.MetricRegistry;
 import dev.touchstone.metrics.truth.TruthSelection;
 import dev.touchstone.reports.HtmlReport;
 import dev.touchstone.reports.MarkdownReport;
@@ -121,7 +120,7 @@ public final class StudyReports {
         }
         List<RankingResult> rankings = new ArrayList<>();
         for (String m : metrics) {
-            Metric metric = MetricRegistry.find(m).orElse(null);
+            Metric metric = MetricAgainst.find(m).orElse(null);
             if (metric != null && metric.direction() != Direction.NONE && !m.equals("seconds")) {
                 rankings.add(Ranking.over(runs, m, 0.05));
             }

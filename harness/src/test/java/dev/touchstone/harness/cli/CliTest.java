@@ -309,6 +309,8 @@ class CliTest {
         String summary = Files.readString(out.resolve("summary.csv"));
         assertTrue(summary.contains(",shd_vs_pag,"), summary);
         assertTrue(Files.readString(out.resolve("comparisons.csv")).contains(",shd_vs_dag,"));
+        assertTrue(Files.readString(out.resolve("report.html")).contains("Mean ranks on shd_vs_dag"),
+                "ranked by the base metric's direction, like shd");
         assertTrue(Files.readString(out.resolve("study.yaml")).contains("score_against"));
         // By hand: an empty estimate differs from the truth on every true edge's pair, and a DAG and its CPDAG share
         // one skeleton, so the empty graph's SHD against the true DAG equals its SHD against the true CPDAG.
