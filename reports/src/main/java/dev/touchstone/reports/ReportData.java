@@ -145,12 +145,12 @@ public final class ReportData {
         return sampleCoordinate;
     }
 
-    /** The setting coordinate holding the graph size (default {@code nodes}). */
     /** Coordinates splitting the headline into groups; empty for one table. */
     public List<String> groupCoordinates() {
         return groupCoordinates;
     }
 
+    /** The setting coordinate holding the graph size (default {@code nodes}). */
     public String sizeCoordinate() {
         return sizeCoordinate;
     }

@@ -2,6 +2,7 @@ package dev.touchstone.generators.fit;
 
 import org.apache.commons.math3.distribution.ChiSquaredDistribution;
 import org.apache.commons.math3.distribution.TDistribution;
+import org.apache.commons.math3.stat.correlation.PearsonsCorrelation;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -98,25 +99,12 @@ public final class FitDiagnostics {
         for (int i = 0; i < m; i++) {
             sq[i] = (f[i] - fm) * (f[i] - fm);
         }
-        double r = correlation(e, sq);
+        // Pearson's r by Commons Math (NaN when either side is constant)
+        double r = new PearsonsCorrelation().correlation(e, sq);
         if (Double.isNaN(r)) {
             return null;
         }
         double t = r * Math.sqrt((m - 2) / Math.max(1e-300, 1 - r * r));
         return 2 * (1 - new TDistribution(null, m - 2).cumulativeProbability(Math.abs(t)));
-    }
-
-    static double correlation(double[] a, double[] b) {
-        double ma = moments(a)[0];
-        double mb = moments(b)[0];
-        double sab = 0;
-        double saa = 0;
-        double sbb = 0;
-        for (int i = 0; i < a.length; i++) {
-            sab += (a[i] - ma) * (b[i] - mb);
-            saa += (a[i] - ma) * (a[i] - ma);
-            sbb += (b[i] - mb) * (b[i] - mb);
-        }
-        return saa == 0 || sbb == 0 ? Double.NaN : sab / Math.sqrt(saa * sbb);
     }
 }

@@ -34,10 +34,12 @@ public final class FittedModel {
         this.missingRates = missingRates.clone();
     }
 
+    /** The DAG the parameters were fitted over. */
     public Graph dag() {
         return dag;
     }
 
+    /** The variables (names and kinds, levels of discrete ones) as in the data, in graph order. */
     public List<Variable> variables() {
         return variables;
     }
@@ -47,6 +49,7 @@ public final class FittedModel {
         return nodes;
     }
 
+    /** The fitted mechanism of the variable of this name. */
     public FittedNode node(String name) {
         return nodes.get(dag.index(name));
     }

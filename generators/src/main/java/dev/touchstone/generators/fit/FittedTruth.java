@@ -29,22 +29,27 @@ public final class FittedTruth {
         this.missingness = missingness;
     }
 
+    /** The short name the caller gave it. */
     public String name() {
         return name;
     }
 
+    /** One line saying how this truth was made. */
     public String description() {
         return description;
     }
 
+    /** The true DAG. */
     public Graph dag() {
         return dag;
     }
 
+    /** The model data are drawn from. */
     public StructuralModel model() {
         return model;
     }
 
+    /** How cells go missing in drawn data. */
     public MissingnessPlan missingness() {
         return missingness;
     }

@@ -31,6 +31,7 @@ public record CalibrationOutcome(DataSet data, FittedModel fitted, List<FittedTr
      * @param estimate the graph the learner returned, or null when it did not finish
      */
     public record Run(FittedTruth truth, int replicate, int rows, String learner, RunResult result, Graph estimate) {
+        /** Whether the run was on a bootstrap resample of the real data (no truth, no metrics). */
         public boolean isBootstrap() {
             return truth == null;
         }

@@ -28,6 +28,13 @@ public record CalibrationSettings(List<Choice> learners, List<Integer> samples, 
         if (samples.isEmpty() || samples.stream().anyMatch(n -> n < 2)) {
             throw new IllegalArgumentException("sample sizes must be at least 2");
         }
+        // a size or learner listed twice would make runs with the same coordinates, hence the same keys
+        if (samples.stream().distinct().count() < samples.size()) {
+            throw new IllegalArgumentException("a sample size is listed twice: " + samples);
+        }
+        if (learners.stream().map(Choice::id).distinct().count() < learners.size()) {
+            throw new IllegalArgumentException("a learner is listed twice");
+        }
         if (replicates < 1 || variants < 0 || bootstrap < 0 || threads < 1) {
             throw new IllegalArgumentException("replicates and threads must be at least 1; variants and bootstrap"
                     + " resamples at least 0");
@@ -36,6 +43,7 @@ public record CalibrationSettings(List<Choice> learners, List<Integer> samples, 
 
     /** One learner with its parameter values. */
     public record Choice(Learner learner, ParameterValues values) {
+        /** The learner's id. */
         public String id() {
             return learner.description().id();
         }

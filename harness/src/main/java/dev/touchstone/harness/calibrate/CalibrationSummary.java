@@ -5,6 +5,7 @@ import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.generators.fit.FitDiagnostics;
 import dev.touchstone.generators.fit.FittedTruth;
+import dev.touchstone.harness.version.VersionInfo;
 import dev.touchstone.metrics.aggregate.Quantiles;
 import dev.touchstone.metrics.results.RunStatus;
 import dev.touchstone.reports.calibration.CalibrationView;
@@ -168,6 +169,7 @@ public final class CalibrationSummary {
         int runs = o.runs().size();
         long ok = o.runs().stream().filter(r -> r.result() != null && r.result().status() == RunStatus.OK).count();
         out.add(String.format(Locale.ROOT, "%,d runs, %,d ok.", runs, ok));
+        out.add("Made by " + VersionInfo.current() + " on Java " + System.getProperty("java.version") + ".");
         return out;
     }
 

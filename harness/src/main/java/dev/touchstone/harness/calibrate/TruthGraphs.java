@@ -61,7 +61,7 @@ public final class TruthGraphs {
      * CPDAG.
      *
      * @throws IllegalArgumentException when the learner returns a class other than DAG or
-     *     CPDAG, or a CPDAG with no consistent extension
+     *     CPDAG, or a CPDAG with no consistent extension (the message reads after the learner's id)
      */
     public static Graph learned(CalibrationSettings.Choice choice, DataSet data, long seed, Duration limit) {
         LearnerInput input = LearnerInput.of(data);
@@ -72,13 +72,13 @@ public final class TruthGraphs {
             return e.graph();
         }
         if (e.graphClass() != GraphClass.CPDAG) {
-            throw new IllegalArgumentException("the truth learner " + choice.id() + " returns a "
-                    + e.graphClass().word() + "; choose one that returns a DAG or CPDAG, or give --graph");
+            throw new IllegalArgumentException("it returns a " + e.graphClass().word()
+                    + "; choose a learner that returns a DAG or CPDAG, or give --graph");
         }
         Graph dag = DagExtension.of(e.graph());
         if (dag == null) {
-            throw new IllegalArgumentException("the graph learned by " + choice.id() + " has no DAG extension"
-                    + " (conflicting orientations); choose another truth learner or give --graph");
+            throw new IllegalArgumentException("the CPDAG it learned has no DAG extension (conflicting"
+                    + " orientations); choose another truth learner or give --graph");
         }
         return dag;
     }

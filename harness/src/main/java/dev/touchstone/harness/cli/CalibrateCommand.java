@@ -4,6 +4,7 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.data.VariableKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterValues;
@@ -17,11 +18,9 @@ import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.io.AtomicFiles;
 import dev.touchstone.harness.io.DataCsv;
-import dev.touchstone.harness.io.GraphCsv;
-import dev.touchstone.harness.io.GraphJson;
+import dev.touchstone.harness.io.GraphFiles;
 import dev.touchstone.reports.calibration.CalibrationReport;
 import dev.touchstone.reports.calibration.CalibrationView;
-import dev.touchstone.reports.calibration.SizeAnswer;
 import dev.touchstone.reports.tables.Numbers;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -32,17 +31,19 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.Callable;
 
 /**
  * {@code touchstone calibrate}: how reliable are these learners on data of this size and
  * shape? Fits truths to the data, simulates, runs, bootstraps and writes the report.
  */
-@Command(name = "calibrate", description = "Estimate how well learners would do on data like yours: fit truths to"
+@Command(name = "calibrate", sortOptions = false, description = "Estimate how well learners would do on data like yours: fit truths to"
         + " your data, simulate data sets of its size and shape, run the learners, bootstrap your data.")
 final class CalibrateCommand implements Callable<Integer> {
 
@@ -106,9 +107,12 @@ final class CalibrateCommand implements Callable<Integer> {
         PrintWriter stdout = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         int n = threads == null ? LocalExecutor.defaultThreads() : threads;
-        if (n < 1 || replicates < 1 || variants < 0 || bootstrap < 0 || !(seconds > 0)) {
-            throw new UsageException("--threads and --replicates must be at least 1, --variants and --bootstrap at"
-                    + " least 0, --seconds positive");
+        atLeast("--threads", n, 1);
+        atLeast("--replicates", replicates, 1);
+        atLeast("--variants", variants, 0);
+        atLeast("--bootstrap", bootstrap, 0);
+        if (!(seconds > 0) || Double.isInfinite(seconds)) {
+            throw new UsageException("--seconds: " + seconds + " is not a positive number of seconds");
         }
         Map<String, VariableKind> declared = new LinkedHashMap<>();
         discrete.forEach(c -> declared.put(c.trim(), VariableKind.DISCRETE));
@@ -124,12 +128,14 @@ final class CalibrateCommand implements Callable<Integer> {
         }
         LearnerCatalog catalog = new Toolkit(null, null).learners;
         Map<String, Map<String, String>> raw = parameterSettings();
+        List<String> ids = learners.stream().map(String::trim).toList();
+        once("--learners", ids);
         List<CalibrationSettings.Choice> choices = new ArrayList<>();
-        for (String id : learners) {
-            choices.add(choice(catalog, id.trim(), "--learners", raw));
+        for (String id : ids) {
+            choices.add(choice(catalog, id, "--learners", raw));
         }
         for (String id : raw.keySet()) {
-            if (!learners.contains(id) && !id.equals(truthLearner)) {
+            if (!ids.contains(id) && !id.equals(truthLearner)) {
                 throw new UsageException("--set: learner '" + id + "' is not among --learners or --truth-learner");
             }
         }
@@ -140,6 +146,7 @@ final class CalibrateCommand implements Callable<Integer> {
                 throw new UsageException("--samples: " + s + " is not a sample size of at least 2");
             }
         }
+        once("--samples", sizes);
         CalibrationSettings settings = new CalibrationSettings(choices, sizes, replicates, variants, bootstrap, seed,
                 n, limit);
         err.print(read.describeKinds());
@@ -148,13 +155,15 @@ final class CalibrateCommand implements Callable<Integer> {
         String learnedBy = null;
         try {
             if (graph != null) {
-                Graph g = graph.toString().toLowerCase(Locale.ROOT).endsWith(".csv")
-                        ? GraphCsv.read(graph, d.names(), GraphClass.DAG) : GraphJson.read(graph, GraphClass.DAG);
-                truth = TruthGraphs.given(g, d, graph.toString());
+                truth = TruthGraphs.given(GraphFiles.read(graph, d.names(), GraphClass.DAG), d, graph.toString());
                 truthLines.add("Truth graph given in " + graph + " (" + truth.edgeCount() + " edges).");
             } else {
                 CalibrationSettings.Choice c = choice(catalog, truthLearner, "--truth-learner", raw);
-                truth = TruthGraphs.learned(c, d, seed, limit);
+                if (!quiet) {
+                    err.println("learning the truth graph from the data with " + c.id() + " (--graph FILE gives one)");
+                    err.flush();
+                }
+                truth = learnedTruth(c, d, limit);
                 learnedBy = c.id();
                 truthLines.add("Truth graph learned from the data by " + c.id() + " (" + truth.edgeCount()
                         + " edges; a CPDAG is extended to one of its DAGs).");
@@ -167,8 +176,7 @@ final class CalibrateCommand implements Callable<Integer> {
         err.printf(Locale.ROOT, "truth: %d edges; %d truths, %d runs on %d threads%n", truth.edgeCount(),
                 variants + 1, (replicates * sizes.size() + bootstrap) * choices.size(), n);
         err.flush();
-        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, System.console() != null,
-                System.console() != null ? 0.2 : 5.0);
+        Progress progress = Toolkit.progress(quiet, err);
         CalibrationOutcome o;
         try {
             o = Calibration.run(d, truth, settings, progress);
@@ -182,7 +190,7 @@ final class CalibrateCommand implements Callable<Integer> {
         for (DataCsv.ColumnKind k : read.columns()) {
             dataLines.add(k.describe());
         }
-        CalibrationView view = CalibrationSummary.view(o, "Calibration of " + String.join(", ", learners) + " on "
+        CalibrationView view = CalibrationSummary.view(o, "Calibration of " + String.join(", ", ids) + " on "
                 + data.getFileName(), dataLines, truthLines, learnedBy);
         Files.createDirectories(out);
         AtomicFiles.writeString(out.resolve("calibration.html"), CalibrationReport.html(view));
@@ -195,14 +203,8 @@ final class CalibrateCommand implements Callable<Integer> {
                         Numbers.format(e.high()));
             }
         }
-        for (String learner : view.learners()) {
-            List<CalibrationView.SizePoint> pts = new ArrayList<>();
-            for (CalibrationView.SizePoint p : view.curve()) {
-                if (p.learner().equals(learner) && p.metric().equals(view.target().metric())) {
-                    pts.add(p);
-                }
-            }
-            stdout.println(SizeAnswer.sentence(learner, pts, view.target(), view.analystRows()));
+        for (String answer : CalibrationReport.answers(view)) {
+            stdout.println(answer);
         }
         for (String w : view.warnings()) {
             stdout.println("warning: " + w);
@@ -210,6 +212,33 @@ final class CalibrateCommand implements Callable<Integer> {
         stdout.printf(Locale.ROOT, "report: %s%n", out.resolve("calibration.html"));
         stdout.flush();
         return Main.DONE;
+    }
+
+    private Graph learnedTruth(CalibrationSettings.Choice c, DataSet d, Duration limit) {
+        try {
+            return TruthGraphs.learned(c, d, seed, limit);
+        } catch (DeadlineExceededException e) {
+            throw new UsageException("--truth-learner " + c.id() + ": did not finish within " + seconds
+                    + " s (--seconds); give --graph FILE or allow more time", e);
+        } catch (IllegalArgumentException | LearnerException e) {
+            throw new UsageException("--truth-learner " + c.id() + ": " + e.getMessage(), e);
+        }
+    }
+
+    /** Refuses a value listed twice: it would make runs with the same coordinates, hence the same keys. */
+    private static void once(String option, List<?> values) {
+        Set<Object> seen = new HashSet<>();
+        for (Object v : values) {
+            if (!seen.add(v)) {
+                throw new UsageException(option + ": " + v + " is listed twice");
+            }
+        }
+    }
+
+    private static void atLeast(String option, int value, int least) {
+        if (value < least) {
+            throw new UsageException(option + ": " + value + " is less than " + least);
+        }
     }
 
     private static int missingColumns(DataSet d) {
@@ -220,18 +249,17 @@ final class CalibrateCommand implements Callable<Integer> {
         return n;
     }
 
-    /** The {@code --set} values by learner id. */
+    /** The {@code --set ID.NAME=VALUE} values by learner id (read by {@link Settings}, as for the other verbs). */
     private Map<String, Map<String, String>> parameterSettings() {
         Map<String, Map<String, String>> out = new LinkedHashMap<>();
-        for (String s : settings) {
-            int dot = s.indexOf('.');
-            int eq = s.indexOf('=');
-            if (dot <= 0 || eq < dot + 2) {
-                throw new UsageException("--set " + s + ": expected ID.NAME=VALUE, e.g. pc.alpha=0.01");
+        Settings.parse(settings).forEach((name, value) -> {
+            int dot = name.indexOf('.');
+            if (dot <= 0 || dot == name.length() - 1) {
+                throw new UsageException("--set " + name + "=" + value + ": expected ID.NAME=VALUE, e.g. pc.alpha=0.01");
             }
-            out.computeIfAbsent(s.substring(0, dot).trim(), k -> new LinkedHashMap<>())
-                    .put(s.substring(dot + 1, eq).trim(), s.substring(eq + 1).trim());
-        }
+            out.computeIfAbsent(name.substring(0, dot).trim(), k -> new LinkedHashMap<>())
+                    .put(name.substring(dot + 1).trim(), value);
+        });
         return out;
     }
 

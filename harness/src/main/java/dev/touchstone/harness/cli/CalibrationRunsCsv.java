@@ -1,13 +1,18 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.calibrate.Calibration;
 import dev.touchstone.harness.calibrate.CalibrationOutcome;
 import dev.touchstone.harness.calibrate.CalibrationSettings;
-import dev.touchstone.harness.study.Canonical;
+import dev.touchstone.harness.execution.Cells;
+import dev.touchstone.metrics.results.RunResult;
+
+import java.util.ArrayList;
+import java.util.List;
 
 /**
  * {@code calibration-runs.csv}: one row per run (truth, replicate, rows, learner, status,
  * message, then every metric; bootstrap runs have truth {@code bootstrap} and no metrics),
- * tidy for R and pandas.
+ * tidy for R and pandas, written as the study's CSV files are ({@link Cells}).
  */
 final class CalibrationRunsCsv {
 
@@ -15,29 +20,19 @@ final class CalibrationRunsCsv {
     }
 
     static String render(CalibrationOutcome o) {
-        StringBuilder sb = new StringBuilder("truth,replicate,rows,learner,status,message");
-        for (String m : CalibrationSettings.METRICS) {
-            sb.append(',').append(m);
-        }
-        sb.append('\n');
+        List<String> header = new ArrayList<>(List.of("truth", "replicate", "rows", "learner", "status", "message"));
+        header.addAll(CalibrationSettings.METRICS);
+        List<List<String>> rows = new ArrayList<>();
         for (CalibrationOutcome.Run r : o.runs()) {
-            sb.append(r.isBootstrap() ? "bootstrap" : r.truth().name()).append(',').append(r.replicate()).append(',')
-                    .append(r.rows()).append(',').append(r.learner()).append(',')
-                    .append(r.result() == null ? "" : r.result().status().word()).append(',')
-                    .append(quote(r.result() == null || r.result().message() == null ? "" : r.result().message()));
+            RunResult result = r.result();
+            List<String> row = new ArrayList<>(List.of(r.isBootstrap() ? Calibration.BOOTSTRAP : r.truth().name(),
+                    Integer.toString(r.replicate()), Integer.toString(r.rows()), r.learner(),
+                    result == null ? "" : result.status().word(), Cells.text(result == null ? null : result.message())));
             for (String m : CalibrationSettings.METRICS) {
-                Double v = r.result() == null ? null : r.result().metrics().get(m);
-                sb.append(',').append(v == null ? "" : Canonical.value(v));
+                row.add(Cells.number(result == null ? null : result.metrics().get(m)));
             }
-            sb.append('\n');
+            rows.add(row);
         }
-        return sb.toString();
-    }
-
-    private static String quote(String s) {
-        if (s.indexOf(',') < 0 && s.indexOf('"') < 0 && s.indexOf('\n') < 0) {
-            return s;
-        }
-        return '"' + s.replace("\"", "\"\"") + '"';
+        return Cells.csv(header, rows);
     }
 }

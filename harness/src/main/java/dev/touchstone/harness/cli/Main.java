@@ -47,6 +47,7 @@ public final class Main implements Runnable {
     public static int execute(String[] args, PrintWriter out, PrintWriter err) {
         Main main = new Main();
         CommandLine cl = new CommandLine(main);
+        addHelpOption(cl);
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
@@ -68,6 +69,21 @@ public final class Main implements Runnable {
             return BAD_INPUT;
         });
         return cl.execute(args);
+    }
+
+    /**
+     * Gives every verb a {@code -h/--help} option (usage, exit 0) unless it declares one, so
+     * that {@code touchstone VERB --help}, which the usage-error hint names, works everywhere.
+     */
+    private static void addHelpOption(CommandLine cl) {
+        for (CommandLine sub : cl.getSubcommands().values()) {
+            CommandLine.Model.CommandSpec spec = sub.getCommandSpec();
+            if (spec.optionsMap().containsKey("--help") || sub.getCommand() instanceof CommandLine.HelpCommand) {
+                continue;
+            }
+            spec.addOption(CommandLine.Model.OptionSpec.builder("-h", "--help").usageHelp(true)
+                    .description("Show this help message and exit.").build());
+        }
     }
 
     private static boolean hasDebug(CommandLine.ParseResult pr) {

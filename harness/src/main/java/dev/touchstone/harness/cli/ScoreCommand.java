@@ -8,7 +8,6 @@ import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.algorithms.Ancestry;
-import dev.touchstone.harness.io.GraphCsv;
 import dev.touchstone.harness.io.GraphFiles;
 import dev.touchstone.metrics.scoring.Scorer;
 import dev.touchstone.metrics.truth.Truth;
@@ -63,8 +62,8 @@ public final class ScoreCommand implements Callable<Integer> {
                 throw new UsageException(f + ": no such file");
             }
         }
-        Graph truthGraph = read(truthFile, null, null);
-        Graph estimate = read(estimateFile, estimateClass, truthGraph.names());
+        Graph truthGraph = GraphFiles.read(truthFile, null);
+        Graph estimate = GraphFiles.read(estimateFile, truthGraph.names(), estimateClass);
         if (estimateClass == null) {
             estimateClass = narrowest(estimate);
         }
@@ -114,12 +113,6 @@ public final class ScoreCommand implements Callable<Integer> {
         return c;
     }
 
-    private static Graph read(Path file, GraphClass expected, List<String> variables) throws IOException {
-        if (variables != null && GraphFiles.isCsv(file)) {
-            return GraphCsv.read(file, variables, expected);
-        }
-        return GraphFiles.read(file, expected);
-    }
 
     /** DAG when every edge is directed and acyclic, CPDAG when only tails and arrows (no ↔) occur, else PAG. */
     static GraphClass narrowest(Graph g) {

@@ -8,6 +8,7 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.algorithms.Cpdags;
 import dev.touchstone.generators.audit.SortabilityAudit;
+import dev.touchstone.harness.execution.Cells;
 import dev.touchstone.harness.execution.GeneratorSimulator;
 import dev.touchstone.harness.execution.Replicate;
 import dev.touchstone.harness.execution.StudyRunner;
@@ -137,7 +138,7 @@ final class SimulateCommand implements Callable<Integer> {
         int rows = StudyRunner.largestRows(plan);
         Files.createDirectories(out);
         GeneratorSimulator sim = new GeneratorSimulator();
-        StringBuilder index = new StringBuilder("folder,truth_setting,replicate,rows,seed,setting\n");
+        List<List<String>> index = new ArrayList<>();
         int written = 0;
         for (TruthSetting t : plan.truths()) {
             for (int r = 0; r < plan.study().replicates(); r++) {
@@ -145,13 +146,13 @@ final class SimulateCommand implements Callable<Integer> {
                 Replicate rep = sim.draw(t, seeds, rows);
                 String name = String.format(Locale.ROOT, "t%d-r%d", t.index(), r);
                 write(out.resolve(name), rep.trueDag(), rep.data(), name);
-                index.append(name).append(',').append(t.index()).append(',').append(r).append(',').append(rows)
-                        .append(',').append(seeds.replicateSeed()).append(",\"").append(t.label().replace("\"", "'"))
-                        .append("\"\n");
+                index.add(List.of(name, Integer.toString(t.index()), Integer.toString(r), Integer.toString(rows),
+                        Long.toString(seeds.replicateSeed()), t.label()));
                 written++;
             }
         }
-        AtomicFiles.writeString(out.resolve("replicates.csv"), index.toString());
+        AtomicFiles.writeString(out.resolve("replicates.csv"), Cells.csv(List.of("folder", "truth_setting",
+                "replicate", "rows", "seed", "setting"), index));
         StringBuilder sizes = new StringBuilder();
         for (SampleSize n : plan.study().samples()) {
             sizes.append(sizes.length() == 0 ? "" : ", ").append(n.word());
@@ -198,7 +199,7 @@ final class SimulateCommand implements Callable<Integer> {
         write(out, rep.trueDag(), rep.data(), t.label());
         PrintWriter w = spec.commandLine().getOut();
         w.printf(Locale.ROOT, "wrote %,d rows of %d variables (%s; seed %d) to %s: %s%n", rows,
-                rep.data().columns(), t.label(), root, out, String.join(", ", files(rep.trueDag())));
+                rep.data().columns(), t.description(), root, out, String.join(", ", files(rep.trueDag())));
         w.flush();
         return Main.DONE;
     }

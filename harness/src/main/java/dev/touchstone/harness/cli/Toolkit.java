@@ -92,14 +92,19 @@ final class Toolkit {
         return run(plan, folder, threads, quiet, err, Engine.LOCAL);
     }
 
+    /** Progress on {@code err} unless {@code quiet}: live on a terminal, plain lines every 5 s otherwise. */
+    static Progress progress(boolean quiet, PrintWriter err) {
+        boolean terminal = System.console() != null;
+        return quiet ? Progress.quiet() : Progress.lines(err, terminal, terminal ? 0.2 : 5.0);
+    }
+
     /** As {@link #run(Plan, Path, Integer, boolean, PrintWriter)}, on the given engine. */
     StudyRunner.Outcome run(Plan plan, Path folder, Integer threads, boolean quiet, PrintWriter err, Engine engine) {
         int n = threads == null ? LocalExecutor.defaultThreads() : threads;
         if (n < 1) {
             throw new UsageException("--threads must be at least 1, got " + n);
         }
-        boolean terminal = System.console() != null;
-        Progress progress = quiet ? Progress.quiet() : Progress.lines(err, terminal, terminal ? 0.2 : 5.0);
+        Progress progress = progress(quiet, err);
         try {
             return runner().on(engine).run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
         } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {

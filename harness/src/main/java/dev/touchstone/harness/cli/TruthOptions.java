@@ -40,7 +40,7 @@ final class TruthOptions {
     /**
      * The truth setting these options describe.
      *
-     * @param settings the {@code --set} values by name
+     * @param given    the {@code --set} values by name
      * @param baseDir  the folder relative paths resolve against (the working folder)
      * @throws UsageException naming the option at fault
      */
@@ -81,8 +81,8 @@ final class TruthOptions {
         for (int i = 0; i < chosen.size(); i++) {
             TruthCatalog.Section s = chosen.get(i);
             TruthCatalog.Kind k = chosenKinds.get(i);
-            Map<String, Object> values0 = raw.get(i);
-            for (Map.Entry<String, Object> e : values0.entrySet()) {
+            Map<String, Object> written = raw.get(i);
+            for (Map.Entry<String, Object> e : written.entrySet()) {
                 try {
                     e.setValue(catalog.bind(s.name(), k.name(), e.getKey(), k.parameter(e.getKey()).parse(e.getValue()),
                             baseDir));
@@ -92,12 +92,13 @@ final class TruthOptions {
             }
             ParameterValues values;
             try {
-                values = ParameterValues.resolve(s.name() + " " + k.name(), k.parameters(), values0);
+                values = ParameterValues.resolve(s.name() + " " + k.name(), k.parameters(), written);
             } catch (ParameterException ex) {
                 throw new UsageException("--set: " + ex.getMessage(), ex);
             }
-            choices.add(new TruthSetting.Choice(s.name(), k.name(), values, values0,
-                    catalog.fingerprint(s.name(), k.name(), values)));
+            // the same choice a study's expansion makes (fingerprint and locations), so seeds agree with a study's
+            choices.add(new TruthSetting.Choice(s.name(), k.name(), values, written,
+                    catalog.fingerprint(s.name(), k.name(), values), catalog.locations(s.name(), k.name())));
         }
         TruthSetting t = new TruthSetting(0, choices);
         try {

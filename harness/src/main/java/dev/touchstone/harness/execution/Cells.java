@@ -11,16 +11,18 @@ import java.util.List;
 /**
  * How values are written into the study's CSV files, in one place: undefined values as an
  * empty cell (never 0, never "NaN"), whole numbers without a decimal point, other numbers
- * in their shortest exact form, one header row, {@code \n} line ends.
+ * in their shortest exact form, one header row, {@code \n} line ends. Also used by the
+ * calibration's {@code calibration-runs.csv}, so every CSV file the tool writes looks alike.
  */
-final class Cells {
+public final class Cells {
 
     static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
 
     private Cells() {
     }
 
-    static String number(Double v) {
+    /** A number's cell: empty when undefined or not finite, whole numbers without a decimal point. */
+    public static String number(Double v) {
         if (v == null || !Double.isFinite(v)) {
             return "";
         }
@@ -39,12 +41,13 @@ final class Cells {
         return v == null ? "" : Integer.toString(v);
     }
 
-    static String text(String s) {
+    /** A text's cell: empty for null (quoting is the CSV printer's). */
+    public static String text(String s) {
         return s == null ? "" : s;
     }
 
     /** Renders a header and rows to CSV text. */
-    static String csv(List<String> header, List<List<String>> rows) {
+    public static String csv(List<String> header, List<List<String>> rows) {
         StringWriter w = new StringWriter();
         try (CSVPrinter p = new CSVPrinter(w, FORMAT)) {
             p.printRecord(header);

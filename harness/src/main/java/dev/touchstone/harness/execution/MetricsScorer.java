@@ -3,10 +3,9 @@ package dev.touchstone.harness.execution;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.Estimate;
+import dev.touchstone.metrics.against.MetricAgainst;
 import dev.touchstone.metrics.truth.Truth;
 import dev.touchstone.metrics.truth.TruthSelection;
-
-import dev.touchstone.harness.study.ExtraMetric;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -28,9 +27,9 @@ public final class MetricsScorer implements Scorer {
     public Scored score(Replicate replicate, Estimate estimate, List<String> metrics) {
         Truth truth = truthFor(replicate.trueDag(), estimate.graphClass());
         List<String> plain = new ArrayList<>();
-        Map<GraphClass, List<ExtraMetric>> extras = new LinkedHashMap<>();
+        Map<GraphClass, List<MetricAgainst>> extras = new LinkedHashMap<>();
         for (String m : metrics) {
-            ExtraMetric x = ExtraMetric.parse(m);
+            MetricAgainst x = MetricAgainst.parse(m);
             if (x == null) {
                 plain.add(m);
             } else {
@@ -48,7 +47,7 @@ public final class MetricsScorer implements Scorer {
      * undefined (null) when that truth does not exist, e.g. a CPDAG when variables are hidden.
      */
     private static Map<String, Double> scoreAgainst(Graph dag, Estimate estimate, GraphClass against,
-                                                    List<ExtraMetric> wanted) {
+                                                    List<MetricAgainst> wanted) {
         Map<String, Double> out = new LinkedHashMap<>();
         Truth truth;
         try {
@@ -58,7 +57,7 @@ public final class MetricsScorer implements Scorer {
             return out;
         }
         Map<String, Double> v = dev.touchstone.metrics.scoring.Scorer.score(truth, estimate.graph(),
-                estimate.graphClass(), wanted.stream().map(ExtraMetric::base).toList());
+                estimate.graphClass(), wanted.stream().map(MetricAgainst::base).toList());
         wanted.forEach(x -> out.put(x.name(), v.get(x.base())));
         return out;
     }

@@ -33,4 +33,16 @@ public final class GraphFiles {
         return isCsv(file) ? GraphCsv.readWithVariablesFromEdges(file, List.of(), expected)
                 : GraphJson.read(file, expected);
     }
+
+    /**
+     * Reads a graph file whose variables are known (a data set's columns): a CSV edge list is
+     * read over them, in their order; graph JSON names its own.
+     *
+     * @param variables the variables, or null to take them from the file
+     * @param expected  the class the graph must belong to, or null for any
+     * @throws FileFormatException naming the file and place at fault
+     */
+    public static Graph read(Path file, List<String> variables, GraphClass expected) throws IOException {
+        return variables != null && isCsv(file) ? GraphCsv.read(file, variables, expected) : read(file, expected);
+    }
 }

@@ -12,11 +12,11 @@ import dev.touchstone.harness.execution.Simulator;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.io.AtomicFiles;
 import dev.touchstone.harness.study.ComponentSpec;
-import dev.touchstone.harness.study.ExtraMetric;
 import dev.touchstone.harness.study.LearnerConfig;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.RunDefinition;
 import dev.touchstone.harness.study.TruthSetting;
+import dev.touchstone.metrics.against.MetricAgainst;
 import dev.touchstone.metrics.aggregate.Summaries;
 import dev.touchstone.metrics.rank.Ranking;
 import dev.touchstone.metrics.results.RankingResult;
@@ -24,7 +24,6 @@ import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.scoring.Direction;
 import dev.touchstone.metrics.scoring.Metric;
-import dev.touchstone.metrics.scoring.MetricRegistry;
 import dev.touchstone.metrics.truth.TruthSelection;
 import dev.touchstone.reports.HtmlReport;
 import dev.touchstone.reports.MarkdownReport;
@@ -112,8 +111,7 @@ public final class StudyReports {
                 .summarizer(values -> Summaries.of(values.stream().mapToDouble(Double::doubleValue).toArray(),
                         Seeds.random(Seeds.derive(statsSeed, "pooled"))));
         for (String m : metrics) {
-            ExtraMetric extra = ExtraMetric.parse(m);
-            MetricRegistry.find(extra == null ? m : extra.base()).map(Metric::direction).filter(d -> d != Direction.NONE)
+            MetricAgainst.find(m).map(Metric::direction).filter(d -> d != Direction.NONE)
                     .ifPresent(d -> b.direction(m, d == Direction.HIGHER_IS_BETTER));
         }
         if (plan.reference() != null) {
@@ -122,7 +120,7 @@ public final class StudyReports {
         }
         List<RankingResult> rankings = new ArrayList<>();
         for (String m : metrics) {
-            Metric metric = MetricRegistry.find(m).orElse(null);
+            Metric metric = MetricAgainst.find(m).orElse(null);
             if (metric != null && metric.direction() != Direction.NONE && !m.equals("seconds")) {
                 rankings.add(Ranking.over(runs, m, 0.05));
             }

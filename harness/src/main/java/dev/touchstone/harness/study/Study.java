@@ -1,5 +1,9 @@
 package dev.touchstone.harness.study;
 
+import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.metrics.against.MetricAgainst;
+
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -25,7 +29,7 @@ import java.util.List;
  */
 public record Study(String name, String description, long seed, int replicates, List<List<ComponentSpec>> truths,
                     List<SampleSize> samples, List<LearnerEntry> learners, List<String> metrics, Limits limits,
-                    String compareTo, List<dev.touchstone.core.graph.GraphClass> scoreAgainst, Node source) {
+                    String compareTo, List<GraphClass> scoreAgainst, Node source) {
 
     public Study {
         truths = truths.stream().map(List::copyOf).toList();
@@ -37,7 +41,23 @@ public record Study(String name, String description, long seed, int replicates, 
 
     /** The metrics every run computes: the study's, then those against the {@code score_against} truths. */
     public List<String> allMetrics() {
-        return ExtraMetric.expand(metrics, scoreAgainst);
+        return withScoreAgainst(metrics, scoreAgainst);
+    }
+
+    /**
+     * The metrics followed by, for each class in {@code against}, every structural metric
+     * (not one the runner measures itself) against that class ({@code METRIC_vs_CLASS}).
+     */
+    public static List<String> withScoreAgainst(List<String> metrics, List<GraphClass> against) {
+        List<String> out = new ArrayList<>(metrics);
+        for (GraphClass c : against) {
+            for (String m : metrics) {
+                if (!MetricCatalog.MEASURED.contains(m)) {
+                    out.add(new MetricAgainst(m, c).name());
+                }
+            }
+        }
+        return out;
     }
 
     /** The learner entry with this id, or null. */

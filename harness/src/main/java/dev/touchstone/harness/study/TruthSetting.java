@@ -90,10 +90,25 @@ public record TruthSetting(int index, List<Choice> choices) {
 
     /** A short human label: each section's kind and the values the study varied or gave. */
     public String label() {
+        return text(false);
+    }
+
+    /**
+     * Like {@link #label()} with each section named and the sections separated by commas, for
+     * a line that shows one truth alone: {@code graph erdos-renyi nodes=8, model linear-gaussian, hidden none}.
+     */
+    public String description() {
+        return text(true);
+    }
+
+    private String text(boolean sections) {
         StringBuilder sb = new StringBuilder();
         for (Choice c : choices) {
             if (sb.length() > 0) {
-                sb.append(' ');
+                sb.append(sections ? ", " : " ");
+            }
+            if (sections) {
+                sb.append(c.section()).append(' ');
             }
             sb.append(c.kind());
             for (Map.Entry<String, Object> e : c.values().asMap().entrySet()) {

@@ -55,6 +55,7 @@ class CalibrateCommandTest {
                 && !html.contains("href=\"http") && !html.contains("src=\"http"), "self-contained");
         assertTrue(md.contains("| pc | either → xray | yes |"), md);
         assertTrue(md.contains("## With more (or fewer) rows"));
+        assertTrue(md.contains("Made by touchstone "), "provenance: the tool's version and commit");
         List<String> runs = Files.readAllLines(out.resolve("calibration-runs.csv"));
         // 6 replicates × 4 sizes × 2 learners + 4 resamples × 2 learners, plus the header.
         assertEquals(1 + 6 * 4 * 2 + 4 * 2, runs.size());
@@ -107,7 +108,28 @@ class CalibrateCommandTest {
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "pc.alpha=7");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set: ") && r.err().contains("alpha"), r.err());
-        Path graph = tmp.resolve("g.json");
+        // as for learn and simulate (Settings), a parameter set twice is refused rather than the last one winning
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "pc.alpha=0.01",
+                "--set", "pc.alpha=0.05");
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("error: --set pc.alpha=0.05: ") && r.err().contains("set twice"), r.err());
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "alpha=0.01");
+        assertEquals(2, r.status());
+        assertTrue(r.err().startsWith("error: --set alpha=0.01: expected ID.NAME=VALUE"), r.err());
+        // a size or learner given twice made duplicate runs (same keys), reported as runs that did not finish
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--samples", "4,8,4");
+        assertEquals(2, r.status());
+        assertEquals("error: --samples: 4 is listed twice", r.err().strip());
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc,ges,pc");
+        assertEquals(2, r.status());
+        assertEquals("error: --learners: pc is listed twice", r.err().strip());
+                r = CliTest.cli("calibrate", "--data", ok.toString(), "--truth-learner", "fci");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("error: --truth-learner fci: it returns a pag"), r.err());
+                r = CliTest.cli("calibrate", "--data", ok.toString(), "--replicates", "0");
+        assertEquals(2, r.status());
+        assertEquals("error: --replicates: 0 is less than 1", r.err().strip());
+                Path graph = tmp.resolve("g.json");
         GraphJson.write(graph, dev.touchstone.core.graph.Graph.empty(List.of("a", "c")));
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--graph", graph.toString());
         assertEquals(2, r.status());

@@ -37,6 +37,20 @@ class CliTest {
     }
 
     @Test
+    @DisplayName("every verb answers --help with its usage (exit 0), so the hint after a usage error works")
+    void helpOnEveryVerb() {
+        for (String verb : List.of("run", "check", "learners", "learn", "simulate", "score", "report", "demo",
+                "calibrate")) {
+            Result r = cli(verb, "--help");
+            assertEquals(0, r.status(), verb + ": " + r.err());
+            assertTrue(r.out().startsWith("Usage: touchstone " + verb), r.out());
+        }
+        Result r = cli("run");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("(see 'touchstone run --help')"), r.err());
+    }
+
+    @Test
     @DisplayName("check validates every bundled scenario and prints the grid and the work")
     void checkScenarios() throws IOException {
         List<Path> scenarios = new ArrayList<>();
@@ -158,7 +172,10 @@ class CliTest {
         for (String f : List.of("truth.dot", "cpdag.json", "pag.json", "audit.json")) {
             assertTrue(Files.exists(one.resolve(f)), f);
         }
-        assertEquals(9, Files.readAllLines(out.resolve("replicates.csv")).size());
+        List<String> index = Files.readAllLines(out.resolve("replicates.csv"));
+        assertEquals(9, index.size());
+        assertEquals("folder,truth_setting,replicate,rows,seed,setting", index.get(0));
+        assertTrue(index.get(1).startsWith("t0-r0,0,0,1000,"), index.get(1));
     }
 
     @Test
@@ -186,9 +203,16 @@ class CliTest {
         Path study = tmp.resolve("same.yaml");
         Files.writeString(study, "name: same\nseed: 5\ntruth:\n  graph: {family: erdos-renyi, nodes: 12, mean_degree: 2}\n"
                 + "  model: {kind: linear-gaussian}\nsamples: [300]\nlearners: [empty]\n");
-        Path viaStudy = tmp.resolve("via-study");
-        assertEquals(0, cli("simulate", study.toString(), "--out", viaStudy.toString()).status());
-        assertEquals(Files.readString(viaStudy.resolve("t0-r0/data.csv")), Files.readString(out.resolve("data.csv")),
+        assertSameDrawAsStudy(study, out);
+    }
+
+    /** Options and a study with the same seed and truth draw the same data: replicate 0 of the study. */
+    private void assertSameDrawAsStudy(Path study, Path fromOptions) throws IOException {
+        Path viaStudy = tmp.resolve("via-" + study.getFileName());
+        Result r = cli("simulate", study.toString(), "--out", viaStudy.toString());
+        assertEquals(0, r.status(), r.err());
+        assertEquals(Files.readString(viaStudy.resolve("t0-r0/data.csv")),
+                Files.readString(fromOptions.resolve("data.csv")),
                 "options and study with the same seed and truth draw the same data");
     }
 
@@ -223,6 +247,12 @@ class CliTest {
                 out.toString());
         assertEquals(0, r.status(), r.err());
         assertEquals(g.freeze(), GraphJson.read(out.resolve("truth.json")));
+        // As for the random families: the draw of replicate 0 of a study with the same seed and truth. The file's
+        // path is not part of the seeds (its digest is), so the study may name it relative to its own folder.
+        Path study = tmp.resolve("given.yaml");
+        Files.writeString(study, "name: given\nseed: 1\ntruth:\n  graph: {family: given, file: g.json}\n"
+                + "  model: {kind: linear-gaussian}\nsamples: [50]\nlearners: [empty]\n");
+        assertSameDrawAsStudy(study, out);
     }
 
     @Test
@@ -279,6 +309,8 @@ class CliTest {
         String summary = Files.readString(out.resolve("summary.csv"));
         assertTrue(summary.contains(",shd_vs_pag,"), summary);
         assertTrue(Files.readString(out.resolve("comparisons.csv")).contains(",shd_vs_dag,"));
+        assertTrue(Files.readString(out.resolve("report.html")).contains("Mean ranks on shd_vs_dag"),
+                "ranked by the base metric's direction, like shd");
         assertTrue(Files.readString(out.resolve("study.yaml")).contains("score_against"));
         // By hand: an empty estimate differs from the truth on every true edge's pair, and a DAG and its CPDAG share
         // one skeleton, so the empty graph's SHD against the true DAG equals its SHD against the true CPDAG.

@@ -4,7 +4,8 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.harness.study.ExtraMetric;
+import dev.touchstone.harness.study.Study;
+import dev.touchstone.metrics.against.MetricAgainst;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -58,10 +59,10 @@ class MetricsScorerTest {
     @Test
     @DisplayName("extra metric names: METRIC_vs_CLASS, and plain names are not extra")
     void names() {
-        assertEquals(new ExtraMetric("adjacency_f1", GraphClass.PAG), ExtraMetric.parse("adjacency_f1_vs_pag"));
-        assertNull(ExtraMetric.parse("shd"));
-        assertNull(ExtraMetric.parse("shd_vs_tree"));
+        assertEquals(new MetricAgainst("adjacency_f1", GraphClass.PAG), MetricAgainst.parse("adjacency_f1_vs_pag"));
+        assertNull(MetricAgainst.parse("shd"));
+        assertNull(MetricAgainst.parse("shd_vs_tree"));
         assertEquals(List.of("shd", "seconds", "shd_vs_cpdag"),
-                ExtraMetric.expand(List.of("shd", "seconds"), List.of(GraphClass.CPDAG)));
+                Study.withScoreAgainst(List.of("shd", "seconds"), List.of(GraphClass.CPDAG)));
     }
 }

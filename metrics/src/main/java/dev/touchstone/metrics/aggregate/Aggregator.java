@@ -1,6 +1,7 @@
 package dev.touchstone.metrics.aggregate;
 
 import dev.touchstone.core.random.Seeds;
+import dev.touchstone.metrics.against.MetricAgainst;
 import dev.touchstone.metrics.results.AggregateRow;
 import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.Setting;
@@ -28,14 +29,15 @@ public final class Aggregator {
     }
 
     /**
-     * The summary rows for {@code metrics} (names from {@link MetricRegistry}; unknown names are refused).
+     * The summary rows for {@code metrics} (names from {@link MetricRegistry}, or
+     * {@link MetricAgainst} names; unknown names are refused).
      *
      * @param seed the study seed
      */
     public static List<AggregateRow> aggregate(List<RunResult> runs, List<String> metrics, long seed) {
         Objects.requireNonNull(runs, "runs");
         for (String m : metrics) {
-            MetricRegistry.get(m);
+            MetricAgainst.resolve(m);
         }
         Map<Group, List<RunResult>> groups = new LinkedHashMap<>();
         for (RunResult r : runs) {

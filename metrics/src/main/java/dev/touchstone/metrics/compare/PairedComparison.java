@@ -8,7 +8,7 @@ import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.scoring.Direction;
 import dev.touchstone.metrics.scoring.Metric;
-import dev.touchstone.metrics.scoring.MetricRegistry;
+import dev.touchstone.metrics.against.MetricAgainst;
 import org.apache.commons.statistics.inference.WilcoxonSignedRankTest;
 
 import java.util.ArrayList;
@@ -70,13 +70,13 @@ public final class PairedComparison {
         for (Map.Entry<Setting, Map<String, Map<Integer, RunResult>>> s : bySetting.entrySet()) {
             Map<Integer, RunResult> reference = s.getValue().getOrDefault(referenceId, Map.of());
             for (String metricName : metrics) {
-                Metric metric = MetricRegistry.get(metricName);
+                Metric metric = MetricAgainst.resolve(metricName);
                 List<ComparisonRow> rows = new ArrayList<>();
                 for (String config : configurations) {
                     if (config.equals(referenceId) || !s.getValue().containsKey(config)) {
                         continue;
                     }
-                    rows.add(row(s.getKey(), metric, config, referenceId, s.getValue().get(config), reference, seed));
+                    rows.add(row(s.getKey(), metricName, metric, config, referenceId, s.getValue().get(config), reference, seed));
                 }
                 Double[] p = rows.stream().map(ComparisonRow::pValue).toArray(Double[]::new);
                 Double[] adjusted = Holm.adjust(p);
@@ -88,20 +88,21 @@ public final class PairedComparison {
         return out;
     }
 
-    private static ComparisonRow row(Setting setting, Metric metric, String config, String referenceId,
+    /** One configuration against the reference on one metric; {@code name} is the column, {@code metric} gives the direction. */
+    private static ComparisonRow row(Setting setting, String name, Metric metric, String config, String referenceId,
                                      Map<Integer, RunResult> mine, Map<Integer, RunResult> reference, long seed) {
         List<double[]> pairs = new ArrayList<>();
         for (Map.Entry<Integer, RunResult> e : mine.entrySet()) {
             RunResult ref = reference.get(e.getKey());
-            Double x = e.getValue().value(metric.name());
-            Double y = ref == null ? null : ref.value(metric.name());
+            Double x = e.getValue().value(name);
+            Double y = ref == null ? null : ref.value(name);
             if (x != null && y != null) {
                 pairs.add(new double[] {x, y});
             }
         }
         int n = pairs.size();
         if (n == 0) {
-            return new ComparisonRow(setting, metric.name(), config, referenceId, 0, null, null, null, null, null,
+            return new ComparisonRow(setting, name, config, referenceId, 0, null, null, null, null, null,
                     metric.direction() == Direction.NONE ? null : 0, metric.direction() == Direction.NONE ? null : 0,
                     metric.direction() == Direction.NONE ? null : 0);
         }
@@ -125,12 +126,12 @@ public final class PairedComparison {
         Double high = null;
         if (n >= 2) {
             double[] ci = Bootstrap.meanInterval(d, Summaries.LEVEL, Bootstrap.DEFAULT_RESAMPLES,
-                    Seeds.random(Seeds.derive(seed, "comparison", setting.label(), metric.name(), config, referenceId)));
+                    Seeds.random(Seeds.derive(seed, "comparison", setting.label(), name, config, referenceId)));
             low = ci[0];
             high = ci[1];
         }
         boolean directed = metric.direction() != Direction.NONE;
-        return new ComparisonRow(setting, metric.name(), config, referenceId, n, mean, low, high, wilcoxon(d), null,
+        return new ComparisonRow(setting, name, config, referenceId, n, mean, low, high, wilcoxon(d), null,
                 directed ? wins : null, directed ? n - wins - losses : null, directed ? losses : null);
     }
 

@@ -5,7 +5,7 @@ import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.scoring.Direction;
 import dev.touchstone.metrics.scoring.Metric;
-import dev.touchstone.metrics.scoring.MetricRegistry;
+import dev.touchstone.metrics.against.MetricAgainst;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -36,7 +36,7 @@ public final class Ranking {
      * @throws IllegalArgumentException for an unknown metric or one without a direction
      */
     public static RankingResult over(List<RunResult> runs, String metric, double alpha) {
-        Metric m = MetricRegistry.get(metric);
+        Metric m = MetricAgainst.resolve(metric);
         if (m.direction() == Direction.NONE) {
             throw new IllegalArgumentException("metric '" + metric + "' has no direction (higher or lower is better), so it cannot be ranked");
         }

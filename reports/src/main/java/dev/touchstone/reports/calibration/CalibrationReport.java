@@ -32,6 +32,11 @@ public final class CalibrationReport {
     private CalibrationReport() {
     }
 
+    /** The answer to the size question ({@link SizeAnswer}), one sentence per learner, as the report gives it. */
+    public static List<String> answers(CalibrationView v) {
+        return CalibrationTables.answers(v);
+    }
+
     /** The HTML page. */
     public static String html(CalibrationView v) {
         HtmlPage page = new HtmlPage(v.title());

@@ -35,6 +35,20 @@ class CalibrationReportTest {
     }
 
     @Test
+    @DisplayName("a curve that dips below the target again: the answer is where the means stay at or above it")
+    void nonMonotoneCurve() {
+        // Means 0.85, 0.75, 0.9 at 150, 300, 600 rows (noise of a few replicates): the size 150 reaches 0.8 but 300
+        // does not, so the rows needed are read between 300 and 600: 300 · 2^((0.8 − 0.75)/(0.9 − 0.75)) = 300 · 2^⅓
+        // ≈ 378 (by hand).
+        List<CalibrationView.SizePoint> dip = List.of(p(150, 0.85), p(300, 0.75), p(600, 0.9));
+        assertEquals(378.0, SizeAnswer.rowsToReach(dip, 0.8));
+        // Reached early but not at the largest size: not reached.
+        assertNull(SizeAnswer.rowsToReach(List.of(p(150, 0.85), p(300, 0.75)), 0.8));
+        assertTrue(SizeAnswer.sentence("pc", List.of(p(150, 0.85), p(300, 0.75)),
+                new CalibrationView.Target("orientation_precision", 0.8), 300).contains("falls below it again"));
+    }
+
+    @Test
     @DisplayName("the report opens with the cautions of design §12 and states warnings before any figure")
     void cautionsFirst() {
         CalibrationView v = new CalibrationView("Calibration", List.of("data.csv: 400 rows"), List.of("truth given"),
