@@ -2,10 +2,10 @@ package dev.touchstone.spark;
 
 import dev.touchstone.harness.execution.Journal;
 import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.condition.EnabledIfEnvironmentVariable;
 import org.junit.jupiter.api.io.TempDir;
 
 import java.io.IOException;
@@ -39,9 +39,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * executor are Spark's documented behaviour for {@code spark.task.maxFailures}. The master and
  * the worker are stopped after the class, and live at most ten minutes in any case.
  */
+@EnabledIfEnvironmentVariable(named = StandaloneClusterTest.ENABLE, matches = "1", disabledReason = "opt-in: set "
+        + StandaloneClusterTest.ENABLE + "=1 to run the engine on a loopback Spark standalone cluster")
 class StandaloneClusterTest {
 
-    private static final String ENABLE = "TOUCHSTONE_SPARK_STANDALONE";
+    static final String ENABLE = "TOUCHSTONE_SPARK_STANDALONE";
     private static final String STUDY = "name: standalone-test\nseed: 11\nreplicates: %d\n"
             + "truth:\n  graph: {family: erdos-renyi, nodes: %s, mean_degree: 3}\n  model: {kind: linear-gaussian}\n"
             + "samples: %s\nlearners:\n  - {id: pc, use: pc, with: {alpha: [0.001, 0.01, 0.05]}}\n"
@@ -57,8 +59,6 @@ class StandaloneClusterTest {
 
     @BeforeAll
     static void startCluster() throws IOException, InterruptedException {
-        Assumptions.assumeTrue("1".equals(System.getenv(ENABLE)), "set " + ENABLE
-                + "=1 to run the engine on a loopback Spark standalone cluster (scripts/spark-standalone-check.sh)");
         Path lib = Path.of("target/lib").toAbsolutePath();
         Path touchstoneJar = Path.of("../harness/target/touchstone.jar").toAbsolutePath().normalize();
         assertTrue(Files.isDirectory(lib) && Files.isRegularFile(touchstoneJar),
