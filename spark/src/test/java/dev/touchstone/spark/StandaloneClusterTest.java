@@ -166,25 +166,36 @@ class StandaloneClusterTest {
         }
     }
 
+    /** The study run by the local engine (2 threads) into {@code out}: the reference. */
+    private static Path locally(Path study, String out) {
+        SparkEngineTest.Result r = run(study, tmp.resolve(out), "--threads", "2");
+        assertEquals(0, r.status(), r.err());
+        return tmp.resolve(out);
+    }
+
+    /** Same runs.csv apart from timing columns, and one journal line per run in both. */
+    private static void assertSameRuns(Path local, Path cluster) throws IOException {
+        assertEquals(SparkEngineTest.withoutTimings(local.resolve("runs.csv")),
+                SparkEngineTest.withoutTimings(cluster.resolve("runs.csv")));
+        assertEquals(lines(local), lines(cluster), "each run journaled once");
+    }
+
     @Test
     @DisplayName("a standalone master gives the local engine's runs.csv apart from timing columns (design §6)")
     void standaloneEqualsLocal() throws IOException {
         Path study = study("small", 4, "[5, 8]", "[100, 400, oracle]");
-        SparkEngineTest.Result local = run(study, tmp.resolve("local"), "--threads", "2");
-        assertEquals(0, local.status(), local.err());
+        Path local = locally(study, "local");
         SparkEngineTest.Result cluster = run(study, tmp.resolve("cluster"), "--engine", "spark", "--master", master);
         assertEquals(0, cluster.status(), cluster.err());
-        assertEquals(SparkEngineTest.withoutTimings(tmp.resolve("local/runs.csv")),
-                SparkEngineTest.withoutTimings(tmp.resolve("cluster/runs.csv")));
-        assertEquals(96, lines(tmp.resolve("cluster")), "4 replicates x 2 sizes x 3 samples x 4 configurations");
+        assertSameRuns(local, tmp.resolve("cluster"));
+        assertEquals(96, lines(local), "4 replicates x 2 sizes x 3 samples x 4 configurations");
     }
 
     @Test
     @DisplayName("an executor JVM killed (SIGKILL) mid-study: its task is retried and the study ends as locally")
     void killedExecutorIsReplaced() throws Exception {
         Path study = study("large", 40, "[30, 40]", "[2000, 5000]");
-        SparkEngineTest.Result local = run(study, tmp.resolve("large-local"), "--threads", "2");
-        assertEquals(0, local.status(), local.err());
+        Path local = locally(study, "large-local");
         System.setProperty(SparkSettings.RUNS_PER_TASK, "8");
         Path out = tmp.resolve("large-cluster");
         CompletableFuture<SparkEngineTest.Result> cluster = CompletableFuture.supplyAsync(
@@ -203,8 +214,6 @@ class StandaloneClusterTest {
         System.clearProperty(SparkSettings.RUNS_PER_TASK);
         assertTrue(killed.isPresent(), "an executor was found and killed before the study ended");
         assertEquals(0, r.status(), r.err());
-        assertEquals(SparkEngineTest.withoutTimings(tmp.resolve("large-local/runs.csv")),
-                SparkEngineTest.withoutTimings(out.resolve("runs.csv")));
-        assertEquals(lines(tmp.resolve("large-local")), lines(out), "the lost task's runs journaled once");
+        assertSameRuns(local, out);
     }
 }
