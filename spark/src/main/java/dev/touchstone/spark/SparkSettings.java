@@ -1,7 +1,14 @@
 package dev.touchstone.spark;
 
+import dev.touchstone.harness.cli.Main;
 import org.apache.spark.SparkConf;
 
+import java.net.URISyntaxException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.CodeSource;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
@@ -10,7 +17,8 @@ import java.util.regex.Pattern;
  * {@code spark.master} as set by {@code spark-submit}, else {@code local[*]}), retries of
  * dead tasks ({@code spark.task.maxFailures}, default 4, also on a local master, where Spark
  * would otherwise not retry), the task size ({@code spark.touchstone.runsPerTask}) and Spark's
- * log level ({@code spark.touchstone.logLevel}). Any {@code spark.*} system property (as
+ * log level ({@code spark.touchstone.logLevel}). On a cluster master the executors get
+ * Touchstone's own jars ({@code spark.jars}) unless {@code spark-submit} has named them. Any {@code spark.*} system property (as
  * {@code spark-submit --conf} sets) is taken as usual.
  */
 final class SparkSettings {
@@ -56,6 +64,14 @@ final class SparkSettings {
             conf.setIfMissing("spark.driver.host", "127.0.0.1");
             conf.setIfMissing("spark.driver.bindAddress", "127.0.0.1");
             m = withRetries(m, conf.getInt(MAX_FAILURES, 4));
+        } else if (!conf.contains("spark.jars")) {
+            // Started by ./touchstone rather than spark-submit, nobody has told the executors
+            // where Touchstone's classes are: without this every task fails with
+            // ClassNotFoundException (seen on a standalone master).
+            List<String> jars = codeJars();
+            if (!jars.isEmpty()) {
+                conf.set("spark.jars", String.join(",", jars));
+            }
         }
         conf.setMaster(m);
         return conf;
@@ -69,5 +85,29 @@ final class SparkSettings {
         }
         String threads = mt.group(2) == null ? "1" : mt.group(2);
         return "local[" + threads + "," + maxFailures + "]";
+    }
+
+    /**
+     * The jar files holding Touchstone's code on the driver: the harness's (touchstone.jar,
+     * with its libraries) and this module's. Class folders (as in the build's own tests) are
+     * left out: Spark ships jar files only.
+     */
+    static List<String> codeJars() {
+        List<String> jars = new ArrayList<>();
+        for (Class<?> c : List.of(Main.class, SparkSettings.class)) {
+            CodeSource source = c.getProtectionDomain().getCodeSource();
+            if (source == null) {
+                continue;
+            }
+            try {
+                Path p = Path.of(source.getLocation().toURI());
+                if (Files.isRegularFile(p) && !jars.contains(p.toString())) {
+                    jars.add(p.toString());
+                }
+            } catch (URISyntaxException | IllegalArgumentException e) {
+                // not a file location: nothing this session can ship
+            }
+        }
+        return jars;
     }
 }

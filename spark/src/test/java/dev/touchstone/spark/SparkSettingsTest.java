@@ -34,4 +34,21 @@ class SparkSettingsTest {
         assertThrows(IllegalArgumentException.class, () -> SparkSettings.check(" "));
         SparkSettings.check("yarn");
     }
+
+    @Test
+    @DisplayName("a cluster master gets Touchstone's jar files as spark.jars unless set (Spark configuration docs:"
+            + " spark.jars, jars for the driver and executor class paths); a local master gets none")
+    void jarsForExecutors() {
+        String jars = String.join(",", SparkSettings.codeJars());
+        // Built by the reactor, the harness is a jar file and the engine's classes a folder.
+        assertTrue(jars.endsWith(".jar") && !jars.contains("target/classes"), jars);
+        assertEquals(jars, SparkSettings.conf("spark://127.0.0.1:7077", "s").get("spark.jars"));
+        assertFalse(SparkSettings.conf("local[2]", "s").contains("spark.jars"));
+        System.setProperty("spark.jars", "/elsewhere/mine.jar");
+        try {
+            assertEquals("/elsewhere/mine.jar", SparkSettings.conf("spark://127.0.0.1:7077", "s").get("spark.jars"));
+        } finally {
+            System.clearProperty("spark.jars");
+        }
+    }
 }
