@@ -76,7 +76,7 @@ public final class DataCsv {
      * @param example for {@link Choice#INFERRED_NOT_A_NUMBER}, the first value that is not a number and its line
      */
     public record ColumnKind(String name, VariableKind kind, Choice choice, String example) {
-        /** One line such as {@code colour: discrete (value 'red' on line 3 is not a number)}. */
+        /** One line such as {@code colour: discrete (has text values, such as 'red' on line 3)}. */
         public String describe() {
             String why;
             switch (choice) {
@@ -294,7 +294,7 @@ public final class DataCsv {
                 // An undeclared column with a label: it is discrete. Its earlier numbers are
                 // re-read as labels in a second pass, so their text is kept exactly.
                 kinds[j] = Kind.DISCRETE;
-                firstNonNumber[j] = "value '" + text + "' on line " + line + " is not a number";
+                firstNonNumber[j] = "has text values, such as '" + text + "' on line " + line;
                 codes[j] = new int[capacity];
                 numbers[j] = null;
                 if (rows > 0) {

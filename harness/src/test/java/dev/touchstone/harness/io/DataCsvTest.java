@@ -60,7 +60,7 @@ class DataCsvTest {
         assertEquals(List.of("1", "2"), d.variable(3).categories());
         assertArrayEquals(new int[] {0, 1, 0, DataSet.MISSING_CODE}, d.discrete(3));
         assertEquals("rain: continuous (every value is a number)\n"
-                + "soil: discrete (value 'clay' on line 2 is not a number)\n"
+                + "soil: discrete (has text values, such as 'clay' on line 2)\n"
                 + "yield: continuous (every value is a number)\n"
                 + "grade: discrete (declared)\n", r.describeKinds());
         assertEquals(DataCsv.Choice.INFERRED_NOT_A_NUMBER, r.columns().get(1).choice());
@@ -73,7 +73,7 @@ class DataCsvTest {
         Variable dose = r.data().variable(0);
         assertEquals(List.of("1.50", "2", "none"), dose.categories(), "labels as written, numbers first");
         assertArrayEquals(new int[] {0, 1, 2, 0}, r.data().discrete(0));
-        assertEquals("dose: discrete (value 'none' on line 4 is not a number)", r.columns().get(0).describe());
+        assertEquals("dose: discrete (has text values, such as 'none' on line 4)", r.columns().get(0).describe());
     }
 
     @Test
