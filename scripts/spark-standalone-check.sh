@@ -3,7 +3,9 @@
 # one master and two workers of one core each, started from spark/target/lib, then
 #   1. the same small study with the local engine (2 threads), with
 #      `./touchstone --engine spark --master spark://…` and with Spark's SparkSubmit main class
-#      (the spark-submit recipe of docs/spark.md), comparing runs.csv apart from the timing columns;
+#      (the spark-submit recipe of docs/spark.md) and with a driver class path of touchstone.jar
+#      ahead of the cluster's jars/, comparing runs.csv apart from the timing columns (first of
+#      all, touchstone.jar must hold no unrelocated Jackson or SnakeYAML class);
 #   2. resume across engines: a third of the local journal finished on the cluster, half of the
 #      cluster's journal finished locally;
 #   3. a killed executor: kill -9 of one executor JVM mid-study; the study must finish with
@@ -31,6 +33,13 @@ if [ ! -f spark/target/touchstone-spark-0.1.0-SNAPSHOT.jar ] || [ ! -f harness/t
 fi
 jar="$root/harness/target/touchstone.jar"
 engine_jar="$root/spark/target/touchstone-spark-0.1.0-SNAPSHOT.jar"
+# touchstone.jar must carry Jackson and SnakeYAML relocated (harness/pom.xml), never under their
+# own names, or they would meet the cluster's Jackson.
+unrelocated=$(jar tf "$jar" | grep -cE '^(com/fasterxml|org/yaml)/' || true)
+if [ "$unrelocated" -ne 0 ]; then
+  echo "FAILED: $jar holds $unrelocated com/fasterxml/ or org/yaml/ entries (not relocated)" >&2
+  exit 1
+fi
 
 # A Spark "home" whose jars/ folder is the cluster's class path (workers launch executors from it).
 export SPARK_HOME="$work/spark-home" SPARK_SCALA_VERSION=2.13 SPARK_LOCAL_IP=127.0.0.1 SPARK_LOCAL_HOSTNAME=localhost
@@ -109,6 +118,12 @@ submit_run() { # the spark-submit recipe of docs/spark.md, through Spark's own l
     --master "$master" --deploy-mode client --class dev.touchstone.harness.cli.Main --jars "$engine_jar" \
     --conf spark.task.maxFailures=4 "$jar" run "$@" --engine spark --quiet
 }
+jar_first_run() { # a driver class path of one's own with touchstone.jar ahead of the cluster's jars/
+  # (Spark's Jackson there): this stopped at the first job until Jackson was relocated
+  # shellcheck disable=SC2086
+  timeout 300 java $opens $quiet_log -cp "$jar:$engine_jar:$SPARK_HOME/jars/*" dev.touchstone.harness.cli.Main \
+    run "$@" --engine spark --master "$master" --quiet
+}
 
 study() { # name, replicates, nodes, samples
   cat >"$work/$1.yaml" <<YAML
@@ -138,11 +153,13 @@ t=$(seconds); cluster_run "$work/small.yaml" --out "$work/launcher"; echo "stand
 same "$work/local/runs.csv" "$work/launcher/runs.csv"
 t=$(seconds); submit_run "$work/small.yaml" --out "$work/submit"; echo "standalone, SparkSubmit: $(elapsed "$t")"
 same "$work/local/runs.csv" "$work/submit/runs.csv"
+t=$(seconds); jar_first_run "$work/small.yaml" --out "$work/first"; echo "standalone, touchstone.jar first: $(elapsed "$t")"
+same "$work/local/runs.csv" "$work/first/runs.csv"
 t=$(seconds)
 timeout 300 "$root/touchstone" run "$work/small.yaml" --out "$work/local2" --engine spark --master 'local[2]' --quiet
 echo "same study on local[2]: $(elapsed "$t")"
 total=$(lines "$work/local/journal.jsonl")
-echo "runs.csv equal to the local engine's (timing columns aside): launcher, SparkSubmit ($total runs)"
+echo "runs.csv equal to the local engine's (timing columns aside): launcher, SparkSubmit, touchstone.jar first ($total runs)"
 
 mkdir -p "$work/resume1" "$work/resume2"
 head -n $((total / 3)) "$work/local/journal.jsonl" >"$work/resume1/journal.jsonl"
