@@ -58,7 +58,7 @@ public final class Covariances {
     static double[][] centredRows(DataSet data) {
         int p = data.columns();
         int n = data.rows();
-        int[] keep = completeRows(data);
+        int[] keep = data.completeRows();
         int m = keep.length;
         double[][] values = new double[p][];
         double[] mean = new double[p];
@@ -95,29 +95,5 @@ public final class Covariances {
             out[r] = codes[r] == DataSet.MISSING_CODE ? Double.NaN : codes[r];
         }
         return out;
-    }
-
-    private static int[] completeRows(DataSet data) {
-        int n = data.rows();
-        int p = data.columns();
-        if (!data.hasMissing()) {
-            int[] all = new int[n];
-            for (int r = 0; r < n; r++) {
-                all[r] = r;
-            }
-            return all;
-        }
-        int[] keep = new int[n];
-        int m = 0;
-        for (int r = 0; r < n; r++) {
-            boolean ok = true;
-            for (int j = 0; j < p && ok; j++) {
-                ok = !data.isMissing(r, j);
-            }
-            if (ok) {
-                keep[m++] = r;
-            }
-        }
-        return java.util.Arrays.copyOf(keep, m);
     }
 }

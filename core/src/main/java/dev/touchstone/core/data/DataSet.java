@@ -158,6 +158,39 @@ public final class DataSet {
         });
     }
 
+    /**
+     * The indices of the rows with no missing cell in any of these columns (every row when
+     * none is given): the rows a test-wise or family-wise deletion keeps. Cost O(n · columns).
+     */
+    public int[] rowsCompleteIn(int[] columnIndices) {
+        int[] keep = new int[rows];
+        int k = 0;
+        for (int r = 0; r < rows; r++) {
+            boolean ok = true;
+            for (int i = 0; i < columnIndices.length && ok; i++) {
+                ok = !isMissing(r, columnIndices[i]);
+            }
+            if (ok) {
+                keep[k++] = r;
+            }
+        }
+        return k == rows ? keep : Arrays.copyOf(keep, k);
+    }
+
+    /** The indices of the rows with no missing cell at all. */
+    public int[] completeRows() {
+        int[] all = new int[columns()];
+        for (int j = 0; j < all.length; j++) {
+            all[j] = j;
+        }
+        return rowsCompleteIn(all);
+    }
+
+    /** This data set without its rows that have a missing cell (list-wise deletion); itself when none has. */
+    public DataSet completeCases() {
+        return hasMissing() ? rows(completeRows()) : this;
+    }
+
     /** Whether any cell is missing. */
     public boolean hasMissing() {
         for (int j = 0; j < columns(); j++) {

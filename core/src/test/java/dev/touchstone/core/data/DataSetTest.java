@@ -30,6 +30,21 @@ class DataSetTest {
     }
 
     @Test
+    void completeRowsForListWiseAndTestWiseDeletion() {
+        // By hand: row 1 lacks height, row 2 lacks colour; weight is never missing.
+        DataSet d = mixed();
+        assertArrayEquals(new int[] {0, 3}, d.completeRows());
+        assertArrayEquals(new int[] {0, 2, 3}, d.rowsCompleteIn(new int[] {0, 2}));
+        assertArrayEquals(new int[] {0, 1, 3}, d.rowsCompleteIn(new int[] {1}));
+        assertArrayEquals(new int[] {0, 1, 2, 3}, d.rowsCompleteIn(new int[0]));
+        DataSet cases = d.completeCases();
+        assertEquals(2, cases.rows());
+        assertFalse(cases.hasMissing());
+        assertArrayEquals(new double[] {1.5, 1.9}, cases.continuous(0));
+        assertSame(cases, cases.completeCases(), "nothing missing: the data set itself");
+    }
+
+    @Test
     void columnsKindsAndCells() {
         DataSet d = mixed();
         assertEquals(4, d.rows());

@@ -88,21 +88,15 @@ public final class StructureFit {
     }
 
     static int[] completeRows(DataSet data, int v, List<Integer> con, List<Integer> dis) {
-        int[] keep = new int[data.rows()];
-        int m = 0;
-        for (int r = 0; r < data.rows(); r++) {
-            boolean ok = !data.isMissing(r, v);
-            for (int k = 0; ok && k < con.size(); k++) {
-                ok = !data.isMissing(r, con.get(k));
-            }
-            for (int k = 0; ok && k < dis.size(); k++) {
-                ok = !data.isMissing(r, dis.get(k));
-            }
-            if (ok) {
-                keep[m++] = r;
-            }
+        int[] columns = new int[1 + con.size() + dis.size()];
+        columns[0] = v;
+        for (int k = 0; k < con.size(); k++) {
+            columns[1 + k] = con.get(k);
         }
-        return java.util.Arrays.copyOf(keep, m);
+        for (int k = 0; k < dis.size(); k++) {
+            columns[1 + con.size() + k] = dis.get(k);
+        }
+        return data.rowsCompleteIn(columns);
     }
 
     private static FittedNode.Gaussian leastSquares(DataSet data, int v, List<Integer> con, List<Integer> dis,

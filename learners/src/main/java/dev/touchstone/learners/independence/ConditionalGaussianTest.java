@@ -80,7 +80,7 @@ public final class ConditionalGaussianTest implements IndependenceTest {
         all[0] = x;
         all[1] = y;
         System.arraycopy(z, 0, all, 2, z.length);
-        int[] rows = completeRows(all);
+        int[] rows = data.rowsCompleteIn(all);
         int[] xs = prepend(x, z);
         int[] ys = prepend(y, z);
         Fit full = fit(all, rows);
@@ -99,25 +99,6 @@ public final class ConditionalGaussianTest implements IndependenceTest {
         out[0] = v;
         System.arraycopy(z, 0, out, 1, z.length);
         return out;
-    }
-
-    private int[] completeRows(int[] vars) {
-        int n = data.rows();
-        int[] out = new int[n];
-        int k = 0;
-        for (int r = 0; r < n; r++) {
-            boolean ok = true;
-            for (int v : vars) {
-                if (data.isMissing(r, v)) {
-                    ok = false;
-                    break;
-                }
-            }
-            if (ok) {
-                out[k++] = r;
-            }
-        }
-        return Arrays.copyOf(out, k);
     }
 
     private record Fit(double logLik, int params) { }

@@ -6,7 +6,6 @@ import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.param.ParameterSpec;
 
-import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -52,7 +51,7 @@ public final class IndependenceTests {
         }
         DataSet data = input.data();
         if (missing == MissingPolicy.LIST_WISE && data.hasMissing()) {
-            data = data.rows(completeRows(data));
+            data = data.completeCases();
             if (data.rows() == 0) {
                 throw new LearnerException("list-wise deletion leaves no rows: every row has a missing cell");
             }
@@ -85,19 +84,4 @@ public final class IndependenceTests {
         }
     }
 
-    /** The rows without any missing cell. */
-    static int[] completeRows(DataSet data) {
-        int[] keep = new int[data.rows()];
-        int k = 0;
-        for (int r = 0; r < data.rows(); r++) {
-            boolean ok = true;
-            for (int j = 0; j < data.columns() && ok; j++) {
-                ok = !data.isMissing(r, j);
-            }
-            if (ok) {
-                keep[k++] = r;
-            }
-        }
-        return Arrays.copyOf(keep, k);
-    }
 }

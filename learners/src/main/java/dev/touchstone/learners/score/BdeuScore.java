@@ -64,7 +64,7 @@ public final class BdeuScore implements LocalScore {
             throw new IllegalArgumentException("the BDeu equivalent sample size must be positive and finite, got "
                     + equivalentSampleSize);
         }
-        return new BdeuScore(CompleteRows.of(data), equivalentSampleSize);
+        return new BdeuScore(data.completeCases(), equivalentSampleSize);
     }
 
     @Override

@@ -96,7 +96,7 @@ public final class ConditionalGaussianScore implements LocalScore {
             throw new IllegalArgumentException("the penalty multiplier must be positive and finite, got "
                     + penaltyMultiplier);
         }
-        return new ConditionalGaussianScore(CompleteRows.of(data), penaltyMultiplier);
+        return new ConditionalGaussianScore(data.completeCases(), penaltyMultiplier);
     }
 
     @Override
