@@ -114,7 +114,8 @@ public record ParameterSpec(String name, ParameterType type, Object defaultValue
                         return c;
                     }
                 }
-                throw new ParameterException(name, String.format(Locale.ROOT, UNKNOWN_CHOICE, name, s, allowed()));
+                throw new ParameterException(name, String.format(Locale.ROOT, UNKNOWN_CHOICE, name, s, allowed())
+                        + FormerNames.hint(s, choices));
             }
             default:
                 return raw.toString();

@@ -37,7 +37,8 @@ public final class ParameterValues {
         for (String key : raw.keySet()) {
             if (!byName.containsKey(key)) {
                 String known = byName.isEmpty() ? "it has none" : "allowed: " + String.join(", ", byName.keySet());
-                throw new ParameterException(key, "unknown parameter '" + key + "' for " + owner + " (" + known + ")");
+                throw new ParameterException(key, "unknown parameter '" + key + "' for " + owner + " (" + known + ")"
+                        + FormerNames.hint(key, byName.keySet()));
             }
         }
         Map<String, Object> out = new LinkedHashMap<>();

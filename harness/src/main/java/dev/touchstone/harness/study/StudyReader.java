@@ -3,6 +3,7 @@ package dev.touchstone.harness.study;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.param.ParameterException;
+import dev.touchstone.core.param.FormerNames;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.harness.catalog.LearnerCatalog;
 
@@ -187,7 +188,8 @@ public final class StudyReader {
                     List<String> allowed = kind.parameters().stream().map(ParameterSpec::name).toList();
                     throw new StudyException(keyPlaces.get(e.getKey()), e.getValue().path(), "unknown parameter '"
                             + e.getKey() + "' of " + section.name() + " " + kindName + " (allowed: "
-                            + (allowed.isEmpty() ? "none" : String.join(", ", allowed)) + ")");
+                            + (allowed.isEmpty() ? "none" : String.join(", ", allowed)) + ")"
+                            + FormerNames.hint(e.getKey(), allowed));
                 }
                 List<Object> v = bind(section, kindName, e.getKey(), e.getValue(), axis(e.getValue(), spec), baseDir);
                 if (values == null) {
@@ -361,7 +363,8 @@ public final class StudyReader {
                     List<String> allowed = d.parameters().stream().map(ParameterSpec::name).toList();
                     throw new StudyException(with.keyPlace(p.getKey()), p.getValue().path(), "unknown parameter '"
                             + p.getKey() + "' of learner " + d.id() + " (allowed: "
-                            + (allowed.isEmpty() ? "none, it has no parameters" : String.join(", ", allowed)) + ")");
+                            + (allowed.isEmpty() ? "none, it has no parameters" : String.join(", ", allowed)) + ")"
+                            + FormerNames.hint(p.getKey(), allowed));
                 }
                 axes.put(spec.name(), axis(p.getValue(), spec));
             }

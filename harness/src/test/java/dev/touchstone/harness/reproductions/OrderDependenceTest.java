@@ -16,7 +16,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
- * Colombo and Maathuis (2014, JMLR 15): the original PC skeleton depends on the order of the
+ * Colombo and Maathuis (2014, JMLR 15): the sequential PC skeleton depends on the order of the
  * variables, the order-independent one does not (their Theorem 1). Reduced grid:
  * scenarios/reproductions/order-dependence-quick.yaml (10 random orders of the same data per replicate).
  */
@@ -37,7 +37,7 @@ class OrderDependenceTest {
     }
 
     @Test
-    @DisplayName("original PC: skeleton varies across variable orders (one-sided Wilcoxon over replicates); order-independent PC: never (Colombo and Maathuis 2014)")
+    @DisplayName("sequential PC: skeleton varies across variable orders (one-sided Wilcoxon over replicates); order-independent PC: never (Colombo and Maathuis 2014)")
     void originalVariesStableDoesNot() {
         BundledStudy s = BundledStudy.run("order-dependence-quick", out);
         int replicates = s.plan.study().replicates();
@@ -45,13 +45,13 @@ class OrderDependenceTest {
         StringBuilder seen = new StringBuilder();
         for (int rep = 0; rep < replicates; rep++) {
             assertEquals(1, distinctSkeletons(s.runs, "stable", rep), "order-independent skeleton, replicate " + rep);
-            int original = distinctSkeletons(s.runs, "original", rep);
+            int original = distinctSkeletons(s.runs, "sequential", rep);
             extra[rep] = original - 1;
             seen.append(original).append(' ');
         }
-        // Differences original − stable in distinct skeletons per replicate; Commons Statistics'
+        // Differences sequential − stable in distinct skeletons per replicate; Commons Statistics'
         // signed-rank test (zeros ranked, then dropped) as metrics.compare uses it, one-sided.
         double p = WilcoxonSignedRankTest.withDefaults().with(AlternativeHypothesis.GREATER_THAN).test(extra).getPValue();
-        assertTrue(p < 0.05, "distinct skeletons of the original search per replicate: " + seen + "p = " + p);
+        assertTrue(p < 0.05, "distinct skeletons of the sequential search per replicate: " + seen + "p = " + p);
     }
 }

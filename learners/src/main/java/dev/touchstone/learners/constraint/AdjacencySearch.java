@@ -58,15 +58,15 @@ final class AdjacencySearch {
     Skeleton searchKeepingForbidden() {
         Skeleton s = new Skeleton(test.variables());
         context.checkDeadline();
-        if (variant == SkeletonVariant.ORIGINAL) {
-            original(s);
+        if (variant == SkeletonVariant.SEQUENTIAL) {
+            sequential(s);
         } else {
             orderIndependent(s);
         }
         return s;
     }
 
-    private void original(Skeleton s) {
+    private void sequential(Skeleton s) {
         int p = s.size();
         SubsetSearch search = new SubsetSearch(test);
         try {

@@ -25,7 +25,7 @@ final class ConstraintParameters {
             "largest conditioning set the adjacency search tries; -1 for no limit");
     static final ParameterSpec SKELETON = ParameterSpec.choice("skeleton", SkeletonVariant.ORDER_INDEPENDENT.word(),
             SkeletonVariant.words(), "adjacency search: order-independent (levels frozen, parallel; Colombo and "
-                    + "Maathuis 2014) or original (edges removed at once; Spirtes, Glymour and Scheines 2000)");
+                    + "Maathuis 2014) or sequential (pairs in variable order, an edge removed at once; Spirtes, Glymour and Scheines 2000)");
 
     private ConstraintParameters() {
     }

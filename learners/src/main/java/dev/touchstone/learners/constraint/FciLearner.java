@@ -28,7 +28,7 @@ import java.util.Map;
  * Intelligence 172). It returns a partial ancestral graph (PAG) over the observed variables
  * and allows hidden common causes.
  *
- * <p>Steps: (1) the PC adjacency search ({@link AdjacencySearch}, original or
+ * <p>Steps: (1) the PC adjacency search ({@link AdjacencySearch}, sequential or
  * order-independent); (2) every edge ∘–∘, then R0: an unshielded triple a ∗–∗ b ∗–∗ c
  * with b outside the recorded separating set of a and c becomes a ∗→ b ←∗ c; (3) the
  * Possible-D-Sep step ({@link PossibleDsepSearch}) removes edges the neighbourhoods could not

@@ -27,7 +27,7 @@ import java.util.Map;
  * Search", 2nd ed., §5.4.2) with the variants in which published versions differ, chosen
  * by parameters of the one learner {@code pc}:
  * <ul>
- *   <li>{@code skeleton}: the original adjacency search or the order-independent one of
+ *   <li>{@code skeleton}: the sequential adjacency search or the order-independent one of
  *   Colombo and Maathuis (2014, JMLR 15), whose levels run in parallel;</li>
  *   <li>{@code colliders}: the sepset rule, the conservative rule (Ramsey, Zhang and Spirtes
  *   2006, UAI) or the majority rule (Colombo and Maathuis 2014);</li>
@@ -67,7 +67,7 @@ public final class PcLearner implements Learner {
     private static LearnerDescription describe() {
         LearnerDescription.Builder b = ConstraintParameters.describe("pc", GraphClass.CPDAG)
                 .summary("PC: adjacency search by conditional independence tests, then colliders and Meek's rules;"
-                        + " original or order-independent skeleton, sepset, conservative or majority colliders")
+                        + " sequential or order-independent skeleton, sepset, conservative or majority colliders")
                 .publication("Spirtes, Glymour and Scheines (2000), Causation, Prediction, and Search, 2nd ed.;"
                         + " Colombo and Maathuis (2014), JMLR 15; Ramsey, Zhang and Spirtes (2006), UAI")
                 .assumption("acyclic causal structure")

@@ -5,12 +5,12 @@ import java.util.List;
 /** How the adjacency search of PC and FCI visits pairs. */
 public enum SkeletonVariant {
     /**
-     * The original PC adjacency search (Spirtes, Glymour and Scheines 2000, §5.4.2): pairs
-     * are visited in variable order and an edge removed is gone at once, so later tests of
+     * The sequential search, PC's adjacency step as first published (Spirtes, Glymour and
+     * Scheines 2000, §5.4.2): pairs are visited in variable order and an edge removed is gone at once, so later tests of
      * the same level condition on the thinned neighbourhoods. The result can depend on the
      * order of the variables.
      */
-    ORIGINAL("original"),
+    SEQUENTIAL("sequential"),
     /**
      * The order-independent ("stable") search of Colombo and Maathuis (2014,
      * "Order-independent constraint-based causal structure learning", JMLR 15): the
@@ -31,7 +31,7 @@ public enum SkeletonVariant {
     }
 
     public static List<String> words() {
-        return List.of(ORIGINAL.word, ORDER_INDEPENDENT.word);
+        return List.of(SEQUENTIAL.word, ORDER_INDEPENDENT.word);
     }
 
     public static SkeletonVariant parse(String word) {

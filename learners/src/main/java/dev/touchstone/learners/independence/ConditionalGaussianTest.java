@@ -66,7 +66,7 @@ public final class ConditionalGaussianTest implements IndependenceTest {
 
     @Override
     public String name() {
-        return "cg-lrt";
+        return IndependenceTests.CONDITIONAL_GAUSSIAN;
     }
 
     /** The statistic, degrees of freedom, rows used and p-value of one test. */

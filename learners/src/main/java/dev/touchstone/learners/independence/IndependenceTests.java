@@ -21,12 +21,12 @@ public final class IndependenceTests {
     public static final String FISHER_Z = "fisher-z";
     public static final String G_SQUARE = "g-square";
     public static final String CHI_SQUARE = "chi-square";
-    public static final String CG_LRT = "cg-lrt";
+    public static final String CONDITIONAL_GAUSSIAN = "conditional-gaussian";
 
     /** The {@code test} parameter. */
     public static final ParameterSpec TEST = ParameterSpec.choice("test", AUTO,
-            List.of(AUTO, FISHER_Z, G_SQUARE, CHI_SQUARE, CG_LRT),
-            "independence test: auto picks fisher-z (continuous), g-square (discrete) or cg-lrt (mixed); "
+            List.of(AUTO, FISHER_Z, G_SQUARE, CHI_SQUARE, CONDITIONAL_GAUSSIAN),
+            "independence test: auto picks fisher-z (continuous), g-square (discrete) or conditional-gaussian (mixed; Andrews, Ramsey and Cooper 2018); "
                     + "ignored with the oracle");
     /** The {@code alpha} parameter. */
     public static final ParameterSpec ALPHA = ParameterSpec.real("alpha", 0.01, 1e-12, 0.999,
@@ -59,24 +59,24 @@ public final class IndependenceTests {
         DataKind kind = data.kind();
         String chosen = test;
         if (AUTO.equals(test)) {
-            chosen = kind == DataKind.CONTINUOUS ? FISHER_Z : kind == DataKind.DISCRETE ? G_SQUARE : CG_LRT;
+            chosen = kind == DataKind.CONTINUOUS ? FISHER_Z : kind == DataKind.DISCRETE ? G_SQUARE : CONDITIONAL_GAUSSIAN;
         }
         switch (chosen) {
             case FISHER_Z:
                 if (kind != DataKind.CONTINUOUS) {
                     throw new LearnerException("test fisher-z needs continuous data, these are " + kind.word()
-                            + " (use g-square or chi-square for discrete, cg-lrt for mixed)");
+                            + " (use g-square or chi-square for discrete, conditional-gaussian for mixed)");
                 }
                 return data.hasMissing() ? new TestwiseFisherZTest(data, alpha) : FisherZTest.of(data, alpha);
             case G_SQUARE:
             case CHI_SQUARE:
                 if (kind != DataKind.DISCRETE) {
                     throw new LearnerException("test " + chosen + " needs discrete data, these are " + kind.word()
-                            + " (use fisher-z for continuous, cg-lrt for mixed)");
+                            + " (use fisher-z for continuous, conditional-gaussian for mixed)");
                 }
                 return new ContingencyTest(data, chosen.equals(G_SQUARE)
                         ? ContingencyTest.Statistic.G_SQUARE : ContingencyTest.Statistic.CHI_SQUARE, alpha);
-            case CG_LRT:
+            case CONDITIONAL_GAUSSIAN:
                 return new ConditionalGaussianTest(data, alpha);
             default:
                 throw new LearnerException("unknown independence test '" + test + "' (allowed: "

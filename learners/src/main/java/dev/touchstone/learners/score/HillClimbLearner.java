@@ -25,10 +25,10 @@ public final class HillClimbLearner implements Learner {
     /** The learner id. */
     public static final String ID = "hill-climbing";
 
-    static final String TABU_LENGTH = "tabu_length";
+    static final String RECENT_MOVES_BARRED = "recent_moves_barred";
     static final String PATIENCE = "patience";
-    static final String RESTARTS = "restarts";
-    static final String PERTURBATION = "perturbation";
+    static final String PERTURBED_STARTS = "perturbed_starts";
+    static final String RANDOM_MOVES_PER_START = "random_moves_per_start";
 
     private static final LearnerDescription DESCRIPTION = describe();
 
@@ -41,14 +41,14 @@ public final class HillClimbLearner implements Learner {
                         GraphClass.DAG)
                 .assumption("the DAG returned is one member of its equivalence class; its orientations within"
                         + " the class are not identified by the data");
-        b.parameter(ParameterSpec.integer(TABU_LENGTH, 10, 0, 10000,
-                "number of recent moves whose inverse may not be taken (0: no tabu list)"));
+        b.parameter(ParameterSpec.integer(RECENT_MOVES_BARRED, 10, 0, 10000,
+                "number of recent moves whose inverse may not be taken (a tabu list, Glover 1989; 0: none)"));
         b.parameter(ParameterSpec.integer(PATIENCE, 10, 0, 100000,
                 "steps without a new best score before a climb ends (0: stop at the first local maximum)"));
-        b.parameter(ParameterSpec.integer(RESTARTS, 3, 0, 1000,
-                "number of restarts from a randomly perturbed best DAG"));
-        b.parameter(ParameterSpec.integer(PERTURBATION, 5, 1, 10000,
-                "random moves applied to the best DAG at each restart"));
+        b.parameter(ParameterSpec.integer(PERTURBED_STARTS, 3, 0, 1000,
+                "number of further climbs, each from the best DAG so far after random moves"));
+        b.parameter(ParameterSpec.integer(RANDOM_MOVES_PER_START, 5, 1, 10000,
+                "random moves applied to the best DAG before each further climb"));
         return b.build();
     }
 
@@ -65,8 +65,8 @@ public final class HillClimbLearner implements Learner {
         KnowledgeIndex index = indexKnowledge(knowledge, names);
         LocalScore score = ScoreCache.of(ScoreSettings.build(ID, input, parameters), context);
         HillClimbSearch search = new HillClimbSearch(score, index, ScoreSettings.maxParents(parameters),
-                parameters.getInt(TABU_LENGTH), parameters.getInt(PATIENCE), parameters.getInt(RESTARTS),
-                parameters.getInt(PERTURBATION), context);
+                parameters.getInt(RECENT_MOVES_BARRED), parameters.getInt(PATIENCE), parameters.getInt(PERTURBED_STARTS),
+                parameters.getInt(RANDOM_MOVES_PER_START), context);
         Graph dag = search.run().toGraph(names);
         return new Estimate(dag, GraphClass.DAG, Map.of("steps", (double) search.steps()));
     }

@@ -26,14 +26,14 @@ final class ScoreSettings {
     static final String SCORE = "score";
     static final String PENALTY = "penalty";
     static final String GAMMA = "gamma";
-    static final String ESS = "ess";
-    static final String MAX_PARENTS = "max_parents";
+    static final String EQUIVALENT_SAMPLE_SIZE = "equivalent_sample_size";
+    static final String PARENT_LIMIT = "parent_limit";
 
     static final String AUTO = "auto";
     static final String BIC = "bic";
     static final String EBIC = "ebic";
     static final String BDEU = "bdeu";
-    static final String CG_BIC = "cg-bic";
+    static final String CONDITIONAL_GAUSSIAN_BIC = "conditional-gaussian-bic";
 
     private ScoreSettings() {
     }
@@ -53,7 +53,7 @@ final class ScoreSettings {
                 .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
                 .assumption("acyclic causal structure")
                 .assumption("no hidden confounders")
-                .assumption("the score's model: linear Gaussian (bic, ebic), multinomial (bdeu) or conditional Gaussian (cg-bic)")
+                .assumption("the score's model: linear Gaussian (bic, ebic), multinomial (bdeu) or conditional Gaussian (conditional-gaussian-bic)")
                 .oracle(OracleUse.COVARIANCE);
         for (ParameterSpec s : specs()) {
             b.parameter(s);
@@ -63,14 +63,14 @@ final class ScoreSettings {
 
     static List<ParameterSpec> specs() {
         return List.of(
-                ParameterSpec.choice(SCORE, AUTO, List.of(AUTO, BIC, EBIC, BDEU, CG_BIC),
-                        "local score: bic or ebic (continuous), bdeu (discrete), cg-bic (mixed); auto picks by data kind"),
+                ParameterSpec.choice(SCORE, AUTO, List.of(AUTO, BIC, EBIC, BDEU, CONDITIONAL_GAUSSIAN_BIC),
+                        "local score: bic or ebic (continuous), bdeu (discrete), conditional-gaussian-bic (mixed; Andrews, Ramsey and Cooper 2018); auto picks by data kind"),
                 ParameterSpec.real(PENALTY, 1.0, 0.01, 100.0,
-                        "multiplier of the BIC penalty (bic, ebic and cg-bic; 1 is the classical BIC)"),
+                        "multiplier of the BIC penalty (bic, ebic and conditional-gaussian-bic; 1 is the classical BIC)"),
                 ParameterSpec.real(GAMMA, 0.5, 0.0, 1.0,
                         "extended BIC's edge-prior weight: each parent costs 2·gamma·ln(p−1) more (ebic; 0 is the BIC)"),
-                ParameterSpec.real(ESS, 1.0, 0.001, 10000.0, "equivalent sample size of the BDeu prior (bdeu)"),
-                ParameterSpec.integer(MAX_PARENTS, -1, -1, 1000,
+                ParameterSpec.real(EQUIVALENT_SAMPLE_SIZE, 1.0, 0.001, 10000.0, "equivalent sample size of the BDeu prior (bdeu)"),
+                ParameterSpec.integer(PARENT_LIMIT, -1, -1, 1000,
                         "largest parent set a move may create; -1 for no limit"));
     }
 
@@ -93,7 +93,7 @@ final class ScoreSettings {
             DataSet data = input.data();
             DataKind kind = data.kind();
             if (name.equals(AUTO)) {
-                name = kind == DataKind.CONTINUOUS ? BIC : kind == DataKind.DISCRETE ? BDEU : CG_BIC;
+                name = kind == DataKind.CONTINUOUS ? BIC : kind == DataKind.DISCRETE ? BDEU : CONDITIONAL_GAUSSIAN_BIC;
             }
             switch (name) {
                 case BIC:
@@ -104,7 +104,7 @@ final class ScoreSettings {
                     return gaussian(name, BicScore.of(data.covariance(), penalty), values);
                 case BDEU:
                     requireKind(learnerId, name, kind, DataKind.DISCRETE);
-                    return BdeuScore.of(data, values.getDouble(ESS));
+                    return BdeuScore.of(data, values.getDouble(EQUIVALENT_SAMPLE_SIZE));
                 default:
                     return ConditionalGaussianScore.of(data, penalty);
             }
@@ -120,13 +120,13 @@ final class ScoreSettings {
 
     /** The parent-set bound, −1 for none. */
     static int maxParents(ParameterValues values) {
-        return values.getInt(MAX_PARENTS);
+        return values.getInt(PARENT_LIMIT);
     }
 
     private static void requireKind(String learnerId, String score, DataKind got, DataKind needed) {
         if (got != needed) {
             throw new LearnerException("learner " + learnerId + ": score " + score + " needs " + needed.word()
-                    + " data, got " + got.word() + " data (use score=auto or cg-bic)");
+                    + " data, got " + got.word() + " data (use score=auto or conditional-gaussian-bic)");
         }
     }
 }

@@ -32,7 +32,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class AdjacencySearchReferenceTest {
 
     @Test
-    @DisplayName("order-independent search = PC-stable written out (Colombo and Maathuis 2014, Alg. 4.1) and original search = PC's adjacency step written out (SGS 2000 §5.4.2): adjacencies and sepsets, 20 data sets, depth limits, 1 and 2 threads")
+    @DisplayName("order-independent search = PC-stable written out (Colombo and Maathuis 2014, Alg. 4.1) and sequential search = PC's adjacency step written out (SGS 2000 §5.4.2): adjacencies and sepsets, 20 data sets, depth limits, 1 and 2 threads")
     void optimisedSearchEqualsTheDirectOne() {
         int removedWithSets = 0;
         int setsOfTwoOrMore = 0;
@@ -43,7 +43,7 @@ class AdjacencySearchReferenceTest {
             FisherZTest test = FisherZTest.of(data, 0.05);
             int maxDepth = rep % 3 == 2 ? 1 : -1;
             Skeleton fast = new AdjacencySearch(test, new KnowledgeIndex(Knowledge.none(), data.names()),
-                    stable ? SkeletonVariant.ORDER_INDEPENDENT : SkeletonVariant.ORIGINAL, maxDepth,
+                    stable ? SkeletonVariant.ORDER_INDEPENDENT : SkeletonVariant.SEQUENTIAL, maxDepth,
                     RunContext.of(1, null, 1 + rep % 2)).run();
             List<Integer>[][] reference = reference(test, maxDepth, stable);
             for (int a = 0; a < 30; a++) {

@@ -103,7 +103,7 @@ class FciKnowledgeTest {
             }
             Knowledge k = kb.require(reqFrom, reqTo).forbid(fa, fb).forbid(fb, fa).build();
             Graph g = learn(LearnerInput.of(new Oracle(dag, null)), k, Map.of("skeleton",
-                    seed % 2 == 0 ? "original" : "order-independent"));
+                    seed % 2 == 0 ? "sequential" : "order-independent"));
             checkHonoured(k, g, reqFrom, reqTo, fa, fb);
             assertEquals(mag.edgeCount(), g.edgeCount(), "seed " + seed + ": skeleton");
             for (Edge e : g.edges()) {
@@ -143,7 +143,7 @@ class FciKnowledgeTest {
             String fb = names.get(perm[9]);
             Knowledge k = kb.require(reqFrom, reqTo).forbid(fa, fb).forbid(fb, fa).build();
             Graph g = learn(LearnerInput.of(SmallData.linearGaussian(dag, 400, 700 + rep)), k,
-                    Map.of("alpha", 0.05, "skeleton", rep % 2 == 0 ? "original" : "order-independent"));
+                    Map.of("alpha", 0.05, "skeleton", rep % 2 == 0 ? "sequential" : "order-independent"));
             checkHonoured(k, g, reqFrom, reqTo, fa, fb);
             Graph free = learn(LearnerInput.of(SmallData.linearGaussian(dag, 400, 700 + rep)), Knowledge.none(),
                     Map.of("alpha", 0.05));

@@ -96,7 +96,7 @@ class FciOracleTest {
             hiddenCases += dag.hasHidden() ? 1 : 0;
             Graph pag = Pags.of(dag);
             Graph mag = LatentProjection.mag(dag);
-            Map<String, Object> raw = seed % 4 == 1 ? Map.of("skeleton", "original")
+            Map<String, Object> raw = seed % 4 == 1 ? Map.of("skeleton", "sequential")
                     : seed % 4 == 2 ? Map.of("selection_bias", "possible") : Map.of();
             Estimate e = run(dag, raw, 1 + (int) (seed % 2));
             Graph g = e.graph();

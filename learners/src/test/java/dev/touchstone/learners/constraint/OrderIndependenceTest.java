@@ -48,14 +48,14 @@ class OrderIndependenceTest {
         Set<String> reference = adjacencies(data, SkeletonVariant.ORDER_INDEPENDENT, 1);
         UniformRandomProvider rng = Seeds.random(43);
         boolean originalDiffered = false;
-        Set<String> originalReference = adjacencies(data, SkeletonVariant.ORIGINAL, 1);
+        Set<String> originalReference = adjacencies(data, SkeletonVariant.SEQUENTIAL, 1);
         for (int rep = 0; rep < 20; rep++) {
             int[] perm = RandomDags.permutation(data.columns(), rng);
             DataSet shuffled = data.select(perm);
             assertEquals(reference, adjacencies(shuffled, SkeletonVariant.ORDER_INDEPENDENT, 1 + rep % 2), "order " + rep);
-            originalDiffered |= !originalReference.equals(adjacencies(shuffled, SkeletonVariant.ORIGINAL, 1));
+            originalDiffered |= !originalReference.equals(adjacencies(shuffled, SkeletonVariant.SEQUENTIAL, 1));
         }
-        // Not a theorem, but the reason the variant exists: at n = 150 the original search usually depends on order.
-        assertTrue(originalDiffered, "expected the original search to depend on the order at least once");
+        // Not a theorem, but the reason the variant exists: at n = 150 the sequential search usually depends on order.
+        assertTrue(originalDiffered, "expected the sequential search to depend on the order at least once");
     }
 }

@@ -30,7 +30,7 @@ class PcFiniteSampleTest {
         for (long seed = 1; seed <= 5; seed++) {
             Graph dag = RandomDags.erdosRenyi(20, 2.0, 900 + seed);
             DataSet data = SmallData.linearGaussian(dag, 10_000, 950 + seed);
-            for (String skeleton : new String[] {"original", "order-independent"}) {
+            for (String skeleton : new String[] {"sequential", "order-independent"}) {
                 Graph g = pc.learn(LearnerInput.of(data), Knowledge.none(), ParameterValues.resolve("pc",
                         pc.description().parameters(), Map.of("alpha", 0.01, "skeleton", skeleton)),
                         RunContext.of(1, null, 2)).graph();

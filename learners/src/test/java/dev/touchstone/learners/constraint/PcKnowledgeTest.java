@@ -59,7 +59,7 @@ class PcKnowledgeTest {
             Knowledge k = kb.build();
             LearnerInput input = rep % 2 == 0 ? LearnerInput.of(new Oracle(dag, null))
                     : LearnerInput.of(SmallData.linearGaussian(dag, 300, 700 + rep));
-            Graph g = learn(input, k, rep % 4 < 2 ? "order-independent" : "original");
+            Graph g = learn(input, k, rep % 4 < 2 ? "order-independent" : "sequential");
             assertTrue(g.hasDirected(g.index(reqFrom), g.index(reqTo)), "required " + reqFrom + " -> " + reqTo + ": " + g);
             assertFalse(g.adjacent(g.index(fa), g.index(fb)), "forbidden " + fa + " ~ " + fb);
             for (Edge e : g.edges()) {
@@ -88,7 +88,7 @@ class PcKnowledgeTest {
     void requiredAdjacencyIsNeverRemoved() {
         Graph dag = Graph.builder(List.of("A", "B", "C")).addDirected(0, 1).freeze();
         DataSet data = SmallData.linearGaussian(dag, 500, 1);
-        Graph g = learn(LearnerInput.of(data), Knowledge.builder().require("C", "A").build(), "original");
+        Graph g = learn(LearnerInput.of(data), Knowledge.builder().require("C", "A").build(), "sequential");
         assertTrue(g.hasDirected(g.index("C"), g.index("A")));
         List<String> none = new ArrayList<>();
         assertTrue(none.isEmpty());
@@ -113,7 +113,7 @@ class PcKnowledgeTest {
         Knowledge k = Knowledge.builder().forbid("x", "y").forbid("y", "x").build();
         Graph cpdag = Cpdags.of(dag);
         assertEquals(4, cpdag.edgeCount());
-        for (String skeleton : List.of("order-independent", "original")) {
+        for (String skeleton : List.of("order-independent", "sequential")) {
             for (String colliders : List.of("sepset", "conservative", "majority")) {
                 Graph g = learnWith(LearnerInput.of(new Oracle(dag, null)), k, skeleton, colliders);
                 assertTrue(g.hasDirected(g.index("y"), g.index("z")), skeleton + "/" + colliders + ": " + g);
@@ -141,7 +141,7 @@ class PcKnowledgeTest {
                 }
             }
             Graph cpdag = Cpdags.of(dag);
-            String skeleton = rep % 2 == 0 ? "order-independent" : "original";
+            String skeleton = rep % 2 == 0 ? "order-independent" : "sequential";
             Graph g = learnWith(LearnerInput.of(new Oracle(dag, null)), kb.build(), skeleton, "sepset");
             assertTrue(g.sameEdges(cpdag), "DAG " + rep + "\n truth " + cpdag + "\n estimate " + g);
         }

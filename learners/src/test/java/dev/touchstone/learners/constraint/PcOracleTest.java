@@ -57,12 +57,12 @@ class PcOracleTest {
     @SuppressWarnings("unchecked")
     private static Map<String, Object>[] variants(int i) {
         // The majority rule enumerates the same sets as the conservative one; every third DAG keeps the suite fast.
-        Map<String, Object> conservative = Map.of("skeleton", i % 2 == 0 ? "order-independent" : "original",
+        Map<String, Object> conservative = Map.of("skeleton", i % 2 == 0 ? "order-independent" : "sequential",
                 "colliders", "conservative");
         Map<String, Object> majority = Map.of("colliders", "majority", "conflicts", "drop-both");
         return i % 3 == 0
-                ? new Map[] {Map.of("skeleton", "original"), Map.of("skeleton", "order-independent"), conservative, majority}
-                : new Map[] {Map.of("skeleton", "original"), Map.of("skeleton", "order-independent"), conservative};
+                ? new Map[] {Map.of("skeleton", "sequential"), Map.of("skeleton", "order-independent"), conservative, majority}
+                : new Map[] {Map.of("skeleton", "sequential"), Map.of("skeleton", "order-independent"), conservative};
     }
 
     @Test

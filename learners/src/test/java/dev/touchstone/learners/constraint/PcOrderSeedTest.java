@@ -39,7 +39,7 @@ class PcOrderSeedTest {
     }
 
     @Test
-    @DisplayName("order-independent skeleton equal over 10 order seeds (Colombo and Maathuis 2014, Theorem 1); the original one varies")
+    @DisplayName("order-independent skeleton equal over 10 order seeds (Colombo and Maathuis 2014, Theorem 1); the sequential one varies")
     void orderIndependentSkeletonDoesNotVary() {
         Graph dag = RandomDags.erdosRenyi(25, 3.0, 41);
         LearnerInput data = LearnerInput.of(SmallData.linearGaussian(dag, 150, 42));
@@ -49,11 +49,11 @@ class PcOrderSeedTest {
             Graph g = learn(data, "order-independent", order, 7);
             assertEquals(dag.names(), g.names(), "the estimate lists the variables in the given order");
             assertEquals(stable, skeleton(g), "order seed " + order);
-            original.add(skeleton(learn(data, "original", order, 7)));
+            original.add(skeleton(learn(data, "sequential", order, 7)));
         }
-        // Not a theorem, but what the variant was made for: at n = 150 the original search depends on order
+        // Not a theorem, but what the variant was made for: at n = 150 the sequential search depends on order
         // (the same data as the skeleton-level OrderIndependenceTest).
-        assertTrue(original.size() > 1, "the original search gave one skeleton for 10 orders");
+        assertTrue(original.size() > 1, "the sequential search gave one skeleton for 10 orders");
     }
 
     @Test
@@ -62,10 +62,10 @@ class PcOrderSeedTest {
         Graph dag = RandomDags.erdosRenyi(15, 2.0, 5);
         DataSet d = SmallData.linearGaussian(dag, 200, 6);
         LearnerInput data = LearnerInput.of(d);
-        assertEquals(learn(data, "original", 3, 11), learn(data, "original", 3, 11));
+        assertEquals(learn(data, "sequential", 3, 11), learn(data, "sequential", 3, 11));
         assertEquals(PC.learn(data, Knowledge.none(), ParameterValues.resolve("pc", PC.description().parameters(),
-                Map.of("alpha", 0.05, "skeleton", "original")), RunContext.of(11, null, 1)).graph(),
-                learn(data, "original", 0, 11));
+                Map.of("alpha", 0.05, "skeleton", "sequential")), RunContext.of(11, null, 1)).graph(),
+                learn(data, "sequential", 0, 11));
     }
 
     @Test
@@ -74,7 +74,7 @@ class PcOrderSeedTest {
         Graph dag = RandomDags.erdosRenyi(12, 2.5, 77);
         LearnerInput oracle = LearnerInput.of(new Oracle(dag, null));
         for (int order = 0; order <= 3; order++) {
-            assertEquals(Cpdags.of(dag), learn(oracle, "original", order, 3), "order seed " + order);
+            assertEquals(Cpdags.of(dag), learn(oracle, "sequential", order, 3), "order seed " + order);
         }
         assertEquals(GraphClass.CPDAG, PC.description().returns());
     }

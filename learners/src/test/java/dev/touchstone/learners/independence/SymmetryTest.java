@@ -29,8 +29,8 @@ class SymmetryTest {
             "fisher-z, linear-gaussian, true",
             "g-square, discrete, false",
             "chi-square, discrete, true",
-            "cg-lrt, conditional-gaussian, false",
-            "cg-lrt, conditional-gaussian, true"})
+            "conditional-gaussian, conditional-gaussian, false",
+            "conditional-gaussian, conditional-gaussian, true"})
     @DisplayName("p-value of (x, y | z) equals that of (y, x | z) to the bit")
     void symmetric(String test, String model, boolean missing) {
         Simulation.Builder b = Simulation.builder()

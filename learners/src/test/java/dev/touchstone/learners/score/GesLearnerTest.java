@@ -87,7 +87,7 @@ class GesLearnerTest {
     void discreteWithBdeu() {
         Graph truth = HillClimbLearnerTest.sprinkler();
         DataSet data = ScoreData.binary(truth, 20000, 4);
-        Graph got = run(LearnerInput.of(data), Knowledge.none(), Map.of("score", "bdeu", "ess", 10.0), 1).graph();
+        Graph got = run(LearnerInput.of(data), Knowledge.none(), Map.of("score", "bdeu", "equivalent_sample_size", 10.0), 1).graph();
         assertEquals(cpdagOfTruth(truth), got);
     }
 

@@ -55,7 +55,7 @@ class HillClimbLearnerTest {
         for (long seed = 1; seed <= 10; seed++) {
             Graph truth = RandomDags.erdosRenyi(7, 2.0, seed);
             DataSet data = ScoreData.linearGaussian(truth, 5000, seed + 100);
-            Graph got = learn(data, Knowledge.none(), Map.of("restarts", 5), seed).graph();
+            Graph got = learn(data, Knowledge.none(), Map.of("perturbed_starts", 5), seed).graph();
             if (Equivalence.markovEquivalent(truth, got)) {
                 ok++;
             }
@@ -89,8 +89,8 @@ class HillClimbLearnerTest {
     @DisplayName("the same seed gives the same DAG; the result is acyclic")
     void deterministic() {
         DataSet data = ScoreData.linearGaussian(RandomDags.erdosRenyi(9, 3.0, 4), 300, 8);
-        Graph a = learn(data, Knowledge.none(), Map.of("restarts", 4), 11).graph();
-        Graph b = learn(data, Knowledge.none(), Map.of("restarts", 4), 11).graph();
+        Graph a = learn(data, Knowledge.none(), Map.of("perturbed_starts", 4), 11).graph();
+        Graph b = learn(data, Knowledge.none(), Map.of("perturbed_starts", 4), 11).graph();
         assertTrue(a.equals(b));
         assertTrue(Ancestry.isAcyclic(a));
     }
