@@ -23,6 +23,9 @@ public final class FormerNames {
             Map.entry("tabu_length", "recent_moves_barred"),
             Map.entry("restarts", "perturbed_starts"),
             Map.entry("perturbation", "random_moves_per_start"),
+            // NOTEARS' stopping rules, named by what they bound
+            Map.entry("h_tolerance", "acyclicity_tolerance"),
+            Map.entry("rho_max", "penalty_limit"),
             // the skeleton search that removes an edge at once, named by how it visits pairs
             Map.entry("original", "sequential"));
 

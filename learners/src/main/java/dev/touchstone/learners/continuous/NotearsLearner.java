@@ -27,7 +27,7 @@ import java.util.Map;
  * ½ tr((I − W)ᵀ S (I − W)) (= 1/(2n) ‖X − XW‖² with S the covariance) plus λ‖W‖₁ subject to
  * h(W) = tr(e^{W∘W}) − d = 0 ({@link Acyclicity}), by the augmented Lagrangian of the paper
  * (penalty ρ multiplied by 10 until h falls to a quarter, then the multiplier update
- * α += ρh, until h ≤ h_tolerance or ρ reaches its cap), each subproblem solved on the split
+ * α += ρh, until h ≤ acyclicity_tolerance or ρ reaches its cap), each subproblem solved on the split
  * W = W⁺ − W⁻ with W⁺, W⁻ ≥ 0 by {@link ProjectedLbfgs} (our stand-in for L-BFGS-B).
  * Entries with |w| below the weight threshold are then dropped; if cycles remain, the
  * weakest edges on cycles are dropped too ({@link CycleBreaker}) and counted in the
@@ -51,10 +51,10 @@ public final class NotearsLearner implements Learner {
             "most dual (multiplier) updates of the augmented Lagrangian");
     static final ParameterSpec MAX_INNER = ParameterSpec.integer("max_inner_iterations", 2_000, 1, 1_000_000,
             "most quasi-Newton iterations per subproblem");
-    static final ParameterSpec H_TOLERANCE = ParameterSpec.real("h_tolerance", 1e-8, 1e-16, 1.0,
+    static final ParameterSpec H_TOLERANCE = ParameterSpec.real("acyclicity_tolerance", 1e-8, 1e-16, 1.0,
             "stop once the acyclicity function h(W) is at most this");
-    static final ParameterSpec RHO_MAX = ParameterSpec.real("rho_max", 1e16, 1.0, 1e20,
-            "stop once the penalty ρ reaches this");
+    static final ParameterSpec RHO_MAX = ParameterSpec.real("penalty_limit", 1e16, 1.0, 1e20,
+            "stop once the augmented Lagrangian's penalty weight ρ reaches this");
 
     /** Stopping rule of each subproblem: projected gradient and relative decrease (L-BFGS-B defaults). */
     private static final double GRADIENT_TOLERANCE = 1e-5;

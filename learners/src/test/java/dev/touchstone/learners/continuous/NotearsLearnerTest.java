@@ -62,7 +62,7 @@ class NotearsLearnerTest {
     }
 
     @Test
-    @DisplayName("The estimate is acyclic, and the unthresholded solution has h ≤ h_tolerance or ρ at its cap"
+    @DisplayName("The estimate is acyclic, and the unthresholded solution has h ≤ acyclicity_tolerance or ρ at its cap"
             + " (Zheng et al. 2018, Algorithm 1)")
     void acyclicAndConverged() {
         SimulatedReplicate r = equalVariance(10).drawTruth(42).sample(2000);
