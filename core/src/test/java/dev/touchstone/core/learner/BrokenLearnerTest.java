@@ -51,7 +51,12 @@ class BrokenLearnerTest {
 
     @Test
     void contractCatchesAcceptingDataItDoesNotDeclare() {
-        assertThrows(AssertionFailedError.class, () -> new LiarContract().rejectsDataKindsItDoesNotAccept());
+        assertThrows(AssertionFailedError.class, () -> new LiarContract().acceptsTheDataKindsItDeclaresAndRejectsTheOthers());
+    }
+
+    @Test
+    void contractCatchesIgnoringMissingValuesItDeclaresToReject() {
+        assertThrows(AssertionFailedError.class, () -> new LiarContract().treatsMissingValuesAsItDeclares());
     }
 
     @Test

@@ -130,21 +130,30 @@ public abstract class LearnerContractTest {
 
     @Test
     void honoursTheDeadline() {
-        if (!checksDeadline()) {
-            return;
-        }
         RunContext expired = RunContext.of(1, Duration.ZERO, 1);
-        assertThrows(DeadlineExceededException.class, () -> run(acceptedInput(), expired),
-                "a run whose limit has passed must stop with DeadlineExceededException");
+        if (checksDeadline()) {
+            assertThrows(DeadlineExceededException.class, () -> run(acceptedInput(), expired),
+                    "a run whose limit has passed must stop with DeadlineExceededException");
+        } else {
+            // A learner that declares O(variables) work without deadline checks must then
+            // finish even when its limit has already passed, with its declared class.
+            LearnerInput input = acceptedInput();
+            Estimate e = run(input, expired);
+            assertEquals(description().returns(), e.graphClass(), "declared graph class");
+            assertEquals(input.variableNames(), e.graph().names(), "variables of the estimate");
+        }
     }
 
     @Test
-    void rejectsDataKindsItDoesNotAccept() {
+    void acceptsTheDataKindsItDeclaresAndRejectsTheOthers() {
         for (DataKind kind : DataKind.values()) {
+            LearnerInput input = LearnerInput.of(data(kind, 5));
             if (description().accepts().contains(kind)) {
+                Estimate e = run(input, RunContext.unlimited(1));
+                assertEquals(description().returns(), e.graphClass(), "declared graph class on " + kind.word());
+                assertEquals(input.variableNames(), e.graph().names(), "variables on " + kind.word() + " data");
                 continue;
             }
-            LearnerInput input = LearnerInput.of(data(kind, 5));
             LearnerException ex = assertThrows(LearnerException.class, () -> run(input, RunContext.unlimited(1)),
                     "must reject " + kind.word() + " data");
             assertTrue(ex.getMessage().contains(kind.word()), "message should name the data kind: " + ex.getMessage());
@@ -152,11 +161,21 @@ public abstract class LearnerContractTest {
     }
 
     @Test
-    void rejectsMissingValuesWhenItSaysSo() {
-        if (description().missingValues() != MissingValues.REJECTS) {
-            return;
+    void treatsMissingValuesAsItDeclares() {
+        LearnerInput holed = LearnerInput.of(withMissingCell(acceptedInput().data()));
+        if (description().missingValues() == MissingValues.REJECTS) {
+            assertThrows(LearnerException.class, () -> run(holed, RunContext.unlimited(1)),
+                    "declares that it rejects missing values");
+        } else {
+            Estimate e = run(holed, RunContext.unlimited(1));
+            assertEquals(description().returns(), e.graphClass(),
+                    "declares that it handles missing values (" + description().missingValues() + ")");
+            assertEquals(holed.variableNames(), e.graph().names(), "variables of the estimate");
         }
-        DataSet data = acceptedInput().data();
+    }
+
+    /** The same data with the first cell of the first column missing. */
+    private static DataSet withMissingCell(DataSet data) {
         DataSet.Builder b = DataSet.builder(data.rows());
         for (int j = 0; j < data.columns(); j++) {
             if (data.isDiscrete(j)) {
@@ -173,9 +192,7 @@ public abstract class LearnerContractTest {
                 b.continuous(data.variable(j).name(), values);
             }
         }
-        LearnerInput holed = LearnerInput.of(b.build());
-        assertThrows(LearnerException.class, () -> run(holed, RunContext.unlimited(1)),
-                "declares that it rejects missing values");
+        return b.build();
     }
 
     @Test
