@@ -27,6 +27,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 /** External command learners, with small Python scripts as the commands (the machine has python3). */
@@ -42,7 +43,10 @@ class CommandLearnerTest {
     static void locate() throws URISyntaxException {
         scripts = Path.of(CommandLearnerTest.class.getResource("/outside/hang.py").toURI()).getParent();
         examples = Path.of("..", "examples", "adapters").toAbsolutePath().normalize();
-        assumeTrue(python() != null, "python3 is needed for these tests");
+        if (python() == null && "true".equals(System.getenv("CI"))) {
+            fail("python3 is not installed; .ci/run should have installed Debian's python3 package");
+        }
+        assumeTrue(python() != null, "python3 not found: skipping the command-learner tests (they run in CI)");
     }
 
     static String python() {
