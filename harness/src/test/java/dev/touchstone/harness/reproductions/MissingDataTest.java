@@ -44,5 +44,13 @@ class MissingDataTest {
             assertTrue(BundledStudy.mean(these, "test-wise", "adjacency_precision") >= 0.9, mechanism + " precision");
             s.assertShift(these, "test-wise", "list-wise", "adjacency_recall", 1);
         }
+
+        // MVPC (permutation-corrected tests on top of test-wise deletion) must keep test-wise deletion's gain over
+        // list-wise deletion where its assumptions hold (MCAR and MAR; the self-masking MNAR here violates them).
+        for (String mechanism : List.of("mcar", "mar")) {
+            List<RunResult> these = s.where("missing", mechanism);
+            s.assertShift(these, "corrected", "list-wise", "adjacency_recall", 1);
+            assertTrue(BundledStudy.mean(these, "corrected", "adjacency_precision") >= 0.9, mechanism + " MVPC precision");
+        }
     }
 }

@@ -106,7 +106,17 @@ public final class PcLearner implements Learner {
 
     private Estimate learnInOrder(LearnerInput input, Knowledge knowledge, ParameterValues parameters,
                                   RunContext context) {
-        SearchInputs in = SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context);
+        return searchAndOrient(SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context), knowledge,
+                parameters, context);
+    }
+
+    /**
+     * PC's steps after its inputs are read: adjacency search with {@code in}'s test, colliders
+     * by the {@code colliders} and {@code conflicts} parameters, Meek's rules. Shared with the
+     * learners that are PC with another test.
+     */
+    static Estimate searchAndOrient(SearchInputs in, Knowledge knowledge, ParameterValues parameters,
+                                    RunContext context) {
         KnowledgeIndex ki = in.knowledge();
         IndependenceTest test = in.test();
         int maxDepth = in.maxDepth();

@@ -5,8 +5,8 @@ import dev.touchstone.core.data.DataSet;
 /**
  * Fisher's z test with test-wise deletion: each test uses exactly the rows that are
  * complete for its own variables x, y and S, and computes their covariance afresh (Tu,
- * Zhang, Kvernes, Bertone and Kjellström 2019, "Causal discovery in the presence of missing
- * data", AISTATS; the statistic is that of Kalisch and Bühlmann 2007).
+ * Zhang, Ackermann, Mohan, Kjellström and Zhang 2019, "Causal discovery in the presence of
+ * missing data", AISTATS, PMLR 89; the statistic is that of Kalisch and Bühlmann 2007).
  *
  * <p>Cost O(n (|S| + 2)²) per test, against O(|S|³) for {@link FisherZTest} on a shared
  * covariance; use it only when the data have missing cells. Thread-safe: every call works
@@ -64,30 +64,43 @@ public final class TestwiseFisherZTest implements IndependenceTest {
         for (int i = 0; i < k; i++) {
             cols[i + 2] = columns[z[i]];
         }
-        int used = 0;
-        double[] mean = new double[q];
         boolean[] keep = new boolean[rows];
+        int used = 0;
         for (int r = 0; r < rows; r++) {
             boolean ok = true;
             for (int i = 0; i < q && ok; i++) {
                 ok = !Double.isNaN(cols[i][r]);
             }
-            if (ok) {
-                keep[r] = true;
-                used++;
+            keep[r] = ok;
+            used += ok ? 1 : 0;
+        }
+        return pValueOnRows(cols, keep, used);
+    }
+
+    /**
+     * Fisher's z p-value of columns 0 and 1 given columns 2 … of {@code cols}, over the rows
+     * marked in {@code keep} ({@code used} of them): their covariance computed afresh, then
+     * the partial correlation. 1 when too few rows remain.
+     */
+    static double pValueOnRows(double[][] cols, boolean[] keep, int used) {
+        int q = cols.length;
+        int k = q - 2;
+        if (used - k - 3 <= 0) {
+            return 1.0;
+        }
+        double[] mean = new double[q];
+        for (int r = 0; r < keep.length; r++) {
+            if (keep[r]) {
                 for (int i = 0; i < q; i++) {
                     mean[i] += cols[i][r];
                 }
             }
         }
-        if (used - k - 3 <= 0) {
-            return 1.0;
-        }
         for (int i = 0; i < q; i++) {
             mean[i] /= used;
         }
         double[] cov = new double[q * q];
-        for (int r = 0; r < rows; r++) {
+        for (int r = 0; r < keep.length; r++) {
             if (!keep[r]) {
                 continue;
             }
