@@ -1,20 +1,85 @@
 package dev.touchstone.harness;
 
+import java.io.UncheckedIOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.NotDirectoryException;
+
 /**
  * Bad input: a file or value the user gave that cannot be used. The message is one line
  * naming the file and place (file, line, field, option) and what is wrong; the command line
  * prints it as {@code error: …} with exit status 2. It lives at the bottom of the harness so
  * that file formats, studies and the command line can all raise it without depending on
- * one another.
+ * one another. {@link #from} is the one place that decides what else counts as bad input.
  */
 public class BadInputException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
     public BadInputException(String message) {
-        super(message);
+        super(oneLine(message));
     }
 
     public BadInputException(String message, Throwable cause) {
-        super(message, cause);
+        super(oneLine(message), cause);
+    }
+
+    /**
+     * The bad input behind {@code failure}, or null when it is not bad input (a fault of the
+     * tool): a {@code BadInputException} anywhere in the cause chain, or a file-system refusal
+     * that names the file (no such file, permission denied, exists already, not a folder).
+     */
+    public static BadInputException from(Throwable failure) {
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof BadInputException b) {
+                return b;
+            }
+            Throwable io = t instanceof UncheckedIOException u ? u.getCause() : t;
+            if (io instanceof FileSystemException f && f.getFile() != null) {
+                return new BadInputException(f.getFile() + ": " + reason(f), failure);
+            }
+            if (t.getCause() == t) {
+                break;
+            }
+        }
+        return null;
+    }
+
+    private static String reason(FileSystemException f) {
+        if (f instanceof NoSuchFileException) {
+            return "no such file or folder (check the path)";
+        }
+        if (f instanceof AccessDeniedException) {
+            return "permission denied (check its permissions)";
+        }
+        if (f instanceof FileAlreadyExistsException) {
+            return "exists already (remove it or choose another name)";
+        }
+        if (f instanceof NotDirectoryException) {
+            return "is not a folder";
+        }
+        return f.getReason() == null ? "cannot be used" : f.getReason();
+    }
+
+    /**
+     * A message as one line: parser messages that span several lines (a YAML parser's
+     * context, the echoed source line and its caret) are cut to their meaningful lines,
+     * joined with "; ".
+     */
+    public static String oneLine(String message) {
+        if (message == null || message.indexOf('\n') < 0 && message.indexOf('\r') < 0) {
+            return message;
+        }
+        StringBuilder sb = new StringBuilder();
+        for (String line : message.split("\r?\n|\r")) {
+            String t = line.strip();
+            if (t.isEmpty() || t.startsWith("^") || line.startsWith(" ") || line.startsWith("\t")
+                    || t.startsWith("in 'reader'") || t.startsWith("at [Source")) {
+                continue;
+            }
+            sb.append(sb.length() == 0 ? "" : "; ").append(t);
+        }
+        return sb.length() == 0 ? message.strip().replaceAll("\\s*\\R\\s*", "; ") : sb.toString();
     }
 }

@@ -89,6 +89,12 @@ final class LearnCommand implements Callable<Integer> {
             est = entry.learner().learn(input, k, values, context);
         } catch (DeadlineExceededException e) {
             throw new UsageException("learner " + d.id() + " reached the time limit of " + seconds + " s");
+        } catch (LearnerException e) {
+            // the run failed (a fault of the learner, not of the tool): say why, exit 1
+            spec.commandLine().getErr().println("error: learner " + d.id() + " failed: "
+                    + dev.touchstone.harness.BadInputException.oneLine(e.getMessage()));
+            spec.commandLine().getErr().flush();
+            return Main.FAILED;
         }
         double secs = (System.nanoTime() - t0) / 1e9;
         PrintWriter err = spec.commandLine().getErr();

@@ -56,11 +56,12 @@ public final class Main implements Runnable {
             if (debug) {
                 ex.printStackTrace(err);
             }
-            if (ex instanceof BadInputException) {
-                err.println("error: " + ex.getMessage());
+            BadInputException bad = BadInputException.from(ex);
+            if (bad != null) {
+                err.println("error: " + bad.getMessage());
                 return BAD_INPUT;
             }
-            err.println("error: " + (ex.getMessage() == null ? ex.toString() : ex.getMessage()));
+            err.println("error: " + internal(ex));
             return FAILED;
         });
         cl.setParameterExceptionHandler((ex, a) -> {
@@ -84,6 +85,17 @@ public final class Main implements Runnable {
             spec.addOption(CommandLine.Model.OptionSpec.builder("-h", "--help").usageHelp(true)
                     .description("Show this help message and exit.").build());
         }
+    }
+
+    /**
+     * The line for a fault of the tool: its message without Java class names, and how to see
+     * more. The message of an exception that has none is not shown at all.
+     */
+    static String internal(Throwable ex) {
+        String m = ex.getMessage() == null ? null : BadInputException.oneLine(ex.getMessage())
+                .replaceAll("\\b(?:[a-z][a-z0-9_]*\\.)+[A-Z][A-Za-z0-9_$]*(?:Exception|Error)\\b:?\\s*", "");
+        return "unexpected failure" + (m == null || m.isBlank() ? "" : ": " + m.strip())
+                + " (run again with --debug to see where, and please report it)";
     }
 
     private static boolean hasDebug(CommandLine.ParseResult pr) {

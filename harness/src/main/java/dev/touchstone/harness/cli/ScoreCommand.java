@@ -7,7 +7,9 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.algorithms.Ancestry;
+import dev.touchstone.core.graph.algorithms.GraphChecks;
 import dev.touchstone.harness.io.GraphFiles;
 import dev.touchstone.metrics.scoring.Scorer;
 import dev.touchstone.metrics.truth.Truth;
@@ -20,7 +22,6 @@ import picocli.CommandLine.Model.CommandSpec;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
@@ -57,11 +58,6 @@ public final class ScoreCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         GraphClass estimateClass = as == null ? null : parseClass(as);
-        for (Path f : List.of(truthFile, estimateFile)) {
-            if (!Files.isRegularFile(f)) {
-                throw new UsageException(f + ": no such file");
-            }
-        }
         Graph truthGraph = GraphFiles.read(truthFile, null);
         Graph estimate = GraphFiles.read(estimateFile, truthGraph.names(), estimateClass);
         if (estimateClass == null) {
@@ -101,16 +97,12 @@ public final class ScoreCommand implements Callable<Integer> {
     }
 
     private static GraphClass parseClass(String word) {
-        GraphClass c;
-        try {
-            c = GraphClass.parse(word);
-        } catch (IllegalArgumentException e) {
-            throw new UsageException("--as: unknown class '" + word + "' (allowed: dag, cpdag, pag)");
+        for (GraphClass c : List.of(GraphClass.DAG, GraphClass.CPDAG, GraphClass.PAG)) {
+            if (c.word().equals(word)) {
+                return c;
+            }
         }
-        if (c == GraphClass.MAG) {
-            throw new UsageException("--as: unknown class '" + word + "' (allowed: dag, cpdag, pag)");
-        }
-        return c;
+        throw new UsageException("--as: unknown class '" + word + "' (allowed: dag, cpdag, pag)");
     }
 
 
@@ -142,6 +134,25 @@ public final class ScoreCommand implements Callable<Integer> {
                 throw new UsageException(truthFile + ": the truth has the edge " + t.name(e.a()) + " " + e.atA().word()
                         + "/" + e.atB().word() + " " + t.name(e.b()) + ", which a " + estimateClass.word()
                         + " cannot have; give the true " + estimateClass.word() + " or a true DAG");
+            }
+        }
+        if (estimateClass == GraphClass.CPDAG) {
+            try {
+                GraphChecks.checkCpdag(t);
+            } catch (IllegalArgumentException e) {
+                throw new UsageException(truthFile + ": " + e.getMessage() + "; give the true CPDAG or a true DAG");
+            }
+        }
+        if (estimateClass == GraphClass.PAG) {
+            for (Edge e : t.edges()) {
+                // Truths come from DAGs with hidden variables and no selection: a PAG of one has a
+                // tail only on a directed edge (Zhang 2008, §3; tails elsewhere need selection).
+                boolean tail = e.atA() == Mark.TAIL || e.atB() == Mark.TAIL;
+                if (tail && !e.isDirected()) {
+                    throw new UsageException(truthFile + ": the truth has the edge " + t.name(e.a()) + " "
+                            + e.atA().word() + "/" + e.atB().word() + " " + t.name(e.b()) + ", but a true PAG of a"
+                            + " DAG with hidden variables has tails only on directed edges; give the true PAG or a true DAG");
+                }
             }
         }
         return Truth.of(t, estimateClass);

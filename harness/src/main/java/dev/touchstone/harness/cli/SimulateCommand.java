@@ -120,6 +120,9 @@ final class SimulateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (Files.exists(out) && !Files.isDirectory(out)) {
+            throw new UsageException("--out: " + out + " is a file, not a folder (choose a folder name)");
+        }
         return study != null ? fromStudy() : fromOptions();
     }
 

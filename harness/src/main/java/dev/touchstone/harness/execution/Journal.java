@@ -222,7 +222,7 @@ public final class Journal implements AutoCloseable {
     }
 
     /** The journal cannot be read or written. */
-    public static final class JournalException extends RuntimeException {
+    public static final class JournalException extends dev.touchstone.harness.BadInputException {
         private static final long serialVersionUID = 1L;
 
         public JournalException(String message) {

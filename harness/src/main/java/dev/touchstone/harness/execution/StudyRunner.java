@@ -91,9 +91,6 @@ public final class StudyRunner {
         prepareFolder(out);
         Instant started = Instant.now();
         String studyText = StudyWriter.yaml(plan.study());
-        OutputFiles.write(out.resolve(STUDY_FILE), studyText);
-        Provenance running = provenance(plan, studyText, options.threads(), started, null, Map.of());
-        OutputFiles.write(out.resolve(PROVENANCE_FILE), running.json());
 
         SettingLayout layout = new SettingLayout(plan);
         Map<Integer, RunResult> results = new ConcurrentHashMap<>();
@@ -102,6 +99,11 @@ public final class StudyRunner {
         List<RunDefinition> todo = new ArrayList<>();
         try (Journal journal = Journal.open(out.resolve(Journal.FILE_NAME))) {
             Map<String, JournalCodec.Line> existing = journal.existing();
+            // Only once the journal has been read and found sound: a damaged one is refused
+            // with the folder as it was.
+            OutputFiles.write(out.resolve(STUDY_FILE), studyText);
+            Provenance running = provenance(plan, studyText, options.threads(), started, null, Map.of());
+            OutputFiles.write(out.resolve(PROVENANCE_FILE), running.json());
             Set<String> oldCoordinates = new HashSet<>();
             for (JournalCodec.Line l : existing.values()) {
                 oldCoordinates.add(l.coordinates());
@@ -235,7 +237,7 @@ public final class StudyRunner {
     }
 
     /** The output folder cannot be used. */
-    public static final class OutputFolderException extends RuntimeException {
+    public static final class OutputFolderException extends dev.touchstone.harness.BadInputException {
         private static final long serialVersionUID = 1L;
 
         public OutputFolderException(String message) {

@@ -189,7 +189,7 @@ public final class DataCsv {
     }
 
     private static LineCountingReader open(Path file) throws IOException {
-        return new LineCountingReader(Files.newBufferedReader(file, StandardCharsets.UTF_8));
+        return new LineCountingReader(InputFiles.reader(file));
     }
 
     private enum Kind { UNDECIDED, CONTINUOUS, DISCRETE }

@@ -91,20 +91,24 @@ final class GraphAssembler {
         return i;
     }
 
+    /** The mark spelled exactly as files write it (lower case); anything else is refused with the spellings. */
     private Mark mark(String word, String where) {
-        try {
-            return Mark.parse(word);
-        } catch (IllegalArgumentException e) {
-            throw new FileFormatException(file, where, e.getMessage());
+        for (Mark m : Mark.values()) {
+            if (m.word().equals(word)) {
+                return m;
+            }
         }
+        throw new FileFormatException(file, where, "unknown mark '" + word + "' (allowed: tail, arrow, circle)");
     }
 
     /** The graph, after the whole-graph checks of the expected class. */
     Graph build() {
         Graph g = graph.freeze();
-        if (expected == GraphClass.DAG && Ancestry.topologicalOrder(g) == null) {
+        // No class a graph file can hold (DAG, CPDAG, MAG, PAG) has a directed cycle.
+        if (Ancestry.topologicalOrder(g) == null) {
             throw new FileFormatException(file, null, "the edges form a directed cycle ("
-                    + describeCycle(g) + "), but a DAG is expected");
+                    + describeCycle(g) + "), but " + (expected == null ? "a causal graph" : "a "
+                    + expected.word().toUpperCase(java.util.Locale.ROOT)) + " has none; remove or reverse one of its edges");
         }
         return g;
     }

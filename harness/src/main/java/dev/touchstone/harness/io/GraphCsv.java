@@ -89,7 +89,7 @@ public final class GraphCsv {
     }
 
     private static void parse(Path file, List<String[]> rows, List<Long> lines) throws IOException {
-        try (LineCountingReader in = new LineCountingReader(Files.newBufferedReader(file, StandardCharsets.UTF_8));
+        try (LineCountingReader in = new LineCountingReader(InputFiles.reader(file));
              CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
             boolean header = true;
             for (CSVRecord rec : parser) {

@@ -54,8 +54,13 @@ public final class GraphJson {
      */
     public static Graph read(Path file, GraphClass expected) throws IOException {
         JsonNode root;
-        try {
-            root = MAPPER.readTree(Files.newBufferedReader(file));
+        try (JsonParser parser = MAPPER.createParser(InputFiles.reader(file))) {
+            root = MAPPER.readTree(parser);
+            if (root != null && parser.nextToken() != null) {
+                throw new FileFormatException(file, "line " + parser.currentTokenLocation().getLineNr() + ", column "
+                        + parser.currentTokenLocation().getColumnNr(),
+                        "unexpected content after the end of the JSON object (remove it)");
+            }
         } catch (JsonParseException e) {
             throw new FileFormatException(file, "line " + e.getLocation().getLineNr() + ", column "
                     + e.getLocation().getColumnNr(), "not valid JSON: " + e.getOriginalMessage());

@@ -10,8 +10,6 @@ import dev.touchstone.core.knowledge.Knowledge;
 
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -50,11 +48,12 @@ public final class KnowledgeFile {
     public static Knowledge read(Path file, List<String> dataNames) throws IOException {
         boolean json = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".json");
         Set<String> known = dataNames == null ? null : new HashSet<>(dataNames);
-        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
+        try (Reader in = InputFiles.reader(file);
              JsonParser parser = (json ? JSON : YAML).createParser(in)) {
             return new Reading(file, parser, known).knowledge();
         } catch (JsonProcessingException e) {
-            String where = e.getLocation() == null ? null : "line " + e.getLocation().getLineNr();
+            String where = e.getLocation() == null ? null : "line " + e.getLocation().getLineNr() + ", column "
+                    + e.getLocation().getColumnNr();
             throw new FileFormatException(file, where, "not valid " + (json ? "JSON" : "YAML") + ": "
                     + e.getOriginalMessage());
         }
@@ -83,7 +82,8 @@ public final class KnowledgeFile {
         Knowledge knowledge() throws IOException {
             JsonToken t = parser.nextToken();
             if (t == null) {
-                return Knowledge.none();
+                throw new FileFormatException(file, null, "the file is empty (give at least one of required,"
+                        + " forbidden and tiers, or leave the knowledge file out)");
             }
             if (t != JsonToken.START_OBJECT) {
                 throw new FileFormatException(file, line(), "expected fields required, forbidden and tiers");
@@ -105,6 +105,10 @@ public final class KnowledgeFile {
                         throw new FileFormatException(file, line() + ", field '" + field + "'",
                                 "unknown field (allowed: required, forbidden, tiers)");
                 }
+            }
+            if (parser.nextToken() != null) {
+                throw new FileFormatException(file, line(), "unexpected content after the end of the knowledge"
+                        + " (remove it)");
             }
             try {
                 return builder.build();

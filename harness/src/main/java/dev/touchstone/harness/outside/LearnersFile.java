@@ -98,7 +98,7 @@ public final class LearnersFile {
         b.family(LearnerFamily.EXTERNAL);
         Node ret = required(e, "returns");
         try {
-            b.returns(GraphClass.parse(text(ret)));
+            b.returns(exactWord(text(ret), GraphClass.parse(text(ret)).word()));
         } catch (IllegalArgumentException ex) {
             throw StudyException.at(ret, "unknown graph class '" + text(ret) + "' (allowed: dag, cpdag, mag, pag)");
         }
@@ -107,7 +107,7 @@ public final class LearnersFile {
         for (Node k : acc == null ? List.<Node>of() : acc.isList() ? acc.items() : List.of(acc)) {
             DataKind found = null;
             for (DataKind d : DataKind.values()) {
-                if (d.word().equals(text(k).toLowerCase(Locale.ROOT))) {
+                if (d.word().equals(text(k))) {
                     found = d;
                 }
             }
@@ -122,17 +122,17 @@ public final class LearnersFile {
         b.accepts(kinds.get(0), kinds.subList(1, kinds.size()).toArray(new DataKind[0]));
         Node mv = e.get("missing_values");
         if (mv != null) {
-            String w = text(mv).toLowerCase(Locale.ROOT);
+            String w = text(mv);
             MissingValues m = null;
             for (MissingValues x : MissingValues.values()) {
-                if (x.name().toLowerCase(Locale.ROOT).replace('_', '-').equals(w.replace('_', '-'))) {
+                if (x.word().equals(w)) {
                     m = x;
                 }
             }
             if (m == null) {
                 List<String> allowed = new ArrayList<>();
                 for (MissingValues x : MissingValues.values()) {
-                    allowed.add(x.name().toLowerCase(Locale.ROOT));
+                    allowed.add(x.word());
                 }
                 throw StudyException.at(mv, "unknown value '" + w + "' (allowed: " + String.join(", ", allowed) + ")");
             }
@@ -181,7 +181,7 @@ public final class LearnersFile {
         CommandSpec.OutputFormat format = CommandSpec.OutputFormat.JSON;
         Node of = e.get("output");
         if (of != null) {
-            String w = text(of).toLowerCase(Locale.ROOT);
+            String w = text(of);
             if (w.equals("csv")) {
                 format = CommandSpec.OutputFormat.CSV;
             } else if (!w.equals("json")) {
@@ -203,7 +203,7 @@ public final class LearnersFile {
         keys(p, PARAMETER_FIELDS);
         String name = text(required(p, "name"));
         Node typeNode = required(p, "type");
-        String type = text(typeNode).toLowerCase(Locale.ROOT);
+        String type = text(typeNode);
         String meaning = p.get("meaning") == null ? name : text(p.get("meaning"));
         Node def = required(p, "default");
         try {
@@ -273,5 +273,13 @@ public final class LearnersFile {
                         "unknown field; allowed here: " + String.join(", ", allowed));
             }
         }
+    }
+
+    /** The class whose word is exactly {@code word} (lower case, as the docs spell it); else refused. */
+    private static GraphClass exactWord(String word, String canonical) {
+        if (!word.equals(canonical)) {
+            throw new IllegalArgumentException("not spelled as documented");
+        }
+        return GraphClass.parse(word);
     }
 }

@@ -14,6 +14,7 @@ import dev.touchstone.generators.models.ModelKinds;
 import dev.touchstone.generators.networks.ReferenceNetwork;
 import dev.touchstone.generators.networks.ReferenceNetworks;
 import dev.touchstone.harness.io.FileFormatException;
+import dev.touchstone.core.graph.Graph;
 import dev.touchstone.harness.io.GraphFiles;
 
 import java.io.IOException;
@@ -166,7 +167,7 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
         try {
             bytes = Files.readAllBytes(file);
         } catch (NoSuchFileException e) {
-            throw new IllegalArgumentException(path + ": no such graph file");
+            throw new IllegalArgumentException(path + ": no such graph file (check the path)");
         } catch (IOException e) {
             throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
         }
@@ -176,7 +177,13 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
             return g;
         }
         try {
-            g = new GivenGraph(GivenGraphFamily.of(GraphFiles.read(file, null)), digest);
+            Graph dag = GraphFiles.read(file, null);
+            if (dag.observedIndices().length == 0) {
+                throw new IllegalArgumentException(dag.size() == 0 ? "the graph has no variables; list at least one"
+                        : "every variable of the graph is hidden, so there would be no data; leave at least one"
+                        + " variable out of 'hidden'");
+            }
+            g = new GivenGraph(GivenGraphFamily.of(dag), digest);
         } catch (IOException e) {
             throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
         } catch (FileFormatException e) {

@@ -10,9 +10,6 @@ import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.StringReader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -39,14 +36,7 @@ public final class NodeReader {
 
     /** Reads a file; {@code .json} files are read as JSON, everything else as YAML. */
     public static Node read(Path file) {
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new StudyException(new Node.Place(file.toString(), 0, 0), "", "no such file");
-        } catch (IOException e) {
-            throw new StudyException(new Node.Place(file.toString(), 0, 0), "", "cannot be read: " + e.getMessage());
-        }
+        String text = dev.touchstone.harness.io.InputFiles.readString(file);
         boolean json = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".json");
         return read(file.getFileName().toString(), text, json);
     }
@@ -71,11 +61,8 @@ public final class NodeReader {
             return root;
         } catch (JsonProcessingException e) {
             JsonLocation loc = e.getLocation();
-            String msg = e.getOriginalMessage();
-            int cut = msg.indexOf('\n');
-            if (cut > 0) {
-                msg = msg.substring(0, cut);
-            }
+            // the parser's context lines, echoed source and caret are cut; its problem lines are kept
+            String msg = dev.touchstone.harness.BadInputException.oneLine(e.getOriginalMessage());
             throw new StudyException(loc == null ? new Node.Place(name, 0, 0)
                     : new Node.Place(name, loc.getLineNr(), loc.getColumnNr()), "", "not valid "
                     + (json ? "JSON" : "YAML") + ": " + msg.trim());

@@ -5,7 +5,7 @@ package dev.touchstone.harness.study;
  * column, the field, what is wrong and what is allowed, e.g.
  * {@code study.yaml:7:12: truth.graph.nodes: -3 is outside the allowed range [1, 100000]}.
  */
-public final class StudyException extends RuntimeException {
+public final class StudyException extends dev.touchstone.harness.BadInputException {
     private static final long serialVersionUID = 1L;
 
     private final transient Node.Place place;

@@ -52,7 +52,14 @@ class GraphFilesTest {
             g.setHidden(a, rng.nextInt(5) == 0);
             for (int b = a + 1; b < n; b++) {
                 if (rng.nextInt(3) == 0) {
-                    g.addEdge(a, b, marks[rng.nextInt(3)], marks[rng.nextInt(3)]);
+                    Mark atA = marks[rng.nextInt(3)];
+                    Mark atB = marks[rng.nextInt(3)];
+                    // directed edges point from the smaller index to the larger: graph files refuse directed cycles
+                    if (atA == Mark.ARROW && atB == Mark.TAIL) {
+                        atA = Mark.TAIL;
+                        atB = Mark.ARROW;
+                    }
+                    g.addEdge(a, b, atA, atB);
                 }
             }
         }
@@ -127,7 +134,14 @@ class GraphFilesTest {
                 .endsWith("bad.json, edge 1 (A, B): unknown mark 'dot' (allowed: tail, arrow, circle)"));
         assertTrue(jsonRefused(edges(edge("A", "B", "tail", "arrow"), edge("B", "C", "tail", "arrow"),
                 edge("C", "A", "tail", "arrow")), GraphClass.DAG)
-                .endsWith("bad.json: the edges form a directed cycle (A -> B -> C -> A), but a DAG is expected"));
+                .endsWith("bad.json: the edges form a directed cycle (A -> B -> C -> A), but a DAG has none; remove or reverse one of its edges"));
+        assertTrue(jsonRefused(edges(edge("A", "B", "tail", "arrow"), edge("B", "C", "tail", "arrow"),
+                edge("C", "A", "tail", "arrow")), null).contains("the edges form a directed cycle (A -> B -> C -> A)"),
+                "no class allows a directed cycle");
+        assertTrue(jsonRefused(edges(edge("A", "B", "Tail", "arrow")), null)
+                .endsWith("bad.json, edge 1 (A, B): unknown mark 'Tail' (allowed: tail, arrow, circle)"), "marks are lower case");
+        assertTrue(jsonRefused("{\"variables\": [\"A\"], \"edges\": []} []", null)
+                .contains("unexpected content after the end of the JSON object"));
         assertTrue(jsonRefused(edges(edge("A", "B", "tail", "tail")), GraphClass.DAG)
                 .endsWith("bad.json, edge 1 (A, B): marks tail/tail are not allowed in a DAG"));
         assertTrue(jsonRefused(edges(edge("A", "B", "circle", "arrow")), GraphClass.CPDAG)
@@ -204,7 +218,7 @@ class GraphFilesTest {
         assertTrue(csvRefused("A,B,tail,hook\n", null)
                 .endsWith("bad.csv, line 2 (A, B): unknown mark 'hook' (allowed: tail, arrow, circle)"));
         assertTrue(csvRefused("A,B,arrow,tail\nA,C,tail,arrow\nC,B,tail,arrow\n", GraphClass.DAG)
-                .endsWith("bad.csv: the edges form a directed cycle (A -> C -> B -> A), but a DAG is expected"));
+                .endsWith("bad.csv: the edges form a directed cycle (A -> C -> B -> A), but a DAG has none; remove or reverse one of its edges"));
         assertTrue(csvRefused("A,B,tail\n", null).endsWith("bad.csv, line 2: the row has 3 cells but an edge needs 4 (node_a, node_b, mark_a, mark_b)"));
         Path noHeader = file("nh.csv", "a,b,tail,arrow\n");
         assertTrue(assertThrows(FileFormatException.class, () -> GraphCsv.read(noHeader, List.of("a", "b"), null))

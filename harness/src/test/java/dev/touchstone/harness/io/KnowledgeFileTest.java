@@ -52,7 +52,13 @@ class KnowledgeFileTest {
         Path f = file("k.json", "{\"required\": [[\"age\", \"cancer\"]], \"tiers\": []}");
         Knowledge k = KnowledgeFile.read(f, DATA);
         assertTrue(k.isRequired("age", "cancer"));
-        assertTrue(KnowledgeFile.read(file("empty.yaml", ""), DATA).isEmpty());
+        String empty = assertThrows(FileFormatException.class, () -> KnowledgeFile.read(file("empty.yaml", ""), DATA))
+                .getMessage();
+        assertTrue(empty.endsWith("empty.yaml: the file is empty (give at least one of required, forbidden and tiers,"
+                + " or leave the knowledge file out)"), empty);
+        String trailing = assertThrows(FileFormatException.class,
+                () -> KnowledgeFile.read(file("t.json", "{\"tiers\": []} {}"), DATA)).getMessage();
+        assertTrue(trailing.contains("unexpected content after the end of the knowledge"), trailing);
         assertTrue(KnowledgeFile.read(file("nulls.yaml", "required:\nforbidden:\n"), DATA).isEmpty());
         assertTrue(KnowledgeFile.read(file("any.yaml", "required: [[p, q]]\n"), null).isRequired("p", "q"));
     }
@@ -83,7 +89,7 @@ class KnowledgeFileTest {
                 .endsWith("k.yaml, line 2, required[1]: an edge from 'age' to itself"));
         assertTrue(refused("k.yaml", "- [age, tar]\n").endsWith("k.yaml, line 1: expected fields required, forbidden and tiers"));
         String dup = refused("k.yaml", "required: [[age, tar]]\nrequired: [[tar, cancer]]\n");
-        assertTrue(dup.contains("k.yaml, line 2: not valid YAML: Duplicate field 'required'"), dup);
+        assertTrue(dup.contains("k.yaml, line 2, column 9: not valid YAML: Duplicate field 'required'"), dup);
         String syntax = refused("k.yaml", "required: [[age, tar]\ntiers: [[age]]\n");
         assertTrue(syntax.contains("k.yaml, line ") && syntax.contains("not valid YAML"), syntax);
     }

@@ -9,7 +9,6 @@ import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.scoring.Direction;
 import dev.touchstone.metrics.scoring.Metric;
 import dev.touchstone.metrics.against.MetricAgainst;
-import org.apache.commons.statistics.inference.WilcoxonSignedRankTest;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -26,17 +25,16 @@ import java.util.TreeMap;
  *
  * <p>For each pair of runs the difference is {@code configuration − reference}. The row gives
  * the mean difference with a seeded percentile bootstrap 95% interval, the two-sided Wilcoxon
- * signed-rank p-value (Wilcoxon 1945) from Commons Statistics, which ranks zero differences and
- * then leaves them out of the statistic (Pratt 1959), uses the exact distribution for small
- * samples without ties or zeros and the normal approximation with tie and continuity corrections
- * otherwise; then the Holm adjustment across the configurations compared on the
- * same setting and metric; and wins, ties and losses by the metric's direction.
+ * signed-rank p-value (Wilcoxon 1945) of {@link SignedRankTest}, which ranks zero differences
+ * and then leaves them out of the statistic (Pratt 1959) and uses the exact conditional null
+ * distribution, ties and zeros included, up to {@value SignedRankTest#EXACT_LIMIT} pairs; then the
+ * Holm adjustment across the configurations compared on the same setting and metric; and wins,
+ * ties and losses by the metric's direction. A row whose differences are all zero has no
+ * p-value (null): there is nothing to test.
  *
  * <p>Cost: O(runs + rows · (resamples + replicates log replicates)).
  */
 public final class PairedComparison {
-
-    private static final WilcoxonSignedRankTest WILCOXON = WilcoxonSignedRankTest.withDefaults();
 
     private PairedComparison() {
     }
@@ -137,11 +135,6 @@ public final class PairedComparison {
 
     /** The two-sided signed-rank p-value, or null when every difference is zero. */
     static Double wilcoxon(double[] differences) {
-        for (double v : differences) {
-            if (v != 0) {
-                return WILCOXON.test(differences).getPValue();
-            }
-        }
-        return null;
+        return SignedRankTest.test(differences).pValue();
     }
 }

@@ -128,6 +128,27 @@ class FriedmanNemenyiTest {
         assertThrows(IllegalArgumentException.class, () -> Ranking.over(runs, "edges", 0.05));
     }
 
+    @Test
+    @DisplayName("ties within a setting share midranks; settings that are all ties leave the statistic undefined, not NaN (Friedman 1937 with the tie correction of Hollander and Wolfe 1973)")
+    void allTies() {
+        List<RunResult> runs = new ArrayList<>();
+        for (int s = 0; s < 4; s++) {
+            Setting setting = Setting.of("nodes", String.valueOf(10 * (s + 1)));
+            runs.add(run(setting, "a", 1.0));
+            runs.add(run(setting, "b", 1.0));
+        }
+        RankingResult r = Ranking.over(runs, "adjacency_f1", 0.05);
+        assertEquals(List.of(1.5, 1.5), r.meanRanks());
+        assertNull(r.friedmanChiSquare());
+        assertNull(r.friedmanPValue());
+        // one setting with a difference: ranks (1, 2) there and (1.5, 1.5) elsewhere; the tie term of the
+        // three tied blocks is 3 (2³ − 2) = 18, so χ² = 12 [(5.5 − 6)² + (6.5 − 6)²] / (4·2·3 − 18) = 1
+        runs.set(0, run(Setting.of("nodes", "10"), "a", 0.5));
+        RankingResult one = Ranking.over(runs, "adjacency_f1", 0.05);
+        assertEquals(List.of(1.625, 1.375), one.meanRanks());
+        assertEquals(1.0, one.friedmanChiSquare(), 1e-12);
+    }
+
     private static RunResult run(Setting s, String config, double f1) {
         return new RunResult("k-" + s.label() + config, s, 0, config, config, Map.of(), 1, RunStatus.OK, null,
                 null, null, Map.of("adjacency_f1", f1), null);
