@@ -78,6 +78,11 @@ public final class SimulatedTruth {
         return model.populationCovariance();
     }
 
+    /** Every parameter of this truth as plain values; {@link TruthParameters#truth()} rebuilds it. */
+    public TruthParameters parameters() {
+        return new TruthParameters(seed, dataSeed, model.parameters(), missingness.drivers(), knowledge.tiers());
+    }
+
     /** The seed the data are drawn with (derived from the replicate seed). */
     public long dataSeed() {
         return dataSeed;

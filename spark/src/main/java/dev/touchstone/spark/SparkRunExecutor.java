@@ -1,5 +1,6 @@
 package dev.touchstone.spark;
 
+import dev.touchstone.harness.WorkStoppedException;
 import dev.touchstone.harness.execution.JournalCodec;
 import dev.touchstone.harness.execution.RunExecutor;
 import dev.touchstone.harness.execution.RunRecipe;
@@ -74,7 +75,7 @@ final class SparkRunExecutor implements RunExecutor {
             if (!(e instanceof SparkException)) {
                 throw new IllegalStateException(e.toString(), e);
             }
-            throw new IllegalStateException("the Spark job stopped: " + firstLine(e)
+            throw new WorkStoppedException("the Spark job stopped: " + firstLine(e)
                     + "; runs journaled so far are kept, run again to resume", e);
         } finally {
             sc.stop();

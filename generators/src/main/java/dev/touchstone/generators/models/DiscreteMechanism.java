@@ -14,6 +14,7 @@ final class DiscreteMechanism implements NodeMechanism {
     private final int[] strides;
     private final int categories;
     private final double[] cumulative;
+    private final double[][] table;
 
     /**
      * @param parents    parent indices in table order
@@ -34,6 +35,10 @@ final class DiscreteMechanism implements NodeMechanism {
                     + table.length + " rows");
         }
         this.categories = table[0].length;
+        this.table = new double[table.length][];
+        for (int c = 0; c < table.length; c++) {
+            this.table[c] = table[c].clone();
+        }
         this.cumulative = new double[stride * categories];
         for (int c = 0; c < stride; c++) {
             double acc = 0;
@@ -44,6 +49,16 @@ final class DiscreteMechanism implements NodeMechanism {
             // Guard against rounding: the last category takes whatever is left.
             cumulative[c * categories + categories - 1] = Double.POSITIVE_INFINITY;
         }
+    }
+
+    @Override
+    public NodeParameters describe(dev.touchstone.core.graph.Graph graph, dev.touchstone.core.data.Variable[] variables) {
+        double[][] copy = new double[table.length][];
+        for (int c = 0; c < copy.length; c++) {
+            copy[c] = table[c].clone();
+        }
+        return new NodeParameters.Table(graph.name(node), variables[node].categories(),
+                NodeMechanism.names(graph, parents), copy);
     }
 
     @Override

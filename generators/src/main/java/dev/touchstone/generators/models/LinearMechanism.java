@@ -42,6 +42,12 @@ final class LinearMechanism implements NodeMechanism {
     }
 
     @Override
+    public NodeParameters describe(dev.touchstone.core.graph.Graph graph, dev.touchstone.core.data.Variable[] variables) {
+        return new NodeParameters.Linear(graph.name(node), NodeMechanism.names(graph, parents), weights.clone(),
+                new NodeParameters.Noise(noise, noiseScale, degreesOfFreedom));
+    }
+
+    @Override
     public void fill(Object[] columns, int rows, UniformRandomProvider stream) {
         double[] out = new double[rows];
         if (noise == NoiseDistribution.GAUSSIAN) {

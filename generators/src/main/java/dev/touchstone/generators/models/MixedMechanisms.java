@@ -20,6 +20,21 @@ final class MixedMechanisms {
             implements NodeMechanism {
 
         @Override
+        public NodeParameters describe(dev.touchstone.core.graph.Graph graph,
+                                       dev.touchstone.core.data.Variable[] variables) {
+            java.util.List<NodeParameters.Slope> slopes = new java.util.ArrayList<>();
+            for (int k = 0; k < continuousParents.length; k++) {
+                slopes.add(new NodeParameters.Slope(graph.name(continuousParents[k]),
+                        new NodeParameters.Scaling(parentMean[k], parentSd[k]), new double[] {weights[k]}));
+            }
+            java.util.List<NodeParameters.Shift> shiftList = new java.util.ArrayList<>();
+            for (int k = 0; k < discreteParents.length; k++) {
+                shiftList.add(new NodeParameters.Shift(graph.name(discreteParents[k]), shifts[k].clone()));
+            }
+            return new NodeParameters.ConditionalGaussian(graph.name(node), intercept, slopes, shiftList, noiseScale);
+        }
+
+        @Override
         public void fill(Object[] columns, int rows, UniformRandomProvider stream) {
             ZigguratSampler.NormalizedGaussian eps = ZigguratSampler.NormalizedGaussian.of(stream);
             double[] out = new double[rows];
@@ -52,6 +67,26 @@ final class MixedMechanisms {
     record Discrete(int node, int categories, int[] discreteParents, int[] strides, double[][] alpha,
                     int[] continuousParents, double[] parentMean, double[] parentSd, double[][] beta)
             implements NodeMechanism {
+
+        @Override
+        public NodeParameters describe(dev.touchstone.core.graph.Graph graph,
+                                       dev.touchstone.core.data.Variable[] variables) {
+            java.util.List<NodeParameters.Slope> slopes = new java.util.ArrayList<>();
+            for (int k = 0; k < continuousParents.length; k++) {
+                double[] byCategory = new double[categories];
+                for (int c = 0; c < categories; c++) {
+                    byCategory[c] = beta[c][k];
+                }
+                slopes.add(new NodeParameters.Slope(graph.name(continuousParents[k]),
+                        new NodeParameters.Scaling(parentMean[k], parentSd[k]), byCategory));
+            }
+            double[][] a = new double[alpha.length][];
+            for (int r = 0; r < a.length; r++) {
+                a[r] = alpha[r].clone();
+            }
+            return new NodeParameters.Logistic(graph.name(node), variables[node].categories(),
+                    NodeMechanism.names(graph, discreteParents), a, slopes);
+        }
 
         @Override
         public void fill(Object[] columns, int rows, UniformRandomProvider stream) {

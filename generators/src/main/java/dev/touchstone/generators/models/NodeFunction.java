@@ -12,9 +12,11 @@ import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
  * Σ_h v_h σ(Σ_k W_hk z_k + c_h) with the logistic σ; fourier √(2/D) Σ_d a_d cos(ω_d·z + b_d)
  * with ω_d ~ N(0, I/ℓ²), b_d ~ U(0, 2π), a_d ~ N(0, 1), whose covariance approaches the RBF
  * kernel exp(−|z − z'|²/(2ℓ²)) as D grows (Rahimi and Recht 2007, "Random features for
- * large-scale kernel machines", NeurIPS).
+ * large-scale kernel machines", NeurIPS). Each class is a record of its coefficients, so a
+ * drawn function can be written out and rebuilt exactly. Cost O(parents) per value
+ * (O(units · parents) for neural-net, O(D · parents) for fourier).
  */
-interface NodeFunction {
+public sealed interface NodeFunction {
 
     /**
      * Polynomials act on the standardised parent clipped to ±3: chained quadratics otherwise
@@ -22,8 +24,103 @@ interface NodeFunction {
      */
     double POLYNOMIAL_CLIP = 3.0;
 
+    /** f(z) for the standardised parents z. */
     double apply(double[] z);
 
+    /** The class word: {@code none}, {@code sigmoid}, {@code polynomial}, {@code neural-net} or {@code fourier}. */
+    String word();
+
+    /** The function of a variable without parents: 0. */
+    record None() implements NodeFunction {
+        @Override
+        public double apply(double[] z) {
+            return 0.0;
+        }
+
+        @Override
+        public String word() {
+            return "none";
+        }
+    }
+
+    /** Σ_k weights[k] · tanh(slopes[k] · z_k). */
+    record Sigmoid(double[] weights, double[] slopes) implements NodeFunction {
+        @Override
+        public double apply(double[] z) {
+            double s = 0;
+            for (int k = 0; k < z.length; k++) {
+                s += weights[k] * Math.tanh(slopes[k] * z[k]);
+            }
+            return s;
+        }
+
+        @Override
+        public String word() {
+            return "sigmoid";
+        }
+    }
+
+    /** Σ_k (linear[k] · x_k + quadratic[k] · (x_k² − 1)) with x_k = z_k clipped to ±{@value #POLYNOMIAL_CLIP}. */
+    record Polynomial(double[] linear, double[] quadratic) implements NodeFunction {
+        @Override
+        public double apply(double[] z) {
+            double s = 0;
+            for (int k = 0; k < z.length; k++) {
+                double x = Math.max(-POLYNOMIAL_CLIP, Math.min(POLYNOMIAL_CLIP, z[k]));
+                s += linear[k] * x + quadratic[k] * (x * x - 1);
+            }
+            return s;
+        }
+
+        @Override
+        public String word() {
+            return "polynomial";
+        }
+    }
+
+    /** Σ_h output[h] · σ(bias[h] + Σ_k input[h][k] · z_k) with the logistic σ. */
+    record NeuralNet(double[][] input, double[] bias, double[] output) implements NodeFunction {
+        @Override
+        public double apply(double[] z) {
+            double s = 0;
+            for (int h = 0; h < output.length; h++) {
+                double a = bias[h];
+                for (int k = 0; k < z.length; k++) {
+                    a += input[h][k] * z[k];
+                }
+                s += output[h] / (1 + Math.exp(-a));
+            }
+            return s;
+        }
+
+        @Override
+        public String word() {
+            return "neural-net";
+        }
+    }
+
+    /** Σ_d amplitude[d] · cos(phase[d] + Σ_k frequency[d][k] · z_k). */
+    record Fourier(double[][] frequency, double[] phase, double[] amplitude) implements NodeFunction {
+        @Override
+        public double apply(double[] z) {
+            double s = 0;
+            for (int f = 0; f < amplitude.length; f++) {
+                double a = phase[f];
+                for (int k = 0; k < z.length; k++) {
+                    a += frequency[f][k] * z[k];
+                }
+                s += amplitude[f] * Math.cos(a);
+            }
+            return s;
+        }
+
+        @Override
+        public String word() {
+            return "fourier";
+        }
+    }
+
+    /** Draws a function of the class {@code kind} over {@code parents} standardised parents. */
     static NodeFunction draw(String kind, int parents, ParameterValues values, UniformRandomProvider random) {
         ModelOptions.WeightDraw w = ModelOptions.weights(values);
         switch (kind) {
@@ -34,13 +131,7 @@ interface NodeFunction {
                     weight[k] = w.draw(random);
                     slope[k] = 0.5 + 1.5 * random.nextDouble();
                 }
-                return z -> {
-                    double s = 0;
-                    for (int k = 0; k < z.length; k++) {
-                        s += weight[k] * Math.tanh(slope[k] * z[k]);
-                    }
-                    return s;
-                };
+                return new Sigmoid(weight, slope);
             }
             case "polynomial": {
                 double[] lin = new double[parents];
@@ -49,14 +140,7 @@ interface NodeFunction {
                     lin[k] = w.draw(random);
                     quad[k] = w.draw(random);
                 }
-                return z -> {
-                    double s = 0;
-                    for (int k = 0; k < z.length; k++) {
-                        double x = Math.max(-POLYNOMIAL_CLIP, Math.min(POLYNOMIAL_CLIP, z[k]));
-                        s += lin[k] * x + quad[k] * (x * x - 1);
-                    }
-                    return s;
-                };
+                return new Polynomial(lin, quad);
             }
             case "neural-net": {
                 int units = values.getInt(AdditiveNonlinearKind.HIDDEN_UNITS.name());
@@ -70,17 +154,7 @@ interface NodeFunction {
                     bias[h] = 2 * random.nextDouble() - 1;
                     out[h] = w.draw(random);
                 }
-                return z -> {
-                    double s = 0;
-                    for (int h = 0; h < units; h++) {
-                        double a = bias[h];
-                        for (int k = 0; k < z.length; k++) {
-                            a += in[h][k] * z[k];
-                        }
-                        s += out[h] / (1 + Math.exp(-a));
-                    }
-                    return s;
-                };
+                return new NeuralNet(in, bias, out);
             }
             case "fourier": {
                 int d = values.getInt(AdditiveNonlinearKind.FEATURES.name());
@@ -97,17 +171,7 @@ interface NodeFunction {
                     phase[f] = 2 * Math.PI * random.nextDouble();
                     amp[f] = norm * g.sample();
                 }
-                return z -> {
-                    double s = 0;
-                    for (int f = 0; f < d; f++) {
-                        double a = phase[f];
-                        for (int k = 0; k < z.length; k++) {
-                            a += omega[f][k] * z[k];
-                        }
-                        s += amp[f] * Math.cos(a);
-                    }
-                    return s;
-                };
+                return new Fourier(omega, phase, amp);
             }
             default:
                 throw new IllegalArgumentException("unknown function class '" + kind + "'");

@@ -19,6 +19,18 @@ interface NodeMechanism {
      */
     void fill(Object[] columns, int rows, UniformRandomProvider stream);
 
+    /** Every parameter of this mechanism, by name ({@code variables} by graph index). */
+    NodeParameters describe(dev.touchstone.core.graph.Graph graph, dev.touchstone.core.data.Variable[] variables);
+
+    /** The names of these graph indices. */
+    static java.util.List<String> names(dev.touchstone.core.graph.Graph graph, int[] indices) {
+        java.util.List<String> out = new java.util.ArrayList<>(indices.length);
+        for (int i : indices) {
+            out.add(graph.name(i));
+        }
+        return out;
+    }
+
     /**
      * A filler of this variable's column block by block, or null when the mechanism only
      * fills whole columns. The filler allocates the column into {@code columns[node]} and

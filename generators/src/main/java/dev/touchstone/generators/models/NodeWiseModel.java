@@ -219,6 +219,19 @@ final class NodeWiseModel implements StructuralModel {
     }
 
     @Override
+    public ModelParameters parameters() {
+        List<NodeParameters> nodes = new ArrayList<>();
+        java.util.Map<String, NodeParameters.Scaling> standardised = new java.util.LinkedHashMap<>();
+        for (int v = 0; v < mechanisms.length; v++) {
+            nodes.add(mechanisms[v].describe(graph, variables));
+            if (centre != null && !Double.isNaN(scale[v])) {
+                standardised.put(graph.name(v), new NodeParameters.Scaling(centre[v], scale[v]));
+            }
+        }
+        return new ModelParameters(kindId, graph, nodes, columnOrder, standardised);
+    }
+
+    @Override
     public StructuralModel withHidden(Set<String> hidden) {
         return new NodeWiseModel(graph.withHidden(hidden), kindId, variables, mechanisms, centre, scale, columnKey,
                 fullCovariance);

@@ -30,6 +30,17 @@ final class NonlinearMechanism implements NodeMechanism {
         this.noiseScale = noiseScale;
     }
 
+    @Override
+    public NodeParameters describe(dev.touchstone.core.graph.Graph graph, dev.touchstone.core.data.Variable[] variables) {
+        java.util.List<NodeParameters.Input> inputs = new java.util.ArrayList<>();
+        for (int k = 0; k < parents.length; k++) {
+            inputs.add(new NodeParameters.Input(graph.name(parents[k]),
+                    new NodeParameters.Scaling(parentMean[k], parentSd[k])));
+        }
+        return new NodeParameters.Additive(graph.name(node), inputs, function,
+                new NodeParameters.Scaling(functionMean, functionSd), noiseScale);
+    }
+
     /** The same mechanism with f rescaled by these moments. */
     NonlinearMechanism normalised(double mean, double sd) {
         return new NonlinearMechanism(node, parents, parentMean, parentSd, function, mean, sd > 0 ? sd : 1.0,

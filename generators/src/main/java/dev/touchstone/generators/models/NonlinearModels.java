@@ -36,7 +36,7 @@ final class NonlinearModels {
                 ps[k] = pilot.sd(parents[k]);
             }
             String kind = functions.equals("mixed") ? CLASSES.get(random.nextInt(CLASSES.size())) : functions;
-            NodeFunction f = parents.length == 0 ? z -> 0.0 : NodeFunction.draw(kind, parents.length, values, random);
+            NodeFunction f = parents.length == 0 ? new NodeFunction.None() : NodeFunction.draw(kind, parents.length, values, random);
             NonlinearMechanism m = new NonlinearMechanism(v, parents, pm, ps, f, 0.0, 1.0, scales.draw(random));
             if (parents.length > 0) {
                 double[] mom = Moments.of(m.signal(pilot.columns(), ModelOptions.PILOT_ROWS), ModelOptions.PILOT_ROWS);

@@ -54,6 +54,9 @@ public interface StructuralModel {
      */
     Optional<CovarianceMatrix> populationCovariance();
 
+    /** Every parameter of the model as plain values; {@link ModelParameters#model()} rebuilds it exactly. */
+    ModelParameters parameters();
+
     /** The same model with these variables hidden and all others observed. */
     StructuralModel withHidden(Set<String> hidden);
 }

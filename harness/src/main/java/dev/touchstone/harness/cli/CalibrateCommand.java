@@ -1,7 +1,6 @@
 package dev.touchstone.harness.cli;
 
 import dev.touchstone.core.data.DataSet;
-import dev.touchstone.core.data.VariableKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.DeadlineExceededException;
@@ -17,6 +16,7 @@ import dev.touchstone.harness.catalog.LearnerCatalog;
 import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.io.ColumnKinds;
 import dev.touchstone.harness.io.DataCsv;
 import dev.touchstone.harness.io.GraphFiles;
 import dev.touchstone.reports.calibration.CalibrationReport;
@@ -84,6 +84,10 @@ final class CalibrateCommand implements Callable<Integer> {
     @Option(names = "--continuous", split = ",", paramLabel = "NAME", description = "Columns to read as continuous.")
     List<String> continuous = List.of();
 
+    @Option(names = "--kinds", paramLabel = "FILE", description = "A kinds file (CSV: column,kind) declaring"
+            + " columns continuous or discrete (default: NAME.kinds.csv beside the data, if there is one).")
+    Path kinds;
+
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./calibration).")
     Path out = Path.of("calibration");
 
@@ -114,14 +118,9 @@ final class CalibrateCommand implements Callable<Integer> {
         if (!(seconds > 0) || Double.isInfinite(seconds)) {
             throw new UsageException("--seconds: " + seconds + " is not a positive number of seconds");
         }
-        Map<String, VariableKind> declared = new LinkedHashMap<>();
-        discrete.forEach(c -> declared.put(c.trim(), VariableKind.DISCRETE));
-        for (String c : continuous) {
-            if (declared.put(c.trim(), VariableKind.CONTINUOUS) != null) {
-                throw new UsageException("column '" + c.trim() + "' is given both --discrete and --continuous");
-            }
-        }
-        DataCsv.Result read = DataCsv.read(data, declared);
+        ColumnKinds.Declared declared = ColumnKinds.declared(data, kinds, discrete, continuous);
+        DataCsv.Result read = DataCsv.read(data, declared.kinds());
+        String assumed = ColumnKinds.assumption(read, declared);
         DataSet d = read.data();
         if (d.rows() < 4) {
             throw new UsageException(data + ": " + d.rows() + " rows; calibration needs at least 4");
@@ -178,6 +177,9 @@ final class CalibrateCommand implements Callable<Integer> {
         err.flush();
         Progress progress = Toolkit.progress(quiet, err);
         CalibrationOutcome o;
+        if (assumed != null) {
+            err.println(assumed);
+        }
         try {
             o = Calibration.run(d, truth, settings, progress);
         } catch (IllegalArgumentException e) {

@@ -10,7 +10,10 @@ import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.harness.catalog.LearnerCatalog;
+import dev.touchstone.harness.io.ColumnKinds;
 import dev.touchstone.harness.io.DataCsv;
+import dev.touchstone.harness.io.GraphFiles;
+import dev.touchstone.harness.io.GraphFormat;
 import dev.touchstone.harness.io.GraphJson;
 import dev.touchstone.harness.io.KnowledgeFile;
 import picocli.CommandLine.Command;
@@ -25,7 +28,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 
 /** {@code touchstone learn}: runs one learner on one data file and writes the graph it returns. */
-@Command(name = "learn", description = "Run one learner on a data file and write the estimated graph (JSON).")
+@Command(name = "learn", description = "Run one learner on a data file and write the estimated graph.")
 final class LearnCommand implements Callable<Integer> {
 
     @Option(names = "--learner", required = true, paramLabel = "ID", description = "The learner (see 'touchstone learners').")
@@ -37,10 +40,22 @@ final class LearnCommand implements Callable<Integer> {
     @Option(names = "--data", required = true, paramLabel = "FILE", description = "The data (CSV with a header row).")
     Path data;
 
+    @Option(names = "--discrete", split = ",", paramLabel = "NAME", description = "Columns to read as discrete.")
+    List<String> discrete = List.of();
+
+    @Option(names = "--continuous", split = ",", paramLabel = "NAME", description = "Columns to read as continuous.")
+    List<String> continuous = List.of();
+
+    @Option(names = "--kinds", paramLabel = "FILE", description = "A kinds file (CSV: column,kind) declaring"
+            + " columns continuous or discrete (default: NAME.kinds.csv beside the data, if there is one).")
+    Path kinds;
+
     @Option(names = "--knowledge", paramLabel = "FILE", description = "Background knowledge (YAML or JSON).")
     Path knowledge;
 
-    @Option(names = "--out", paramLabel = "FILE", description = "Where to write the graph (default: print it).")
+    @Option(names = "--out", paramLabel = "FILE", description = "Where to write the graph, in the format its name"
+            + " says: .json graph JSON, .csv edge list, .matrix.csv adjacency matrix, .dot or .gv DOT"
+            + " (default: print it as JSON).")
     Path out;
 
     @Option(names = "--seed", paramLabel = "N", description = "The run's seed (default: 0).")
@@ -60,6 +75,9 @@ final class LearnCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
+        if (out != null) {
+            GraphFormat.of(out);
+        }
         LearnerCatalog catalog = new Toolkit(learnersFile, plugins).learners;
         LearnerCatalog.Entry entry = catalog.find(learner);
         if (entry == null) {
@@ -74,13 +92,16 @@ final class LearnCommand implements Callable<Integer> {
         } catch (ParameterException e) {
             throw new UsageException("--set: " + e.getMessage(), e);
         }
-        DataCsv.Result read = DataCsv.read(data);
+        ColumnKinds.Declared declared = ColumnKinds.declared(data, kinds, discrete, continuous);
+        DataCsv.Result read = DataCsv.read(data, declared.kinds());
+        String assumed = ColumnKinds.assumption(read, declared);
+        String why = assumed == null ? "" : " (" + assumed + ")";
         Knowledge k = knowledge == null ? Knowledge.none() : KnowledgeFile.read(knowledge, read.data().names());
         LearnerInput input = LearnerInput.of(read.data());
         try {
             d.checkAccepts(input);
         } catch (LearnerException e) {
-            throw new UsageException(data + ": " + e.getMessage(), e);
+            throw new UsageException(data + ": " + e.getMessage() + why, e);
         }
         RunContext context = RunContext.of(seed, seconds == null ? null : Duration.ofNanos((long) (seconds * 1e9)), 1);
         long t0 = System.nanoTime();
@@ -92,14 +113,17 @@ final class LearnCommand implements Callable<Integer> {
         } catch (LearnerException e) {
             // the run failed (a fault of the learner, not of the tool): say why, exit 1
             spec.commandLine().getErr().println("error: learner " + d.id() + " failed: "
-                    + dev.touchstone.harness.BadInputException.oneLine(e.getMessage()));
+                    + dev.touchstone.harness.BadInputException.oneLine(e.getMessage() + why));
             spec.commandLine().getErr().flush();
             return Main.FAILED;
+        }
+        if (assumed != null) {
+            spec.commandLine().getErr().println(assumed);
         }
         double secs = (System.nanoTime() - t0) / 1e9;
         PrintWriter err = spec.commandLine().getErr();
         if (out != null) {
-            GraphJson.write(out, est.graph());
+            GraphFiles.write(out, est.graph(), d.id() + " on " + data.getFileName());
             err.printf(Locale.ROOT, "%s: %d edges (%s) in %.3f s, %d tests, %d scores; written to %s%n", d.id(),
                     est.graph().edgeCount(), est.graphClass().word(), secs, context.tests(), context.scores(), out);
         } else {

@@ -1,6 +1,7 @@
 package dev.touchstone.harness.cli;
 
 import dev.touchstone.harness.BadInputException;
+import dev.touchstone.harness.WorkStoppedException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -60,6 +61,10 @@ public final class Main implements Runnable {
             if (bad != null) {
                 err.println("error: " + bad.getMessage());
                 return BAD_INPUT;
+            }
+            if (ex instanceof WorkStoppedException) {
+                err.println("error: " + BadInputException.oneLine(ex.getMessage()));
+                return FAILED;
             }
             err.println("error: " + internal(ex));
             return FAILED;

@@ -30,8 +30,8 @@ import java.util.concurrent.Callable;
 
 /**
  * {@code touchstone score}: compares one estimated graph with the true one and prints every
- * structural metric. Graph files are JSON, or CSV edge lists when the name ends in
- * {@code .csv}. A true DAG is turned into the truth of the estimate's class (its CPDAG by
+ * structural metric. Graph files are read in the format their name says
+ * ({@link dev.touchstone.harness.io.GraphFormat}: JSON, CSV edge list, adjacency-matrix CSV, DOT). A true DAG is turned into the truth of the estimate's class (its CPDAG by
  * {@link Cpdags#of} for a CPDAG estimate); any other truth file must already be a graph
  * of the estimate's class. Cost: that of the metrics (O(V + E), plus the SID).
  */
@@ -39,10 +39,10 @@ import java.util.concurrent.Callable;
         description = "Score an estimated graph against the true graph.")
 public final class ScoreCommand implements Callable<Integer> {
 
-    @Option(names = "--truth", required = true, paramLabel = "FILE", description = "The true graph (JSON, or CSV edge list).")
+    @Option(names = "--truth", required = true, paramLabel = "FILE", description = "The true graph (.json, .csv edge list, .matrix.csv, .dot or .gv).")
     Path truthFile;
 
-    @Option(names = "--estimate", required = true, paramLabel = "FILE", description = "The estimated graph (JSON, or CSV edge list).")
+    @Option(names = "--estimate", required = true, paramLabel = "FILE", description = "The estimated graph (.json, .csv edge list, .matrix.csv, .dot or .gv).")
     Path estimateFile;
 
     @Option(names = "--as", paramLabel = "CLASS",
@@ -58,6 +58,10 @@ public final class ScoreCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         GraphClass estimateClass = as == null ? null : parseClass(as);
+        // An unknown extension is named before any file is opened.
+        for (Path f : List.of(truthFile, estimateFile)) {
+            dev.touchstone.harness.io.GraphFormat.of(f);
+        }
         Graph truthGraph = GraphFiles.read(truthFile, null);
         Graph estimate = GraphFiles.read(estimateFile, truthGraph.names(), estimateClass);
         if (estimateClass == null) {

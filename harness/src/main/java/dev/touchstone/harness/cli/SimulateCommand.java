@@ -13,9 +13,14 @@ import dev.touchstone.harness.execution.GeneratorSimulator;
 import dev.touchstone.harness.execution.Replicate;
 import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.io.ColumnKinds;
 import dev.touchstone.harness.io.DataCsv;
 import dev.touchstone.harness.io.GraphDot;
-import dev.touchstone.harness.io.GraphJson;
+import dev.touchstone.harness.io.GraphFormat;
+import dev.touchstone.harness.io.ModelFile;
+import dev.touchstone.generators.SimulatedTruth;
+import dev.touchstone.generators.TruthParameters;
+import dev.touchstone.core.random.Seeds;
 import dev.touchstone.harness.study.Canonical;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.ReplicateSeeds;
@@ -49,9 +54,11 @@ import java.util.concurrent.Callable;
  * <li>{@code simulate --graph FAMILY --model KIND [--set NAME=VALUE]… --out DIR}, or
  *     {@code --network NAME}: one truth from options, written straight into {@code DIR}. It
  *     is the draw replicate 0 of a study with the same seed and truth would make.</li>
+ * <li>{@code simulate --model FILE.json}: the truth a {@code model.json} written before
+ *     describes, drawing the same data again (or new data with {@code --seed}).</li>
  * </ul>
- * Each folder holds {@code data.csv}, {@code truth.json} and {@code truth.dot} (the DAG,
- * hidden variables flagged), {@code cpdag.json} when nothing is hidden or else
+ * Each folder holds {@code data.csv}, {@code model.json} (every parameter of the truth,
+ * {@link ModelFile}), {@code truth.json} and {@code truth.dot} (the DAG, hidden variables flagged), {@code cpdag.json} when nothing is hidden or else
  * {@code mag.json}, {@code pag.json} (over the observed variables) and {@code audit.json}
  * (varsortability and R²-sortability of the data against the truth).
  */
@@ -83,8 +90,10 @@ final class SimulateCommand implements Callable<Integer> {
                     + " --set file=PATH. See docs/study-files.md for every family and parameter.")
     String graph;
 
-    @Option(names = "--model", paramLabel = "KIND",
-            description = "The structural-equation model (default: " + DEFAULT_MODEL + ").")
+    @Option(names = "--model", paramLabel = "KIND|FILE",
+            description = "The structural-equation model (default: " + DEFAULT_MODEL + "), or a model file"
+                    + " (name ending in .json, such as the model.json simulate writes) giving the whole truth:"
+                    + " the same data again, or new data from it with --seed.")
     String model;
 
     @Option(names = "--hidden", paramLabel = "KIND|COUNT",
@@ -109,6 +118,11 @@ final class SimulateCommand implements Callable<Integer> {
     @Option(names = "--seed", paramLabel = "N", description = "The root of every random choice (default: 1).")
     Long seed;
 
+    @Option(names = "--graph-format", split = ",", paramLabel = "FORMAT",
+            description = "More formats for the graph files, besides JSON (and truth.dot): csv (edge list),"
+                    + " matrix.csv (adjacency matrix), dot; comma-separated or repeated.")
+    List<String> graphFormats = List.of();
+
     @Option(names = "--learners", paramLabel = "FILE", description = "With STUDY: a learners file, if the study names command learners.")
     Path learnersFile;
 
@@ -127,6 +141,7 @@ final class SimulateCommand implements Callable<Integer> {
     }
 
     private Integer fromStudy() throws IOException {
+        List<GraphFormat> formats = formats(graphFormats);
         Map<String, Object> truthOptions = truthOptions();
         truthOptions.put("--samples", samples);
         truthOptions.put("--seed", seed);
@@ -140,15 +155,15 @@ final class SimulateCommand implements Callable<Integer> {
         Plan plan = kit.plan(kit.readStudy(study));
         int rows = StudyRunner.largestRows(plan);
         Files.createDirectories(out);
-        GeneratorSimulator sim = new GeneratorSimulator();
         List<List<String>> index = new ArrayList<>();
         int written = 0;
         for (TruthSetting t : plan.truths()) {
             for (int r = 0; r < plan.study().replicates(); r++) {
                 ReplicateSeeds seeds = new ReplicateSeeds(plan.study().seed(), t, r);
-                Replicate rep = sim.draw(t, seeds, rows);
+                SimulatedTruth truth = GeneratorSimulator.truth(t, seeds);
+                Replicate rep = GeneratorSimulator.replicate(truth, rows);
                 String name = String.format(Locale.ROOT, "t%d-r%d", t.index(), r);
-                write(out.resolve(name), rep.trueDag(), rep.data(), name);
+                write(out.resolve(name), truth, rep.data(), name, formats);
                 index.add(List.of(name, Integer.toString(t.index()), Integer.toString(r), Integer.toString(rows),
                         Long.toString(seeds.replicateSeed()), t.label()));
                 written++;
@@ -168,6 +183,7 @@ final class SimulateCommand implements Callable<Integer> {
     }
 
     private Integer fromOptions() throws IOException {
+        List<GraphFormat> formats = formats(graphFormats);
         if (learnersFile != null || plugins != null) {
             throw new UsageException((learnersFile != null ? "--learners" : "--plugins")
                     + ": only used with a STUDY file");
@@ -176,11 +192,10 @@ final class SimulateCommand implements Callable<Integer> {
             throw new UsageException((graph != null ? "--graph" : "--model") + ": cannot be combined with --network"
                     + " (a network brings its own graph and model)");
         }
-        int rows = samples == null ? DEFAULT_SAMPLES : samples;
-        if (rows < StudyFields.MIN_SAMPLES) {
-            throw new UsageException("--samples: " + rows + " is not a sample size (allowed: whole numbers of at least "
-                    + StudyFields.MIN_SAMPLES + ")");
+        if (isModelFile(model)) {
+            return fromModelFile(formats);
         }
+        int rows = rows();
         long root = seed == null ? 1L : seed;
         Map<String, String> kinds = new LinkedHashMap<>();
         Map<String, String> chosen = TruthOptions.options();
@@ -198,11 +213,51 @@ final class SimulateCommand implements Callable<Integer> {
         TruthSetting t = new TruthOptions(kit.truth, kinds, chosen)
                 .setting(Settings.parse(settings), Path.of("").toAbsolutePath());
         ReplicateSeeds seeds = new ReplicateSeeds(root, t, 0);
-        Replicate rep = new GeneratorSimulator().draw(t, seeds, rows);
-        write(out, rep.trueDag(), rep.data(), t.label());
+        SimulatedTruth truth = GeneratorSimulator.truth(t, seeds);
+        Replicate rep = GeneratorSimulator.replicate(truth, rows);
+        write(out, truth, rep.data(), t.label(), formats);
         PrintWriter w = spec.commandLine().getOut();
         w.printf(Locale.ROOT, "wrote %,d rows of %d variables (%s; seed %d) to %s: %s%n", rows,
-                rep.data().columns(), t.description(), root, out, String.join(", ", files(rep.trueDag())));
+                rep.data().columns(), t.description(), root, out, String.join(", ", files(rep.trueDag(), formats)));
+        w.flush();
+        return Main.DONE;
+    }
+
+    /** Whether a {@code --model} value names a model file rather than a model kind. */
+    static boolean isModelFile(String value) {
+        return value != null && value.toLowerCase(Locale.ROOT).endsWith(".json");
+    }
+
+    private int rows() {
+        int rows = samples == null ? DEFAULT_SAMPLES : samples;
+        if (rows < StudyFields.MIN_SAMPLES) {
+            throw new UsageException("--samples: " + rows + " is not a sample size (allowed: whole numbers of at least "
+                    + StudyFields.MIN_SAMPLES + ")");
+        }
+        return rows;
+    }
+
+    /** {@code --model FILE}: the truth a model file describes, with its own data seed unless --seed is given. */
+    private Integer fromModelFile(List<GraphFormat> formats) throws IOException {
+        for (Map.Entry<String, Object> e : truthOptions().entrySet()) {
+            if (e.getValue() != null && !e.getKey().equals("--model")) {
+                throw new UsageException(e.getKey() + ": cannot be combined with a model file (--model " + model
+                        + " gives the whole truth)");
+            }
+        }
+        int rows = rows();
+        Path file = Path.of(model);
+        if (!Files.isRegularFile(file)) {
+            throw new UsageException("--model: " + model + ": no such file");
+        }
+        TruthParameters parameters = ModelFile.read(file);
+        SimulatedTruth truth = seed == null ? parameters.truth() : parameters.truth(Seeds.derive(seed, "data"));
+        Replicate rep = GeneratorSimulator.replicate(truth, rows);
+        write(out, truth, rep.data(), "from " + file.getFileName(), formats);
+        PrintWriter w = spec.commandLine().getOut();
+        w.printf(Locale.ROOT, "wrote %,d rows of %d variables (the truth of %s; %s) to %s: %s%n", rows,
+                rep.data().columns(), file, seed == null ? "its own data seed" : "new data with seed " + seed, out,
+                String.join(", ", files(truth.dag(), formats)));
         w.flush();
         return Main.DONE;
     }
@@ -228,29 +283,69 @@ final class SimulateCommand implements Callable<Integer> {
         return null;
     }
 
-    /** The names of the files {@link #write} makes for this truth. */
-    static List<String> files(Graph dag) {
-        List<String> names = new ArrayList<>(List.of("data.csv", "truth.json", "truth.dot"));
-        names.add(dag.hasHidden() ? "mag.json" : "cpdag.json");
-        names.add("pag.json");
+    /** The graph formats named by {@code --graph-format}, JSON first and each once. */
+    static List<GraphFormat> formats(List<String> words) {
+        List<GraphFormat> out = new ArrayList<>(List.of(GraphFormat.JSON));
+        for (String w : words) {
+            GraphFormat f = GraphFormat.forName("graph." + w.trim().replaceFirst("^\\.", ""));
+            if (f == null) {
+                throw new UsageException("--graph-format: unknown format '" + w + "' (allowed: json, csv, matrix.csv,"
+                        + " dot)");
+            }
+            if (!out.contains(f)) {
+                out.add(f);
+            }
+        }
+        return out;
+    }
+
+    /** The graphs written for a truth, by file stem: the DAG, its CPDAG or MAG, and the PAG. */
+    private static Map<String, Graph> graphs(Graph dag) {
+        Map<String, Graph> out = new LinkedHashMap<>();
+        out.put("truth", dag);
+        if (!dag.hasHidden()) {
+            out.put("cpdag", Cpdags.of(dag));
+        } else {
+            out.put("mag", TruthSelection.as(dag, GraphClass.MAG).reference());
+        }
+        out.put("pag", TruthSelection.as(dag, GraphClass.PAG).reference());
+        return out;
+    }
+
+    /** The names of the graph files {@link #write} makes for this truth, before data.csv and audit.json. */
+    static List<String> files(Graph dag, List<GraphFormat> formats) {
+        List<String> names = new ArrayList<>(List.of("data.csv", "data.kinds.csv", "model.json"));
+        for (String stem : List.of("truth", dag.hasHidden() ? "mag" : "cpdag", "pag")) {
+            for (GraphFormat f : formats) {
+                names.add(stem + f.endings().get(0));
+            }
+            if (stem.equals("truth") && !formats.contains(GraphFormat.DOT)) {
+                names.add("truth.dot");
+            }
+        }
         names.add("audit.json");
         return names;
     }
 
-    /** Writes one truth with its data into {@code dir}. */
-    static void write(Path dir, Graph dag, DataSet data, String title) throws IOException {
+    /** Writes one truth with its data into {@code dir}, each graph in every one of {@code formats}. */
+    static void write(Path dir, SimulatedTruth truth, DataSet data, String title, List<GraphFormat> formats)
+            throws IOException {
+        Graph dag = truth.dag();
         Files.createDirectories(dir);
         if (data != null) {
             DataCsv.write(dir.resolve("data.csv"), data);
+            ColumnKinds.write(ColumnKinds.besideData(dir.resolve("data.csv")), data);
         }
-        GraphJson.write(dir.resolve("truth.json"), dag);
-        GraphDot.write(dir.resolve("truth.dot"), dag, "true DAG " + title);
-        if (!dag.hasHidden()) {
-            GraphJson.write(dir.resolve("cpdag.json"), Cpdags.of(dag));
-        } else {
-            GraphJson.write(dir.resolve("mag.json"), TruthSelection.as(dag, GraphClass.MAG).reference());
+        ModelFile.write(dir.resolve("model.json"), truth.parameters());
+        for (Map.Entry<String, Graph> g : graphs(dag).entrySet()) {
+            String what = g.getKey().equals("truth") ? "true DAG " : "true " + g.getKey().toUpperCase(Locale.ROOT) + " ";
+            for (GraphFormat f : formats) {
+                f.write(dir.resolve(g.getKey() + f.endings().get(0)), g.getValue(), what + title);
+            }
         }
-        GraphJson.write(dir.resolve("pag.json"), TruthSelection.as(dag, GraphClass.PAG).reference());
+        if (!formats.contains(GraphFormat.DOT)) {
+            GraphDot.write(dir.resolve("truth.dot"), dag, "true DAG " + title);
+        }
         if (data != null) {
             AtomicFiles.writeString(dir.resolve("audit.json"), auditJson(SortabilityAudit.of(dag, data)));
         }

@@ -15,7 +15,16 @@ public final class GeneratorSimulator implements Simulator {
 
     @Override
     public Replicate draw(TruthSetting truth, ReplicateSeeds seeds, int rows) {
-        SimulatedTruth t = GeneratorTruthCatalog.simulation(truth).drawTruth(seeds.replicateSeed());
+        return replicate(truth(truth, seeds), rows);
+    }
+
+    /** The replicate's truth: graph, hidden flags, model parameters and missingness. */
+    public static SimulatedTruth truth(TruthSetting truth, ReplicateSeeds seeds) {
+        return GeneratorTruthCatalog.simulation(truth).drawTruth(seeds.replicateSeed());
+    }
+
+    /** A drawn truth with {@code rows} rows of its data (none for 0). */
+    public static Replicate replicate(SimulatedTruth t, int rows) {
         return new Replicate(t.dag(), rows > 0 ? t.sample(rows).data() : null,
                 t.populationCovariance().orElse(null), tiersOnly(t.knowledge()));
     }

@@ -40,6 +40,28 @@ public final class KnowledgeFile {
     private KnowledgeFile() {
     }
 
+    /** The JSON text of {@code k} (the fields above; empty lists when there is nothing), read back by {@link #read}. */
+    public static String toJson(Knowledge k) {
+        com.fasterxml.jackson.databind.ObjectMapper m = new com.fasterxml.jackson.databind.ObjectMapper();
+        com.fasterxml.jackson.databind.node.ObjectNode root = m.createObjectNode();
+        com.fasterxml.jackson.databind.node.ArrayNode req = root.putArray("required");
+        k.required().stream().sorted(java.util.Comparator.comparing(Knowledge.DirectedPair::toString))
+                .forEach(p -> req.addArray().add(p.from()).add(p.to()));
+        com.fasterxml.jackson.databind.node.ArrayNode forb = root.putArray("forbidden");
+        k.forbidden().stream().sorted(java.util.Comparator.comparing(Knowledge.DirectedPair::toString))
+                .forEach(p -> forb.addArray().add(p.from()).add(p.to()));
+        com.fasterxml.jackson.databind.node.ArrayNode tiers = root.putArray("tiers");
+        for (List<String> tier : k.tiers()) {
+            com.fasterxml.jackson.databind.node.ArrayNode t = tiers.addArray();
+            tier.forEach(t::add);
+        }
+        try {
+            return m.writerWithDefaultPrettyPrinter().writeValueAsString(root) + "\n";
+        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
     /**
      * Reads knowledge and checks every name against {@code dataNames} (null to skip that check).
      *

@@ -38,7 +38,10 @@ import java.util.stream.Stream;
  *
  * <p>Placeholders in arguments: {@code {data}} the CSV file, {@code {output}} the graph file
  * to write, {@code {seed}} the run's seed, {@code {dir}} the learners file's folder,
- * {@code {workdir}} the temporary folder, and {@code {NAME}} the value of parameter NAME.
+ * {@code {workdir}} the temporary folder, {@code {kinds}} a kinds file with the kind of every
+ * column ({@link dev.touchstone.harness.io.ColumnKinds}: {@code column,kind} rows),
+ * {@code {knowledge}} the run's background knowledge as JSON (required, forbidden, tiers;
+ * empty lists when there is none; {@link dev.touchstone.harness.io.KnowledgeFile}), and {@code {NAME}} the value of parameter NAME.
  * At the limit, the command and every process it started are killed (descendants first)
  * and the run is recorded {@code timeout}; a non-zero exit status, a missing or malformed
  * output file are recorded {@code failed} with the reason and the last line the command
@@ -46,6 +49,11 @@ import java.util.stream.Stream;
  * The temporary folder is deleted afterwards. Cost: the command's, plus writing the CSV.
  */
 public final class CommandLearner implements Learner {
+
+    /** The kinds file's name in the run's folder. */
+    static final String KINDS_FILE = "data.kinds.csv";
+    /** The knowledge file's name in the run's folder. */
+    static final String KNOWLEDGE_FILE = "knowledge.json";
 
     private static final Pattern PLACEHOLDER = Pattern.compile("\\{([a-z_][a-z0-9_]*)}");
 
@@ -80,6 +88,14 @@ public final class CommandLearner implements Learner {
             Path data = work.resolve("data.csv");
             Path output = work.resolve(spec.output().fileName());
             DataCsv.write(data, input.data());
+            List<String> used = placeholders(spec.command());
+            if (used.contains("kinds")) {
+                dev.touchstone.harness.io.ColumnKinds.write(work.resolve(KINDS_FILE), input.data());
+            }
+            if (used.contains("knowledge")) {
+                dev.touchstone.harness.io.AtomicFiles.writeString(work.resolve(KNOWLEDGE_FILE),
+                        dev.touchstone.harness.io.KnowledgeFile.toJson(knowledge));
+            }
             List<String> args = arguments(data, output, work, context.seed(), parameters);
             Process p = new ProcessBuilder(args).directory(work.toFile())
                     .redirectOutput(work.resolve("stdout.txt").toFile())
@@ -135,6 +151,8 @@ public final class CommandLearner implements Learner {
                     case "seed": v = Long.toString(seed); break;
                     case "dir": v = spec.dir().toString(); break;
                     case "workdir": v = work.toString(); break;
+                    case "kinds": v = work.resolve(KINDS_FILE).toString(); break;
+                    case "knowledge": v = work.resolve(KNOWLEDGE_FILE).toString(); break;
                     default:
                         if (!values.containsKey(name)) {
                             throw new IllegalStateException("placeholder {" + name + "} names no parameter");

@@ -43,7 +43,8 @@ public final class LearnersFile {
     static final List<String> ENTRY_FIELDS = List.of("id", "summary", "publication", "command", "output", "returns",
             "accepts", "missing_values", "parameters", "installed_on_workers");
     static final List<String> PARAMETER_FIELDS = List.of("name", "type", "default", "min", "max", "choices", "meaning");
-    private static final Set<String> RESERVED = Set.of("data", "output", "seed", "dir", "workdir");
+    private static final Set<String> RESERVED = Set.of("data", "output", "seed", "dir", "workdir", "kinds",
+            "knowledge");
 
     private LearnersFile() {
     }
@@ -169,7 +170,7 @@ public final class LearnersFile {
         for (String name : used) {
             if (!RESERVED.contains(name) && !paramNames.contains(name)) {
                 throw StudyException.at(cmd, "the placeholder {" + name + "} is neither one of {data}, {output},"
-                        + " {seed}, {dir}, {workdir} nor a declared parameter");
+                        + " {seed}, {dir}, {workdir}, {kinds}, {knowledge} nor a declared parameter");
             }
         }
         if (!used.contains("output")) {

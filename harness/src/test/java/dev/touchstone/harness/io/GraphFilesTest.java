@@ -234,13 +234,12 @@ class GraphFilesTest {
     void dotDrawsEveryMarkAndStylesHiddenVariables() {
         String dot = GraphDot.toDot(sample(), "truth \"1\"");
         assertTrue(dot.startsWith("digraph \"truth \\\"1\\\"\" {\n"), dot);
-        assertTrue(dot.contains("  \"A\" -> \"B\" [arrowtail=none, arrowhead=normal];\n"), dot);
-        assertTrue(dot.contains("  \"B\" -> \"C\" [arrowtail=odot, arrowhead=normal];\n"), dot);
-        assertTrue(dot.contains("  \"C\" -> \"D\" [arrowtail=normal, arrowhead=normal];\n"), dot);
+        assertTrue(dot.contains("  \"A\" -> \"B\" [dir=both, arrowtail=none, arrowhead=normal];\n"), dot);
+        assertTrue(dot.contains("  \"B\" -> \"C\" [dir=both, arrowtail=odot, arrowhead=normal];\n"), dot);
+        assertTrue(dot.contains("  \"C\" -> \"D\" [dir=both, arrowtail=normal, arrowhead=normal];\n"), dot);
         assertTrue(dot.contains("  \"C\" [style=dashed"), dot);
         assertFalse(dot.contains("  \"A\" [style=dashed"), dot);
         assertTrue(dot.contains("  \"E\";\n"), "isolated variables are drawn too");
-        assertTrue(dot.contains("edge [dir=both]"), dot);
         assertTrue(dot.endsWith("}\n"));
     }
 
