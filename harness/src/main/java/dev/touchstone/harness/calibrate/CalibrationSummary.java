@@ -17,7 +17,7 @@ import java.util.List;
 import java.util.Locale;
 
 /**
- * Turns a calibration's runs into the report's view: means and 10th–90th percentiles of
+ * Turns a calibration's runs into the report's view: means, medians and 10th–90th percentiles of
  * each metric per learner and size (over all truths; over the fitted truth alone at the
  * analyst's size), per-edge rates, and plain warnings from the fit's checks. A check warns
  * when its p-value is below 0.01 divided by the number of such checks (Bonferroni), and
@@ -72,12 +72,11 @@ public final class CalibrationSummary {
                 double[] all = values(o, learner, metric, at, false);
                 double[] fitted = values(o, learner, metric, at, true);
                 int notOk = count(o, learner, at, false);
-                expectations.add(new CalibrationView.Expectation(learner, metric, mean(all), quantile(all, 0.1),
-                        quantile(all, 0.9), mean(fitted), count(o, learner, at, true), notOk));
+                expectations.add(new CalibrationView.Expectation(learner, metric, mean(all), spread(all),
+                        mean(fitted), count(o, learner, at, true), notOk));
                 for (int n : sorted(o.settings().samples())) {
                     double[] v = values(o, learner, metric, n, false);
-                    curve.add(new CalibrationView.SizePoint(learner, metric, n, mean(v), quantile(v, 0.1),
-                            quantile(v, 0.9)));
+                    curve.add(new CalibrationView.SizePoint(learner, metric, n, mean(v), spread(v)));
                 }
             }
             int bad = count(o, learner, at, false);
@@ -285,7 +284,11 @@ public final class CalibrationSummary {
         return s / v.length;
     }
 
-    private static Double quantile(double[] sorted, double prob) {
-        return sorted.length == 0 ? null : Quantiles.ofSorted(sorted, prob);
+    private static CalibrationView.Spread spread(double[] sorted) {
+        if (sorted.length == 0) {
+            return CalibrationView.Spread.UNDEFINED;
+        }
+        return new CalibrationView.Spread(Quantiles.ofSorted(sorted, 0.1), Quantiles.ofSorted(sorted, 0.5),
+                Quantiles.ofSorted(sorted, 0.9));
     }
 }

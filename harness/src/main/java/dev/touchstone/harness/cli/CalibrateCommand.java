@@ -1,5 +1,6 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
@@ -38,6 +39,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
 
 /**
  * {@code touchstone calibrate}: how reliable are these learners on data of this size and
@@ -131,7 +133,9 @@ final class CalibrateCommand implements Callable<Integer> {
         once("--learners", ids);
         List<CalibrationSettings.Choice> choices = new ArrayList<>();
         for (String id : ids) {
-            choices.add(choice(catalog, id, "--learners", raw));
+            CalibrationSettings.Choice c = choice(catalog, id, "--learners", raw);
+            refuseUnaccepted(c, d, "--learners");
+            choices.add(c);
         }
         for (String id : raw.keySet()) {
             if (!ids.contains(id) && !id.equals(truthLearner)) {
@@ -158,6 +162,7 @@ final class CalibrateCommand implements Callable<Integer> {
                 truthLines.add("Truth graph given in " + graph + " (" + truth.edgeCount() + " edges).");
             } else {
                 CalibrationSettings.Choice c = choice(catalog, truthLearner, "--truth-learner", raw);
+                refuseUnaccepted(c, d, "--truth-learner");
                 if (!quiet) {
                     err.println("learning the truth graph from the data with " + c.id() + " (--graph FILE gives one)");
                     err.flush();
@@ -200,9 +205,11 @@ final class CalibrateCommand implements Callable<Integer> {
         AtomicFiles.writeString(out.resolve("calibration-runs.csv"), CalibrationRunsCsv.render(o));
         for (CalibrationView.Expectation e : view.expectations()) {
             if (e.metric().equals("orientation_precision") || e.metric().equals("adjacency_f1")) {
-                stdout.printf(Locale.ROOT, "%s at %,d rows: %s expected %s (10%%–90%%: %s – %s)%n", e.learner(),
-                        view.expectedAt(), e.metric(), Numbers.format(e.mean()), Numbers.format(e.low()),
-                        Numbers.format(e.high()));
+                stdout.printf(Locale.ROOT, "%s at %,d rows%s: %s median %s, 10%%–90%% of replicates %s – %s, mean %s%n",
+                        e.learner(), view.expectedAt(), view.expectedAt() == view.analystRows() ? " (your size)"
+                                : String.format(Locale.ROOT, " (nearest to your %,d)", view.analystRows()),
+                        e.metric(), Numbers.format(e.spread().median()), Numbers.format(e.spread().p10()),
+                        Numbers.format(e.spread().p90()), Numbers.format(e.mean()));
             }
         }
         for (String answer : CalibrationReport.answers(view)) {
@@ -263,6 +270,23 @@ final class CalibrateCommand implements Callable<Integer> {
                     .put(name.substring(dot + 1).trim(), value);
         });
         return out;
+    }
+
+    /**
+     * A learner that cannot take these data would only add a column of undefined expectations
+     * and a warning about runs it never did, so it is refused before anything runs.
+     */
+    private static void refuseUnaccepted(CalibrationSettings.Choice c, DataSet d, String option) {
+        Set<DataKind> accepted = c.learner().description().accepts();
+        if (!accepted.contains(d.kind())) {
+            throw new UsageException(option + ": " + c.id() + " does not accept " + word(d.kind()) + " data (it takes "
+                    + accepted.stream().map(CalibrateCommand::word).sorted().collect(Collectors.joining(", "))
+                    + "); leave it out or declare the column kinds with --kinds");
+        }
+    }
+
+    private static String word(DataKind k) {
+        return k.name().toLowerCase(Locale.ROOT);
     }
 
     private static CalibrationSettings.Choice choice(LearnerCatalog catalog, String id, String option,

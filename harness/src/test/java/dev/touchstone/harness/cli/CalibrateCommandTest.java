@@ -44,7 +44,10 @@ class CalibrateCommandTest {
                 "--out", out.toString(), "--seed", "3");
         assertEquals(0, r.status(), r.err());
         assertTrue(r.err().contains("asia: discrete"), r.err());
-        assertTrue(r.out().contains("pc at 1,000 rows: orientation_precision expected"), r.out());
+        assertTrue(r.out().contains("pc at 1,000 rows (your size): orientation_precision median "), r.out());
+        for (String line : r.out().lines().filter(l -> l.contains(" median ")).toList()) {
+            assertMedianInsideItsRange(line);
+        }
         assertTrue(r.out().contains("ges: "), r.out());
         String html = Files.readString(out.resolve("calibration.html"));
         String md = Files.readString(out.resolve("calibration.md"));
@@ -60,6 +63,33 @@ class CalibrateCommandTest {
         // 6 replicates × 4 sizes × 2 learners + 4 resamples × 2 learners, plus the header.
         assertEquals(1 + 6 * 4 * 2 + 4 * 2, runs.size());
         assertTrue(runs.get(0).startsWith("truth,replicate,rows,learner,status,message,adjacency_precision"));
+    }
+
+    /**
+     * "median M, 10%–90% of replicates A – B": the 10th percentile, median and 90th percentile of
+     * one sample are ordered by definition of quantiles, so the printed range contains its value.
+     */
+    private static void assertMedianInsideItsRange(String line) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile(
+                "median (\\S+), 10%–90% of replicates (\\S+) – (\\S+), mean (\\S+)").matcher(line);
+        assertTrue(m.find(), line);
+        double median = Double.parseDouble(m.group(1));
+        assertTrue(Double.parseDouble(m.group(2)) <= median && median <= Double.parseDouble(m.group(3)), line);
+    }
+
+    @Test
+    @DisplayName("a learner that does not take the data's kind is refused before anything runs, in one line")
+    void learnerOfAnotherKindRefused() throws IOException {
+        Path data = tmp.resolve("asia.csv");
+        DataCsv.write(data, ReferenceNetworks.chestClinic().model().sample(1000, 7));
+        Path out = tmp.resolve("refused");
+        CliTest.Result r = CliTest.cli("calibrate", "--data", data.toString(), "--learners", "pc,direct-lingam",
+                "--replicates", "2", "--out", out.toString());
+        assertEquals(2, r.status(), r.err());
+        String last = r.err().strip().lines().reduce((a, b) -> b).orElse("");
+        assertEquals("error: --learners: direct-lingam does not accept discrete data (it takes continuous); leave it"
+                + " out or declare the column kinds with --kinds", last, r.err());
+        assertTrue(!Files.exists(out), "nothing written");
     }
 
     @Test

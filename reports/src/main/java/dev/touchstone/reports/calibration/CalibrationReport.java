@@ -53,15 +53,17 @@ public final class CalibrationReport {
             page.note(nearest(v));
         }
         page.paragraph("Each learner was run on data sets simulated from truths fitted to your data (and perturbed"
-                + " variants), of your size and shape. The mean is the expected value; the 10%–90% range is where"
-                + " most single data sets fall.");
+                + " variants), of your size and shape. The median is the value of a typical single data set and"
+                + " the 10%–90% range, which always contains it, is where most single data sets fall; the mean is"
+                + " the long-run average, which a few bad data sets can pull outside that range.");
         page.table(CalibrationTables.expectations(v));
         page.section("rows", "With more (or fewer) rows");
         page.list(CalibrationTables.answers(v));
         for (String metric : CHARTED) {
             if (CalibrationTables.metrics(v).contains(metric)) {
-                page.figure(chart(v, metric).toSvg(720, 340), metric + " against rows: mean over replicates, band"
-                        + " from the 10th to the 90th percentile; log scale of rows.");
+                page.figure(chart(v, metric).toSvg(720, 340), metric + " against rows: median over replicates, band"
+                        + " from the 10th to the 90th percentile; log scale of rows. "
+                        + String.format(Locale.ROOT, "Your data have %,d rows.", v.analystRows()));
             }
         }
         for (String metric : CalibrationTables.metrics(v)) {
@@ -136,9 +138,10 @@ public final class CalibrationReport {
         for (String learner : v.learners()) {
             List<ChartPoint> pts = new ArrayList<>();
             for (CalibrationView.SizePoint p : CalibrationTables.points(v, learner, metric)) {
-                if (p.mean() != null) {
-                    pts.add(new ChartPoint(p.rows(), p.mean(), p.low() == null ? Double.NaN : p.low(),
-                            p.high() == null ? Double.NaN : p.high()));
+                CalibrationView.Spread s = p.spread();
+                if (s.median() != null) {
+                    pts.add(new ChartPoint(p.rows(), s.median(), s.p10() == null ? Double.NaN : s.p10(),
+                            s.p90() == null ? Double.NaN : s.p90()));
                 }
             }
             series.add(new ChartSeries(learner, pts));

@@ -14,11 +14,12 @@ final class CalibrationTables {
     }
 
     static Table expectations(CalibrationView v) {
-        Table.Builder t = Table.builder(List.of("learner", "metric", "expected (mean)", "10%–90% of replicates",
-                "fitted truth only", "replicates ok", "not ok"));
+        Table.Builder t = Table.builder(List.of("learner", "metric", "median of replicates", "10%–90% of replicates",
+                "mean", "mean, fitted truth only", "replicates ok", "not ok"));
         for (CalibrationView.Expectation e : v.expectations()) {
-            t.row(e.learner(), e.metric(), Numbers.format(e.mean()), range(e.low(), e.high()),
-                    Numbers.format(e.fittedMean()), Integer.toString(e.ok()), Integer.toString(e.notOk()));
+            t.row(e.learner(), e.metric(), Numbers.format(e.spread().median()), range(e.spread()),
+                    Numbers.format(e.mean()), Numbers.format(e.fittedMean()), Integer.toString(e.ok()),
+                    Integer.toString(e.notOk()));
         }
         return t.build();
     }
@@ -28,7 +29,8 @@ final class CalibrationTables {
         List<String> columns = new ArrayList<>();
         columns.add("learner");
         for (int n : sizes) {
-            columns.add(String.format(Locale.ROOT, "%,d rows", n) + (n == v.analystRows() ? " (yours)" : ""));
+            columns.add(String.format(Locale.ROOT, "%,d rows", n) + (n == v.analystRows() ? " (your size)"
+                    : n == v.expectedAt() ? " (nearest to yours)" : ""));
         }
         Table.Builder t = Table.builder(columns);
         for (String learner : v.learners()) {
@@ -36,7 +38,8 @@ final class CalibrationTables {
             row.add(learner);
             for (int n : sizes) {
                 CalibrationView.SizePoint p = point(v, learner, metric, n);
-                row.add(p == null ? Numbers.UNDEFINED : Numbers.withInterval(p.mean(), p.low(), p.high()));
+                row.add(p == null ? Numbers.UNDEFINED
+                        : Numbers.withInterval(p.spread().median(), p.spread().p10(), p.spread().p90()));
             }
             t.row(row.toArray(new String[0]));
         }
@@ -115,10 +118,10 @@ final class CalibrationTables {
         return null;
     }
 
-    private static String range(Double low, Double high) {
-        if (low == null || high == null) {
+    private static String range(CalibrationView.Spread s) {
+        if (s.p10() == null || s.p90() == null) {
             return Numbers.UNDEFINED;
         }
-        return Numbers.format(low) + " – " + Numbers.format(high);
+        return Numbers.format(s.p10()) + " – " + Numbers.format(s.p90());
     }
 }

@@ -41,21 +41,32 @@ public record CalibrationView(String title, List<String> dataLines, List<String>
     }
 
     /**
+     * Where single replicates fall: the 10th percentile, the median and the 90th percentile of a
+     * metric over replicates. The median always lies in its own range, which the mean need not
+     * (a metric that is 1 in 95% of replicates and 0 in the rest has mean 0.95 and range 1 – 1),
+     * so the range is shown next to the median and the mean is labelled on its own.
+     */
+    public record Spread(Double p10, Double median, Double p90) {
+
+        /** The spread of nothing: every part undefined. */
+        public static final Spread UNDEFINED = new Spread(null, null, null);
+    }
+
+    /**
      * One learner's expected value of one metric on data like the analyst's.
      *
      * @param mean       the mean over all simulated replicates at the analyst's size (all truths)
-     * @param low        the 10th percentile of those values
-     * @param high       the 90th percentile
+     * @param spread     the median and the 10th–90th percentiles of those values
      * @param fittedMean the mean over replicates of the fitted truth alone
      * @param ok         replicates that finished
      * @param notOk      replicates that failed, timed out or were skipped
      */
-    public record Expectation(String learner, String metric, Double mean, Double low, Double high, Double fittedMean,
+    public record Expectation(String learner, String metric, Double mean, Spread spread, Double fittedMean,
                               int ok, int notOk) {
     }
 
-    /** The mean of a metric with its 10th–90th percentile range, for one learner at one simulated size. */
-    public record SizePoint(String learner, String metric, int rows, Double mean, Double low, Double high) {
+    /** The mean of a metric and the spread of its replicates, for one learner at one simulated size. */
+    public record SizePoint(String learner, String metric, int rows, Double mean, Spread spread) {
     }
 
     /** The question "how many rows would make {@code metric} reach {@code value}?". */

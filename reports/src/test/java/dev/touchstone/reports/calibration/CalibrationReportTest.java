@@ -13,7 +13,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class CalibrationReportTest {
 
     static CalibrationView.SizePoint p(int rows, double mean) {
-        return new CalibrationView.SizePoint("pc", "orientation_precision", rows, mean, mean - 0.1, mean + 0.1);
+        return new CalibrationView.SizePoint("pc", "orientation_precision", rows, mean,
+                new CalibrationView.Spread(mean - 0.1, mean, mean + 0.1));
     }
 
     @Test
@@ -53,7 +54,8 @@ class CalibrationReportTest {
     void cautionsFirst() {
         CalibrationView v = new CalibrationView("Calibration", List.of("data.csv: 400 rows"), List.of("truth given"),
                 List.of("MCAR"), List.of("x is missing in 30% of rows."), 400, 400, List.of("pc"),
-                List.of(new CalibrationView.Expectation("pc", "orientation_precision", 0.7, 0.5, 0.9, 0.72, 10, 0)),
+                List.of(new CalibrationView.Expectation("pc", "orientation_precision", 0.7,
+                        new CalibrationView.Spread(0.5, 0.75, 0.9), 0.72, 10, 0)),
                 List.of(p(200, 0.6), p(400, 0.7), p(1600, 0.9)),
                 new CalibrationView.Target("orientation_precision", 0.8),
                 List.of(new CalibrationView.EdgeRow("pc", "a", "b", true, 0.9, 0.5, 0.8, 0.4)),
@@ -67,7 +69,7 @@ class CalibrationReportTest {
             assertTrue(md.indexOf(line) > 0 && md.indexOf(line) < md.indexOf("x is missing"), line);
         }
         assertTrue(md.indexOf("x is missing") < md.indexOf("## What to expect at 400 rows"));
-        assertTrue(md.contains("| pc | orientation_precision | 0.700 | 0.500 – 0.900 | 0.720 | 10 | 0 |"), md);
+        assertTrue(md.contains("| pc | orientation_precision | 0.750 | 0.500 – 0.900 | 0.700 | 0.720 | 10 | 0 |"), md);
         assertTrue(md.contains("| pc | a → b | yes | 0.900 | 0.500 | 0.800 | 0.400 |"), md);
         assertTrue(md.contains("about 800 rows"), md);
         assertTrue(html.contains("<svg"), "chart of orientation precision against rows");
