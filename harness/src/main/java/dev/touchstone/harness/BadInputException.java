@@ -68,6 +68,7 @@ public class BadInputException extends RuntimeException {
      * joined with "; ".
      */
     public static String oneLine(String message) {
+        message = parserEventsInWords(message);
         if (message == null || message.indexOf('\n') < 0 && message.indexOf('\r') < 0) {
             return message;
         }
@@ -81,5 +82,37 @@ public class BadInputException extends RuntimeException {
             sb.append(sb.length() == 0 ? "" : "; ").append(t);
         }
         return sb.length() == 0 ? message.strip().replaceAll("\\s*\\R\\s*", "; ") : sb.toString();
+    }
+
+    private static final java.util.regex.Pattern PARSER_EVENT = java.util.regex.Pattern.compile(
+            "<(?:[a-z][a-z0-9_]*\\.)+([A-Z][A-Za-z]*?)Event\\([^>]*\\)>");
+
+    /**
+     * The YAML parser names what it found by its event class
+     * ({@code <org.yaml.snakeyaml.events.MappingStartEvent(anchor=null, …)>}); a user needs the
+     * thing in the file instead.
+     */
+    private static String parserEventsInWords(String message) {
+        if (message == null || message.indexOf('<') < 0) {
+            return message;
+        }
+        java.util.regex.Matcher m = PARSER_EVENT.matcher(message);
+        StringBuilder sb = new StringBuilder();
+        while (m.find()) {
+            String word = switch (m.group(1)) {
+                case "MappingStart" -> "the start of a map ({ or key: value)";
+                case "MappingEnd" -> "the end of a map";
+                case "SequenceStart" -> "the start of a list ([ or - item)";
+                case "SequenceEnd" -> "the end of a list";
+                case "Scalar" -> "a value";
+                case "Alias" -> "an alias (*name)";
+                case "DocumentStart" -> "the start of a document (---)";
+                case "DocumentEnd" -> "the end of a document";
+                default -> "something else";
+            };
+            m.appendReplacement(sb, java.util.regex.Matcher.quoteReplacement(word));
+        }
+        m.appendTail(sb);
+        return sb.toString().replace("(Scalar value in YAML)", "");
     }
 }

@@ -10,7 +10,6 @@ import org.apache.commons.csv.CSVRecord;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -67,7 +66,7 @@ public final class ColumnKinds {
      */
     public static Map<String, VariableKind> read(Path file) throws IOException {
         Map<String, VariableKind> out = new LinkedHashMap<>();
-        try (LineCountingReader in = new LineCountingReader(Files.newBufferedReader(file, StandardCharsets.UTF_8));
+        try (LineCountingReader in = new LineCountingReader(InputFiles.reader(file));
              CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
             boolean header = true;
             for (CSVRecord rec : parser) {

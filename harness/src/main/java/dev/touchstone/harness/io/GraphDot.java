@@ -14,8 +14,6 @@ import org.jgrapht.nio.dot.DOTImporter;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.StringReader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -118,7 +116,7 @@ public final class GraphDot {
      * @throws FileFormatException naming the file and the edge at fault
      */
     public static Graph read(Path file, GraphClass expected) throws IOException {
-        String text = Files.readString(file, StandardCharsets.UTF_8);
+        String text = InputFiles.readString(file);
         Parsed parsed;
         try {
             parsed = parse(new StringReader(text), !UNDIRECTED.matcher(text).lookingAt());

@@ -13,8 +13,6 @@ import org.apache.commons.csv.CSVRecord;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -85,7 +83,7 @@ public final class GraphMatrixCsv {
         List<String> names = null;
         List<int[]> rows = new ArrayList<>();
         List<Long> lines = new ArrayList<>();
-        try (LineCountingReader in = new LineCountingReader(Files.newBufferedReader(file, StandardCharsets.UTF_8));
+        try (LineCountingReader in = new LineCountingReader(InputFiles.reader(file));
              CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
             for (CSVRecord rec : parser) {
                 long line = in.lineOf(rec.getCharacterPosition());

@@ -20,7 +20,6 @@ import dev.touchstone.generators.models.NodeParameters;
 import dev.touchstone.generators.models.NoiseDistribution;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
@@ -238,7 +237,7 @@ public final class ModelFile {
     public static TruthParameters read(Path file) throws IOException {
         JsonNode root;
         try {
-            root = MAPPER.readTree(Files.newBufferedReader(file));
+            root = MAPPER.readTree(InputFiles.reader(file));
         } catch (JsonParseException e) {
             throw new FileFormatException(file, "line " + e.getLocation().getLineNr() + ", column "
                     + e.getLocation().getColumnNr(), "not valid JSON: " + e.getOriginalMessage());

@@ -95,6 +95,10 @@ class BadInputTest {
         String yaml = refused(cli("check", write("broken.yaml", "name: x\ntiers: [a\n  - [b]\n").toString()),
                 "broken.yaml:");
         assertTrue(yaml.matches("error: broken\\.yaml:\\d+:\\d+: not valid YAML: .*"), yaml);
+        // found by the mutation fuzzer: the parser named what it found by its event class
+        String event = refused(cli("check", write("event.yaml", "name: x\nlearners:\n  - {id: a, use]: b}\n")
+                .toString()), "event.yaml:3:");
+        assertTrue(event.contains("the start of a map") && !event.contains("snakeyaml"), event);
     }
 
     @Test
