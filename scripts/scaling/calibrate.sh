@@ -29,7 +29,7 @@ YAML
   times=()
   for ((i = 1; i <= reps; i++)); do
     start=$(date +%s.%N)
-    ./touchstone calibrate --data "$work/$kind/t0-r0/data.csv" --learners pc,ges --replicates 50 \
+    ./touchstone calibrate --data "$work/$kind/t0-r0/data.csv" --learner pc,ges --replicates 50 \
       --variants 4 --bootstrap 50 --threads 2 --out "$work/out-$kind" --quiet >/dev/null 2>"$work/err"
     end=$(date +%s.%N)
     t=$(echo "$end - $start" | bc)

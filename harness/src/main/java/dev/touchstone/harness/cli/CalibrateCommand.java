@@ -14,7 +14,6 @@ import dev.touchstone.harness.calibrate.CalibrationSettings;
 import dev.touchstone.harness.calibrate.CalibrationSummary;
 import dev.touchstone.harness.calibrate.TruthGraphs;
 import dev.touchstone.harness.catalog.LearnerCatalog;
-import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.io.AtomicFiles;
 import dev.touchstone.harness.io.ColumnKinds;
@@ -24,6 +23,7 @@ import dev.touchstone.reports.calibration.CalibrationReport;
 import dev.touchstone.reports.calibration.CalibrationView;
 import dev.touchstone.reports.tables.Numbers;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 import java.io.IOException;
@@ -52,7 +52,8 @@ final class CalibrateCommand implements Callable<Integer> {
     @Option(names = "--data", required = true, paramLabel = "FILE", description = "Your data (CSV with a header row).")
     Path data;
 
-    @Option(names = "--learners", split = ",", paramLabel = "ID", description = "Learners to calibrate (default: pc,ges).")
+    @Option(names = "--learner", split = ",", paramLabel = "ID", description = "Learners to calibrate, by id (built-in,"
+            + " from --learners FILE or from --plugins DIR); comma-separated or repeated (default: pc,ges).")
     List<String> learners = List.of("pc", "ges");
 
     @Option(names = "--set", paramLabel = "ID.NAME=VALUE", description = "A learner's parameter value, e.g."
@@ -93,11 +94,14 @@ final class CalibrateCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./calibration).")
     Path out = Path.of("calibration");
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
-    Integer threads;
+    @Mixin
+    ThreadsOption threads;
 
-    @Option(names = "--seed", paramLabel = "S", description = "Root seed (default: 1).")
-    long seed = 1;
+    @Mixin
+    SeedOption seed;
+
+    @Mixin
+    LearnerSources sources;
 
     @Option(names = "--seconds", paramLabel = "S", description = "Time limit per run (default: 60).")
     double seconds = 60;
@@ -112,8 +116,7 @@ final class CalibrateCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter stdout = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        int n = threads == null ? LocalExecutor.defaultThreads() : threads;
-        atLeast("--threads", n, 1);
+        int n = threads.value();
         atLeast("--replicates", replicates, 1);
         atLeast("--variants", variants, 0);
         atLeast("--bootstrap", bootstrap, 0);
@@ -127,19 +130,19 @@ final class CalibrateCommand implements Callable<Integer> {
         if (d.rows() < 4) {
             throw new UsageException(data + ": " + d.rows() + " rows; calibration needs at least 4");
         }
-        LearnerCatalog catalog = new Toolkit(null, null).learners;
+        LearnerCatalog catalog = sources.toolkit().learners;
         Map<String, Map<String, String>> raw = parameterSettings();
         List<String> ids = learners.stream().map(String::trim).toList();
-        once("--learners", ids);
+        once("--learner", ids);
         List<CalibrationSettings.Choice> choices = new ArrayList<>();
         for (String id : ids) {
-            CalibrationSettings.Choice c = choice(catalog, id, "--learners", raw);
-            refuseUnaccepted(c, d, "--learners");
+            CalibrationSettings.Choice c = choice(catalog, id, "--learner", raw);
+            refuseUnaccepted(c, d, "--learner");
             choices.add(c);
         }
         for (String id : raw.keySet()) {
             if (!ids.contains(id) && !id.equals(truthLearner)) {
-                throw new UsageException("--set: learner '" + id + "' is not among --learners or --truth-learner");
+                throw new UsageException("--set: learner '" + id + "' is not among --learner or --truth-learner");
             }
         }
         Duration limit = Duration.ofNanos((long) (seconds * 1e9));
@@ -150,7 +153,7 @@ final class CalibrateCommand implements Callable<Integer> {
             }
         }
         once("--samples", sizes);
-        CalibrationSettings settings = new CalibrationSettings(choices, sizes, replicates, variants, bootstrap, seed,
+        CalibrationSettings settings = new CalibrationSettings(choices, sizes, replicates, variants, bootstrap, seed.value(),
                 n, limit);
         err.print(read.describeKinds());
         Graph truth;
@@ -225,7 +228,7 @@ final class CalibrateCommand implements Callable<Integer> {
 
     private Graph learnedTruth(CalibrationSettings.Choice c, DataSet d, Duration limit) {
         try {
-            return TruthGraphs.learned(c, d, seed, limit);
+            return TruthGraphs.learned(c, d, seed.value(), limit);
         } catch (DeadlineExceededException e) {
             throw new UsageException("--truth-learner " + c.id() + ": did not finish within " + seconds
                     + " s (--seconds); give --graph FILE or allow more time", e);

@@ -7,6 +7,7 @@ import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.SampleSize;
 import dev.touchstone.harness.study.TruthSetting;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -22,11 +23,8 @@ final class CheckCommand implements Callable<Integer> {
     @Parameters(paramLabel = "STUDY", description = "The study file (YAML or JSON).")
     Path study;
 
-    @Option(names = "--learners", paramLabel = "FILE", description = "A learners file declaring external command learners.")
-    Path learnersFile;
-
-    @Option(names = "--plugins", paramLabel = "DIR", description = "A folder of plug-in jars with Learner services.")
-    Path plugins;
+    @Mixin
+    LearnerSources sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -34,7 +32,7 @@ final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
-        Toolkit kit = new Toolkit(learnersFile, plugins);
+        Toolkit kit = sources.toolkit();
         Plan plan = kit.plan(kit.readStudy(study));
         var s = plan.study();
         out.printf(Locale.ROOT, "study %s: valid%n", s.name());

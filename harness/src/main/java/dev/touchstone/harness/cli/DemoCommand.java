@@ -6,6 +6,7 @@ import dev.touchstone.metrics.results.RunStatus;
 import dev.touchstone.reports.MarkdownReport;
 import dev.touchstone.reports.ReportData;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 import java.io.IOException;
@@ -31,8 +32,8 @@ final class DemoCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./touchstone-demo).")
     Path out = Path.of("touchstone-demo");
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
-    Integer threads;
+    @Mixin
+    ThreadsOption threads;
 
     @Option(names = "--quiet", description = "Print no progress.")
     boolean quiet;
@@ -51,7 +52,7 @@ final class DemoCommand implements Callable<Integer> {
         Toolkit kit = new Toolkit(null, null);
         Path file = study != null ? study : bundledStudy();
         Plan plan = kit.plan(kit.readStudy(file));
-        StudyRunner.Outcome o = kit.run(plan, out, threads, quiet, err);
+        StudyRunner.Outcome o = kit.run(plan, out, threads.threads, quiet, err);
         ReportData data = kit.reportData(plan, out);
         Path html = dev.touchstone.harness.report.StudyReports.write(out, data);
         w.printf(Locale.ROOT, "demo study '%s': %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped)%n%n",

@@ -17,6 +17,7 @@ import dev.touchstone.harness.io.GraphFormat;
 import dev.touchstone.harness.io.GraphJson;
 import dev.touchstone.harness.io.KnowledgeFile;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 import java.io.PrintWriter;
@@ -34,7 +35,9 @@ final class LearnCommand implements Callable<Integer> {
     @Option(names = "--learner", required = true, paramLabel = "ID", description = "The learner (see 'touchstone learners').")
     String learner;
 
-    @Option(names = "--set", paramLabel = "NAME=VALUE", description = "A parameter value; repeat for several.")
+    @Option(names = "--set", paramLabel = "ID.NAME=VALUE", description = "A parameter of the learner, e.g."
+            + " pc.alpha=0.01 (as in calibrate; the ID may be left out here, there being one learner); repeat for"
+            + " several.")
     List<String> settings = List.of();
 
     @Option(names = "--data", required = true, paramLabel = "FILE", description = "The data (CSV with a header row).")
@@ -58,17 +61,14 @@ final class LearnCommand implements Callable<Integer> {
             + " (default: print it as JSON).")
     Path out;
 
-    @Option(names = "--seed", paramLabel = "N", description = "The run's seed (default: 0).")
-    long seed;
+    @Mixin
+    SeedOption seed;
 
     @Option(names = "--seconds", paramLabel = "S", description = "Time limit (default: none).")
     Double seconds;
 
-    @Option(names = "--learners", paramLabel = "FILE", description = "A learners file declaring external command learners.")
-    Path learnersFile;
-
-    @Option(names = "--plugins", paramLabel = "DIR", description = "A folder of plug-in jars.")
-    Path plugins;
+    @Mixin
+    LearnerSources sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -78,14 +78,14 @@ final class LearnCommand implements Callable<Integer> {
         if (out != null) {
             GraphFormat.of(out);
         }
-        LearnerCatalog catalog = new Toolkit(learnersFile, plugins).learners;
+        LearnerCatalog catalog = sources.toolkit().learners;
         LearnerCatalog.Entry entry = catalog.find(learner);
         if (entry == null) {
             throw new UsageException("--learner: unknown learner '" + learner + "' (available: "
                     + String.join(", ", catalog.ids()) + ")");
         }
         LearnerDescription d = entry.learner().description();
-        Map<String, String> raw = Settings.parse(settings);
+        Map<String, String> raw = Settings.forLearner(Settings.parse(settings), learner);
         ParameterValues values;
         try {
             values = ParameterValues.resolve("learner " + d.id(), d.parameters(), raw);
@@ -103,7 +103,7 @@ final class LearnCommand implements Callable<Integer> {
         } catch (LearnerException e) {
             throw new UsageException(data + ": " + e.getMessage() + why, e);
         }
-        RunContext context = RunContext.of(seed, seconds == null ? null : Duration.ofNanos((long) (seconds * 1e9)), 1);
+        RunContext context = RunContext.of(seed.value(), seconds == null ? null : Duration.ofNanos((long) (seconds * 1e9)), 1);
         long t0 = System.nanoTime();
         Estimate est;
         try {

@@ -10,6 +10,7 @@ import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.harness.catalog.LearnerCatalog;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 import java.io.PrintWriter;
@@ -26,11 +27,8 @@ final class LearnersCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print JSON instead of text.")
     boolean json;
 
-    @Option(names = "--learners", paramLabel = "FILE", description = "Also list the command learners of this learners file.")
-    Path learnersFile;
-
-    @Option(names = "--plugins", paramLabel = "DIR", description = "Also list the plug-ins in this folder.")
-    Path plugins;
+    @Mixin
+    LearnerSources sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -38,7 +36,7 @@ final class LearnersCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter out = spec.commandLine().getOut();
-        LearnerCatalog catalog = new Toolkit(learnersFile, plugins).learners;
+        LearnerCatalog catalog = sources.toolkit().learners;
         if (json) {
             ObjectMapper m = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
             ArrayNode list = m.createArrayNode();

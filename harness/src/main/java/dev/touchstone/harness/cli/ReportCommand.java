@@ -2,6 +2,7 @@ package dev.touchstone.harness.cli;
 
 import dev.touchstone.harness.study.Plan;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -12,7 +13,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 
 /**
- * {@code touchstone report OUT [--to DIR]}: re-renders report.html and report.md of a study's
+ * {@code touchstone report OUT [--out DIR]}: re-renders report.html and report.md of a study's
  * output folder from its journal, also while the study is running or after it was
  * interrupted (the report is then marked partial).
  */
@@ -22,15 +23,11 @@ final class ReportCommand implements Callable<Integer> {
     @Parameters(paramLabel = "OUT", description = "The study's output folder (holding study.yaml and journal.jsonl).")
     Path out;
 
-    @Option(names = "--to", paramLabel = "DIR", description = "Where to write the report (default: the output folder).")
+    @Option(names = "--out", paramLabel = "DIR", description = "Where to write the report (default: the study's output folder).")
     Path to;
 
-    @Option(names = "--learners", paramLabel = "FILE",
-            description = "The learners file the study was run with, if it uses external command learners.")
-    Path learnersFile;
-
-    @Option(names = "--plugins", paramLabel = "DIR", description = "The plug-in folder the study was run with, if any.")
-    Path plugins;
+    @Mixin
+    LearnerSources sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -41,7 +38,7 @@ final class ReportCommand implements Callable<Integer> {
         if (!Files.isRegularFile(study) || !Files.isRegularFile(out.resolve("journal.jsonl"))) {
             throw new UsageException(out + ": not a study's output folder (it needs study.yaml and journal.jsonl)");
         }
-        Toolkit kit = new Toolkit(learnersFile, plugins);
+        Toolkit kit = sources.toolkit();
         Plan plan = kit.plan(kit.readStudy(study));
         Path html = kit.report(plan, out, to == null ? out : to);
         PrintWriter w = spec.commandLine().getOut();

@@ -7,6 +7,7 @@ import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.metrics.results.RunStatus;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -25,14 +26,11 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: ./<study name>-results).")
     Path out;
 
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads of the local engine (default: all cores).")
-    Integer threads;
+    @Mixin
+    ThreadsOption threads;
 
-    @Option(names = "--learners", paramLabel = "FILE", description = "A learners file declaring external command learners.")
-    Path learnersFile;
-
-    @Option(names = "--plugins", paramLabel = "DIR", description = "A folder of plug-in jars with Learner services.")
-    Path plugins;
+    @Mixin
+    LearnerSources sources;
 
     @Option(names = "--engine", paramLabel = "NAME", description = "Where runs are performed: local (default) or"
             + " spark (needs the spark module; see docs/spark.md).")
@@ -52,10 +50,10 @@ final class RunCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Toolkit kit = new Toolkit(learnersFile, plugins);
+        Toolkit kit = sources.toolkit();
         Plan plan = kit.plan(kit.readStudy(study));
         Path folder = this.out != null ? this.out : Path.of(plan.study().name() + "-results");
-        StudyRunner.Outcome o = kit.run(plan, folder, threads, quiet, err, engine(plan));
+        StudyRunner.Outcome o = kit.run(plan, folder, threads.threads, quiet, err, engine(plan));
         out.printf(Locale.ROOT, "done: %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped; %,d done now);"
                         + " results in %s%n", o.total(), o.count(RunStatus.OK), o.count(RunStatus.FAILED),
                 o.count(RunStatus.TIMEOUT), o.count(RunStatus.SKIPPED), o.performed(), folder);
@@ -80,7 +78,7 @@ final class RunCommand implements Callable<Integer> {
                     + " ./touchstone, which then adds it (docs/spark.md)");
         }
         try {
-            return p.create(master, plan, RunRecipe.of(plan, learnersFile, plugins));
+            return p.create(master, plan, RunRecipe.of(plan, sources.learnersFile, sources.plugins));
         } catch (IllegalArgumentException e) {
             throw new UsageException(e.getMessage(), e);
         }

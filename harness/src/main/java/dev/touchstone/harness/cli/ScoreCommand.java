@@ -35,7 +35,7 @@ import java.util.concurrent.Callable;
  * {@link Cpdags#of} for a CPDAG estimate); any other truth file must already be a graph
  * of the estimate's class. Cost: that of the metrics (O(V + E), plus the SID).
  */
-@Command(name = "score", mixinStandardHelpOptions = true,
+@Command(name = "score",
         description = "Score an estimated graph against the true graph.")
 public final class ScoreCommand implements Callable<Integer> {
 

@@ -29,6 +29,7 @@ import dev.touchstone.harness.study.StudyFields;
 import dev.touchstone.harness.study.TruthSetting;
 import dev.touchstone.metrics.truth.TruthSelection;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -63,7 +64,7 @@ import java.util.concurrent.Callable;
  * (varsortability and R²-sortability of the data against the truth).
  */
 @Command(name = "simulate", sortOptions = false,
-        description = {"Write data sets with their truth graphs, without running learners:",
+        description = {"Write data sets with their truth graphs, without running learners.",
                 "every replicate of a STUDY, or one truth described by options (--network, or --graph and --model).",
                 "Example: touchstone simulate --graph erdos-renyi --set nodes=20 --set mean_degree=2"
                         + " --model linear-gaussian --samples 500 --out sim"})
@@ -115,19 +116,16 @@ final class SimulateCommand implements Callable<Integer> {
             description = "Rows of data to draw (default: " + DEFAULT_SAMPLES + ").")
     Integer samples;
 
-    @Option(names = "--seed", paramLabel = "N", description = "The root of every random choice (default: 1).")
-    Long seed;
+    @Mixin
+    SeedOption seed;
 
     @Option(names = "--graph-format", split = ",", paramLabel = "FORMAT",
             description = "More formats for the graph files, besides JSON (and truth.dot): csv (edge list),"
                     + " matrix.csv (adjacency matrix), dot; comma-separated or repeated.")
     List<String> graphFormats = List.of();
 
-    @Option(names = "--learners", paramLabel = "FILE", description = "With STUDY: a learners file, if the study names command learners.")
-    Path learnersFile;
-
-    @Option(names = "--plugins", paramLabel = "DIR", description = "With STUDY: a folder of plug-in jars, if the study names plug-ins.")
-    Path plugins;
+    @Mixin
+    LearnerSources sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -144,14 +142,14 @@ final class SimulateCommand implements Callable<Integer> {
         List<GraphFormat> formats = formats(graphFormats);
         Map<String, Object> truthOptions = truthOptions();
         truthOptions.put("--samples", samples);
-        truthOptions.put("--seed", seed);
+        truthOptions.put("--seed", seed.seed);
         for (Map.Entry<String, Object> e : truthOptions.entrySet()) {
             if (e.getValue() != null) {
                 throw new UsageException(e.getKey() + ": describes one truth and cannot be combined with a STUDY"
                         + " file (the study says what to simulate)");
             }
         }
-        Toolkit kit = new Toolkit(learnersFile, plugins);
+        Toolkit kit = sources.toolkit();
         Plan plan = kit.plan(kit.readStudy(study));
         int rows = StudyRunner.largestRows(plan);
         Files.createDirectories(out);
@@ -184,8 +182,8 @@ final class SimulateCommand implements Callable<Integer> {
 
     private Integer fromOptions() throws IOException {
         List<GraphFormat> formats = formats(graphFormats);
-        if (learnersFile != null || plugins != null) {
-            throw new UsageException((learnersFile != null ? "--learners" : "--plugins")
+        if (sources.learnersFile != null || sources.plugins != null) {
+            throw new UsageException((sources.learnersFile != null ? "--learners" : "--plugins")
                     + ": only used with a STUDY file");
         }
         if (network != null && (graph != null || model != null)) {
@@ -196,7 +194,7 @@ final class SimulateCommand implements Callable<Integer> {
             return fromModelFile(formats);
         }
         int rows = rows();
-        long root = seed == null ? 1L : seed;
+        long root = seed.value();
         Map<String, String> kinds = new LinkedHashMap<>();
         Map<String, String> chosen = TruthOptions.options();
         truthOptions().forEach((option, value) -> {
@@ -251,12 +249,12 @@ final class SimulateCommand implements Callable<Integer> {
             throw new UsageException("--model: " + model + ": no such file");
         }
         TruthParameters parameters = ModelFile.read(file);
-        SimulatedTruth truth = seed == null ? parameters.truth() : parameters.truth(Seeds.derive(seed, "data"));
+        SimulatedTruth truth = seed.given() ? parameters.truth(Seeds.derive(seed.value(), "data")) : parameters.truth();
         Replicate rep = GeneratorSimulator.replicate(truth, rows);
         write(out, truth, rep.data(), "from " + file.getFileName(), formats);
         PrintWriter w = spec.commandLine().getOut();
         w.printf(Locale.ROOT, "wrote %,d rows of %d variables (the truth of %s; %s) to %s: %s%n", rows,
-                rep.data().columns(), file, seed == null ? "its own data seed" : "new data with seed " + seed, out,
+                rep.data().columns(), file, seed.given() ? "new data with seed " + seed.value() : "its own data seed", out,
                 String.join(", ", files(truth.dag(), formats)));
         w.flush();
         return Main.DONE;

@@ -40,7 +40,7 @@ class CalibrateCommandTest {
         GraphJson.write(graph, asia.dag());
         Path out = tmp.resolve("out");
         CliTest.Result r = CliTest.cli("calibrate", "--data", data.toString(), "--graph", graph.toString(),
-                "--learners", "pc,ges", "--replicates", "6", "--variants", "1", "--bootstrap", "4", "--threads", "2",
+                "--learner", "pc,ges", "--replicates", "6", "--variants", "1", "--bootstrap", "4", "--threads", "2",
                 "--out", out.toString(), "--seed", "3");
         assertEquals(0, r.status(), r.err());
         assertTrue(r.err().contains("asia: discrete"), r.err());
@@ -83,11 +83,11 @@ class CalibrateCommandTest {
         Path data = tmp.resolve("asia.csv");
         DataCsv.write(data, ReferenceNetworks.chestClinic().model().sample(1000, 7));
         Path out = tmp.resolve("refused");
-        CliTest.Result r = CliTest.cli("calibrate", "--data", data.toString(), "--learners", "pc,direct-lingam",
+        CliTest.Result r = CliTest.cli("calibrate", "--data", data.toString(), "--learner", "pc,direct-lingam",
                 "--replicates", "2", "--out", out.toString());
         assertEquals(2, r.status(), r.err());
         String last = r.err().strip().lines().reduce((a, b) -> b).orElse("");
-        assertEquals("error: --learners: direct-lingam does not accept discrete data (it takes continuous); leave it"
+        assertEquals("error: --learner: direct-lingam does not accept discrete data (it takes continuous); leave it"
                 + " out or declare the column kinds with --kinds", last, r.err());
         assertTrue(!Files.exists(out), "nothing written");
     }
@@ -111,7 +111,7 @@ class CalibrateCommandTest {
         Files.writeString(data, csv.toString());
         Path out = tmp.resolve("out");
         CliTest.Result r = CliTest.cli("calibrate", "--data", data.toString(), "--discrete", "smoke,lung,bronc,dysp",
-                "--learners", "pc", "--set", "pc.alpha=0.05", "--replicates", "4", "--variants", "1", "--bootstrap", "3", "--threads", "2",
+                "--learner", "pc", "--set", "pc.alpha=0.05", "--replicates", "4", "--variants", "1", "--bootstrap", "3", "--threads", "2",
                 "--samples", "200,400", "--out", out.toString());
         assertEquals(0, r.status(), r.err());
         assertTrue(r.err().contains("smoke: discrete (declared)"), r.err());
@@ -132,27 +132,27 @@ class CalibrateCommandTest {
         assertEquals(1, r.err().strip().lines().count(), r.err());
         Path ok = tmp.resolve("ok.csv");
         Files.writeString(ok, "a,b\n1,2\n3,5\n2,2\n4,1\n5,3\n");
-        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "no-such-learner");
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learner", "no-such-learner");
         assertEquals(2, r.status());
-        assertTrue(r.err().contains("--learners: unknown learner 'no-such-learner'"), r.err());
-        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "pc.alpha=7");
+        assertTrue(r.err().contains("--learner: unknown learner 'no-such-learner'"), r.err());
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learner", "pc", "--set", "pc.alpha=7");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set: ") && r.err().contains("alpha"), r.err());
         // as for learn and simulate (Settings), a parameter set twice is refused rather than the last one winning
-        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "pc.alpha=0.01",
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learner", "pc", "--set", "pc.alpha=0.01",
                 "--set", "pc.alpha=0.05");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set pc.alpha=0.05: ") && r.err().contains("set twice"), r.err());
-        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc", "--set", "alpha=0.01");
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learner", "pc", "--set", "alpha=0.01");
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: --set alpha=0.01: expected ID.NAME=VALUE"), r.err());
         // a size or learner given twice made duplicate runs (same keys), reported as runs that did not finish
         r = CliTest.cli("calibrate", "--data", ok.toString(), "--samples", "4,8,4");
         assertEquals(2, r.status());
         assertEquals("error: --samples: 4 is listed twice", r.err().strip());
-        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learners", "pc,ges,pc");
+        r = CliTest.cli("calibrate", "--data", ok.toString(), "--learner", "pc,ges,pc");
         assertEquals(2, r.status());
-        assertEquals("error: --learners: pc is listed twice", r.err().strip());
+        assertEquals("error: --learner: pc is listed twice", r.err().strip());
                 r = CliTest.cli("calibrate", "--data", ok.toString(), "--truth-learner", "fci");
         assertEquals(2, r.status());
         assertTrue(r.err().contains("error: --truth-learner fci: it returns a pag"), r.err());

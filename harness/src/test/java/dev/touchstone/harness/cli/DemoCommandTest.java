@@ -66,7 +66,7 @@ class DemoCommandTest {
         assertTrue(html.contains("Read these results with care"), "the report carries the cautions");
         assertTrue(!html.contains("(partial)"), "a finished study is not marked partial");
 
-        String[] again = run("report", out.toString(), "--to", dir.resolve("again").toString());
+        String[] again = run("report", out.toString(), "--out", dir.resolve("again").toString());
         assertEquals("0", again[0], again[2]);
         assertEquals(Files.readString(out.resolve("report.md")), Files.readString(dir.resolve("again/report.md")),
                 "re-rendering from the journal gives the same tables");
