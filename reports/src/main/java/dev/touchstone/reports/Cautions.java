@@ -2,7 +2,7 @@ package dev.touchstone.reports;
 
 import java.util.List;
 
-/** The short cautions every report carries (design §12), in one place. */
+/** The short cautions every report carries (causal conclusions can mislead decisions about people), in one place. */
 public final class Cautions {
 
     /** The heading above the cautions. */

@@ -28,7 +28,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * The Spark engine on {@code local[2]} against the local engine, through the command line:
  * same runs.csv apart from timing columns, resume from a journal the local engine wrote, a
  * task that dies is retried. The reference is the local engine, whose determinism is
- * checked in the harness (StudyRunnerTest); the equality itself is design §6's rule that
+ * checked in the harness (StudyRunnerTest); the equality itself is the rule that
  * results do not depend on where or in which order runs are performed.
  */
 class SparkEngineTest {
@@ -90,7 +90,7 @@ class SparkEngineTest {
     }
 
     @Test
-    @DisplayName("local[2] gives the local engine's runs.csv and summary apart from timing columns (design §6)")
+    @DisplayName("local[2] gives the local engine's runs.csv and summary apart from timing columns")
     void sparkEqualsLocal() throws IOException {
         Path spark = tmp.resolve("spark");
         Result r = cli("run", study.toString(), "--out", spark.toString(), "--engine", "spark", "--master", "local[2]",

@@ -35,7 +35,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * executor as a separate JVM from the cluster's own class path, so tasks are serialised, the
  * engine's classes reach the executor through {@code spark.jars} and a killed executor is a
  * lost JVM, none of which {@code local[N]} exercises. Reference: the local engine's runs.csv
- * (design §6, results do not depend on where runs are performed); retries after a lost
+ * (results do not depend on where runs are performed); retries after a lost
  * executor are Spark's documented behaviour for {@code spark.task.maxFailures}. The master and
  * the worker are stopped after the class, and live at most ten minutes in any case.
  */
@@ -181,7 +181,7 @@ class StandaloneClusterTest {
     }
 
     @Test
-    @DisplayName("a standalone master gives the local engine's runs.csv apart from timing columns (design §6)")
+    @DisplayName("a standalone master gives the local engine's runs.csv apart from timing columns")
     void standaloneEqualsLocal() throws IOException {
         Path study = study("small", 4, "[5, 8]", "[100, 400, oracle]");
         Path local = locally(study, "local");

@@ -14,7 +14,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-/** Command learners on a cluster's workers (design §5: commands run only where the user allowed them). */
+/** Command learners on a cluster's workers (commands run only where the user allowed them). */
 class WorkerCheckTest {
 
     private static final String STUDY = "name: cmd\nseed: 1\nreplicates: 1\n"

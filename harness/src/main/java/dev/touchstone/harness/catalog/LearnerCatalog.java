@@ -16,7 +16,7 @@ import java.util.ServiceLoader;
  *
  * <p>Command learners only ever enter through {@link Builder#addCommand}, which the command
  * line calls for a learners file given with {@code --learners}; a study file alone can
- * never make one runnable (design §5).
+ * never make one runnable: only the user, by naming the file, lets a command run.
  */
 public final class LearnerCatalog {
 

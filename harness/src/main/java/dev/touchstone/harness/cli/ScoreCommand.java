@@ -126,7 +126,7 @@ public final class ScoreCommand implements Callable<Integer> {
     private Truth truthFor(Graph t, GraphClass estimateClass) {
         boolean isDag = t.isFullyDirected() && Ancestry.topologicalOrder(t) != null;
         if (isDag) {
-            // A generating DAG (hidden variables flagged) gives the truth of the estimate's class (design §3).
+            // A generating DAG (hidden variables flagged) gives the truth of the estimate's class (TruthSelection).
             try {
                 return TruthSelection.forEstimate(t, estimateClass);
             } catch (IllegalArgumentException e) {

@@ -14,7 +14,7 @@ import java.util.Map;
 
 /**
  * The scorer over the metrics module: the truth of the estimate's class comes from
- * {@code TruthSelection.forEstimate} (design §3: DAG → true DAG or, with hidden variables, the
+ * {@code TruthSelection.forEstimate} (DAG → true DAG or, with hidden variables, the
  * true MAG; CPDAG → true CPDAG or PAG; PAG → true PAG), and the requested metrics from
  * {@code dev.touchstone.metrics.scoring.Scorer}. Cost: building the truth (the PAG construction
  * when variables are hidden) plus the metrics. Extra metrics ({@code METRIC_vs_CLASS}, a
@@ -62,7 +62,7 @@ public final class MetricsScorer implements Scorer {
         return out;
     }
 
-    /** The truth an estimate of this class is scored against (the metrics module's selection, design §3). */
+    /** The truth an estimate of this class is scored against (the metrics module's selection). */
     static Truth truthFor(Graph dag, GraphClass estimateClass) {
         return TruthSelection.forEstimate(dag, estimateClass);
     }

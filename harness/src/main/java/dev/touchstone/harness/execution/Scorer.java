@@ -8,7 +8,7 @@ import java.util.Map;
 
 /**
  * Scores an estimate against the truth of its class derived from the replicate's DAG
- * (design §3). Implemented over the metrics module; thread-safe.
+ * (TruthSelection). Implemented over the metrics module; thread-safe.
  */
 public interface Scorer {
 

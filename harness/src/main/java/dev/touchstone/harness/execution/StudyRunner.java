@@ -25,7 +25,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import java.util.stream.Stream;
 
 /**
- * Runs or resumes an expanded study in an output folder and writes its files (design §7):
+ * Runs or resumes an expanded study in an output folder and writes its files:
  * {@code study.yaml}, {@code provenance.json}, {@code journal.jsonl}, {@code runs.csv},
  * {@code summary.csv}, {@code comparisons.csv}, each written whole or not at all.
  *

@@ -32,7 +32,7 @@ public record CommandSpec(LearnerDescription description, List<String> command, 
         this(description, command, output, dir, source, false);
     }
 
-    /** The graph formats a command may write (design §10). */
+    /** The graph formats a command may write (those of docs/formats.md). */
     public enum OutputFormat {
         JSON("json", "estimate.json"), CSV("csv", "estimate.csv");
 

@@ -19,7 +19,7 @@ import java.util.Set;
 
 /**
  * Reads a learners file: the external commands a user allows to run, passed with
- * {@code --learners FILE} (design §5: a study file alone can never make a command run).
+ * {@code --learners FILE} (a study file alone can never make a command run: the user names the learners file).
  *
  * <pre>
  * learners:

@@ -43,7 +43,7 @@ import java.util.Set;
 
 /**
  * Gathers a study's report data from its plan and the runs recorded so far, and writes
- * {@code report.html} and {@code report.md} (design §7), each whole or not at all.
+ * {@code report.html} and {@code report.md} in the output folder, each whole or not at all.
  *
  * <p>Aggregates, comparisons and rankings come from the metrics module, seeded from the
  * study seed, so a report re-rendered later shows the same numbers. The sortability audit

@@ -122,7 +122,7 @@ class CalibrateCommandTest {
     }
 
     @Test
-    @DisplayName("bad data and bad options: exit 2 with one line 'error: …' naming the file or option (design §4, §9)")
+    @DisplayName("bad data and bad options: exit 2 with one line 'error: …' naming the file or option")
     void badInput() throws IOException {
         Path ragged = tmp.resolve("ragged.csv");
         Files.writeString(ragged, "a,b\n1,2\n3\n");

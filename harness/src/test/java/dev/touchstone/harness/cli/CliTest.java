@@ -17,7 +17,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-/** The verbs through {@link Main#execute}: exit status and error style of design §9. */
+/** The verbs through {@link Main#execute}: exit status (0 done, 1 failed, 2 bad input) and one-line {@code error:} messages. */
 class CliTest {
 
     static final Path ROOT = Path.of("..").toAbsolutePath().normalize();

@@ -14,7 +14,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * {@code run --engine/--master} without the spark module on the class path (as in the
- * harness's own tests): usage errors of design §9, one line each, nothing run.
+ * harness's own tests): usage errors are exit 2 with one line each, and nothing runs.
  */
 class RunEngineOptionTest {
 

@@ -30,7 +30,7 @@ class MetricsScorerTest {
     @Test
     @DisplayName("a DAG estimate equal to the true chain a→b→c: SHD 0 against the DAG, 2 against its CPDAG a—b—c")
     void dagEstimateAgainstTheCpdag() {
-        // By hand, with the SHD of Tsamardinos, Brown and Aliferis (2006) as design §8 defines it (each pair whose
+        // By hand, with the SHD of Tsamardinos, Brown and Aliferis (2006) as docs/dev/metrics.md defines it (each pair whose
         // marks differ counts once): the chain's CPDAG leaves both edges undirected (no v-structure; Meek 1995),
         // so the directed estimate differs from it on both pairs.
         Graph dag = chain(Set.of());

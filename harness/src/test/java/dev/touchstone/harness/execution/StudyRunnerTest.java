@@ -65,7 +65,7 @@ class StudyRunnerTest {
     }
 
     @Test
-    @DisplayName("1 thread, 2 threads and shuffled order give identical runs.csv apart from timing columns (design §6)")
+    @DisplayName("1 thread, 2 threads and shuffled order give identical runs.csv apart from timing columns (results never depend on execution order)")
     void deterministic() throws IOException {
         Plan plan = TestWorld.plan(STUDY);
         Path a = tmp.resolve("a");

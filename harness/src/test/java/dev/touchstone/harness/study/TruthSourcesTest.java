@@ -135,7 +135,7 @@ class TruthSourcesTest {
     }
 
     @Test
-    @DisplayName("moving a study with its graph file to another folder keeps run keys and seeds (design §6: keys from definitions)")
+    @DisplayName("moving a study with its graph file to another folder keeps run keys and seeds (run keys derive from definitions, not paths)")
     void givenGraphMoved() throws IOException {
         Graph g = chain("rain", "soil", "slugs", "yield");
         String yaml = HEAD + "truth:\n  graph: {family: given, file: g.json}\n  model: {kind: linear-gaussian}\n" + TAIL;

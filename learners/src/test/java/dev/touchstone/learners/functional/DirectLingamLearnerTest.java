@@ -125,7 +125,7 @@ class DirectLingamLearnerTest {
     }
 
     @Test
-    @DisplayName("The causal order is the same with 1 and 3 threads (design §6: results identical for any thread count)")
+    @DisplayName("The causal order is the same with 1 and 3 threads (results identical for any thread count)")
     void threadCountDoesNotChangeTheOrder() {
         SimulatedReplicate r = uniformNoise(12).drawTruth(21).sample(1000);
         int[] one = DirectLingamLearner.causalOrder(r.data(), RunContext.unlimited(1));

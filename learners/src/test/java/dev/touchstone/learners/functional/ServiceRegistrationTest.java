@@ -13,7 +13,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class ServiceRegistrationTest {
 
     @Test
-    @DisplayName("DirectLiNGAM and NOTEARS are found by Java's service loader (design §5: listed and usable by id)")
+    @DisplayName("DirectLiNGAM and NOTEARS are found by Java's service loader (so they are listed and usable by id)")
     void bothLearnersAreRegistered() {
         Set<String> ids = new HashSet<>();
         for (Learner l : ServiceLoader.load(Learner.class)) {

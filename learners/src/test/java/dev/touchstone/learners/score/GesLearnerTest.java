@@ -65,7 +65,7 @@ class GesLearnerTest {
     }
 
     @Test
-    @DisplayName("results do not depend on the thread count (design: determinism)")
+    @DisplayName("results do not depend on the thread count")
     void threadCountDoesNotMatter() {
         Graph dag = RandomDags.erdosRenyi(40, 2.0, 5);
         DataSet data = ScoreData.linearGaussian(dag, 500, 3);

@@ -1,2 +1,2 @@
-/** Metrics comparing an estimated graph with the truth, each defined exactly (design §8), and the registry of all metric names. */
+/** Metrics comparing an estimated graph with the truth, each defined exactly (definitions in docs/dev/metrics.md), and the registry of all metric names. */
 package dev.touchstone.metrics.scoring;

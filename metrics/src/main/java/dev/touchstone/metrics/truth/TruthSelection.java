@@ -10,8 +10,8 @@ import dev.touchstone.core.graph.algorithms.Pags;
 import java.util.Objects;
 
 /**
- * Chooses the truth an estimate is scored against, from the generating DAG and its hidden flags
- * (design §3): by default the graph of the estimate's own class, so that a CPDAG learner is
+ * Chooses the truth an estimate is scored against, from the generating DAG and its hidden
+ * flags: by default the graph of the estimate's own class, so that a CPDAG learner is
  * never charged for orientations no learner could know, and a PAG learner is scored against
  * the PAG.
  *
@@ -46,7 +46,7 @@ public final class TruthSelection {
         }
     }
 
-    /** The default truth for an estimate of {@code estimateClass} (design §3). */
+    /** The default truth for an estimate of {@code estimateClass}: the truth of its own class. */
     public static Truth forEstimate(Graph generatingDag, GraphClass estimateClass) {
         Objects.requireNonNull(estimateClass, "estimateClass");
         return as(generatingDag, defaultClass(estimateClass, generatingDag.hasHidden()));

@@ -38,7 +38,7 @@ class GraphComparisonTest {
     }
 
     @Test
-    @DisplayName("one-pass counts equal a pair-by-pair count straight from the definitions of design §8, on seeded random mixed graphs")
+    @DisplayName("one-pass counts equal a pair-by-pair count straight from the definitions (docs/dev/metrics.md), on seeded random mixed graphs")
     void countsMatchDefinitions() {
         for (int seed = 0; seed < 200; seed++) {
             int n = 2 + seed % 12;
@@ -186,7 +186,7 @@ class GraphComparisonTest {
     }
 
     @Test
-    @DisplayName("the registry lists every metric of design §8 once, each with a direction, a range and classes")
+    @DisplayName("the registry lists every defined metric once, each with a direction, a range and classes")
     void registry() {
         for (String name : List.of("shd", "adjacency_precision", "adjacency_recall", "adjacency_f1", "orientation_precision",
                 "orientation_recall", "orientation_f1", "directed_tpr", "directed_fdr", "directed_fpr", "sid", "sid_lower",

@@ -68,7 +68,7 @@ class HandWorkedMetricsTest {
     }
 
     @Test
-    @DisplayName("CPDAG against CPDAG: Pearl's sprinkler CPDAG (Pearl 2000, ch. 1) with undirected edges scored as design §8 and Zheng et al. 2018 say")
+    @DisplayName("CPDAG against CPDAG: Pearl's sprinkler CPDAG (Pearl 2000, ch. 1) with undirected edges scored as Zheng et al. 2018 say")
     void cpdagAgainstCpdag() {
         // season 0, sprinkler 1, rain 2, wet 3, slippery 4
         List<String> v = List.of("season", "sprinkler", "rain", "wet", "slippery");
@@ -125,7 +125,7 @@ class HandWorkedMetricsTest {
     }
 
     @Test
-    @DisplayName("PAG against PAG: arrowheads and tails with circles (endpoint definitions of design §8)")
+    @DisplayName("PAG against PAG: arrowheads and tails with circles (endpoint definitions of docs/dev/metrics.md)")
     void pagAgainstPag() {
         List<String> v = List.of("A", "B", "C", "D");
         MutableGraph t = Graph.builder(v);
@@ -165,7 +165,7 @@ class HandWorkedMetricsTest {
     }
 
     @Test
-    @DisplayName("undefined ratios are null, never 0 or 1 (design §8); equal graphs are exact with SHD 0")
+    @DisplayName("undefined ratios are null, never 0 or 1; equal graphs are exact with SHD 0")
     void undefinedRatios() {
         List<String> v = List.of("A", "B", "C");
         Graph empty = Graph.empty(v);

@@ -28,7 +28,7 @@ class TruthSelectionTest {
     }
 
     @Test
-    @DisplayName("default classes follow the table of design §3")
+    @DisplayName("default truths: DAG for a DAG, CPDAG for a CPDAG (PAG with hidden variables), PAG for a PAG")
     void defaults() {
         assertEquals(GraphClass.DAG, TruthSelection.defaultClass(GraphClass.DAG, false));
         assertEquals(GraphClass.MAG, TruthSelection.defaultClass(GraphClass.DAG, true));
@@ -82,7 +82,7 @@ class TruthSelectionTest {
         Graph dagEstimate = Graph.builder(observed).addDirected(0, 1).addDirected(0, 2).freeze();
         Map<String, Double> m = Scorer.scoreAll(mag, dagEstimate, GraphClass.DAG);
         // {A,B}: A → B against A ↔ B differs at A; {A,C} agrees: SHD 1. A → B puts its tail where the MAG has an
-        // arrowhead: reversed (Zheng et al. 2018 rule as extended in design §8); A → C a hit: TPR 1/2.
+        // arrowhead: reversed (Zheng et al. 2018 rule, extended to marks as in docs/dev/metrics.md); A → C a hit: TPR 1/2.
         assertEquals(1.0, m.get("shd"));
         assertEquals(0.5, m.get("directed_tpr"));
         assertNull(m.get("sid"));   // SID is defined against a DAG over the same variables
@@ -102,7 +102,7 @@ class TruthSelectionTest {
     }
 
     @Test
-    @DisplayName("nothing hidden: the MAG is the DAG itself (Richardson and Spirtes 2002); the PAG has the CPDAG's skeleton (design §3)")
+    @DisplayName("nothing hidden: the MAG is the DAG itself (Richardson and Spirtes 2002); the PAG has the CPDAG's skeleton")
     void magWithoutHidden() {
         Truth t = TruthSelection.as(sprinkler(), GraphClass.MAG);
         assertEquals(sprinkler(), t.reference());

@@ -14,7 +14,7 @@ import java.util.Locale;
 
 /**
  * The calibration report in HTML (self-contained, charts as inline SVG from the same chart
- * code as the study report) and in Markdown. The cautions of design §12 come first, with
+ * code as the study report) and in Markdown. The cautions ({@link dev.touchstone.reports.Cautions}) come first, with
  * one more line, because this report is the one most likely to be read as a verdict on
  * real data. Cost: linear in the view, plus one chart per metric.
  */

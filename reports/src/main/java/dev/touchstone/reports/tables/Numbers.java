@@ -4,7 +4,7 @@ import java.util.Locale;
 
 /**
  * Number formatting for tables: undefined values (null or NaN) print as "n/a", never as
- * 0 or 1 (design §8); fixed significant digits otherwise.
+ * 0 or 1 (a ratio with a zero denominator is undefined); fixed significant digits otherwise.
  */
 public final class Numbers {
 

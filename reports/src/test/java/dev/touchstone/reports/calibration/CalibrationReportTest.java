@@ -50,7 +50,7 @@ class CalibrationReportTest {
     }
 
     @Test
-    @DisplayName("the report opens with the cautions of design §12 and states warnings before any figure")
+    @DisplayName("the report opens with the cautions and states warnings before any figure")
     void cautionsFirst() {
         CalibrationView v = new CalibrationView("Calibration", List.of("data.csv: 400 rows"), List.of("truth given"),
                 List.of("MCAR"), List.of("x is missing in 30% of rows."), 400, 400, List.of("pc"),
