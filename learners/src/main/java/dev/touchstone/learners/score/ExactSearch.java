@@ -4,7 +4,10 @@ import dev.touchstone.core.learner.RunContext;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashSet;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Set;
 
 /**
  * The highest-scoring DAG under a decomposable score, found exactly by dynamic programming
@@ -229,8 +232,8 @@ final class ExactSearch {
     /** The result of walking the tied decisions: the distinct optimal DAGs met and whether the walk was complete. */
     final class TieWalk {
         private final int budget;
-        private final java.util.Set<Key> seen = new java.util.HashSet<>();
-        private final java.util.Set<Key> dags = new java.util.LinkedHashSet<>();
+        private final Set<Key> seen = new HashSet<>();
+        private final Set<Key> dags = new LinkedHashSet<>();
         private boolean complete = true;
 
         private TieWalk(int budget) {
@@ -266,6 +269,9 @@ final class ExactSearch {
             if (seen.size() > budget) {
                 complete = false;
                 return;
+            }
+            if ((seen.size() & 0xFF) == 0) {
+                context.checkDeadline();
             }
             if (w == 0) {
                 dags.add(new Key(0, parents.clone()));
