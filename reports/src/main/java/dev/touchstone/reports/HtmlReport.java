@@ -50,6 +50,7 @@ public final class HtmlReport {
         runtime(page, view);
         precisionRecall(page, view);
         comparison(page, view);
+        searchGap(page, view);
         audit(page, view);
         pictures(page, data);
         failures(page, data);
@@ -100,7 +101,7 @@ public final class HtmlReport {
         ReportData data = view.data();
         page.section("metrics", "Metrics");
         boolean any = false;
-        for (String metric : data.metrics()) {
+        for (String metric : view.headlineMetrics()) {
             if (metric.equals("seconds")) {
                 continue;
             }
@@ -224,6 +225,17 @@ public final class HtmlReport {
             }
         }
         return values.isEmpty() ? null : values.stream().mapToDouble(Double::doubleValue).average().getAsDouble();
+    }
+
+    /** The search gap of the score-based learners, when the study asks for it. */
+    private static void searchGap(HtmlPage page, StudyView view) {
+        Table t = view.searchGap();
+        if (t.isEmpty()) {
+            return;
+        }
+        page.section("search-gap", "Search gap");
+        page.paragraph(StudyView.SEARCH_GAP_READING);
+        page.table(t);
     }
 
     private static void comparison(HtmlPage page, StudyView view) {

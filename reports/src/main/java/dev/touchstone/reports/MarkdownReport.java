@@ -53,6 +53,10 @@ public final class MarkdownReport {
                     .append(" p-values, Holm-adjusted across configurations.\n\n");
             sb.append(MarkdownTable.render(view.comparisons())).append('\n');
         }
+        if (!view.searchGap().isEmpty()) {
+            sb.append("## Search gap\n\n").append(StudyView.SEARCH_GAP_READING).append("\n\n");
+            sb.append(MarkdownTable.render(view.searchGap())).append('\n');
+        }
         sb.append("## ").append(Cautions.HEADING).append("\n\n");
         for (String line : Cautions.LINES) {
             sb.append("- ").append(line).append('\n');

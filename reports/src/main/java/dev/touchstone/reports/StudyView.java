@@ -5,6 +5,7 @@ import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.RunStatus;
 import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.results.Summary;
+import dev.touchstone.metrics.scoring.SearchGapMeasure;
 import dev.touchstone.reports.tables.Cell;
 import dev.touchstone.reports.tables.Numbers;
 import dev.touchstone.reports.tables.Table;
@@ -173,10 +174,10 @@ final class StudyView {
         List<String> cols = new ArrayList<>();
         cols.add("learner configuration");
         cols.add("ok runs");
-        cols.addAll(data.metrics());
+        cols.addAll(headlineMetrics());
         Table.Builder t = Table.builder(cols);
         Map<String, Double> best = new LinkedHashMap<>();
-        for (String m : data.metrics()) {
+        for (String m : headlineMetrics()) {
             Boolean higher = data.higherIsBetter(m);
             if (higher == null) {
                 continue;
@@ -207,7 +208,7 @@ final class StudyView {
             List<Cell> row = new ArrayList<>();
             row.add(Cell.of(c));
             row.add(Cell.of(Integer.toString(ok)));
-            for (String m : data.metrics()) {
+            for (String m : headlineMetrics()) {
                 Summary s = pool.get(c).get(m);
                 boolean isBest = s.mean() != null && best.containsKey(m) && s.mean().equals(best.get(m));
                 row.add(new Cell(Numbers.withInterval(s.mean(), s.low(), s.high()), isBest));
@@ -215,6 +216,97 @@ final class StudyView {
             t.row(row);
         }
         return new Headline(title, t.build(), notRun);
+    }
+
+    /**
+     * The chosen metrics shown in the headline and the charts: all but the search-gap
+     * measures, whose raw scores mean nothing pooled over settings; they get {@link #searchGap}.
+     */
+    List<String> headlineMetrics() {
+        List<String> out = new ArrayList<>();
+        for (String m : data.metrics()) {
+            if (!SearchGapMeasure.isOne(m)) {
+                out.add(m);
+            }
+        }
+        return out;
+    }
+
+    /** Relative slack within which a run counts as having reached the optimum's score. */
+    static final double AT_OPTIMUM = 1e-6;
+
+    /** The two sentences saying how to read {@link #searchGap}. */
+    static final String SEARCH_GAP_READING = "The score's own error (SHD optimum vs truth) is how far the best-scoring"
+            + " equivalence class lies from the truth at this sample size: no search with this score can do better;"
+            + " the search's error (score and SHD of the estimate against that optimum) is what the learner's search"
+            + " left on the table. With the oracle the score's own error is zero by construction (at its 10⁹ rows the BIC ranks the"
+            + " true class of a faithful truth first), so every error there is the search's.";
+
+    /**
+     * Per setting and configuration whose score is known: runs scored, runs with an exact
+     * optimum, how many reached its score (within {@value #AT_OPTIMUM} relative), the mean
+     * shortfall in score and SHD, the mean SHD of the optimum from the truth, and the mean of
+     * estimate minus truth in score. Empty when the study asks for no search-gap measure.
+     */
+    Table searchGap() {
+        Table.Builder t = Table.builder(List.of("setting", "learner configuration", "runs scored", "with optimum",
+                "at optimum", "mean score gap (optimum − estimate)", "mean SHD estimate vs optimum",
+                "mean SHD optimum vs truth", "mean score estimate − truth"));
+        if (data.metrics().stream().noneMatch(SearchGapMeasure::isOne)) {
+            return t.build();
+        }
+        for (Setting setting : settings()) {
+            for (String c : configurations()) {
+                int scored = 0;
+                int withOptimum = 0;
+                int atOptimum = 0;
+                List<Double> gap = new ArrayList<>();
+                List<Double> searchShd = new ArrayList<>();
+                List<Double> scoreShd = new ArrayList<>();
+                List<Double> overTruth = new ArrayList<>();
+                for (RunResult r : data.runs()) {
+                    if (!r.configurationId().equals(c) || !r.setting().equals(setting)) {
+                        continue;
+                    }
+                    Double est = r.value(SearchGapMeasure.SCORE_OF_ESTIMATE.name());
+                    if (est == null) {
+                        continue;
+                    }
+                    scored++;
+                    Double truth = r.value(SearchGapMeasure.SCORE_OF_TRUTH.name());
+                    if (truth != null) {
+                        overTruth.add(est - truth);
+                    }
+                    Double opt = r.value(SearchGapMeasure.SCORE_OF_OPTIMUM.name());
+                    Double g = r.value(SearchGapMeasure.SEARCH_SCORE_GAP.name());
+                    if (opt == null || g == null) {
+                        continue;
+                    }
+                    withOptimum++;
+                    atOptimum += g <= AT_OPTIMUM * Math.max(1, Math.abs(opt)) ? 1 : 0;
+                    gap.add(g);
+                    add(searchShd, r.value(SearchGapMeasure.SEARCH_SHD.name()));
+                    add(scoreShd, r.value(SearchGapMeasure.SCORE_SHD.name()));
+                }
+                if (scored == 0) {
+                    continue;
+                }
+                t.row(setting.label(), c, Integer.toString(scored), Integer.toString(withOptimum),
+                        withOptimum == 0 ? Numbers.UNDEFINED : Integer.toString(atOptimum), Numbers.format(mean(gap)),
+                        Numbers.format(mean(searchShd)), Numbers.format(mean(scoreShd)), Numbers.format(mean(overTruth)));
+            }
+        }
+        return t.build();
+    }
+
+    private static void add(List<Double> values, Double v) {
+        if (v != null) {
+            values.add(v);
+        }
+    }
+
+    private static Double mean(List<Double> values) {
+        return values.isEmpty() ? null : values.stream().mapToDouble(Double::doubleValue).average().getAsDouble();
     }
 
     /** The paired comparisons as a table (differences are configuration − reference). */

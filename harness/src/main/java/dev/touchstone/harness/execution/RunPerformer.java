@@ -1,6 +1,7 @@
 package dev.touchstone.harness.execution;
 
 import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.Learner;
@@ -15,6 +16,7 @@ import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.RunStatus;
 import dev.touchstone.metrics.results.Setting;
 import dev.touchstone.metrics.results.Timings;
+import dev.touchstone.metrics.scoring.SearchGapMeasure;
 
 import java.lang.management.ManagementFactory;
 import java.lang.management.ThreadMXBean;
@@ -78,9 +80,9 @@ public final class RunPerformer {
         long alloc0 = allocatedBytes(threadId);
         long t0 = System.nanoTime();
         Estimate estimate;
+        Knowledge knowledge = replicate.knowledge(run.config().knowledge());
         try {
-            estimate = learner.learn(input, replicate.knowledge(run.config().knowledge()), run.config().values(),
-                    context);
+            estimate = learner.learn(input, knowledge, run.config().values(), context);
             if (estimate == null) {
                 throw new LearnerException("learner " + d.id() + " returned no estimate");
             }
@@ -99,13 +101,18 @@ public final class RunPerformer {
         Timings t = timings(t0, cpu0, alloc0, threadId, context);
         List<String> structural = new ArrayList<>();
         for (String m : run.metrics()) {
-            if (!Scorer.MEASURED.contains(m)) {
+            if (!Scorer.MEASURED.contains(m) && !SearchGapMeasure.isOne(m)) {
                 structural.add(m);
             }
         }
         Scorer.Scored scored;
+        Map<String, Double> gap = Map.of();
         try {
             scored = scorer.score(replicate, estimate, structural);
+            if (SearchGapScorer.wanted(run.metrics())) {
+                gap = SearchGapScorer.score(learner, input, run.config().values(), knowledge, replicate.trueDag(),
+                        estimate, run.limit());
+            }
         } catch (RuntimeException e) {
             return result(run, RunStatus.FAILED, "scoring failed: " + message(e), estimate.graphClass(), null,
                     Map.of(), t);
@@ -114,6 +121,12 @@ public final class RunPerformer {
         for (String m : structural) {
             Double v = scored.values().get(m);
             values.put(m, v == null || !Double.isFinite(v) ? null : v);
+        }
+        for (String m : run.metrics()) {
+            if (SearchGapMeasure.isOne(m)) {
+                Double v = gap.get(m);
+                values.put(m, v == null || !Double.isFinite(v) ? null : v);
+            }
         }
         return result(run, RunStatus.OK, null, estimate.graphClass(), scored.scoredAgainst(), values, t);
     }

@@ -3,6 +3,7 @@ package dev.touchstone.harness.study;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.metrics.against.MetricAgainst;
 
+import dev.touchstone.metrics.scoring.SearchGapMeasure;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -52,7 +53,7 @@ public record Study(String name, String description, long seed, int replicates, 
         List<String> out = new ArrayList<>(metrics);
         for (GraphClass c : against) {
             for (String m : metrics) {
-                if (!MetricCatalog.MEASURED.contains(m)) {
+                if (!MetricCatalog.MEASURED.contains(m) && !SearchGapMeasure.isOne(m)) {
                     out.add(new MetricAgainst(m, c).name());
                 }
             }

@@ -65,6 +65,12 @@ class DemoCommandTest {
         assertTrue(html.contains("<svg"), "the report has charts");
         assertTrue(html.contains("Read these results with care"), "the report carries the cautions");
         assertTrue(!html.contains("(partial)"), "a finished study is not marked partial");
+        String md = Files.readString(out.resolve("report.md"));
+        int gap = md.indexOf("## Search gap");
+        assertTrue(gap > 0 && md.indexOf("| ges |", gap) > 0 && md.indexOf("| pc |", gap) < 0,
+                "the search gap of the score-based learner, and only of it: " + md);
+        assertTrue(Files.readString(out.resolve("runs.csv")).lines().findFirst().orElseThrow()
+                .contains(",search_score_gap,search_shd,score_shd,"), "search-gap columns in runs.csv");
 
         String[] again = run("report", out.toString(), "--out", dir.resolve("again").toString());
         assertEquals("0", again[0], again[2]);

@@ -12,6 +12,7 @@ import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.independence.ContingencyTest;
 import dev.touchstone.learners.independence.IndependenceTest;
 import dev.touchstone.learners.independence.IndependenceTests;
 import dev.touchstone.learners.independence.MissingPolicy;
@@ -30,9 +31,10 @@ final class ConstraintParameters {
     private ConstraintParameters() {
     }
 
-    /** The shared declarations: test, alpha, missing, max_depth, skeleton. */
+    /** The shared declarations: test, alpha, missing, max_depth, skeleton, degrees_of_freedom. */
     static List<ParameterSpec> shared() {
-        return List.of(IndependenceTests.TEST, IndependenceTests.ALPHA, IndependenceTests.MISSING, MAX_DEPTH, SKELETON);
+        return List.of(IndependenceTests.TEST, IndependenceTests.ALPHA, IndependenceTests.MISSING, MAX_DEPTH, SKELETON,
+                IndependenceTests.DEGREES_OF_FREEDOM);
     }
 
     /**
@@ -63,7 +65,8 @@ final class ConstraintParameters {
     static IndependenceTest test(LearnerInput input, ParameterValues values) {
         return IndependenceTests.forInput(input, values.getString(IndependenceTests.TEST.name()),
                 values.getDouble(IndependenceTests.ALPHA.name()),
-                MissingPolicy.parse(values.getString(IndependenceTests.MISSING.name())));
+                MissingPolicy.parse(values.getString(IndependenceTests.MISSING.name())),
+                ContingencyTest.DegreesOfFreedom.parse(values.getString(IndependenceTests.DEGREES_OF_FREEDOM.name())));
     }
 
     static KnowledgeIndex knowledge(Knowledge knowledge, List<String> names) {

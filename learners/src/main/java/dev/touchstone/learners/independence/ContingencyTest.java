@@ -11,12 +11,16 @@ import java.util.Arrays;
  * (Agresti 2002, "Categorical data analysis", §3.2 and §6.3; Spirtes, Glymour and Scheines
  * 2000, §5.4.2).
  *
- * <p>Degrees of freedom, a declared rule (common practice): each stratum with data
- * contributes (r − 1)(c − 1), where r and c count only the rows and columns of that
+ * <p>Degrees of freedom, one of two declared rules ({@link DegreesOfFreedom}). {@code REDUCED}
+ * (the default; common practice for sparse tables, no single source): each stratum with
+ * data contributes (r − 1)(c − 1), where r and c count only the rows and columns of that
  * stratum's x × y table that are not empty; strata without rows contribute nothing. So an
- * empty row or column of a stratum's table subtracts its (c − 1) or (r − 1) cells. When the
- * total is zero there is nothing to test and independence is accepted (p = 1). The p-value
- * is the upper tail of the χ² distribution with those degrees of freedom.
+ * empty row or column of a stratum's table subtracts its (c − 1) or (r − 1) cells.
+ * {@code TEXTBOOK}: (|X| − 1)(|Y| − 1) · ∏ |Z| over all configurations of S, observed or
+ * not, the df of the conditional-independence test in a three-way table (Agresti 2002, §6.3)
+ * extended to several conditioning variables. When the total is zero there is nothing to test
+ * and independence is accepted (p = 1). The p-value is the upper tail of the χ² distribution
+ * with those degrees of freedom.
  *
  * <p>Missing values (code −1) are left out test by test: each test counts only the rows
  * complete for its own variables (test-wise deletion, Tu et al. 2019). For list-wise
@@ -46,6 +50,34 @@ public final class ContingencyTest implements IndependenceTest {
         }
     }
 
+    /** How the degrees of freedom are counted (see the class comment). */
+    public enum DegreesOfFreedom {
+        /** Σ over strata with data of (non-empty rows − 1)(non-empty columns − 1). */
+        REDUCED("reduced"),
+        /** (|X| − 1)(|Y| − 1) times the number of configurations of the conditioning set. */
+        TEXTBOOK("textbook");
+
+        private final String word;
+
+        DegreesOfFreedom(String word) {
+            this.word = word;
+        }
+
+        public String word() {
+            return word;
+        }
+
+        /** The rule named by {@code word}. */
+        public static DegreesOfFreedom parse(String word) {
+            for (DegreesOfFreedom d : values()) {
+                if (d.word.equals(word)) {
+                    return d;
+                }
+            }
+            throw new IllegalArgumentException("unknown degrees-of-freedom rule '" + word + "' (allowed: reduced, textbook)");
+        }
+    }
+
     /** A statistic with its degrees of freedom and the number of rows used. */
     public record Result(double statistic, int degreesOfFreedom, int rowsUsed, double pValue) { }
 
@@ -54,8 +86,15 @@ public final class ContingencyTest implements IndependenceTest {
     private final int rows;
     private final Statistic statistic;
     private final double alpha;
+    private final DegreesOfFreedom degreesOfFreedom;
 
+    /** A test with the reduced degrees of freedom. */
     public ContingencyTest(DataSet data, Statistic statistic, double alpha) {
+        this(data, statistic, alpha, DegreesOfFreedom.REDUCED);
+    }
+
+    /** A test with the given rule for the degrees of freedom. */
+    public ContingencyTest(DataSet data, Statistic statistic, double alpha, DegreesOfFreedom degreesOfFreedom) {
         if (!(alpha > 0 && alpha < 1)) {
             throw new IllegalArgumentException("alpha must be in (0, 1), got " + alpha);
         }
@@ -73,6 +112,7 @@ public final class ContingencyTest implements IndependenceTest {
         this.rows = data.rows();
         this.statistic = statistic;
         this.alpha = alpha;
+        this.degreesOfFreedom = degreesOfFreedom;
     }
 
     @Override
@@ -179,8 +219,20 @@ public final class ContingencyTest implements IndependenceTest {
             stat *= 2;
         }
         stat = Math.max(stat, 0);
+        if (degreesOfFreedom == DegreesOfFreedom.TEXTBOOK) {
+            dof = textbookDegreesOfFreedom(kx, ky, z);
+        }
         double pv = dof == 0 ? 1.0 : Gamma.regularizedGammaQ(dof / 2.0, stat / 2.0);
         return new Result(stat, dof, used, pv);
+    }
+
+    /** (|X| − 1)(|Y| − 1) · ∏ |Z|, capped at Integer.MAX_VALUE (where the p-value is 1 anyway). */
+    private int textbookDegreesOfFreedom(int kx, int ky, int[] z) {
+        long d = (long) (kx - 1) * (ky - 1);
+        for (int v : z) {
+            d = Math.min(d * cardinality[v], Integer.MAX_VALUE);
+        }
+        return (int) d;
     }
 
     /**

@@ -36,6 +36,14 @@ public final class IndependenceTests {
             MissingPolicy.words(), "rows with missing cells: test-wise uses the rows complete for each test's "
                     + "variables, list-wise drops every incomplete row first");
 
+    /** The {@code degrees_of_freedom} parameter of the G² and χ² tests. */
+    public static final ParameterSpec DEGREES_OF_FREEDOM = ParameterSpec.choice("degrees_of_freedom",
+            ContingencyTest.DegreesOfFreedom.REDUCED.word(), List.of(ContingencyTest.DegreesOfFreedom.REDUCED.word(),
+                    ContingencyTest.DegreesOfFreedom.TEXTBOOK.word()),
+            "degrees of freedom of g-square and chi-square: reduced counts only the non-empty rows and columns of each "
+                    + "stratum with data (common practice); textbook is (|X|-1)(|Y|-1) times the number of configurations "
+                    + "of the conditioning set (Agresti 2002)");
+
     private IndependenceTests() {
     }
 
@@ -46,6 +54,16 @@ public final class IndependenceTests {
      *     list-wise deletion leaves no rows
      */
     public static IndependenceTest forInput(LearnerInput input, String test, double alpha, MissingPolicy missing) {
+        return forInput(input, test, alpha, missing, ContingencyTest.DegreesOfFreedom.REDUCED);
+    }
+
+    /**
+     * The test for this input, with the given degrees-of-freedom rule for G² and χ².
+     *
+     * @throws LearnerException as {@link #forInput(LearnerInput, String, double, MissingPolicy)}
+     */
+    public static IndependenceTest forInput(LearnerInput input, String test, double alpha, MissingPolicy missing,
+                                            ContingencyTest.DegreesOfFreedom degreesOfFreedom) {
         if (input.isOracle()) {
             return new OracleTest(input.oracle());
         }
@@ -75,7 +93,8 @@ public final class IndependenceTests {
                             + " (use fisher-z for continuous, conditional-gaussian for mixed)");
                 }
                 return new ContingencyTest(data, chosen.equals(G_SQUARE)
-                        ? ContingencyTest.Statistic.G_SQUARE : ContingencyTest.Statistic.CHI_SQUARE, alpha);
+                        ? ContingencyTest.Statistic.G_SQUARE : ContingencyTest.Statistic.CHI_SQUARE, alpha,
+                        degreesOfFreedom);
             case CONDITIONAL_GAUSSIAN:
                 return new ConditionalGaussianTest(data, alpha);
             default:

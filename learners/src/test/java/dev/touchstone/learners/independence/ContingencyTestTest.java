@@ -129,6 +129,49 @@ class ContingencyTestTest {
     }
 
     @Test
+    @DisplayName("textbook degrees of freedom (|X|−1)(|Y|−1)·|strata| against a hand-computed table: G² = 120 ln 1.5 − 40 ln 2,"
+            + " χ²₂ and χ²₄ tails in closed form (Agresti 2002, §3.2 and §6.3)")
+    void textbookDegreesOfFreedomByHand() {
+        // x has 3 categories but only 0 and 1 occur; y has 2; z has 2 but only z = 0 occurs.
+        // Table (x by y): [[30, 10], [10, 30], [0, 0]]; all expected counts are 20, so
+        // G² = 2 (30 ln 1.5 + 10 ln 0.5 + 10 ln 0.5 + 30 ln 1.5) = 120 ln 1.5 − 40 ln 2.
+        int[][] counts = {{30, 10}, {10, 30}};
+        List<int[]> rows = new ArrayList<>();
+        for (int x = 0; x < 2; x++) {
+            for (int y = 0; y < 2; y++) {
+                for (int k = 0; k < counts[x][y]; k++) {
+                    rows.add(new int[] {x, y, 0});
+                }
+            }
+        }
+        int[][] codes = new int[3][rows.size()];
+        for (int r = 0; r < rows.size(); r++) {
+            for (int j = 0; j < 3; j++) {
+                codes[j][r] = rows.get(r)[j];
+            }
+        }
+        DataSet data = TestData.discreteData(codes, new int[] {3, 2, 2});
+        double g = 120 * Math.log(1.5) - 40 * Math.log(2);
+        ContingencyTest textbook = new ContingencyTest(data, ContingencyTest.Statistic.G_SQUARE, 0.05,
+                ContingencyTest.DegreesOfFreedom.TEXTBOOK);
+        ContingencyTest reduced = new ContingencyTest(data, ContingencyTest.Statistic.G_SQUARE, 0.05);
+        ContingencyTest.Result t0 = textbook.evaluate(0, 1, new int[0]);
+        assertEquals(g, t0.statistic(), 1e-9);
+        assertEquals(2, t0.degreesOfFreedom(), "(3 − 1)(2 − 1)");
+        assertEquals(Math.exp(-g / 2), t0.pValue(), 1e-12, "χ²₂ tail: exp(−x/2)");
+        ContingencyTest.Result t1 = textbook.evaluate(0, 1, new int[] {2});
+        assertEquals(4, t1.degreesOfFreedom(), "(3 − 1)(2 − 1) · 2 strata, the empty one included");
+        assertEquals(Math.exp(-g / 2) * (1 + g / 2), t1.pValue(), 1e-12, "χ²₄ tail: exp(−x/2)(1 + x/2)");
+        ContingencyTest.Result r1 = reduced.evaluate(0, 1, new int[] {2});
+        assertEquals(g, r1.statistic(), 1e-9);
+        assertEquals(1, r1.degreesOfFreedom(), "reduced: (2 − 1)(2 − 1) in the one stratum with data");
+        assertEquals(org.apache.commons.math3.special.Erf.erfc(Math.sqrt(g / 2)), r1.pValue(), 1e-12,
+                "χ²₁ tail: erfc(√(x/2))");
+        assertEquals(4, new ContingencyTest(data, ContingencyTest.Statistic.CHI_SQUARE, 0.05,
+                ContingencyTest.DegreesOfFreedom.TEXTBOOK).evaluate(0, 1, new int[] {2}).degreesOfFreedom());
+    }
+
+    @Test
     @DisplayName("missing codes are left out test by test (test-wise deletion)")
     void missingCodesAreSkipped() {
         int[] cards = {2, 2, 2};

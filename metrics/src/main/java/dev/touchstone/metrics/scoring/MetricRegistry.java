@@ -35,13 +35,16 @@ public final class MetricRegistry {
         for (Metric x : MEASUREMENTS) {
             m.put(x.name(), x);
         }
+        for (Metric x : SearchGapMeasure.ALL) {
+            m.put(x.name(), x);
+        }
         BY_NAME = Collections.unmodifiableMap(m);
     }
 
     private MetricRegistry() {
     }
 
-    /** All metrics, structural first, then measurements. */
+    /** All metrics, structural first, then measurements, then the search-gap measures. */
     public static List<Metric> all() {
         return List.copyOf(BY_NAME.values());
     }

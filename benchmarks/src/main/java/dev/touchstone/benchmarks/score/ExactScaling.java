@@ -1,0 +1,112 @@
+package dev.touchstone.benchmarks.score;
+
+import dev.touchstone.core.graph.Graph;
+import dev.touchstone.core.graph.algorithms.DagExtension;
+import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.Estimate;
+import dev.touchstone.core.learner.Learner;
+import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.score.BicScore;
+import dev.touchstone.learners.score.ExactScoreLearner;
+import dev.touchstone.learners.score.GesLearner;
+import dev.touchstone.learners.score.HillClimbLearner;
+import dev.touchstone.learners.score.LocalScore;
+
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryPoolMXBean;
+import java.lang.management.MemoryType;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * Measurements of the exact learner, two modes (run from the benchmarks jar, not a unit test):
+ *
+ * <ul>
+ *   <li>{@code time LIMIT p1 p2 ...}: for each p, one run of the exact learner with this
+ *       parent_limit (−1 for none) on linear Gaussian data (Erdős–Rényi, mean degree 2, 1,000
+ *       rows, seeded), printing wall time, the thread's CPU time, the peak heap of the run
+ *       (pools' peak after a reset; includes garbage not yet collected) and the
+ *       local scores evaluated.</li>
+ *   <li>{@code gap CASES ROWS}: on CASES seeded truths (p = 5 … 8 in turn, mean degree 3),
+ *       BIC scores of GES, hill climbing (defaults) and the exact optimum on ROWS rows; prints
+ *       one line per case and the counts of cases where each greedy learner reaches the
+ *       optimum within 1e-6 relative.</li>
+ * </ul>
+ */
+public final class ExactScaling {
+
+    private ExactScaling() {
+    }
+
+    public static void main(String[] args) {
+        if (args[0].equals("time")) {
+            time(Integer.parseInt(args[1]), java.util.Arrays.copyOfRange(args, 2, args.length));
+        } else {
+            gap(Integer.parseInt(args[1]), Integer.parseInt(args[2]));
+        }
+    }
+
+    private static Estimate run(Learner learner, LinearGaussianFixture f, Map<String, Object> raw, RunContext ctx) {
+        ParameterValues values = ParameterValues.resolve(learner.description().id(), learner.description().parameters(), raw);
+        return learner.learn(LearnerInput.of(f.data), Knowledge.none(), values, ctx);
+    }
+
+    private static void time(int limit, String[] sizes) {
+        java.lang.management.ThreadMXBean mx = ManagementFactory.getThreadMXBean();
+        System.out.println("p,parent_limit,seconds,thread_cpu_seconds,peak_heap_mb,local_scores,parent_sets_kept");
+        for (String s : sizes) {
+            int p = Integer.parseInt(s);
+            LinearGaussianFixture f = LinearGaussianFixture.of(p, 2.0, 1000, 2000 + p);
+            f.data.covariance();
+            System.gc();
+            for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+                pool.resetPeakUsage();
+            }
+            long c0 = mx.getCurrentThreadCpuTime();
+            long t0 = System.nanoTime();
+            Estimate e = run(new ExactScoreLearner(), f, Map.of("parent_limit", limit), RunContext.of(1, null, 1));
+            long t1 = System.nanoTime();
+            long c1 = mx.getCurrentThreadCpuTime();
+            long peak = 0;
+            for (MemoryPoolMXBean pool : ManagementFactory.getMemoryPoolMXBeans()) {
+                if (pool.getType() == MemoryType.HEAP) {
+                    peak += pool.getPeakUsage().getUsed();
+                }
+            }
+            System.out.println(String.format(Locale.ROOT, "%d,%d,%.3f,%.3f,%.0f,%.0f,%.0f", p, limit, (t1 - t0) / 1e9,
+                    (c1 - c0) / 1e9, peak / 1048576.0, e.extras().get("local-scores"), e.extras().get("parent-sets-kept")));
+        }
+    }
+
+    private static void gap(int cases, int rows) {
+        System.out.println("case,p,true_edges,exact_score,ges_score,hill_climbing_score,true_score,ges_at_optimum,hill_climbing_at_optimum");
+        int gesHits = 0;
+        int hcHits = 0;
+        for (int c = 0; c < cases; c++) {
+            int p = 5 + c % 4;
+            LinearGaussianFixture f = LinearGaussianFixture.of(p, 3.0, rows, 50_000 + c);
+            LocalScore bic = BicScore.of(f.data.covariance(), 1.0);
+            double exact = run(new ExactScoreLearner(), f, Map.of("score", "bic"), RunContext.unlimited(c)).extras().get("score");
+            double ges = dagScore(bic, DagExtension.of(run(new GesLearner(), f, Map.of("score", "bic"), RunContext.unlimited(c)).graph()));
+            double hc = dagScore(bic, run(new HillClimbLearner(), f, Map.of("score", "bic"), RunContext.unlimited(c)).graph());
+            boolean gesOk = ges >= exact - 1e-6 * Math.abs(exact);
+            boolean hcOk = hc >= exact - 1e-6 * Math.abs(exact);
+            gesHits += gesOk ? 1 : 0;
+            hcHits += hcOk ? 1 : 0;
+            System.out.println(String.format(Locale.ROOT, "%d,%d,%d,%.3f,%.3f,%.3f,%.3f,%b,%b", c, p, f.dag.edgeCount(), exact,
+                    ges, hc, dagScore(bic, f.dag), gesOk, hcOk));
+        }
+        System.out.println(String.format(Locale.ROOT, "# %d cases, %d rows: GES at the optimum in %d, hill climbing in %d",
+                cases, rows, gesHits, hcHits));
+    }
+
+    private static double dagScore(LocalScore score, Graph dag) {
+        double s = 0;
+        for (int v = 0; v < dag.size(); v++) {
+            s += score.localScore(v, dag.parents(v));
+        }
+        return s;
+    }
+}
