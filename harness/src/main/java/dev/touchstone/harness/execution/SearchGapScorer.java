@@ -28,8 +28,8 @@ import java.util.Optional;
  * ({@link OptimisedScore#of}); the optimum and what derives from it are null beyond the exact
  * search's reach or when it passes the run's time limit. SHDs compare classes (CPDAGs of
  * member DAGs), since a score-equivalent score cannot tell members of a class apart.
- * Cost: one pass of local scores per graph, plus the exact search (under a second at 16
- * variables, growing as 2^p).
+ * Cost: one pass of local scores per graph, plus the exact search (BIC: under a second of CPU at 16
+ * variables, growing as 2^p; BDeu and the conditional Gaussian score cost O(n) per local score).
  */
 final class SearchGapScorer {
 
