@@ -5,12 +5,9 @@ import dev.touchstone.core.data.Variable;
 import dev.touchstone.core.data.VariableKind;
 
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
-import org.apache.commons.csv.CSVRecord;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -52,10 +49,6 @@ public final class DataCsv {
 
     private static final Pattern NUMBER = Pattern.compile("[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?");
     private static final Pattern NOT_FINITE = Pattern.compile("(?i)[+-]?(?:nan|inf|infinity)");
-    private static final CSVFormat READ_FORMAT = CSVFormat.RFC4180.builder()
-            .setIgnoreSurroundingSpaces(true)
-            .setIgnoreEmptyLines(false)
-            .get();
     private static final CSVFormat WRITE_FORMAT = CSVFormat.RFC4180.builder()
             .setRecordSeparator("\n")
             .get();
@@ -157,16 +150,14 @@ public final class DataCsv {
     }
 
     private static List<String> readHeader(Path file) throws IOException {
-        try (LineCountingReader in = open(file); CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
-            var it = parser.iterator();
-            if (!it.hasNext()) {
+        try (CsvRecords in = new CsvRecords(file)) {
+            if (!in.next()) {
                 throw new FileFormatException(file, null, "the file is empty (expected a header row of variable names)");
             }
-            CSVRecord header = it.next();
             List<String> names = new ArrayList<>();
             Map<String, Integer> seen = new HashMap<>();
-            for (int j = 0; j < header.size(); j++) {
-                String name = header.get(j);
+            for (int j = 0; j < in.cells(); j++) {
+                String name = in.text(j);
                 if (name.isEmpty()) {
                     throw new FileFormatException(file, "line 1, column " + (j + 1), "empty variable name");
                 }
@@ -178,18 +169,7 @@ public final class DataCsv {
                 names.add(name);
             }
             return names;
-        } catch (UncheckedIOException e) {
-            throw malformed(file, e);
         }
-    }
-
-    private static FileFormatException malformed(Path file, UncheckedIOException e) {
-        String m = e.getCause() == null ? e.getMessage() : e.getCause().getMessage();
-        return new FileFormatException(file, null, "not valid CSV: " + m);
-    }
-
-    private static LineCountingReader open(Path file) throws IOException {
-        return new LineCountingReader(InputFiles.reader(file));
     }
 
     private enum Kind { UNDECIDED, CONTINUOUS, DISCRETE }
@@ -205,6 +185,7 @@ public final class DataCsv {
         private final List<Map<String, Integer>> labels = new ArrayList<>();
         private int rows;
         private int capacity = 256;
+        private boolean estimated;
         boolean switchedAfterNumbers;
 
         Pass(Path file, List<String> names, Kind[] kinds) {
@@ -227,37 +208,58 @@ public final class DataCsv {
 
         void run() throws IOException {
             int p = names.size();
-            try (LineCountingReader in = open(file); CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
-                boolean header = true;
-                for (CSVRecord rec : parser) {
-                    if (header) {
-                        header = false;
+            long size = Files.size(file);
+            try (CsvRecords in = new CsvRecords(file)) {
+                in.next();
+                long headerBytes = in.consumed();
+                while (in.next()) {
+                    if (p > 1 && in.cells() == 1 && in.isEmpty(0)) {
                         continue;
                     }
-                    if (p > 1 && rec.size() == 1 && rec.get(0).isEmpty()) {
-                        continue;
+                    long line = in.line();
+                    if (in.cells() != p) {
+                        throw new FileFormatException(file, "line " + line, "the row has " + in.cells()
+                                + (in.cells() == 1 ? " cell" : " cells") + " but the header has " + p);
                     }
-                    long line = in.lineOf(rec.getCharacterPosition());
-                    if (rec.size() != p) {
-                        throw new FileFormatException(file, "line " + line, "the row has " + rec.size()
-                                + (rec.size() == 1 ? " cell" : " cells") + " but the header has " + p);
+                    if (rows == capacity) {
+                        grow(in.consumed() - headerBytes, size - in.consumed());
                     }
-                    grow();
+                    byte[] b = in.bytes();
                     for (int j = 0; j < p; j++) {
-                        cell(rec.get(j), j, line);
+                        if (kinds[j] != Kind.DISCRETE && !in.quoted(j)) {
+                            // The common case: a number parsed in place, no String made.
+                            int s = in.start(j);
+                            int e = in.end(j);
+                            if (s == e) {
+                                numbers[j][rows] = Double.NaN;
+                                continue;
+                            }
+                            double v = DecimalToDouble.parse(b, s, e);
+                            if (!Double.isNaN(v) && !Double.isInfinite(v)) {
+                                numbers[j][rows] = v;
+                                continue;
+                            }
+                        }
+                        cell(in.text(j), j, line);
                     }
                     rows++;
                 }
-            } catch (UncheckedIOException e) {
-                throw malformed(file, e);
             }
         }
 
-        private void grow() {
-            if (rows < capacity) {
-                return;
+        /**
+         * Makes room for more rows: at the first growth, for as many rows as the rest of the
+         * file holds at the mean row length so far (plus 5 %), so a large file is not copied
+         * again and again; later by half again.
+         */
+        private void grow(long bytesSoFar, long bytesLeft) {
+            long estimate = capacity + capacity / 2;
+            if (!estimated && bytesSoFar > 0) {
+                estimated = true;
+                double perRow = (double) bytesSoFar / rows;
+                estimate = Math.max(estimate, rows + (long) (1.05 * bytesLeft / perRow) + 16);
             }
-            capacity *= 2;
+            capacity = (int) Math.min(Integer.MAX_VALUE - 8, estimate);
             for (int j = 0; j < kinds.length; j++) {
                 if (kinds[j] == Kind.DISCRETE) {
                     codes[j] = Arrays.copyOf(codes[j], capacity);
@@ -328,7 +330,8 @@ public final class DataCsv {
                     report.add(new ColumnKind(name, VariableKind.DISCRETE,
                             isDeclared ? Choice.DECLARED : Choice.INFERRED_NOT_A_NUMBER, firstNonNumber[j]));
                 } else {
-                    double[] values = Arrays.copyOf(numbers[j], rows);
+                    double[] values = numbers[j].length == rows ? numbers[j] : Arrays.copyOf(numbers[j], rows);
+                    numbers[j] = null;
                     checkContinuous(j, values);
                     b.continuous(name, values);
                     report.add(new ColumnKind(name, VariableKind.CONTINUOUS,
