@@ -25,7 +25,7 @@ import java.util.Arrays;
  *
  * <p>Text is decoded strictly as UTF-8 when asked for ({@link #text}); a malformed byte is
  * bad input naming the file and its line. Memory: a buffer that holds the longest record
- * (1 MiB at least); cost: one pass over the bytes.
+ * (up to 1 MiB unless a record is longer); cost: one pass over the bytes.
  */
 final class CsvRecords implements Closeable {
 
@@ -36,7 +36,7 @@ final class CsvRecords implements Closeable {
     private final InputStream in;
     private final CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
             .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
-    private byte[] buf = new byte[1 << 20];
+    private byte[] buf;
     private int pos;
     private int limit;
     private boolean eof;
@@ -58,6 +58,8 @@ final class CsvRecords implements Closeable {
         this.file = file;
         try {
             this.in = Files.newInputStream(file);
+            // A small file gets a small buffer; it grows if a record needs more.
+            this.buf = new byte[(int) Math.max(64, Math.min(1 << 20, Files.size(file) + 1))];
             fill();
             if (limit - pos >= 3 && buf[0] == (byte) 0xEF && buf[1] == (byte) 0xBB && buf[2] == (byte) 0xBF) {
                 pos = 3;
