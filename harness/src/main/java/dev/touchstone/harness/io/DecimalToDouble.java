@@ -1,6 +1,9 @@
 package dev.touchstone.harness.io;
 
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
 import java.math.BigInteger;
+import java.nio.ByteOrder;
 import java.nio.charset.StandardCharsets;
 
 /**
@@ -40,6 +43,8 @@ final class DecimalToDouble {
         1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11,
         1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
     private static final long TWO_53 = 1L << 53;
+    private static final VarHandle LITTLE_ENDIAN_LONG =
+            MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
     private static final BigInteger MASK_64 = BigInteger.ONE.shiftLeft(64).subtract(BigInteger.ONE);
 
     static {
@@ -84,13 +89,18 @@ final class DecimalToDouble {
         boolean truncated = false;
         long scale = 0;
         int intStart = i;
+        while (i < to && b[i] == '0') {
+            i++;
+        }
+        while (significant <= 11 && i + 8 <= to && isEightDigits(b, i)) {
+            w = w * 100_000_000L + eightDigits(b, i);
+            significant += w == 0 ? 0 : 8;
+            i += 8;
+        }
         while (i < to && isDigit(b[i])) {
-            int d = b[i] - '0';
             if (significant < 19) {
-                if (w != 0 || d != 0) {
-                    w = w * 10 + d;
-                    significant++;
-                }
+                w = w * 10 + (b[i] - '0');
+                significant += w == 0 ? 0 : 1;
             } else {
                 truncated = true;
                 scale++;
@@ -102,13 +112,22 @@ final class DecimalToDouble {
         if (i < to && b[i] == '.') {
             i++;
             int fracStart = i;
+            if (w == 0) {
+                while (i < to && b[i] == '0') {
+                    i++;
+                    scale--;
+                }
+            }
+            while (significant <= 11 && i + 8 <= to && isEightDigits(b, i)) {
+                w = w * 100_000_000L + eightDigits(b, i);
+                significant += 8;
+                scale -= 8;
+                i += 8;
+            }
             while (i < to && isDigit(b[i])) {
-                int d = b[i] - '0';
                 if (significant < 19) {
-                    if (w != 0 || d != 0) {
-                        w = w * 10 + d;
-                        significant++;
-                    }
+                    w = w * 10 + (b[i] - '0');
+                    significant += w == 0 ? 0 : 1;
                     scale--;
                 } else {
                     truncated = true;
@@ -160,6 +179,25 @@ final class DecimalToDouble {
             }
         }
         return Double.parseDouble(new String(b, from, to - from, StandardCharsets.ISO_8859_1));
+    }
+
+    /** Whether the eight bytes from {@code i} are all ASCII digits (every byte in 0x30..0x39). */
+    private static boolean isEightDigits(byte[] b, int i) {
+        long v = (long) LITTLE_ENDIAN_LONG.get(b, i);
+        return ((v & 0xF0F0F0F0F0F0F0F0L) | (((v + 0x0606060606060606L) & 0xF0F0F0F0F0F0F0F0L) >>> 4))
+                == 0x3333333333333333L;
+    }
+
+    /**
+     * The value of eight ASCII digits read as one little-endian long: pairs, then quads, then
+     * the whole, combined by multiplication (the SWAR method of Lemire's paper above).
+     */
+    private static long eightDigits(byte[] b, int i) {
+        long v = (long) LITTLE_ENDIAN_LONG.get(b, i) - 0x3030303030303030L;
+        v = v * 10 + (v >>> 8);
+        v = ((v & 0x000000FF000000FFL) * (100 + (1_000_000L << 32))
+                + ((v >>> 16) & 0x000000FF000000FFL) * (1 + (10_000L << 32))) >>> 32;
+        return v;
     }
 
     private static boolean isDigit(byte c) {
