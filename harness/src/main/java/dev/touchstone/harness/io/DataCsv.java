@@ -8,7 +8,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 
 import java.io.IOException;
-import java.io.Writer;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -396,44 +396,93 @@ public final class DataCsv {
         }
     }
 
-    /** Writes {@code data} to {@code file} atomically (see {@link #write(Writer, DataSet)}). */
+    /** Writes {@code data} to {@code file} atomically (see {@link #write(OutputStream, DataSet)}). */
     public static void write(Path file, DataSet data) throws IOException {
-        AtomicFiles.writeText(file, w -> write(w, data));
+        AtomicFiles.writeBytes(file, out -> write(out, data));
     }
 
     /**
-     * Writes {@code data} as CSV: the header, then one row per sample; a missing cell is
-     * empty, a discrete cell is its category label, and a number is printed with
-     * {@link Double#toString(double)}, which gives the shortest decimal that reads back to
-     * the same double.
+     * Writes {@code data} as UTF-8 CSV: the header, then one row per sample; a missing cell is
+     * empty, a discrete cell is its category label (quoted where RFC 4180 needs it), and a
+     * number is the shortest decimal that reads back to the same double
+     * ({@link ShortestDecimal}). Rows are assembled as bytes, so no String is made per cell.
      *
      * @throws IllegalArgumentException if a category label is empty (it would read back as missing)
      */
-    public static void write(Writer out, DataSet data) throws IOException {
+    public static void write(OutputStream out, DataSet data) throws IOException {
         int p = data.columns();
+        byte[][][] labels = new byte[p][][];
+        int widest = 0;
         for (int j = 0; j < p; j++) {
-            for (String c : data.variable(j).categories()) {
-                if (c.isEmpty()) {
+            if (!data.isDiscrete(j)) {
+                continue;
+            }
+            List<String> cats = data.variable(j).categories();
+            labels[j] = new byte[cats.size()][];
+            for (int c = 0; c < cats.size(); c++) {
+                if (cats.get(c).isEmpty()) {
                     throw new IllegalArgumentException("column '" + data.variable(j).name()
                             + "' has an empty category label, which would read back as a missing cell");
                 }
+                labels[j][c] = quoted(cats.get(c));
+                widest = Math.max(widest, labels[j][c].length);
             }
         }
-        CSVPrinter printer = new CSVPrinter(out, WRITE_FORMAT);
+        StringBuilder header = new StringBuilder();
+        CSVPrinter printer = new CSVPrinter(header, WRITE_FORMAT);
         printer.printRecord(data.names());
-        String[] row = new String[p];
+        printer.flush();
+        out.write(header.toString().getBytes(StandardCharsets.UTF_8));
+        byte[] row = new byte[p * (Math.max(widest, ShortestDecimal.MAX_CHARS) + 1) + 2];
+        double[][] numbers = new double[p][];
+        int[][] codes = new int[p][];
+        for (int j = 0; j < p; j++) {
+            if (data.isDiscrete(j)) {
+                codes[j] = data.discrete(j);
+            } else {
+                numbers[j] = data.continuous(j);
+            }
+        }
         for (int r = 0; r < data.rows(); r++) {
+            int at = 0;
             for (int j = 0; j < p; j++) {
-                if (data.isMissing(r, j)) {
-                    row[j] = p == 1 ? "" : null;
-                } else if (data.isDiscrete(j)) {
-                    row[j] = data.variable(j).categories().get(data.discrete(j)[r]);
-                } else {
-                    row[j] = Double.toString(data.continuous(j)[r]);
+                if (j > 0) {
+                    row[at++] = ',';
+                }
+                if (codes[j] != null) {
+                    int c = codes[j][r];
+                    if (c != DataSet.MISSING_CODE) {
+                        byte[] label = labels[j][c];
+                        System.arraycopy(label, 0, row, at, label.length);
+                        at += label.length;
+                    }
+                } else if (!Double.isNaN(numbers[j][r])) {
+                    at = ShortestDecimal.write(numbers[j][r], row, at);
                 }
             }
-            printer.printRecord((Object[]) row);
+            if (at == 0 && p == 1) {
+                // A lone empty cell would be a blank line; quotes keep it a missing cell.
+                row[at++] = '"';
+                row[at++] = '"';
+            }
+            row[at++] = '\n';
+            out.write(row, 0, at);
         }
-        printer.flush();
+        out.flush();
+    }
+
+    /**
+     * The label as one CSV cell: in quotes (doubled inside) when it holds a comma, a quote or
+     * a line break, or starts or ends with white space that the reader would drop.
+     */
+    static byte[] quoted(String label) {
+        boolean needs = label.isEmpty() || Character.isWhitespace(label.charAt(0))
+                || Character.isWhitespace(label.charAt(label.length() - 1));
+        for (int i = 0; i < label.length() && !needs; i++) {
+            char c = label.charAt(i);
+            needs = c == ',' || c == '"' || c == '\n' || c == '\r';
+        }
+        String cell = needs ? '"' + label.replace("\"", "\"\"") + '"' : label;
+        return cell.getBytes(StandardCharsets.UTF_8);
     }
 }
