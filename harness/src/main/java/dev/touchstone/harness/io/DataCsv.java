@@ -5,13 +5,10 @@ import dev.touchstone.core.data.Variable;
 import dev.touchstone.core.data.VariableKind;
 
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
-import org.apache.commons.csv.CSVRecord;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.io.Writer;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -52,10 +49,6 @@ public final class DataCsv {
 
     private static final Pattern NUMBER = Pattern.compile("[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?");
     private static final Pattern NOT_FINITE = Pattern.compile("(?i)[+-]?(?:nan|inf|infinity)");
-    private static final CSVFormat READ_FORMAT = CSVFormat.RFC4180.builder()
-            .setIgnoreSurroundingSpaces(true)
-            .setIgnoreEmptyLines(false)
-            .get();
     private static final CSVFormat WRITE_FORMAT = CSVFormat.RFC4180.builder()
             .setRecordSeparator("\n")
             .get();
@@ -157,16 +150,14 @@ public final class DataCsv {
     }
 
     private static List<String> readHeader(Path file) throws IOException {
-        try (LineCountingReader in = open(file); CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
-            var it = parser.iterator();
-            if (!it.hasNext()) {
+        try (CsvRecords in = new CsvRecords(file)) {
+            if (!in.next()) {
                 throw new FileFormatException(file, null, "the file is empty (expected a header row of variable names)");
             }
-            CSVRecord header = it.next();
             List<String> names = new ArrayList<>();
             Map<String, Integer> seen = new HashMap<>();
-            for (int j = 0; j < header.size(); j++) {
-                String name = header.get(j);
+            for (int j = 0; j < in.cells(); j++) {
+                String name = in.text(j);
                 if (name.isEmpty()) {
                     throw new FileFormatException(file, "line 1, column " + (j + 1), "empty variable name");
                 }
@@ -178,18 +169,7 @@ public final class DataCsv {
                 names.add(name);
             }
             return names;
-        } catch (UncheckedIOException e) {
-            throw malformed(file, e);
         }
-    }
-
-    private static FileFormatException malformed(Path file, UncheckedIOException e) {
-        String m = e.getCause() == null ? e.getMessage() : e.getCause().getMessage();
-        return new FileFormatException(file, null, "not valid CSV: " + m);
-    }
-
-    private static LineCountingReader open(Path file) throws IOException {
-        return new LineCountingReader(InputFiles.reader(file));
     }
 
     private enum Kind { UNDECIDED, CONTINUOUS, DISCRETE }
@@ -205,6 +185,7 @@ public final class DataCsv {
         private final List<Map<String, Integer>> labels = new ArrayList<>();
         private int rows;
         private int capacity = 256;
+        private boolean estimated;
         boolean switchedAfterNumbers;
 
         Pass(Path file, List<String> names, Kind[] kinds) {
@@ -227,37 +208,58 @@ public final class DataCsv {
 
         void run() throws IOException {
             int p = names.size();
-            try (LineCountingReader in = open(file); CSVParser parser = CSVParser.parse(in, READ_FORMAT)) {
-                boolean header = true;
-                for (CSVRecord rec : parser) {
-                    if (header) {
-                        header = false;
+            long size = Files.size(file);
+            try (CsvRecords in = new CsvRecords(file)) {
+                in.next();
+                long headerBytes = in.consumed();
+                while (in.next()) {
+                    if (p > 1 && in.cells() == 1 && in.isEmpty(0)) {
                         continue;
                     }
-                    if (p > 1 && rec.size() == 1 && rec.get(0).isEmpty()) {
-                        continue;
+                    long line = in.line();
+                    if (in.cells() != p) {
+                        throw new FileFormatException(file, "line " + line, "the row has " + in.cells()
+                                + (in.cells() == 1 ? " cell" : " cells") + " but the header has " + p);
                     }
-                    long line = in.lineOf(rec.getCharacterPosition());
-                    if (rec.size() != p) {
-                        throw new FileFormatException(file, "line " + line, "the row has " + rec.size()
-                                + (rec.size() == 1 ? " cell" : " cells") + " but the header has " + p);
+                    if (rows == capacity) {
+                        grow(in.consumed() - headerBytes, size - in.consumed());
                     }
-                    grow();
+                    byte[] b = in.bytes();
                     for (int j = 0; j < p; j++) {
-                        cell(rec.get(j), j, line);
+                        if (kinds[j] != Kind.DISCRETE && !in.quoted(j)) {
+                            // The common case: a number parsed in place, no String made.
+                            int s = in.start(j);
+                            int e = in.end(j);
+                            if (s == e) {
+                                numbers[j][rows] = Double.NaN;
+                                continue;
+                            }
+                            double v = DecimalToDouble.parse(b, s, e);
+                            if (!Double.isNaN(v) && !Double.isInfinite(v)) {
+                                numbers[j][rows] = v;
+                                continue;
+                            }
+                        }
+                        cell(in.text(j), j, line);
                     }
                     rows++;
                 }
-            } catch (UncheckedIOException e) {
-                throw malformed(file, e);
             }
         }
 
-        private void grow() {
-            if (rows < capacity) {
-                return;
+        /**
+         * Makes room for more rows: at the first growth, for as many rows as the rest of the
+         * file holds at the mean row length so far (plus 5 %), so a large file is not copied
+         * again and again; later by half again.
+         */
+        private void grow(long bytesSoFar, long bytesLeft) {
+            long estimate = capacity + capacity / 2;
+            if (!estimated && bytesSoFar > 0) {
+                estimated = true;
+                double perRow = (double) bytesSoFar / rows;
+                estimate = Math.max(estimate, rows + (long) (1.05 * bytesLeft / perRow) + 16);
             }
-            capacity *= 2;
+            capacity = (int) Math.min(Integer.MAX_VALUE - 8, estimate);
             for (int j = 0; j < kinds.length; j++) {
                 if (kinds[j] == Kind.DISCRETE) {
                     codes[j] = Arrays.copyOf(codes[j], capacity);
@@ -328,7 +330,8 @@ public final class DataCsv {
                     report.add(new ColumnKind(name, VariableKind.DISCRETE,
                             isDeclared ? Choice.DECLARED : Choice.INFERRED_NOT_A_NUMBER, firstNonNumber[j]));
                 } else {
-                    double[] values = Arrays.copyOf(numbers[j], rows);
+                    double[] values = numbers[j].length == rows ? numbers[j] : Arrays.copyOf(numbers[j], rows);
+                    numbers[j] = null;
                     checkContinuous(j, values);
                     b.continuous(name, values);
                     report.add(new ColumnKind(name, VariableKind.CONTINUOUS,
@@ -393,44 +396,93 @@ public final class DataCsv {
         }
     }
 
-    /** Writes {@code data} to {@code file} atomically (see {@link #write(Writer, DataSet)}). */
+    /** Writes {@code data} to {@code file} atomically (see {@link #write(OutputStream, DataSet)}). */
     public static void write(Path file, DataSet data) throws IOException {
-        AtomicFiles.writeText(file, w -> write(w, data));
+        AtomicFiles.writeBytes(file, out -> write(out, data));
     }
 
     /**
-     * Writes {@code data} as CSV: the header, then one row per sample; a missing cell is
-     * empty, a discrete cell is its category label, and a number is printed with
-     * {@link Double#toString(double)}, which gives the shortest decimal that reads back to
-     * the same double.
+     * Writes {@code data} as UTF-8 CSV: the header, then one row per sample; a missing cell is
+     * empty, a discrete cell is its category label (quoted where RFC 4180 needs it), and a
+     * number is the shortest decimal that reads back to the same double
+     * ({@link ShortestDecimal}). Rows are assembled as bytes, so no String is made per cell.
      *
      * @throws IllegalArgumentException if a category label is empty (it would read back as missing)
      */
-    public static void write(Writer out, DataSet data) throws IOException {
+    public static void write(OutputStream out, DataSet data) throws IOException {
         int p = data.columns();
+        byte[][][] labels = new byte[p][][];
+        int widest = 0;
         for (int j = 0; j < p; j++) {
-            for (String c : data.variable(j).categories()) {
-                if (c.isEmpty()) {
+            if (!data.isDiscrete(j)) {
+                continue;
+            }
+            List<String> cats = data.variable(j).categories();
+            labels[j] = new byte[cats.size()][];
+            for (int c = 0; c < cats.size(); c++) {
+                if (cats.get(c).isEmpty()) {
                     throw new IllegalArgumentException("column '" + data.variable(j).name()
                             + "' has an empty category label, which would read back as a missing cell");
                 }
+                labels[j][c] = quoted(cats.get(c));
+                widest = Math.max(widest, labels[j][c].length);
             }
         }
-        CSVPrinter printer = new CSVPrinter(out, WRITE_FORMAT);
+        StringBuilder header = new StringBuilder();
+        CSVPrinter printer = new CSVPrinter(header, WRITE_FORMAT);
         printer.printRecord(data.names());
-        String[] row = new String[p];
+        printer.flush();
+        out.write(header.toString().getBytes(StandardCharsets.UTF_8));
+        byte[] row = new byte[p * (Math.max(widest, ShortestDecimal.MAX_CHARS) + 1) + 2];
+        double[][] numbers = new double[p][];
+        int[][] codes = new int[p][];
+        for (int j = 0; j < p; j++) {
+            if (data.isDiscrete(j)) {
+                codes[j] = data.discrete(j);
+            } else {
+                numbers[j] = data.continuous(j);
+            }
+        }
         for (int r = 0; r < data.rows(); r++) {
+            int at = 0;
             for (int j = 0; j < p; j++) {
-                if (data.isMissing(r, j)) {
-                    row[j] = p == 1 ? "" : null;
-                } else if (data.isDiscrete(j)) {
-                    row[j] = data.variable(j).categories().get(data.discrete(j)[r]);
-                } else {
-                    row[j] = Double.toString(data.continuous(j)[r]);
+                if (j > 0) {
+                    row[at++] = ',';
+                }
+                if (codes[j] != null) {
+                    int c = codes[j][r];
+                    if (c != DataSet.MISSING_CODE) {
+                        byte[] label = labels[j][c];
+                        System.arraycopy(label, 0, row, at, label.length);
+                        at += label.length;
+                    }
+                } else if (!Double.isNaN(numbers[j][r])) {
+                    at = ShortestDecimal.write(numbers[j][r], row, at);
                 }
             }
-            printer.printRecord((Object[]) row);
+            if (at == 0 && p == 1) {
+                // A lone empty cell would be a blank line; quotes keep it a missing cell.
+                row[at++] = '"';
+                row[at++] = '"';
+            }
+            row[at++] = '\n';
+            out.write(row, 0, at);
         }
-        printer.flush();
+        out.flush();
+    }
+
+    /**
+     * The label as one CSV cell: in quotes (doubled inside) when it holds a comma, a quote or
+     * a line break, or starts or ends with white space that the reader would drop.
+     */
+    static byte[] quoted(String label) {
+        boolean needs = label.isEmpty() || Character.isWhitespace(label.charAt(0))
+                || Character.isWhitespace(label.charAt(label.length() - 1));
+        for (int i = 0; i < label.length() && !needs; i++) {
+            char c = label.charAt(i);
+            needs = c == ',' || c == '"' || c == '\n' || c == '\r';
+        }
+        String cell = needs ? '"' + label.replace("\"", "\"\"") + '"' : label;
+        return cell.getBytes(StandardCharsets.UTF_8);
     }
 }
