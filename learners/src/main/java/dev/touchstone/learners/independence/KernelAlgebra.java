@@ -1,0 +1,264 @@
+package dev.touchstone.learners.independence;
+
+import java.util.Arrays;
+
+/**
+ * The shared arithmetic of the kernel tests (HSIC, KCI, RCIT): standardising columns, the
+ * median heuristic for Gaussian kernel widths, pivoted incomplete Cholesky factors of
+ * Gaussian kernel matrices, centring, and small Cholesky solves.
+ *
+ * <p>Point sets are column-major, {@code double[d][n]} (d coordinates of n points), which is
+ * how a data set stores its variables.
+ *
+ * <p><b>Median heuristic (the rule used throughout).</b> Every coordinate is first
+ * standardised to mean 0 and standard deviation 1 (divisor n). The width σ of the Gaussian
+ * kernel k(u, v) = exp(−‖u − v‖² / (2σ²)) is the median of the Euclidean distances
+ * ‖u_i − u_j‖ over all pairs i &lt; j of the first min(n, {@value #MEDIAN_ROWS}) points,
+ * pairs at distance 0 left out (the median of an even count is the mean of the two middle
+ * values); when every such distance is 0, σ = 1. Using the median distance as the width is
+ * common practice for kernel tests (Gretton et al. 2008, NIPS, Section 4, use it for HSIC).
+ *
+ * <p><b>Incomplete Cholesky.</b> The pivoted incomplete Cholesky factorisation of a kernel
+ * matrix K ≈ G Gᵀ (Fine and Scheinberg 2001, JMLR 2; Bach and Jordan 2002, JMLR 3,
+ * Section 5.2) picks at each step the point with the largest remaining diagonal, and stops
+ * when that diagonal is at most {@value #CHOLESKY_TOLERANCE} or the rank reaches the cap;
+ * its cost is O(n r²) for rank r, and the residual K − G Gᵀ is positive semi-definite with
+ * trace at most n times the last pivot.
+ */
+final class KernelAlgebra {
+
+    /** Points the median heuristic looks at. */
+    static final int MEDIAN_ROWS = 500;
+    /** Largest remaining diagonal at which the incomplete Cholesky factorisation stops. */
+    static final double CHOLESKY_TOLERANCE = 1e-6;
+
+    private KernelAlgebra() {
+    }
+
+    /** A standardised copy (mean 0, sd 1 with divisor n) of {@code values} at {@code rows}; a constant column becomes 0. */
+    static double[] standardised(double[] values, int[] rows) {
+        int n = rows.length;
+        double[] v = new double[n];
+        double mean = 0;
+        for (int r = 0; r < n; r++) {
+            v[r] = values[rows[r]];
+            mean += v[r];
+        }
+        mean /= n;
+        double ss = 0;
+        for (int r = 0; r < n; r++) {
+            v[r] -= mean;
+            ss += v[r] * v[r];
+        }
+        double sd = Math.sqrt(ss / n);
+        if (!(sd > 1e-12)) {
+            Arrays.fill(v, 0);
+            return v;
+        }
+        for (int r = 0; r < n; r++) {
+            v[r] /= sd;
+        }
+        return v;
+    }
+
+    /** The width σ by the median heuristic (see the class comment) for standardised points {@code u}. */
+    static double medianWidth(double[][] u) {
+        int n = u[0].length;
+        int m = Math.min(n, MEDIAN_ROWS);
+        double[] d = new double[m * (m - 1) / 2];
+        int k = 0;
+        for (int i = 0; i < m; i++) {
+            for (int j = i + 1; j < m; j++) {
+                double s = squaredDistance(u, i, j);
+                if (s > 0) {
+                    d[k++] = s;
+                }
+            }
+        }
+        if (k == 0) {
+            return 1.0;
+        }
+        double[] nz = Arrays.copyOf(d, k);
+        Arrays.sort(nz);
+        double median = k % 2 == 1 ? Math.sqrt(nz[k / 2]) : 0.5 * (Math.sqrt(nz[k / 2 - 1]) + Math.sqrt(nz[k / 2]));
+        return median > 0 ? median : 1.0;
+    }
+
+    static double squaredDistance(double[][] u, int i, int j) {
+        double s = 0;
+        for (double[] c : u) {
+            double t = c[i] - c[j];
+            s += t * t;
+        }
+        return s;
+    }
+
+    /** The full Gaussian kernel matrix of {@code u} with width σ, row-major n × n. */
+    static double[] gram(double[][] u, double sigma) {
+        int n = u[0].length;
+        double g = -1.0 / (2 * sigma * sigma);
+        double[] k = new double[n * n];
+        for (int i = 0; i < n; i++) {
+            k[i * n + i] = 1.0;
+            for (int j = i + 1; j < n; j++) {
+                double v = Math.exp(g * squaredDistance(u, i, j));
+                k[i * n + j] = v;
+                k[j * n + i] = v;
+            }
+        }
+        return k;
+    }
+
+    /**
+     * The pivoted incomplete Cholesky factor G (columns {@code double[r][n]}) of the Gaussian
+     * kernel matrix of {@code u} with width σ, of rank at most {@code maxRank}.
+     */
+    static double[][] incompleteCholesky(double[][] u, double sigma, int maxRank) {
+        int n = u[0].length;
+        double g = -1.0 / (2 * sigma * sigma);
+        double[] residual = new double[n];
+        Arrays.fill(residual, 1.0);
+        int cap = Math.min(maxRank, n);
+        double[][] cols = new double[cap][];
+        int[] pivots = new int[cap];
+        int rank = 0;
+        while (rank < cap) {
+            int pivot = 0;
+            for (int i = 1; i < n; i++) {
+                if (residual[i] > residual[pivot]) {
+                    pivot = i;
+                }
+            }
+            double d = residual[pivot];
+            if (!(d > CHOLESKY_TOLERANCE)) {
+                break;
+            }
+            double s = Math.sqrt(d);
+            double[] col = new double[n];
+            for (int i = 0; i < n; i++) {
+                double v = Math.exp(g * squaredDistance(u, i, pivot));
+                for (int j = 0; j < rank; j++) {
+                    v -= cols[j][i] * cols[j][pivot];
+                }
+                col[i] = v / s;
+            }
+            col[pivot] = s;
+            for (int i = 0; i < n; i++) {
+                residual[i] -= col[i] * col[i];
+            }
+            residual[pivot] = 0;
+            pivots[rank] = pivot;
+            cols[rank++] = col;
+        }
+        return Arrays.copyOf(cols, rank);
+    }
+
+    /** Subtracts each column's mean in place: H G for the centring matrix H = I − 11ᵀ/n. */
+    static double[][] centreColumns(double[][] cols) {
+        for (double[] c : cols) {
+            double mean = 0;
+            for (double v : c) {
+                mean += v;
+            }
+            mean /= c.length;
+            for (int i = 0; i < c.length; i++) {
+                c[i] -= mean;
+            }
+        }
+        return cols;
+    }
+
+    /** The r × s matrix Aᵀ B of column sets A (r columns) and B (s columns), row-major. */
+    static double[] crossProduct(double[][] a, double[][] b) {
+        int r = a.length;
+        int s = b.length;
+        double[] out = new double[r * s];
+        for (int i = 0; i < r; i++) {
+            double[] ai = a[i];
+            for (int j = 0; j < s; j++) {
+                double[] bj = b[j];
+                double t = 0;
+                for (int k = 0; k < ai.length; k++) {
+                    t += ai[k] * bj[k];
+                }
+                out[i * s + j] = t;
+            }
+        }
+        return out;
+    }
+
+    /** The squared Frobenius norm of a matrix stored as an array. */
+    static double squaredNorm(double[] m) {
+        double s = 0;
+        for (double v : m) {
+            s += v * v;
+        }
+        return s;
+    }
+
+    /** The squared Frobenius norm of a column set. */
+    static double squaredNorm(double[][] cols) {
+        double s = 0;
+        for (double[] c : cols) {
+            s += squaredNorm(c);
+        }
+        return s;
+    }
+
+    /**
+     * The lower Cholesky factor (row-major) of the symmetric positive definite q × q matrix
+     * {@code a}; a pivot that is not positive (round-off on a singular matrix) is set to a
+     * tiny positive value so the solve stays finite.
+     */
+    static double[] cholesky(double[] a, int q) {
+        double[] l = new double[q * q];
+        for (int i = 0; i < q; i++) {
+            for (int j = 0; j <= i; j++) {
+                double s = a[i * q + j];
+                for (int k = 0; k < j; k++) {
+                    s -= l[i * q + k] * l[j * q + k];
+                }
+                if (i == j) {
+                    l[i * q + i] = Math.sqrt(Math.max(s, 1e-300));
+                } else {
+                    l[i * q + j] = s / l[j * q + j];
+                }
+            }
+        }
+        return l;
+    }
+
+    /** Solves (L Lᵀ) X = B in place for a row-major q × c right-hand side B. */
+    static void choleskySolve(double[] l, int q, double[] b, int c) {
+        for (int col = 0; col < c; col++) {
+            for (int i = 0; i < q; i++) {
+                double s = b[i * c + col];
+                for (int k = 0; k < i; k++) {
+                    s -= l[i * q + k] * b[k * c + col];
+                }
+                b[i * c + col] = s / l[i * q + i];
+            }
+            for (int i = q - 1; i >= 0; i--) {
+                double s = b[i * c + col];
+                for (int k = i + 1; k < q; k++) {
+                    s -= l[k * q + i] * b[k * c + col];
+                }
+                b[i * c + col] = s / l[i * q + i];
+            }
+        }
+    }
+
+    /**
+     * The survival function 1 − F(t) of the gamma distribution whose mean and variance are
+     * {@code mean} and {@code variance} (shape mean²/variance, scale variance/mean), by
+     * moment matching; 1 when the moments are not positive (nothing to test).
+     */
+    static double gammaSurvival(double t, double mean, double variance) {
+        if (!(mean > 0 && variance > 0) || Double.isNaN(t)) {
+            return 1.0;
+        }
+        double shape = mean * mean / variance;
+        double scale = variance / mean;
+        return org.apache.commons.statistics.distribution.GammaDistribution.of(shape, scale).survivalProbability(t);
+    }
+}
