@@ -187,6 +187,25 @@ final class KernelAlgebra {
         return out;
     }
 
+    /** The symmetric r × r matrix Aᵀ A of a column set A (row-major), each entry computed once. */
+    static double[] symmetricCrossProduct(double[][] a) {
+        int r = a.length;
+        double[] out = new double[r * r];
+        for (int i = 0; i < r; i++) {
+            double[] ai = a[i];
+            for (int j = i; j < r; j++) {
+                double[] aj = a[j];
+                double t = 0;
+                for (int k = 0; k < ai.length; k++) {
+                    t += ai[k] * aj[k];
+                }
+                out[i * r + j] = t;
+                out[j * r + i] = t;
+            }
+        }
+        return out;
+    }
+
     /** The squared Frobenius norm of a matrix stored as an array. */
     static double squaredNorm(double[] m) {
         double s = 0;
