@@ -25,7 +25,7 @@ import java.util.Arrays;
  *       mean = Σ_t (K̃_ẍ|S)_tt (K̃_y|S)_tt / n, variance = 2 Σ_st ((K̃_ẍ|S)_st (K̃_y|S)_st)² / n².</li>
  * </ul>
  * The pair is put in canonical order (smaller position as x) first, which makes the test
- * symmetric to the bit although ẍ is built from x.
+ * symmetric to the bit although ẍ is built from x; the conditioning set is sorted likewise.
  *
  * <p><b>Bounded cost (declared).</b> Every kernel matrix is replaced by a pivoted incomplete
  * Cholesky factor G (K ≈ GGᵀ) of rank at most {@code maxRank} (see {@link KernelAlgebra}),
@@ -64,6 +64,7 @@ public final class KciTest implements IndependenceTest {
     private final DataSet data;
     private final double alpha;
     private final Settings settings;
+    private final KernelAlgebra.WidthCache widths = new KernelAlgebra.WidthCache();
 
     private KciTest(DataSet data, double alpha, Settings settings) {
         if (!(alpha > 0 && alpha < 1)) {
@@ -100,7 +101,9 @@ public final class KciTest implements IndependenceTest {
     }
 
     /** The whole test of x and y given z. */
-    public Result compute(int x, int y, int[] z) {
+    public Result compute(int x, int y, int[] given) {
+        int[] z = given.clone();
+        Arrays.sort(z); // the same bits whatever the order of the conditioning set
         int a = Math.min(x, y);
         int b = Math.max(x, y);
         int[] rows = usableRows(data, a, b, z, settings.maxRows(), settings.seed());
@@ -108,24 +111,23 @@ public final class KciTest implements IndependenceTest {
         if (n < 6) {
             return new Result(Double.NaN, Double.NaN, Double.NaN, 1.0, n);
         }
-        double[][] uy = columns(data, rows, new int[] {b});
+        boolean allRows = n == data.rows();
+        double[][] gy = factor(new int[] {b}, rows, allRows);
         if (z.length == 0) {
-            double[][] gx = factor(columns(data, rows, new int[] {a}));
-            double[][] gy = factor(uy);
-            return unconditional(gx, gy, n);
+            return unconditional(factor(new int[] {a}, rows, allRows), gy, n);
         }
         int[] xz = new int[z.length + 1];
         xz[0] = a;
         System.arraycopy(z, 0, xz, 1, z.length);
-        double[][] gx = factor(columns(data, rows, xz));
-        double[][] gy = factor(uy);
-        double[][] gz = factor(columns(data, rows, z));
+        double[][] gx = factor(xz, rows, allRows);
+        double[][] gz = factor(z, rows, allRows);
         return conditional(residualise(gx, gz, settings.ridge()), residualise(gy, gz, settings.ridge()), n);
     }
 
-    private double[][] factor(double[][] u) {
-        return KernelAlgebra.centreColumns(KernelAlgebra.incompleteCholesky(u, KernelAlgebra.medianWidth(u),
-                settings.maxRank()));
+    private double[][] factor(int[] vars, int[] rows, boolean allRows) {
+        double[][] u = columns(data, rows, vars);
+        double width = allRows ? widths.width(vars, u) : KernelAlgebra.medianWidth(u);
+        return KernelAlgebra.centreColumns(KernelAlgebra.incompleteCholesky(u, width, settings.maxRank()));
     }
 
     static Result unconditional(double[][] gx, double[][] gy, int n) {

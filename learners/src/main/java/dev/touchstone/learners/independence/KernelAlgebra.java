@@ -78,10 +78,68 @@ final class KernelAlgebra {
         if (k == 0) {
             return 1.0;
         }
-        double[] nz = Arrays.copyOf(d, k);
-        Arrays.sort(nz);
-        double median = k % 2 == 1 ? Math.sqrt(nz[k / 2]) : 0.5 * (Math.sqrt(nz[k / 2 - 1]) + Math.sqrt(nz[k / 2]));
+        // The median of the distances is the root of the median of the squared distances (a
+        // monotone map); the order statistics are found by selection in expected O(k).
+        double upper = Math.sqrt(select(d, k, k / 2));
+        double median = k % 2 == 1 ? upper : 0.5 * (Math.sqrt(maxBelow(d, k / 2)) + upper);
         return median > 0 ? median : 1.0;
+    }
+
+    /** The element of rank {@code rank} (0-based) among the first {@code k} of {@code a}; reorders them. */
+    static double select(double[] a, int k, int rank) {
+        int lo = 0;
+        int hi = k - 1;
+        while (lo < hi) {
+            double pivot = a[(lo + hi) >>> 1];
+            int i = lo;
+            int j = hi;
+            while (i <= j) {
+                while (a[i] < pivot) {
+                    i++;
+                }
+                while (a[j] > pivot) {
+                    j--;
+                }
+                if (i <= j) {
+                    double t = a[i];
+                    a[i] = a[j];
+                    a[j] = t;
+                    i++;
+                    j--;
+                }
+            }
+            if (rank <= j) {
+                hi = j;
+            } else if (rank >= i) {
+                lo = i;
+            } else {
+                return a[rank];
+            }
+        }
+        return a[rank];
+    }
+
+    /** The largest of the first {@code count} entries (after {@link #select} put the smaller ones there). */
+    private static double maxBelow(double[] a, int count) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < count; i++) {
+            m = Math.max(m, a[i]);
+        }
+        return m;
+    }
+
+    /**
+     * Kernel widths remembered per variable set, for tests that use every row of their data
+     * (the width depends only on the data of the set, and PC asks about the same sets often).
+     */
+    static final class WidthCache {
+        private final java.util.concurrent.ConcurrentHashMap<String, Double> widths =
+                new java.util.concurrent.ConcurrentHashMap<>();
+
+        /** The median-heuristic width of standardised points {@code u} of the variables {@code vars} on all rows. */
+        double width(int[] vars, double[][] u) {
+            return widths.computeIfAbsent(Arrays.toString(vars), k -> medianWidth(u));
+        }
     }
 
     static double squaredDistance(double[][] u, int i, int j) {

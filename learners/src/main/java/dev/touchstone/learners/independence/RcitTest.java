@@ -59,6 +59,7 @@ public final class RcitTest implements IndependenceTest {
     private final DataSet data;
     private final double alpha;
     private final Settings settings;
+    private final KernelAlgebra.WidthCache widths = new KernelAlgebra.WidthCache();
 
     private RcitTest(DataSet data, double alpha, Settings settings) {
         if (!(alpha > 0 && alpha < 1)) {
@@ -108,10 +109,11 @@ public final class RcitTest implements IndependenceTest {
         int[] xs = new int[s.length + 1];
         xs[0] = a;
         System.arraycopy(s, 0, xs, 1, s.length);
-        double[][] fx = features(KciTest.columns(data, rows, xs), settings.features(), "x", xs);
-        double[][] fy = features(KciTest.columns(data, rows, new int[] {b}), settings.features(), "y", new int[] {b});
+        boolean allRows = n == data.rows();
+        double[][] fx = features(rows, allRows, settings.features(), "x", xs);
+        double[][] fy = features(rows, allRows, settings.features(), "y", new int[] {b});
         if (s.length > 0) {
-            double[][] fz = features(KciTest.columns(data, rows, s), settings.conditioningFeatures(), "z", s);
+            double[][] fz = features(rows, allRows, settings.conditioningFeatures(), "z", s);
             double[] czz = KernelAlgebra.symmetricCrossProduct(fz);
             int q = fz.length;
             for (int i = 0; i < q; i++) {
@@ -125,10 +127,11 @@ public final class RcitTest implements IndependenceTest {
     }
 
     /** The centred random Fourier features (columns) of standardised points u, drawn from the seed and the variables. */
-    private double[][] features(double[][] u, int m, String role, int[] vars) {
+    private double[][] features(int[] rows, boolean allRows, int m, String role, int[] vars) {
+        double[][] u = KciTest.columns(data, rows, vars);
         int d = u.length;
         int n = u[0].length;
-        double sigma = KernelAlgebra.medianWidth(u);
+        double sigma = allRows ? widths.width(vars, u) : KernelAlgebra.medianWidth(u);
         UniformRandomProvider rng = Seeds.random(Seeds.derive(settings.seed(), "rcit-features", role,
                 Arrays.toString(vars), m));
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);

@@ -65,6 +65,34 @@ class HsicTest {
     }
 
     @Test
+    @DisplayName("median heuristic by selection equals the median of the sorted pairwise distances (odd and even counts, ties, 2-d points)")
+    void medianWidthMatchesSorting() {
+        UniformRandomProvider rng = Seeds.random(77);
+        for (int n : new int[] {2, 3, 4, 7, 12, 31, 64}) {
+            double[][] u = new double[2][n];
+            for (int i = 0; i < n; i++) {
+                // Rounded to a coarse grid so that equal distances (ties) and zero distances occur.
+                u[0][i] = Math.round(rng.nextDouble() * 4) / 2.0;
+                u[1][i] = Math.round(rng.nextDouble() * 4) / 2.0;
+            }
+            double[] d = new double[n * (n - 1) / 2];
+            int k = 0;
+            for (int i = 0; i < n; i++) {
+                for (int j = i + 1; j < n; j++) {
+                    double e = Math.hypot(u[0][i] - u[0][j], u[1][i] - u[1][j]);
+                    if (e > 0) {
+                        d[k++] = e;
+                    }
+                }
+            }
+            double[] nz = Arrays.copyOf(d, k);
+            Arrays.sort(nz);
+            double expected = k == 0 ? 1.0 : k % 2 == 1 ? nz[k / 2] : (nz[k / 2 - 1] + nz[k / 2]) / 2;
+            assertEquals(expected, KernelAlgebra.medianWidth(u), 1e-12, "n = " + n);
+        }
+    }
+
+    @Test
     @DisplayName("n·HSIC_b on a hand sample of n = 5 equals tr(KHLH)/n from explicit Commons Math matrices")
     void statisticOnTinySample() {
         double[] x = {0.3, -1.2, 2.0, 0.7, -0.4};
