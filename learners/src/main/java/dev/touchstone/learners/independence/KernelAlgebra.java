@@ -24,19 +24,21 @@ import java.util.Arrays;
  * when that diagonal is at most {@value #CHOLESKY_TOLERANCE} or the rank reaches the cap;
  * its cost is O(n r²) for rank r, and the residual K − G Gᵀ is positive semi-definite with
  * trace at most n times the last pivot.
+ *
+ * <p>Public for the functional learners' kernel regressions; not a general matrix library.
  */
-final class KernelAlgebra {
+public final class KernelAlgebra {
 
     /** Points the median heuristic looks at. */
-    static final int MEDIAN_ROWS = 500;
+    public static final int MEDIAN_ROWS = 500;
     /** Largest remaining diagonal at which the incomplete Cholesky factorisation stops. */
-    static final double CHOLESKY_TOLERANCE = 1e-6;
+    public static final double CHOLESKY_TOLERANCE = 1e-6;
 
     private KernelAlgebra() {
     }
 
     /** A standardised copy (mean 0, sd 1 with divisor n) of {@code values} at {@code rows}; a constant column becomes 0. */
-    static double[] standardised(double[] values, int[] rows) {
+    public static double[] standardised(double[] values, int[] rows) {
         int n = rows.length;
         double[] v = new double[n];
         double mean = 0;
@@ -62,7 +64,7 @@ final class KernelAlgebra {
     }
 
     /** The width σ by the median heuristic (see the class comment) for standardised points {@code u}. */
-    static double medianWidth(double[][] u) {
+    public static double medianWidth(double[][] u) {
         int n = u[0].length;
         int m = Math.min(n, MEDIAN_ROWS);
         double[] d = new double[m * (m - 1) / 2];
@@ -171,7 +173,7 @@ final class KernelAlgebra {
      * The pivoted incomplete Cholesky factor G (columns {@code double[r][n]}) of the Gaussian
      * kernel matrix of {@code u} with width σ, of rank at most {@code maxRank}.
      */
-    static double[][] incompleteCholesky(double[][] u, double sigma, int maxRank) {
+    public static double[][] incompleteCholesky(double[][] u, double sigma, int maxRank) {
         int n = u[0].length;
         double g = -1.0 / (2 * sigma * sigma);
         double[] residual = new double[n];
@@ -212,7 +214,7 @@ final class KernelAlgebra {
     }
 
     /** Subtracts each column's mean in place: H G for the centring matrix H = I − 11ᵀ/n. */
-    static double[][] centreColumns(double[][] cols) {
+    public static double[][] centreColumns(double[][] cols) {
         for (double[] c : cols) {
             double mean = 0;
             for (double v : c) {
@@ -227,7 +229,7 @@ final class KernelAlgebra {
     }
 
     /** The r × s matrix Aᵀ B of column sets A (r columns) and B (s columns), row-major. */
-    static double[] crossProduct(double[][] a, double[][] b) {
+    public static double[] crossProduct(double[][] a, double[][] b) {
         int r = a.length;
         int s = b.length;
         double[] out = new double[r * s];
@@ -246,7 +248,7 @@ final class KernelAlgebra {
     }
 
     /** The symmetric r × r matrix Aᵀ A of a column set A (row-major), each entry computed once. */
-    static double[] symmetricCrossProduct(double[][] a) {
+    public static double[] symmetricCrossProduct(double[][] a) {
         int r = a.length;
         double[] out = new double[r * r];
         for (int i = 0; i < r; i++) {
