@@ -236,12 +236,7 @@ public final class KernelAlgebra {
         for (int i = 0; i < r; i++) {
             double[] ai = a[i];
             for (int j = 0; j < s; j++) {
-                double[] bj = b[j];
-                double t = 0;
-                for (int k = 0; k < ai.length; k++) {
-                    t += ai[k] * bj[k];
-                }
-                out[i * s + j] = t;
+                out[i * s + j] = dot(ai, b[j]);
             }
         }
         return out;
@@ -254,11 +249,7 @@ public final class KernelAlgebra {
         for (int i = 0; i < r; i++) {
             double[] ai = a[i];
             for (int j = i; j < r; j++) {
-                double[] aj = a[j];
-                double t = 0;
-                for (int k = 0; k < ai.length; k++) {
-                    t += ai[k] * aj[k];
-                }
+                double t = dot(ai, a[j]);
                 out[i * r + j] = t;
                 out[j * r + i] = t;
             }
@@ -266,13 +257,33 @@ public final class KernelAlgebra {
         return out;
     }
 
+    /**
+     * The dot product of two equally long vectors, with four partial sums: independent
+     * additions let the processor overlap them (a single running sum waits on each addition),
+     * which makes the products of the kernel tests several times faster.
+     */
+    static double dot(double[] a, double[] b) {
+        int n = a.length;
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        int k = 0;
+        for (; k + 3 < n; k += 4) {
+            s0 += a[k] * b[k];
+            s1 += a[k + 1] * b[k + 1];
+            s2 += a[k + 2] * b[k + 2];
+            s3 += a[k + 3] * b[k + 3];
+        }
+        for (; k < n; k++) {
+            s0 += a[k] * b[k];
+        }
+        return (s0 + s1) + (s2 + s3);
+    }
+
     /** The squared Frobenius norm of a matrix stored as an array. */
     static double squaredNorm(double[] m) {
-        double s = 0;
-        for (double v : m) {
-            s += v * v;
-        }
-        return s;
+        return dot(m, m);
     }
 
     /** The squared Frobenius norm of a column set. */
@@ -325,6 +336,37 @@ public final class KernelAlgebra {
                 b[i * c + col] = s / l[i * q + i];
             }
         }
+    }
+
+    private static final double TWO_OVER_PI = 0.6366197723675814;
+    // π/2 split in two (Cody and Waite 1980, "Software manual for the elementary functions"):
+    // the high part has trailing zero bits, so k·PIO2_HI is exact for |k| < 2²⁰.
+    private static final double PIO2_HI = 1.5707963267341256;
+    private static final double PIO2_LO = 6.077100506506192e-11;
+
+    /**
+     * cos(t) for |t| &lt; 10⁵, within about 1e-15 absolute of {@link Math#cos} (checked in the
+     * tests): Cody–Waite reduction to r = t − kπ/2 with |r| ≤ π/4, then the Taylor polynomials of
+     * cos r (to r¹⁴) or sin r (to r¹⁵) by the quadrant k mod 4; the truncation error is below
+     * (π/4)¹⁶/16! ≈ 2·10⁻¹⁵. About ten times cheaper than {@code Math.cos} here, which matters
+     * for RCIT's n × m random features. Falls back to {@code Math.cos} outside that range.
+     */
+    public static double cos(double t) {
+        if (!(Math.abs(t) < 1e5)) {
+            return Math.cos(t);
+        }
+        double k = Math.rint(t * TWO_OVER_PI);
+        double r = (t - k * PIO2_HI) - k * PIO2_LO;
+        double r2 = r * r;
+        int quadrant = ((int) k) & 3;
+        if ((quadrant & 1) == 0) {
+            double c = 1 + r2 * (-1.0 / 2 + r2 * (1.0 / 24 + r2 * (-1.0 / 720 + r2 * (1.0 / 40320
+                    + r2 * (-1.0 / 3628800 + r2 * (1.0 / 479001600 + r2 * (-1.0 / 87178291200.0)))))));
+            return quadrant == 0 ? c : -c;
+        }
+        double sn = r * (1 + r2 * (-1.0 / 6 + r2 * (1.0 / 120 + r2 * (-1.0 / 5040 + r2 * (1.0 / 362880
+                + r2 * (-1.0 / 39916800 + r2 * (1.0 / 6227020800.0 + r2 * (-1.0 / 1307674368000.0))))))));
+        return quadrant == 1 ? -sn : sn;
     }
 
     /**
