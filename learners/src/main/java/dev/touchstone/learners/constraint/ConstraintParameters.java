@@ -12,10 +12,8 @@ import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
-import dev.touchstone.learners.independence.ContingencyTest;
 import dev.touchstone.learners.independence.IndependenceTest;
 import dev.touchstone.learners.independence.IndependenceTests;
-import dev.touchstone.learners.independence.MissingPolicy;
 
 import java.util.List;
 
@@ -31,10 +29,12 @@ final class ConstraintParameters {
     private ConstraintParameters() {
     }
 
-    /** The shared declarations: test, alpha, missing, max_depth, skeleton, degrees_of_freedom. */
+    /** The shared declarations: test, alpha, missing, max_depth, skeleton, degrees_of_freedom, then the kernel tests' settings. */
     static List<ParameterSpec> shared() {
-        return List.of(IndependenceTests.TEST, IndependenceTests.ALPHA, IndependenceTests.MISSING, MAX_DEPTH, SKELETON,
-                IndependenceTests.DEGREES_OF_FREEDOM);
+        List<ParameterSpec> specs = new java.util.ArrayList<>(List.of(IndependenceTests.TEST, IndependenceTests.ALPHA,
+                IndependenceTests.MISSING, MAX_DEPTH, SKELETON, IndependenceTests.DEGREES_OF_FREEDOM));
+        specs.addAll(IndependenceTests.kernelParameters());
+        return List.copyOf(specs);
     }
 
     /**
@@ -62,11 +62,9 @@ final class ConstraintParameters {
         return b.build();
     }
 
-    static IndependenceTest test(LearnerInput input, ParameterValues values) {
-        return IndependenceTests.forInput(input, values.getString(IndependenceTests.TEST.name()),
-                values.getDouble(IndependenceTests.ALPHA.name()),
-                MissingPolicy.parse(values.getString(IndependenceTests.MISSING.name())),
-                ContingencyTest.DegreesOfFreedom.parse(values.getString(IndependenceTests.DEGREES_OF_FREEDOM.name())));
+    /** The test the values name; the kernel tests draw their randomness from {@code seed}. */
+    static IndependenceTest test(LearnerInput input, ParameterValues values, long seed) {
+        return IndependenceTests.forInput(input, values, seed);
     }
 
     static KnowledgeIndex knowledge(Knowledge knowledge, List<String> names) {

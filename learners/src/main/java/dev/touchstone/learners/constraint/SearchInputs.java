@@ -23,7 +23,8 @@ record SearchInputs(List<String> names, KnowledgeIndex knowledge, IndependenceTe
         List<String> names = input.variableNames();
         KnowledgeIndex ki = ConstraintParameters.knowledge(knowledge, names);
         context.checkDeadline();
-        return new SearchInputs(names, ki, ConstraintParameters.test(input, parameters),
+        return new SearchInputs(names, ki, ConstraintParameters.test(input, parameters,
+                        dev.touchstone.core.random.Seeds.derive(context.seed(), "independence-test")),
                 parameters.getInt(ConstraintParameters.MAX_DEPTH.name()),
                 SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name())));
     }

@@ -5,6 +5,7 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.param.ParameterSpec;
+import dev.touchstone.core.param.ParameterValues;
 
 import java.util.List;
 
@@ -22,11 +23,16 @@ public final class IndependenceTests {
     public static final String G_SQUARE = "g-square";
     public static final String CHI_SQUARE = "chi-square";
     public static final String CONDITIONAL_GAUSSIAN = "conditional-gaussian";
+    /** The kernel conditional independence test of Zhang, Peters, Janzing and Schölkopf (2011), {@link KciTest}. */
+    public static final String KCI = "kci";
+    /** The randomized conditional independence test of Strobl, Zhang and Visweswaran (2019), {@link RcitTest}. */
+    public static final String RCIT = "rcit";
 
     /** The {@code test} parameter. */
     public static final ParameterSpec TEST = ParameterSpec.choice("test", AUTO,
-            List.of(AUTO, FISHER_Z, G_SQUARE, CHI_SQUARE, CONDITIONAL_GAUSSIAN),
+            List.of(AUTO, FISHER_Z, G_SQUARE, CHI_SQUARE, CONDITIONAL_GAUSSIAN, KCI, RCIT),
             "independence test: auto picks fisher-z (continuous), g-square (discrete) or conditional-gaussian (mixed; Andrews, Ramsey and Cooper 2018); "
+                    + "kci (Zhang et al. 2011) and rcit (Strobl et al. 2019) are kernel tests for nonlinear continuous data; "
                     + "ignored with the oracle");
     /** The {@code alpha} parameter. */
     public static final ParameterSpec ALPHA = ParameterSpec.real("alpha", 0.01, 1e-12, 0.999,
@@ -44,6 +50,27 @@ public final class IndependenceTests {
                     + "stratum with data (common practice); textbook is (|X|-1)(|Y|-1) times the number of configurations "
                     + "of the conditioning set (Agresti 2002)");
 
+    /** The {@code kci_rank} parameter. */
+    public static final ParameterSpec KCI_RANK = ParameterSpec.integer("kci_rank", 100, 1, 100_000,
+            "with test = kci: largest rank of the incomplete Cholesky factor of each kernel matrix (bounds the cost)");
+    /** The {@code kci_ridge} parameter. */
+    public static final ParameterSpec KCI_RIDGE = ParameterSpec.real("kci_ridge", 1e-3, 1e-12, 1e6,
+            "with test = kci: ridge ε of the kernel regression on the conditioning set, R = ε(K + εI)⁻¹");
+    /** The {@code kci_max_rows} parameter. */
+    public static final ParameterSpec KCI_MAX_ROWS = ParameterSpec.integer("kci_max_rows", 2000, 6, Integer.MAX_VALUE,
+            "with test = kci: with more usable rows, each test uses a seeded random subset of this many");
+    /** The {@code rcit_features} parameter. */
+    public static final ParameterSpec RCIT_FEATURES = ParameterSpec.integer("rcit_features", 5, 1, 100,
+            "with test = rcit: random Fourier features for each of the two tested variables");
+    /** The {@code rcit_conditioning_features} parameter. */
+    public static final ParameterSpec RCIT_CONDITIONING_FEATURES = ParameterSpec.integer("rcit_conditioning_features",
+            100, 1, 5000, "with test = rcit: random Fourier features for the conditioning set");
+
+    /** The parameters of the kernel tests, which every learner with a {@code test} parameter declares too. */
+    public static java.util.List<ParameterSpec> kernelParameters() {
+        return List.of(KCI_RANK, KCI_RIDGE, KCI_MAX_ROWS, RCIT_FEATURES, RCIT_CONDITIONING_FEATURES);
+    }
+
     private IndependenceTests() {
     }
 
@@ -54,16 +81,32 @@ public final class IndependenceTests {
      *     list-wise deletion leaves no rows
      */
     public static IndependenceTest forInput(LearnerInput input, String test, double alpha, MissingPolicy missing) {
-        return forInput(input, test, alpha, missing, ContingencyTest.DegreesOfFreedom.REDUCED);
+        return forInput(input, test, alpha, missing, ContingencyTest.DegreesOfFreedom.REDUCED,
+                KciTest.Settings.defaults(0), RcitTest.Settings.defaults(0));
     }
 
     /**
-     * The test for this input, with the given degrees-of-freedom rule for G² and χ².
-     *
-     * @throws LearnerException as {@link #forInput(LearnerInput, String, double, MissingPolicy)}
+     * The test named by the {@code test}, {@code alpha}, {@code missing} and
+     * {@code degrees_of_freedom} values, with the kernel tests' settings read from the same
+     * values and their randomness (KCI's row subset, RCIT's features) drawn from {@code seed}.
+     */
+    public static IndependenceTest forInput(LearnerInput input, ParameterValues values, long seed) {
+        KciTest.Settings kci = new KciTest.Settings(values.getInt(KCI_RANK.name()), values.getDouble(KCI_RIDGE.name()),
+                values.getInt(KCI_MAX_ROWS.name()), seed);
+        RcitTest.Settings rcit = new RcitTest.Settings(values.getInt(RCIT_FEATURES.name()),
+                values.getInt(RCIT_CONDITIONING_FEATURES.name()), seed);
+        return forInput(input, values.getString(TEST.name()), values.getDouble(ALPHA.name()),
+                MissingPolicy.parse(values.getString(MISSING.name())),
+                ContingencyTest.DegreesOfFreedom.parse(values.getString(DEGREES_OF_FREEDOM.name())), kci, rcit);
+    }
+
+    /**
+     * As {@link #forInput(LearnerInput, String, double, MissingPolicy)}, with the degrees-of-freedom
+     * rule of G² and χ² and the kernel tests' settings.
      */
     public static IndependenceTest forInput(LearnerInput input, String test, double alpha, MissingPolicy missing,
-                                            ContingencyTest.DegreesOfFreedom degreesOfFreedom) {
+                                            ContingencyTest.DegreesOfFreedom degreesOfFreedom, KciTest.Settings kci,
+                                            RcitTest.Settings rcit) {
         if (input.isOracle()) {
             return new OracleTest(input.oracle());
         }
@@ -97,6 +140,13 @@ public final class IndependenceTests {
                         degreesOfFreedom);
             case CONDITIONAL_GAUSSIAN:
                 return new ConditionalGaussianTest(data, alpha);
+            case KCI:
+            case RCIT:
+                if (kind != DataKind.CONTINUOUS) {
+                    throw new LearnerException("test " + chosen + " needs continuous data, these are " + kind.word()
+                            + " (use g-square or chi-square for discrete, conditional-gaussian for mixed)");
+                }
+                return chosen.equals(KCI) ? KciTest.of(data, alpha, kci) : RcitTest.of(data, alpha, rcit);
             default:
                 throw new LearnerException("unknown independence test '" + test + "' (allowed: "
                         + String.join(", ", TEST.choices()) + ")");

@@ -30,7 +30,11 @@ class SymmetryTest {
             "g-square, discrete, false",
             "chi-square, discrete, true",
             "conditional-gaussian, conditional-gaussian, false",
-            "conditional-gaussian, conditional-gaussian, true"})
+            "conditional-gaussian, conditional-gaussian, true",
+            "kci, additive-nonlinear, false",
+            "kci, additive-nonlinear, true",
+            "rcit, additive-nonlinear, false",
+            "rcit, additive-nonlinear, true"})
     @DisplayName("p-value of (x, y | z) equals that of (y, x | z) to the bit")
     void symmetric(String test, String model, boolean missing) {
         Simulation.Builder b = Simulation.builder()

@@ -1,0 +1,120 @@
+package dev.touchstone.learners.independence;
+
+import dev.touchstone.core.data.DataSet;
+import org.apache.commons.math3.distribution.GammaDistribution;
+import org.apache.commons.math3.linear.EigenDecomposition;
+import org.apache.commons.math3.linear.MatrixUtils;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.stat.correlation.Covariance;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+
+import java.util.Arrays;
+
+import static dev.touchstone.learners.independence.KciTestTest.pValues;
+import static dev.touchstone.learners.independence.KciTestTest.rejections;
+import static dev.touchstone.learners.independence.KciTestTest.uniformity;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * RCIT (Strobl, Zhang and Visweswaran 2019, Journal of Causal Inference 7): its statistic
+ * and gamma null checked against the eigenvalues of the product covariance computed with
+ * Commons Math 3.6.1 (Σ λ_k z_k² has mean Σ λ_k and variance 2 Σ λ_k², a property of
+ * weighted sums of independent χ²₁ variables), and its calibration and power on seeded
+ * samples.
+ */
+class RcitTestTest {
+
+    private static final KciTestTest.IndependenceTestFactory RCIT = d -> RcitTest.of(d, 0.05, RcitTest.Settings.defaults(4));
+
+    @Test
+    @DisplayName("statistic n‖Ĉ_xy‖² and gamma moments Σλ, 2Σλ² from Commons Math's Covariance and EigenDecomposition of the products r_x ⊗ r_y")
+    void statisticMatchesEigenvalueRoute() {
+        int n = 200;
+        java.util.Random random = new java.util.Random(9); // test-only data, not the implementation's stream
+        double[][] rx = new double[3][n];
+        double[][] ry = new double[2][n];
+        for (int i = 0; i < n; i++) {
+            for (double[] c : rx) {
+                c[i] = random.nextGaussian();
+            }
+            ry[0][i] = random.nextGaussian() + 0.3 * rx[0][i] * rx[1][i];
+            ry[1][i] = random.nextGaussian();
+        }
+        KernelAlgebra.centreColumns(rx);
+        KernelAlgebra.centreColumns(ry);
+        double[][] w = new double[n][6];
+        for (int i = 0; i < n; i++) {
+            for (int a = 0; a < 3; a++) {
+                for (int b = 0; b < 2; b++) {
+                    w[i][a * 2 + b] = rx[a][i] * ry[b][i];
+                }
+            }
+        }
+        RealMatrix wm = MatrixUtils.createRealMatrix(w);
+        double stat = 0;
+        for (int k = 0; k < 6; k++) {
+            double s = Arrays.stream(wm.getColumn(k)).sum() / n;
+            stat += n * s * s;
+        }
+        // Covariance with divisor n (bias-corrected = false), as the implementation uses.
+        RealMatrix cov = new Covariance(w, false).getCovarianceMatrix();
+        double[] lambda = new EigenDecomposition(cov).getRealEigenvalues();
+        double mean = Arrays.stream(lambda).sum();
+        double var = 2 * Arrays.stream(lambda).map(l -> l * l).sum();
+        KciTest.Result r = RcitTest.statistic(rx, ry, n);
+        assertEquals(stat, r.statistic(), 1e-9 * stat);
+        assertEquals(mean, r.nullMean(), 1e-9 * mean);
+        assertEquals(var, r.nullVariance(), 1e-9 * var);
+        assertEquals(1 - new GammaDistribution(mean * mean / var, var / mean).cumulativeProbability(stat), r.pValue(), 1e-9);
+    }
+
+    @Test
+    @DisplayName("null calibration at n = 500: p-values uniform by KS (p > 0.01), independent (100 cases) and given a nonlinear common cause (100 cases)")
+    void calibration() {
+        double[] independent = pValues(RCIT, KernelNullData.Case.INDEPENDENT, new int[0], 100, 500, 31);
+        assertTrue(uniformity(independent) > 0.01, "KS p = " + uniformity(independent));
+        double[] conditional = pValues(RCIT, KernelNullData.Case.COMMON_CAUSE, new int[] {2}, 100, 500, 32);
+        assertTrue(uniformity(conditional) > 0.01, "KS p = " + uniformity(conditional) + " " + Arrays.toString(conditional));
+        double[] marginal = pValues(RCIT, KernelNullData.Case.COMMON_CAUSE, new int[0], 20, 500, 33);
+        assertTrue(rejections(marginal, 0.05) >= 18, Arrays.toString(marginal));
+    }
+
+    @Test
+    @DisplayName("power at n = 500, α = 0.05: y = sin(2x) + e and y = x² + e rejected in ≥ 90% of 50 cases each")
+    void power() {
+        double[] sine = pValues(RCIT, KernelNullData.Case.SINE, new int[0], 50, 500, 41);
+        double[] square = pValues(RCIT, KernelNullData.Case.SQUARE, new int[0], 50, 500, 42);
+        assertTrue(rejections(sine, 0.05) >= 45, Arrays.toString(sine));
+        assertTrue(rejections(square, 0.05) >= 45, Arrays.toString(square));
+    }
+
+    @Test
+    @DisplayName("the features' cosine agrees with Math.cos (Java SE, within 1 ulp of the exact value) to 2e-15 absolute, |t| up to 1e5")
+    void fastCosineMatchesMathCos() {
+        java.util.Random random = new java.util.Random(1);
+        double worst = 0;
+        for (int i = 0; i < 400_000; i++) {
+            double scale = i % 4 == 0 ? 1e5 : i % 4 == 1 ? 100 : i % 4 == 2 ? 4 : 0.8;
+            double t = (2 * random.nextDouble() - 1) * scale;
+            worst = Math.max(worst, Math.abs(KernelAlgebra.cos(t) - Math.cos(t)));
+        }
+        assertTrue(worst < 2e-15, "largest difference " + worst);
+        for (double t : new double[] {0, Math.PI / 4, Math.PI / 2, Math.PI, -Math.PI / 2, 3 * Math.PI / 2, 2e5, Double.NaN}) {
+            assertEquals(Math.cos(t), KernelAlgebra.cos(t), 2e-15, "t = " + t);
+        }
+    }
+
+    @Test
+    @DisplayName("the same seed gives the same p-value; the conditioning set's order does not matter")
+    void deterministic() {
+        DataSet d = KernelNullData.sample(KernelNullData.Case.COMMON_CAUSE, 300, 5);
+        DataSet wider = TestData.continuous(new double[][] {d.continuous(0), d.continuous(1), d.continuous(2),
+                d.continuous(0).clone()});
+        RcitTest a = RcitTest.of(wider, 0.05, RcitTest.Settings.defaults(8));
+        RcitTest b = RcitTest.of(wider, 0.05, RcitTest.Settings.defaults(8));
+        assertEquals(a.pValue(0, 1, new int[] {2, 3}), b.pValue(0, 1, new int[] {3, 2}), 0.0);
+        assertEquals(a.pValue(0, 1, new int[] {2}), a.pValue(1, 0, new int[] {2}), 0.0);
+    }
+}
