@@ -22,7 +22,8 @@ import java.util.stream.IntStream;
  * every w is scored twice, with and without v (d_w = with − without), and v once per index;
  * the gain of index i over v's current index c is then
  * s_v(i) − s_v(c) + Σ_{i ≤ j &lt; c} d_σ[j] (for i &lt; c) or − Σ_{c ≤ j &lt; i} d_σ[j] (for i &gt; c),
- * about 3p grow-shrink queries per move. Summing differences rather than totals keeps the
+ * about 3p grow-shrink queries per move; the query with v is skipped when the one without v
+ * never asked whether v precedes w (v then cannot change w's path through the tree). Summing differences rather than totals keeps the
  * comparison exact where nothing changed (d_w is exactly 0 when v does not enter w's
  * parents), which matters with the oracle's scores of order 10⁹. v moves to the best index
  * when its gain exceeds the rounding tolerance; indices that would put a required parent
@@ -145,9 +146,16 @@ final class BossSearch {
             int w = sigma[task];
             int at = task;
             GrowShrinkTree tree = scorer.tree(w);
-            double with = tree.score(x -> x == v || pos[x] < at);
-            double without = tree.score(x -> x != v && pos[x] < at);
-            d[task] = with - without;
+            boolean[] asked = new boolean[1];
+            double without = tree.score(x -> {
+                if (x == v) {
+                    asked[0] = true;
+                    return false;
+                }
+                return pos[x] < at;
+            });
+            // a query that never asked about v follows the same path when v is allowed
+            d[task] = asked[0] ? tree.score(x -> x == v || pos[x] < at) - without : 0.0;
         });
         double tol = tolerance(own[current]);
         int bestIndex = current;
@@ -182,7 +190,7 @@ final class BossSearch {
 
     /** Rounding tolerance for comparing sums of local scores of this magnitude. */
     static double tolerance(double magnitude) {
-        return 1e-9 * (1.0 + Math.abs(magnitude));
+        return GrowShrinkTree.tolerance(magnitude);
     }
 
     private void parallel(int count, IntConsumer body) {

@@ -31,8 +31,13 @@ import java.util.Arrays;
  */
 final class GrowShrinkTree {
 
-    /** Score changes at or below this count as no improvement (rounding of the local scores). */
-    static final double MIN_IMPROVEMENT = 1e-9;
+    /**
+     * Score changes at or below this, relative to the score's magnitude, count as no
+     * improvement: rounding of local scores, which reach 10⁹ with the oracle's row count.
+     */
+    static double tolerance(double score) {
+        return 1e-9 * (1.0 + Math.abs(score));
+    }
 
     private final LocalScore score;
     private final int y;
@@ -128,7 +133,7 @@ final class GrowShrinkTree {
                 }
                 without(current, i, candidate);
                 double s = score.localScore(y, candidate);
-                if (s > dropScore + MIN_IMPROVEMENT) {
+                if (s > dropScore + tolerance(dropScore)) {
                     dropScore = s;
                     drop = i;
                 }
@@ -192,19 +197,20 @@ final class GrowShrinkTree {
                 return;
             }
             int p = admissible.length;
+            boolean[] candidates = admissible.clone();
+            for (int x : parents) {
+                candidates[x] = false;
+            }
+            double[] scores = new double[p];
+            GrowShrinkTree.this.score.scoreAdditions(y, parents, candidates, scores);
             int[] vars = new int[p];
             double[] gains = new double[p];
             int kept = 0;
-            int[] withX = Arrays.copyOf(parents, parents.length + 1);
+            double tol = tolerance(score);
             for (int x = 0; x < p; x++) {
-                if (!admissible[x] || Arrays.binarySearch(parents, x) >= 0) {
-                    continue;
-                }
-                withX[parents.length] = x;
-                double s = GrowShrinkTree.this.score.localScore(y, withX);
-                if (s > score + MIN_IMPROVEMENT) {
+                if (candidates[x] && scores[x] > score + tol) {
                     vars[kept] = x;
-                    gains[kept] = s;
+                    gains[kept] = scores[x];
                     kept++;
                 }
             }
