@@ -37,18 +37,19 @@ class BossLearnerTest {
     }
 
     /** Outcome of the oracle check: cases not exact, and those among them where the search scored below the truth. */
-    record OracleOutcome(List<String> inexact, List<String> belowTruth) {
+    record OracleOutcome(List<String> inexact, List<String> belowTruth, List<Long> seeds) {
     }
 
     /**
-     * 200 seeded Erdős–Rényi DAGs of 8 to 20 nodes with mean degree 2, 3, 4, 5 and 6 (40 each), given
+     * Seeded Erdős–Rényi DAGs (seeds 1 to 200 make 200) of 8 to 20 nodes with mean degree 2, 3, 4, 5 and 6 (40 each in 1 to 200), given
      * as the exact covariance of a linear SEM (weights ±[0.5, 2]). A case that is not exact is also
      * scored: the oracle BIC of a DAG in the returned class against that of the true DAG.
      */
-    static OracleOutcome oracleCheck(Learner learner, Map<String, Object> raw) {
+    static OracleOutcome oracleCheck(Learner learner, Map<String, Object> raw, long firstSeed, long lastSeed) {
         List<String> inexact = new ArrayList<>();
         List<String> below = new ArrayList<>();
-        for (long seed = 1; seed <= 200; seed++) {
+        List<Long> seeds = new ArrayList<>();
+        for (long seed = firstSeed; seed <= lastSeed; seed++) {
             int p = 8 + (int) (seed % 13);
             double degree = 2 + (seed % 5);
             Graph dag = RandomDags.erdosRenyi(p, degree, seed);
@@ -62,33 +63,30 @@ class BossLearnerTest {
                 String line = "seed " + seed + " (p=" + p + ", degree " + degree + "): " + e.graph().edgeCount()
                         + " edges over " + dag.edgeCount() + ", BIC estimate - truth = " + (got - truth);
                 inexact.add(line);
+                seeds.add(seed);
                 if (got < truth - BossSearch.tolerance(truth)) {
                     below.add(line);
                 }
             }
         }
-        return new OracleOutcome(inexact, below);
+        return new OracleOutcome(inexact, below, seeds);
     }
 
     @Test
-    @DisplayName("oracle: with 3 starts BOSS returns the true CPDAG on 200 seeded random DAGs of mean degree 2 to 6,"
-            + " except where the truth is not the oracle score's optimum (Andrews et al. 2023, correctness under"
-            + " faithfulness, from memory; Chickering 2002 for the backward phase)")
+    @DisplayName("oracle: BOSS returns the true CPDAG on at least 198 of 200 seeded random DAGs of mean degree 2 to 6;"
+            + " with 3 starts every miss is a graph scoring at least the truth's (Andrews et al. 2023, correctness"
+            + " under faithfulness, from memory; Chickering 2002 for the backward phase)")
     void oracleRecoversTheTrueCpdag() {
-        OracleOutcome o = oracleCheck(BOSS, Map.of("starts", 3));
-        // Measured: 199 of 200 exact. The miss (seed 62) returns 34 edges over 35 true and scores 9.5
-        // ABOVE the truth: one true edge's partial correlation is below what the oracle's 10^9 rows can
-        // see (BicScore), so the truth is not the score's optimum; GES returns the same graph.
-        assertTrue(o.belowTruth().isEmpty(), "search ended below the truth's score:\n" + String.join("\n", o.belowTruth()));
-        assertTrue(o.inexact().size() <= 1, o.inexact().size() + " not exact:\n" + String.join("\n", o.inexact()));
-    }
-
-    @Test
-    @DisplayName("oracle: with one start BOSS is exact on at least 198 of the 200 DAGs (one local optimum, seed 69, at"
-            + " mean degree 6; the paper's restarts are for this)")
-    void oracleOneStart() {
-        OracleOutcome o = oracleCheck(BOSS, Map.of());
-        assertTrue(o.inexact().size() <= 2, o.inexact().size() + " not exact:\n" + String.join("\n", o.inexact()));
+        OracleOutcome one = oracleCheck(BOSS, Map.of(), 1, 200);
+        // Measured: 198 of 200 exact. Seed 69 (p = 12, mean degree 6) ends in a local optimum of the
+        // order search (55 edges over 47) that 3 starts escape. Seed 62 returns 34 edges over 35 and
+        // scores 9.5 ABOVE the truth: one true edge's partial correlation is below what the oracle's
+        // 10^9 rows can see (BicScore), so the truth is not the score's optimum; GES returns the same graph.
+        assertTrue(one.inexact().size() <= 2, one.inexact().size() + " not exact:\n" + String.join("\n", one.inexact()));
+        for (long seed : one.seeds()) {
+            OracleOutcome three = oracleCheck(BOSS, Map.of("starts", 3), seed, seed);
+            assertTrue(three.belowTruth().isEmpty(), "with 3 starts still below the truth's score: " + three.belowTruth());
+        }
     }
 
     @Test
