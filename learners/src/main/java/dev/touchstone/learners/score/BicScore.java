@@ -2,6 +2,7 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.data.CovarianceMatrix;
 
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -136,26 +137,46 @@ public final class BicScore implements LocalScore {
                 ryy -= b[i] * b[i];
             }
         }
-        double[] c = new double[k];
-        for (int x = 0; x < candidates.length; x++) {
+        // c_i[x] for all x at once, row by row of Σ: contiguous reads instead of one row per candidate
+        int m = candidates.length;
+        double[][] c = new double[k][];
+        for (int i = 0; i < k; i++) {
+            double[] ci = new double[m];
+            System.arraycopy(cov, parents[i] * p, ci, 0, m);
+            for (int j = 0; j < i; j++) {
+                double lij = a[i * k + j];
+                if (lij != 0) {
+                    double[] cj = c[j];
+                    for (int x = 0; x < m; x++) {
+                        ci[x] -= lij * cj[x];
+                    }
+                }
+            }
+            double d = a[i * k + i];
+            if (d == 0) {
+                Arrays.fill(ci, 0);
+            } else {
+                double inv = 1.0 / d;
+                for (int x = 0; x < m; x++) {
+                    ci[x] *= inv;
+                }
+            }
+            c[i] = ci;
+        }
+        int rowY = node * p;
+        for (int x = 0; x < m; x++) {
             if (!candidates[x]) {
                 continue;
             }
-            int row = x * p;
+            double sxx = cov[x * p + x];
+            double rxx = sxx;
+            double rxy = cov[rowY + x];
             for (int i = 0; i < k; i++) {
-                c[i] = cov[row + parents[i]];
+                double cix = c[i][x];
+                rxx -= cix * cix;
+                rxy -= cix * b[i];
             }
-            double rxx = cov[row + x];
-            double rxy = cov[row + node];
-            if (k > 0) {
-                SmallCholesky.forward(a, k, c);
-                for (int i = 0; i < k; i++) {
-                    rxx -= c[i] * c[i];
-                    rxy -= c[i] * b[i];
-                }
-            }
-            double residual = rxx > SmallCholesky.RELATIVE_PIVOT_FLOOR * cov[row + x] && rxx > 0
-                    ? ryy - rxy * rxy / rxx : ryy;
+            double residual = rxx > SmallCholesky.RELATIVE_PIVOT_FLOOR * sxx && rxx > 0 ? ryy - rxy * rxy / rxx : ryy;
             double mle = Math.max(residual * varianceFactor, Double.MIN_NORMAL);
             out[x] = -0.5 * n * (LOG_2PI + Math.log(mle) + 1.0) - penalty;
         }

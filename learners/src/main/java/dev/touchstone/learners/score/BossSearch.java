@@ -23,7 +23,8 @@ import java.util.stream.IntStream;
  * the gain of index i over v's current index c is then
  * s_v(i) − s_v(c) + Σ_{i ≤ j &lt; c} d_σ[j] (for i &lt; c) or − Σ_{c ≤ j &lt; i} d_σ[j] (for i &gt; c),
  * about 3p grow-shrink queries per move; the query with v is skipped when the one without v
- * never asked whether v precedes w (v then cannot change w's path through the tree). Summing differences rather than totals keeps the
+ * never asked whether v precedes w (v then cannot change w's path through the tree), and v's
+ * own query at index i + 1 reuses the one at i when that never asked about σ[i]. Summing differences rather than totals keeps the
  * comparison exact where nothing changed (d_w is exactly 0 when v does not enter w's
  * parents), which matters with the oracle's scores of order 10⁹. v moves to the best index
  * when its gain exceeds the rounding tolerance; indices that would put a required parent
@@ -137,9 +138,21 @@ final class BossSearch {
         parallel(p, task -> {
             if (task == p - 1) {
                 GrowShrinkTree tree = scorer.tree(v);
+                // asked[x] == stamp: the last query asked whether x precedes v; a prefix that grows by a
+                // variable the query never asked about follows the same path, so the score is reused
+                int[] asked = new int[p];
+                int stamp = 0;
                 for (int i = from; i <= to; i++) {
+                    if (i > from && asked[sigma[i - 1]] != stamp) {
+                        own[i] = own[i - 1];
+                        continue;
+                    }
                     int at = i;
-                    own[i] = tree.score(x -> pos[x] < at);
+                    int query = ++stamp;
+                    own[i] = tree.score(x -> {
+                        asked[x] = query;
+                        return pos[x] < at;
+                    });
                 }
                 return;
             }
