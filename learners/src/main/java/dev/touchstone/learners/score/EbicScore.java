@@ -74,6 +74,17 @@ public final class EbicScore implements LocalScore {
         return bic.localScore(node, parents) - perParent * parents.length;
     }
 
+    @Override
+    public void scoreAdditions(int node, int[] parents, boolean[] candidates, double[] out) {
+        bic.scoreAdditions(node, parents, candidates, out);
+        double extra = perParent * (parents.length + 1);
+        for (int x = 0; x < candidates.length; x++) {
+            if (candidates[x]) {
+                out[x] -= extra;
+            }
+        }
+    }
+
     /** As the BIC it extends: the extra term adds nothing worth a memo. */
     @Override
     public boolean worthCaching(int parentCount) {

@@ -118,6 +118,25 @@ final class GesSearch {
     }
 
     /**
+     * Runs only the backward phase (Delete operators) from the completion of {@code start}
+     * and returns the final PDAG: the backward equivalence search that the permutation
+     * searches apply to the graph of their best order ({@link BossSearch}).
+     */
+    Pdag backwardFrom(Pdag start) {
+        graph = completion.complete(start);
+        context.checkDeadline();
+        pool = context.threads() > 1 ? new ForkJoinPool(context.threads()) : null;
+        try {
+            backward();
+        } finally {
+            if (pool != null) {
+                pool.shutdownNow();
+            }
+        }
+        return graph;
+    }
+
+    /**
      * Makes {@code pdag} the current graph, so that the operators can be enumerated on it
      * ({@link #validInserts}, {@link #validDeletes}); for the brute-force cross-check tests.
      */

@@ -31,6 +31,25 @@ public interface LocalScore {
     double localScore(int node, int[] parents);
 
     /**
+     * The local scores of {@code node} given {@code parents} plus one more parent x, for every
+     * x with {@code candidates[x]}, written to {@code out[x]} (other entries untouched): the
+     * batch a search makes when it weighs every single addition to one parent set (the
+     * grow-shrink trees of {@link GrowShrinkTree}). Scores may share the work on
+     * {@code parents} across the batch; the default calls {@link #localScore} once per x.
+     *
+     * @param candidates indexed by variable; must be false for {@code node} and members of {@code parents}
+     */
+    default void scoreAdditions(int node, int[] parents, boolean[] candidates, double[] out) {
+        int[] with = java.util.Arrays.copyOf(parents, parents.length + 1);
+        for (int x = 0; x < candidates.length; x++) {
+            if (candidates[x]) {
+                with[parents.length] = x;
+                out[x] = localScore(node, with);
+            }
+        }
+    }
+
+    /**
      * Whether a memo ({@link ScoreCache}) pays off for parent sets of this size: false when
      * evaluating is about as cheap as a hash lookup. Default true.
      */

@@ -75,6 +75,17 @@ public final class ScoreCache implements LocalScore {
         return s;
     }
 
+    /** Passed to the score behind the memo (a batch is not worth memoising), counting one evaluation per candidate. */
+    @Override
+    public void scoreAdditions(int node, int[] parents, boolean[] candidates, double[] out) {
+        long n = 0;
+        for (boolean c : candidates) {
+            n += c ? 1 : 0;
+        }
+        context.countScores(n);
+        score.scoreAdditions(node, parents, candidates, out);
+    }
+
     /** The score behind the cache. */
     public LocalScore underlying() {
         return score;
