@@ -1,5 +1,6 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.Plan;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -26,7 +27,8 @@ final class ReportCommand implements Callable<Integer> {
     Path to;
 
     @Option(names = "--learners", paramLabel = "FILE",
-            description = "The learners file the study was run with, if it uses external command learners.")
+            description = "The learners file to read the study with (default: the copy the study kept in its folder;"
+                    + " no learner is run).")
     Path learnersFile;
 
     @Option(names = "--plugins", paramLabel = "DIR", description = "The plug-in folder the study was run with, if any.")
@@ -41,7 +43,8 @@ final class ReportCommand implements Callable<Integer> {
         if (!Files.isRegularFile(study) || !Files.isRegularFile(out.resolve("journal.jsonl"))) {
             throw new UsageException(out + ": not a study's output folder (it needs study.yaml and journal.jsonl)");
         }
-        Toolkit kit = new Toolkit(learnersFile, plugins);
+        Path learners = learnersFile != null ? learnersFile : StudyRunner.keptLearnersFile(out);
+        Toolkit kit = new Toolkit(learners, plugins);
         Plan plan = kit.plan(kit.readStudy(study));
         Path html = kit.report(plan, out, to == null ? out : to);
         PrintWriter w = spec.commandLine().getOut();
