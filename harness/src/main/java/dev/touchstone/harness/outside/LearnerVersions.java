@@ -1,6 +1,5 @@
 package dev.touchstone.harness.outside;
 
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.harness.catalog.LearnerCatalog;
 
 import java.io.IOException;
@@ -37,7 +36,7 @@ public final class LearnerVersions {
         for (LearnerCatalog.Entry e : catalog.entries()) {
             switch (e.origin()) {
                 case PLUG_IN:
-                    byId.put(e.id(), pluginVersion(e.learner()));
+                    byId.put(e.id(), pluginVersion(e.learner().getClass()));
                     break;
                 case COMMAND:
                     if (e.learner() instanceof CommandLearner) {
@@ -52,13 +51,13 @@ public final class LearnerVersions {
     }
 
     /** A plug-in's manifest version, else a digest of its jar (or "unknown" when it has no jar). */
-    static String pluginVersion(Learner learner) {
-        Package p = learner.getClass().getPackage();
+    static String pluginVersion(Class<?> type) {
+        Package p = type.getPackage();
         String v = p == null ? null : p.getImplementationVersion();
         if (v != null && !v.isBlank()) {
             return v.trim();
         }
-        CodeSource cs = learner.getClass().getProtectionDomain().getCodeSource();
+        CodeSource cs = type.getProtectionDomain().getCodeSource();
         if (cs == null || cs.getLocation() == null) {
             return "unknown";
         }
