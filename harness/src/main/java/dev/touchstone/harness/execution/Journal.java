@@ -189,6 +189,15 @@ public final class Journal implements AutoCloseable {
      * a crash left beyond the journal's runs are left out, as {@link #open} would cut them.
      */
     public static Map<String, EstimateCodec.Kept> readEstimates(Path file) throws IOException {
+        return readEstimates(file, key -> true);
+    }
+
+    /**
+     * As {@link #readEstimates(Path)}, decoding only the lines whose key {@code wanted}
+     * accepts (a report pictures a handful of runs: the others' graphs are not parsed).
+     */
+    public static Map<String, EstimateCodec.Kept> readEstimates(Path file, java.util.function.Predicate<String> wanted)
+            throws IOException {
         Contents c = read(file);
         Path kept = file.resolveSibling(ESTIMATES_FILE);
         Map<String, EstimateCodec.Kept> out = new LinkedHashMap<>();
@@ -205,8 +214,10 @@ public final class Journal implements AutoCloseable {
                 continue;
             }
             try {
-                EstimateCodec.Kept k = EstimateCodec.read(line);
-                out.put(k.key(), k);
+                if (wanted.test(EstimateCodec.key(line))) {
+                    EstimateCodec.Kept k = EstimateCodec.read(line);
+                    out.put(k.key(), k);
+                }
             } catch (IllegalArgumentException e) {
                 throw new JournalException(kept + ":" + lineNo + ": the kept estimate cannot be read ("
                         + e.getMessage() + ")");

@@ -40,7 +40,15 @@ public final class ReportFolder {
         Map<String, Estimate> estimates = new HashMap<>();
         try {
             lines = Journal.read(out.resolve(Journal.FILE_NAME)).lines();
-            for (EstimateCodec.Kept k : Journal.readEstimates(out.resolve(Journal.FILE_NAME)).values()) {
+            // Only replicate 0 is pictured: the other runs' graphs are not decoded.
+            java.util.Set<String> pictured = new java.util.HashSet<>();
+            for (RunDefinition r : plan.runs()) {
+                if (r.replicate() == 0) {
+                    pictured.add(r.key());
+                }
+            }
+            for (EstimateCodec.Kept k : Journal.readEstimates(out.resolve(Journal.FILE_NAME), pictured::contains)
+                    .values()) {
                 if (k.estimate() != null) {
                     estimates.put(k.key(), k.estimate());
                 }
