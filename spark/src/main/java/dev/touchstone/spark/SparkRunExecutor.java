@@ -1,11 +1,12 @@
 package dev.touchstone.spark;
 
 import dev.touchstone.harness.WorkStoppedException;
+import dev.touchstone.harness.execution.EstimateCodec;
 import dev.touchstone.harness.execution.JournalCodec;
+import dev.touchstone.harness.execution.PerformedRun;
 import dev.touchstone.harness.execution.RunExecutor;
 import dev.touchstone.harness.execution.RunRecipe;
 import dev.touchstone.harness.study.RunDefinition;
-import dev.touchstone.metrics.results.RunResult;
 import org.apache.spark.SparkConf;
 import org.apache.spark.SparkContext;
 import org.apache.spark.SparkException;
@@ -25,7 +26,7 @@ import java.util.function.Consumer;
 /**
  * Performs runs as Spark tasks. The runs are packed into {@link TaskGroup}s of whole
  * replicates; the recipe (study text, learners file) is broadcast once; each task returns
- * its journal lines, and as each task finishes (not at the end of the job) the driver parses
+ * its journal lines, each with its run's estimate, and as each task finishes (not at the end of the job) the driver parses
  * them and hands the results to the sink, which journals them. A task that dies is retried
  * by Spark up to {@code spark.task.maxFailures} times; if it still fails the job stops, the
  * runs already journaled stay done and a resume does the rest.
@@ -47,7 +48,7 @@ final class SparkRunExecutor implements RunExecutor {
     }
 
     @Override
-    public void execute(List<RunDefinition> runs, int rows, Consumer<RunResult> sink) {
+    public void execute(List<RunDefinition> runs, int rows, Consumer<PerformedRun> sink) {
         if (runs.isEmpty()) {
             return;
         }
@@ -64,7 +65,7 @@ final class SparkRunExecutor implements RunExecutor {
             ClassTag<String> tag = ClassTag$.MODULE$.apply(String.class);
             sc.runJob(rdd, work(shared), (Function2<Object, String, BoxedUnit>) (partition, lines) -> {
                 for (String line : lines.split("\n")) {
-                    sink.accept(JournalCodec.read(line).result());
+                    sink.accept(record(line));
                 }
                 return BoxedUnit.UNIT;
             }, tag);
@@ -80,6 +81,21 @@ final class SparkRunExecutor implements RunExecutor {
         } finally {
             sc.stop();
         }
+    }
+
+    /** One run's record from a task: its journal line and its estimate line, split at the separator. */
+    static PerformedRun record(String line) {
+        int tab = line.indexOf(TaskWork.SEPARATOR);
+        if (tab < 0) {
+            throw new IllegalStateException("a task's record has no estimate part: " + line);
+        }
+        var result = JournalCodec.read(line.substring(0, tab)).result();
+        EstimateCodec.Kept kept = EstimateCodec.read(line.substring(tab + 1));
+        if (!kept.key().equals(result.key())) {
+            throw new IllegalStateException("a task's record pairs run " + result.key() + " with the estimate of "
+                    + kept.key());
+        }
+        return new PerformedRun(result, kept.estimate());
     }
 
     /** The task function: a static factory, so the closure holds the broadcast handle and nothing of the driver. */

@@ -85,6 +85,15 @@ class SparkEngineTest {
         return Files.readString(csv).lines().filter(l -> !l.contains(",seconds,")).toList();
     }
 
+    /** The kept estimate lines by run key. */
+    private static Map<String, String> estimates(Path out) throws IOException {
+        Map<String, String> m = new java.util.HashMap<>();
+        for (String l : Files.readAllLines(out.resolve(Journal.ESTIMATES_FILE))) {
+            m.put(dev.touchstone.harness.execution.EstimateCodec.read(l).key(), l);
+        }
+        return m;
+    }
+
     private static long journalLines(Path out) throws IOException {
         return Files.readString(out.resolve(Journal.FILE_NAME)).lines().count();
     }
@@ -108,6 +117,9 @@ class SparkEngineTest {
         assertEquals(withoutTimingRows(local.resolve("comparisons.csv")),
                 withoutTimingRows(spark.resolve("comparisons.csv")));
         assertEquals(journalLines(local), journalLines(spark));
+        // Each estimate travels from its task to the driver with its journal line.
+        assertEquals(estimates(local), estimates(spark), "the same estimates are kept by both engines");
+        assertEquals(journalLines(spark), Files.readAllLines(spark.resolve(Journal.ESTIMATES_FILE)).size());
     }
 
     @Test

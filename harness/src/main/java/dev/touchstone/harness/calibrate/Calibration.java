@@ -132,7 +132,8 @@ public final class Calibration {
         RunResult[] results = new RunResult[runs.size()];
         progress.start(runs.size(), 0);
         new LocalExecutor(settings.threads(), simulator, performer).execute(runs, Math.max(largest, data.rows()),
-                result -> {
+                performed -> {
+                    var result = performed.result();
                     results[indexByKey.get(result.key())] = result;
                     progress.finished(result);
                 });

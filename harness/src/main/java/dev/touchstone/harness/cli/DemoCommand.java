@@ -38,6 +38,10 @@ final class DemoCommand implements Callable<Integer> {
     @Option(names = "--quiet", description = "Print no progress.")
     boolean quiet;
 
+    @Option(names = "--accept-version-change", description = "Resume a demo folder made with another version"
+            + " (its runs keep their versions; the report says the study is mixed).")
+    boolean acceptVersionChange;
+
     /** For tests: a study file to use instead of the bundled one. */
     @Option(names = "--study", hidden = true)
     Path study;
@@ -49,7 +53,7 @@ final class DemoCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter w = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Toolkit kit = new Toolkit(null, null);
+        Toolkit kit = new Toolkit(null, null).acceptVersionChange(acceptVersionChange);
         Path file = study != null ? study : bundledStudy();
         Plan plan = kit.plan(kit.readStudy(file));
         StudyRunner.Outcome o = kit.run(plan, out, threads.threads, quiet, err);

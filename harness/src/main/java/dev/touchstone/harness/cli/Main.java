@@ -18,7 +18,7 @@ import java.io.PrintWriter;
         description = "Benchmark causal-discovery learners against known truth.",
         subcommands = {CommandLine.HelpCommand.class, RunCommand.class, CheckCommand.class, LearnersCommand.class,
                 LearnCommand.class, SimulateCommand.class, ScoreCommand.class, ReportCommand.class,
-                DemoCommand.class, CalibrateCommand.class})
+                DemoCommand.class, CalibrateCommand.class, ShowCommand.class})
 public final class Main implements Runnable {
 
     /** Exit status for a finished command (failed runs are counted in the output, not here). */

@@ -1,5 +1,6 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.execution.StudyRunner;
 import dev.touchstone.harness.study.Plan;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -38,7 +39,8 @@ final class ReportCommand implements Callable<Integer> {
         if (!Files.isRegularFile(study) || !Files.isRegularFile(out.resolve("journal.jsonl"))) {
             throw new UsageException(out + ": not a study's output folder (it needs study.yaml and journal.jsonl)");
         }
-        Toolkit kit = sources.toolkit();
+        Path learners = sources.learnersFile != null ? sources.learnersFile : StudyRunner.keptLearnersFile(out);
+        Toolkit kit = new Toolkit(learners, sources.plugins);
         Plan plan = kit.plan(kit.readStudy(study));
         Path html = kit.report(plan, out, to == null ? out : to);
         PrintWriter w = spec.commandLine().getOut();

@@ -43,6 +43,11 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--quiet", description = "Print no progress, only the final line.")
     boolean quiet;
 
+    @Option(names = "--accept-version-change", description = "Resume even though the runs kept in the output folder"
+            + " were made with another version of the tool or of a learner; each run keeps the versions it was made"
+            + " with, and provenance and the report say the study is mixed.")
+    boolean acceptVersionChange;
+
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
@@ -50,7 +55,7 @@ final class RunCommand implements Callable<Integer> {
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        Toolkit kit = sources.toolkit();
+        Toolkit kit = sources.toolkit().acceptVersionChange(acceptVersionChange);
         Plan plan = kit.plan(kit.readStudy(study));
         Path folder = this.out != null ? this.out : Path.of(plan.study().name() + "-results");
         StudyRunner.Outcome o = kit.run(plan, folder, threads.threads, quiet, err, engine(plan));

@@ -37,8 +37,13 @@ final class Toolkit {
     final TruthCatalog truth = new GeneratorTruthCatalog();
     final MetricCatalog metrics = new RegistryMetricCatalog();
     private final LearnerSources sources;
+    private final Path learnersFile;
+    private final Path pluginDir;
+    private boolean acceptVersionChange;
 
     Toolkit(Path learnersFile, Path pluginDir) {
+        this.learnersFile = learnersFile;
+        this.pluginDir = pluginDir;
         try {
             List<CommandSpec> commands = learnersFile == null ? List.of() : LearnersFile.read(learnersFile);
             this.sources = LearnerSources.gather(Toolkit.class.getClassLoader(), pluginDir, commands,
@@ -78,6 +83,19 @@ final class Toolkit {
                 new MetricsAggregator());
     }
 
+    /** Lets {@link #run} resume a folder whose kept runs were made with other versions. */
+    Toolkit acceptVersionChange(boolean accept) {
+        this.acceptVersionChange = accept;
+        return this;
+    }
+
+    /** The versions this session records: the tool's label and every learner's. */
+    dev.touchstone.harness.execution.RunVersions versions() {
+        String tool = dev.touchstone.harness.version.VersionInfo.current().label();
+        return new dev.touchstone.harness.execution.RunVersions(tool,
+                dev.touchstone.harness.outside.LearnerVersions.of(learners, tool));
+    }
+
     StudyRunner runner() {
         return new StudyRunner(new GeneratorSimulator(), new MetricsScorer(), new MetricsAggregator());
     }
@@ -106,8 +124,10 @@ final class Toolkit {
         }
         Progress progress = progress(quiet, err);
         try {
-            return runner().on(engine).run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
-        } catch (StudyRunner.OutputFolderException | Journal.JournalException e) {
+            return runner().on(engine).keeping(dev.touchstone.harness.execution.RunRecipe.of(plan, learnersFile,
+                            pluginDir)).recording(versions()).acceptingVersionChange(acceptVersionChange)
+                    .run(plan, new StudyRunner.Options(folder, n, progress, quiet ? null : err));
+        } catch (StudyRunner.OutputFolderException | StudyRunner.VersionChangeException | Journal.JournalException e) {
             throw new UsageException(e.getMessage(), e);
         }
     }

@@ -35,32 +35,45 @@ public final class Journal implements AutoCloseable {
 
     /** The file name inside a study's output folder. */
     public static final String FILE_NAME = "journal.jsonl";
+    /** The kept estimates beside the journal: one {@link EstimateCodec} line per journal line. */
+    public static final String ESTIMATES_FILE = "estimates.jsonl";
 
-    private static final Pending STOP = new Pending(null, null, null);
+    private static final Pending STOP = new Pending(null, null, null, null);
 
     private final Path file;
     private final Map<String, JournalCodec.Line> existing;
     private final boolean tornTail;
     private final FileChannel channel;
+    private final FileChannel estimates;
     private final BlockingQueue<Pending> queue = new LinkedBlockingQueue<>();
     private final Thread writer;
     private volatile Throwable failure;
 
-    private record Pending(String text, JournalCodec.Line line, Consumer<JournalCodec.Line> onDurable) {
+    private record Pending(String text, String estimate, JournalCodec.Line line,
+                           Consumer<JournalCodec.Line> onDurable) {
     }
 
-    private Journal(Path file, Map<String, JournalCodec.Line> existing, boolean tornTail, FileChannel channel) {
+    private Journal(Path file, Map<String, JournalCodec.Line> existing, boolean tornTail, FileChannel channel,
+                    FileChannel estimates) {
         this.file = file;
         this.existing = Collections.unmodifiableMap(existing);
         this.tornTail = tornTail;
         this.channel = channel;
+        this.estimates = estimates;
         this.writer = new Thread(this::writeLoop, "journal-writer");
         this.writer.setDaemon(true);
         this.writer.start();
     }
 
     /**
-     * Opens (or creates) a journal, reading the runs it already holds.
+     * Opens (or creates) a journal, reading the runs it already holds, and its kept-estimates
+     * file beside it ({@link #ESTIMATES_FILE}), cut back to the lines whose runs the journal
+     * holds.
+     *
+     * <p>Why the two files stay consistent: each batch's estimate lines are written and forced
+     * before its journal lines, in the same order. After a crash the estimates file may thus
+     * hold lines of runs whose journal lines never reached the disk, always at its end; they
+     * are cut off here, and those runs are redone. A journal line never lacks its estimate line.
      *
      * @throws JournalException when a line other than the last cannot be read
      */
@@ -73,10 +86,51 @@ public final class Journal implements AutoCloseable {
                 ch.force(true);
             }
             ch.position(ch.size());
-            return new Journal(file, c.lines(), c.torn(), ch);
+            Path kept = file.resolveSibling(ESTIMATES_FILE);
+            long keep = consistentPrefix(kept, c.lines().keySet());
+            FileChannel est = FileChannel.open(kept, StandardOpenOption.CREATE, StandardOpenOption.WRITE);
+            if (keep < est.size()) {
+                est.truncate(keep);
+                est.force(true);
+            }
+            est.position(est.size());
+            return new Journal(file, c.lines(), c.torn(), ch, est);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot open the journal " + file, e);
         }
+    }
+
+    /**
+     * The length of the estimates file's longest prefix of complete lines, each of a run the
+     * journal holds and seen once: what a crash left beyond it belongs to runs to be redone.
+     */
+    private static long consistentPrefix(Path kept, java.util.Set<String> journaled) throws IOException {
+        if (!Files.exists(kept)) {
+            return 0;
+        }
+        byte[] bytes = Files.readAllBytes(kept);
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        int start = 0;
+        while (start < bytes.length) {
+            int end = start;
+            while (end < bytes.length && bytes[end] != '\n') {
+                end++;
+            }
+            if (end >= bytes.length) {
+                break;
+            }
+            String key;
+            try {
+                key = EstimateCodec.key(new String(bytes, start, end - start, StandardCharsets.UTF_8));
+            } catch (IllegalArgumentException e) {
+                break;
+            }
+            if (!journaled.contains(key) || !seen.add(key)) {
+                break;
+            }
+            start = end + 1;
+        }
+        return start;
     }
 
     /** What a journal file holds: its good lines by key, whether the last line was torn, and the length of the good part. */
@@ -129,6 +183,49 @@ public final class Journal implements AutoCloseable {
         return new Contents(lines, torn, torn ? good : bytes.length);
     }
 
+    /**
+     * Reads the estimates kept beside a journal without opening either for writing (for
+     * reports and exports): the lines of runs the journal holds, by key, in file order; lines
+     * a crash left beyond the journal's runs are left out, as {@link #open} would cut them.
+     */
+    public static Map<String, EstimateCodec.Kept> readEstimates(Path file) throws IOException {
+        return readEstimates(file, key -> true);
+    }
+
+    /**
+     * As {@link #readEstimates(Path)}, decoding only the lines whose key {@code wanted}
+     * accepts (a report pictures a handful of runs: the others' graphs are not parsed).
+     */
+    public static Map<String, EstimateCodec.Kept> readEstimates(Path file, java.util.function.Predicate<String> wanted)
+            throws IOException {
+        Contents c = read(file);
+        Path kept = file.resolveSibling(ESTIMATES_FILE);
+        Map<String, EstimateCodec.Kept> out = new LinkedHashMap<>();
+        if (!Files.exists(kept)) {
+            return out;
+        }
+        long good = consistentPrefix(kept, c.lines().keySet());
+        byte[] bytes = Files.readAllBytes(kept);
+        String text = new String(bytes, 0, (int) good, StandardCharsets.UTF_8);
+        int lineNo = 0;
+        for (String line : text.split("\n")) {
+            lineNo++;
+            if (line.isEmpty()) {
+                continue;
+            }
+            try {
+                if (wanted.test(EstimateCodec.key(line))) {
+                    EstimateCodec.Kept k = EstimateCodec.read(line);
+                    out.put(k.key(), k);
+                }
+            } catch (IllegalArgumentException e) {
+                throw new JournalException(kept + ":" + lineNo + ": the kept estimate cannot be read ("
+                        + e.getMessage() + ")");
+            }
+        }
+        return out;
+    }
+
     /** The runs the journal held when opened, by key. */
     public Map<String, JournalCodec.Line> existing() {
         return existing;
@@ -150,8 +247,20 @@ public final class Journal implements AutoCloseable {
      * @throws JournalException if an earlier write failed
      */
     public void append(JournalCodec.Line line, Consumer<JournalCodec.Line> onDurable) {
+        append(line, null, onDurable);
+    }
+
+    /**
+     * Queues a finished run with its estimate (null when it returned none); {@code onDurable}
+     * is called (on the writer thread) once both its estimate line and its journal line are on disk.
+     *
+     * @throws JournalException if an earlier write failed
+     */
+    public void append(JournalCodec.Line line, dev.touchstone.core.learner.Estimate estimate,
+                       Consumer<JournalCodec.Line> onDurable) {
         checkHealthy();
-        queue.add(new Pending(JournalCodec.write(line) + "\n", line, onDurable));
+        queue.add(new Pending(JournalCodec.write(line) + "\n",
+                EstimateCodec.write(line.result().key(), estimate) + "\n", line, onDurable));
     }
 
     private void writeLoop() {
@@ -166,12 +275,14 @@ public final class Journal implements AutoCloseable {
             }
             queue.drainTo(batch);
             StringBuilder sb = new StringBuilder();
+            StringBuilder kept = new StringBuilder();
             List<Pending> written = new ArrayList<>(batch.size());
             for (Pending p : batch) {
                 if (p == STOP) {
                     stop = true;
                 } else {
                     sb.append(p.text());
+                    kept.append(p.estimate());
                     written.add(p);
                 }
             }
@@ -180,11 +291,9 @@ public final class Journal implements AutoCloseable {
                 continue;
             }
             try {
-                ByteBuffer buf = ByteBuffer.wrap(sb.toString().getBytes(StandardCharsets.UTF_8));
-                while (buf.hasRemaining()) {
-                    channel.write(buf);
-                }
-                channel.force(false);
+                // Estimates first: a journal line on disk always has its estimate line.
+                writeAll(estimates, kept);
+                writeAll(channel, sb);
             } catch (IOException | RuntimeException e) {
                 failure = e;
                 return;
@@ -195,6 +304,14 @@ public final class Journal implements AutoCloseable {
                 }
             }
         }
+    }
+
+    private static void writeAll(FileChannel ch, CharSequence text) throws IOException {
+        ByteBuffer buf = ByteBuffer.wrap(text.toString().getBytes(StandardCharsets.UTF_8));
+        while (buf.hasRemaining()) {
+            ch.write(buf);
+        }
+        ch.force(false);
     }
 
     private void checkHealthy() {
@@ -215,6 +332,7 @@ public final class Journal implements AutoCloseable {
         }
         try {
             channel.close();
+            estimates.close();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

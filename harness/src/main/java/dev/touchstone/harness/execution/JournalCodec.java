@@ -15,8 +15,9 @@ import java.util.Map;
 
 /**
  * The JSON shape of one journal line: a {@link RunResult} with the run's position and
- * coordinates in words. Numbers are written in their shortest exact form, so a result read
- * back is equal to the one written. Parsing is strict: a line missing a field, or with a
+ * coordinates in words, and the versions it was made with ({@code tool_version},
+ * {@code learner_version}; absent from lines of builds that did not record them). Numbers
+ * are written in their shortest exact form, so a result read back is equal to the one written. Parsing is strict: a line missing a field, or with a
  * value of the wrong type, is refused.
  */
 public final class JournalCodec {
@@ -26,8 +27,21 @@ public final class JournalCodec {
     private JournalCodec() {
     }
 
-    /** One finished run, as read from or written to the journal. */
-    public record Line(int run, String coordinates, RunResult result) {
+    /**
+     * One finished run, as read from or written to the journal.
+     *
+     * @param versions what the run was made with, or null when not recorded (lines written by
+     *                 a build that did not record versions, or not yet stamped by the runner)
+     */
+    public record Line(int run, String coordinates, RunResult result, RunVersions.Stamp versions) {
+        public Line(int run, String coordinates, RunResult result) {
+            this(run, coordinates, result, null);
+        }
+
+        /** The same line with these versions. */
+        public Line stamped(RunVersions.Stamp stamp) {
+            return new Line(run, coordinates, result, stamp);
+        }
     }
 
     /** The line's JSON text, without the newline. Streams with a generator (no tree): a few microseconds per line. */
@@ -70,6 +84,10 @@ public final class JournalCodec {
             count(g, "tests", tm.tests());
             count(g, "scores", tm.scores());
             g.writeEndObject();
+            if (line.versions() != null) {
+                g.writeStringField("tool_version", line.versions().tool());
+                g.writeStringField("learner_version", line.versions().learner());
+            }
             g.writeEndObject();
         } catch (java.io.IOException e) {
             throw new IllegalStateException("a journal line could not be written as JSON", e);
@@ -136,7 +154,11 @@ public final class JournalCodec {
                 RunStatus.parse(text(o, "status")), nullableText(o, "message"),
                 graphClass(nullableText(o, "estimate_class")), graphClass(nullableText(o, "scored_against")),
                 metrics, timings);
-        return new Line(field(o, "run").asInt(), text(o, "coordinates"), r);
+        RunVersions.Stamp stamp = null;
+        if (o.has("tool_version") || o.has("learner_version")) {
+            stamp = new RunVersions.Stamp(text(o, "tool_version"), text(o, "learner_version"));
+        }
+        return new Line(field(o, "run").asInt(), text(o, "coordinates"), r, stamp);
     }
 
     private static JsonNode field(JsonNode o, String name) {

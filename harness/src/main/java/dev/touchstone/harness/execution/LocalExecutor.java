@@ -2,7 +2,6 @@ package dev.touchstone.harness.execution;
 
 import dev.touchstone.harness.study.RunDefinition;
 import dev.touchstone.harness.study.TruthSetting;
-import dev.touchstone.metrics.results.RunResult;
 
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -58,7 +57,7 @@ public final class LocalExecutor implements RunExecutor {
      *             the same on resume), 0 for oracle-only studies
      */
     @Override
-    public void execute(List<RunDefinition> runs, int rows, Consumer<RunResult> sink) {
+    public void execute(List<RunDefinition> runs, int rows, Consumer<PerformedRun> sink) {
         Map<RunDefinition.ReplicateId, RunDefinition> firstOf = new HashMap<>();
         for (RunDefinition r : runs) {
             firstOf.putIfAbsent(r.replicateId(), r);
@@ -76,11 +75,11 @@ public final class LocalExecutor implements RunExecutor {
             Thread t = new Thread(() -> {
                 for (int i = next.getAndIncrement(); i < runs.size(); i = next.getAndIncrement()) {
                     RunDefinition run = runs.get(i);
-                    RunResult result;
+                    PerformedRun result;
                     try {
                         ReplicateCache.Drawn d = cache.acquire(run);
-                        result = d.failure() != null ? performer.simulationFailed(run, d.failure())
-                                : performer.perform(run, d.replicate());
+                        result = d.failure() != null ? PerformedRun.without(performer.simulationFailed(run, d.failure()))
+                                : performer.performRun(run, d.replicate());
                     } finally {
                         cache.release(run);
                     }

@@ -25,9 +25,20 @@ import java.util.Map;
  * @param started     when this session started
  * @param finished    when it ended, or null while running
  * @param counts      runs by status word (plus {@code total}), or empty while running
+ * @param versions    this session's tool and learner versions and the plan's runs by version, or null
  */
 public record Provenance(String tool, String commit, String studyName, String studyHash, String studyFileHash,
-                         int threads, Instant started, Instant finished, Map<String, Integer> counts) {
+                         int threads, Instant started, Instant finished, Map<String, Integer> counts,
+                         Versions versions) {
+
+    /**
+     * The versions part of provenance.
+     *
+     * @param session the versions of this session
+     * @param ledger  the plan's runs by version
+     */
+    public record Versions(RunVersions session, VersionLedger ledger) {
+    }
 
     private static final ObjectMapper JSON = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
@@ -58,6 +69,15 @@ public record Provenance(String tool, String commit, String studyName, String st
         o.put("finished", finished == null ? null : finished.toString());
         ObjectNode runs = o.putObject("runs");
         counts.forEach(runs::put);
+        if (versions != null) {
+            ObjectNode v = o.putObject("versions");
+            v.put("tool", versions.session().tool());
+            ObjectNode learners = v.putObject("learners");
+            new java.util.TreeMap<>(versions.session().learners()).forEach(learners::put);
+            v.put("mixed", versions.ledger().mixed());
+            ObjectNode by = v.putObject("runs_by_version");
+            versions.ledger().byVersion().forEach(by::put);
+        }
         try {
             return JSON.writeValueAsString(o) + "\n";
         } catch (JsonProcessingException e) {

@@ -55,16 +55,22 @@ public final class RunPerformer {
                 Timings.NONE);
     }
 
+    /** The run's result alone (see {@link #performRun}). */
     public RunResult perform(RunDefinition run, Replicate replicate) {
+        return performRun(run, replicate).result();
+    }
+
+    /** Performs the run: its result and the estimate the learner returned (null when it returned none). */
+    public PerformedRun performRun(RunDefinition run, Replicate replicate) {
         Learner learner = run.config().learner();
         LearnerDescription d = learner.description();
         if (run.sample().isOracle()) {
             if (d.oracle() == OracleUse.NONE) {
-                return skipped(run, "learner " + d.id() + " cannot use the oracle");
+                return PerformedRun.without(skipped(run, "learner " + d.id() + " cannot use the oracle"));
             }
             if (d.oracle() == OracleUse.COVARIANCE && replicate.populationCovariance() == null) {
-                return skipped(run, "learner " + d.id() + " needs the population covariance, which this model"
-                        + " does not provide");
+                return PerformedRun.without(skipped(run, "learner " + d.id() + " needs the population covariance,"
+                        + " which this model does not provide"));
             }
         }
         LearnerInput input;
@@ -72,7 +78,7 @@ public final class RunPerformer {
             input = replicate.input(run.sample());
             d.checkAccepts(input);
         } catch (LearnerException e) {
-            return skipped(run, message(e));
+            return PerformedRun.without(skipped(run, message(e)));
         }
         RunContext context = RunContext.of(run.learnerSeed(), run.limit(), 1);
         long threadId = Thread.currentThread().getId();
@@ -92,11 +98,12 @@ public final class RunPerformer {
             }
         } catch (DeadlineExceededException e) {
             Timings t = timings(t0, cpu0, alloc0, threadId, context);
-            return result(run, RunStatus.TIMEOUT, "time limit of " + Canonical.value(run.limit().toMillis() / 1000.0)
-                    + " s reached" + detail(e), null, null, Map.of(), t);
+            return PerformedRun.without(result(run, RunStatus.TIMEOUT, "time limit of "
+                    + Canonical.value(run.limit().toMillis() / 1000.0) + " s reached" + detail(e), null, null,
+                    Map.of(), t));
         } catch (OutOfMemoryError | StackOverflowError | RuntimeException e) {
             Timings t = timings(t0, cpu0, alloc0, threadId, context);
-            return result(run, RunStatus.FAILED, message(e), null, null, Map.of(), t);
+            return PerformedRun.without(result(run, RunStatus.FAILED, message(e), null, null, Map.of(), t));
         }
         Timings t = timings(t0, cpu0, alloc0, threadId, context);
         List<String> structural = new ArrayList<>();
@@ -114,8 +121,8 @@ public final class RunPerformer {
                         estimate, run.limit());
             }
         } catch (RuntimeException e) {
-            return result(run, RunStatus.FAILED, "scoring failed: " + message(e), estimate.graphClass(), null,
-                    Map.of(), t);
+            return new PerformedRun(result(run, RunStatus.FAILED, "scoring failed: " + message(e),
+                    estimate.graphClass(), null, Map.of(), t), estimate);
         }
         Map<String, Double> values = new LinkedHashMap<>();
         for (String m : structural) {
@@ -128,7 +135,8 @@ public final class RunPerformer {
                 values.put(m, v == null || !Double.isFinite(v) ? null : v);
             }
         }
-        return result(run, RunStatus.OK, null, estimate.graphClass(), scored.scoredAgainst(), values, t);
+        return new PerformedRun(result(run, RunStatus.OK, null, estimate.graphClass(), scored.scoredAgainst(), values,
+                t), estimate);
     }
 
     private static String detail(DeadlineExceededException e) {

@@ -42,25 +42,58 @@ public final class StudyRunner {
     public static final String SUMMARY_FILE = "summary.csv";
     public static final String COMPARISONS_FILE = "comparisons.csv";
 
+    /** The copy of the learners file a study was run with, kept so that its report needs no learners file. */
+    public static final String LEARNERS_COPY = "learners-used";
+
     private final Simulator simulator;
     private final Scorer scorer;
     private final Aggregator aggregator;
     private final Engine engine;
+    private final RunRecipe recipe;
+    private final RunVersions versions;
+    private final boolean acceptVersionChange;
 
     public StudyRunner(Simulator simulator, Scorer scorer, Aggregator aggregator) {
-        this(simulator, scorer, aggregator, Engine.LOCAL);
+        this(simulator, scorer, aggregator, Engine.LOCAL, null, RunVersions.current(), false);
     }
 
-    private StudyRunner(Simulator simulator, Scorer scorer, Aggregator aggregator, Engine engine) {
+    private StudyRunner(Simulator simulator, Scorer scorer, Aggregator aggregator, Engine engine, RunRecipe recipe,
+                        RunVersions versions, boolean acceptVersionChange) {
         this.simulator = simulator;
         this.scorer = scorer;
         this.aggregator = aggregator;
         this.engine = engine;
+        this.recipe = recipe;
+        this.versions = versions;
+        this.acceptVersionChange = acceptVersionChange;
     }
 
     /** The same runner performing runs on another engine; journal, resume and outputs are unchanged. */
     public StudyRunner on(Engine other) {
-        return new StudyRunner(simulator, scorer, aggregator, java.util.Objects.requireNonNull(other, "engine"));
+        return new StudyRunner(simulator, scorer, aggregator, java.util.Objects.requireNonNull(other, "engine"),
+                recipe, versions, acceptVersionChange);
+    }
+
+    /**
+     * The same runner keeping the recipe's learners file in the output folder ({@link
+     * #LEARNERS_COPY} with the file's extension), so that a report rebuilds the plan without it.
+     */
+    public StudyRunner keeping(RunRecipe other) {
+        return new StudyRunner(simulator, scorer, aggregator, engine, other, versions, acceptVersionChange);
+    }
+
+    /** The same runner recording these versions with every run (and comparing kept runs with them). */
+    public StudyRunner recording(RunVersions other) {
+        return new StudyRunner(simulator, scorer, aggregator, engine, recipe,
+                java.util.Objects.requireNonNull(other, "versions"), acceptVersionChange);
+    }
+
+    /**
+     * The same runner resuming even when kept runs were made with other versions; the runs
+     * keep the versions they were made with, and provenance and the report say the study is mixed.
+     */
+    public StudyRunner acceptingVersionChange(boolean accept) {
+        return new StudyRunner(simulator, scorer, aggregator, engine, recipe, versions, accept);
     }
 
     /**
@@ -88,7 +121,7 @@ public final class StudyRunner {
 
     public Outcome run(Plan plan, Options options) {
         Path out = options.out();
-        prepareFolder(out);
+        prepareFolder(out, plan.study().name());
         Instant started = Instant.now();
         String studyText = StudyWriter.yaml(plan.study());
 
@@ -97,12 +130,18 @@ public final class StudyRunner {
         int reused = 0;
         int changed = 0;
         List<RunDefinition> todo = new ArrayList<>();
+        VersionLedger ledger;
         try (Journal journal = Journal.open(out.resolve(Journal.FILE_NAME))) {
             Map<String, JournalCodec.Line> existing = journal.existing();
+            ledger = VersionLedger.of(plan, existing, versions);
+            if (!ledger.changes().isEmpty() && !acceptVersionChange) {
+                throw new VersionChangeException(ledger.refusal(out));
+            }
             // Only once the journal has been read and found sound: a damaged one is refused
             // with the folder as it was.
             OutputFiles.write(out.resolve(STUDY_FILE), studyText);
-            Provenance running = provenance(plan, studyText, options.threads(), started, null, Map.of());
+            keepLearnersFile(out);
+            Provenance running = provenance(plan, studyText, options.threads(), started, null, Map.of(), ledger);
             OutputFiles.write(out.resolve(PROVENANCE_FILE), running.json());
             Set<String> oldCoordinates = new HashSet<>();
             for (JournalCodec.Line l : existing.values()) {
@@ -131,10 +170,13 @@ public final class StudyRunner {
             for (RunDefinition r : todo) {
                 indexByKey.put(r.key(), r.index());
             }
-            executor.execute(todo, largestRows(plan), result -> {
+            executor.execute(todo, largestRows(plan), performed -> {
+                RunResult result = performed.result();
                 int index = indexByKey.get(result.key());
                 RunDefinition def = plan.runs().get(index);
-                journal.append(new JournalCodec.Line(index, def.coordinates(), result), line -> {
+                RunVersions.Stamp stamp = versions.stamp(def.config().learner().description().id());
+                journal.append(new JournalCodec.Line(index, def.coordinates(), result, stamp), performed.estimate(),
+                        line -> {
                     results.put(line.run(), line.result());
                     options.progress().finished(line.result());
                 });
@@ -175,7 +217,7 @@ public final class StudyRunner {
         }
         counts.put("done_this_session", todo.size());
         OutputFiles.write(out.resolve(PROVENANCE_FILE), provenance(plan, studyText, options.threads(), started,
-                Instant.now(), counts).json());
+                Instant.now(), counts, ledger).json());
         return new Outcome(plan.runs().size(), reused, changed, todo.size(), byStatus, out);
     }
 
@@ -210,10 +252,34 @@ public final class StudyRunner {
         w.flush();
     }
 
-    private static void prepareFolder(Path out) {
+    private void keepLearnersFile(Path out) {
+        if (recipe == null || recipe.learnersText() == null) {
+            return;
+        }
+        boolean json = recipe.learnersSource().toLowerCase(java.util.Locale.ROOT).endsWith(".json");
+        OutputFiles.write(out.resolve(LEARNERS_COPY + (json ? ".json" : ".yaml")), recipe.learnersText());
+    }
+
+    /** The copy of the learners file kept in a study's output folder, or null when there is none. */
+    public static Path keptLearnersFile(Path out) {
+        for (String ext : List.of(".yaml", ".json")) {
+            Path p = out.resolve(LEARNERS_COPY + ext);
+            if (Files.isRegularFile(p)) {
+                return p;
+            }
+        }
+        return null;
+    }
+
+    private static void prepareFolder(Path out, String studyName) {
         try {
             if (Files.exists(out) && !Files.isDirectory(out)) {
                 throw new OutputFolderException("the output " + out + " exists and is not a folder");
+            }
+            String other = recordedStudyName(out);
+            if (other != null && !other.equals(studyName)) {
+                throw new OutputFolderException("the folder " + out + " holds the journal of another study ('" + other
+                        + "', not '" + studyName + "'); choose another --out");
             }
             if (Files.isDirectory(out) && !Files.exists(out.resolve(Journal.FILE_NAME))) {
                 try (Stream<Path> s = Files.list(out)) {
@@ -229,11 +295,39 @@ public final class StudyRunner {
         }
     }
 
-    private static Provenance provenance(Plan plan, String studyText, int threads, Instant started, Instant finished,
-                                         Map<String, Integer> counts) {
+    /**
+     * The name of the study whose journal a folder holds, from its provenance, or null when
+     * it holds none (or no readable provenance).
+     */
+    static String recordedStudyName(Path out) {
+        Path prov = out.resolve(PROVENANCE_FILE);
+        if (!Files.exists(out.resolve(Journal.FILE_NAME)) || !Files.isRegularFile(prov)) {
+            return null;
+        }
+        try {
+            var node = new com.fasterxml.jackson.databind.ObjectMapper().readTree(prov.toFile()).path("study")
+                    .path("name");
+            return node.isTextual() ? node.asText() : null;
+        } catch (IOException e) {
+            return null;
+        }
+    }
+
+    private Provenance provenance(Plan plan, String studyText, int threads, Instant started, Instant finished,
+                                  Map<String, Integer> counts, VersionLedger ledger) {
         var v = dev.touchstone.harness.version.VersionInfo.current();
         return new Provenance(v.version(), v.commit() + (v.dirty() ? "-dirty" : ""), plan.study().name(),
-                plan.hash(), Canonical.hash(studyText), threads, started, finished, counts);
+                plan.hash(), Canonical.hash(studyText), threads, started, finished, counts,
+                new Provenance.Versions(versions, ledger));
+    }
+
+    /** Kept runs were made with other versions than this session's, and the change was not accepted. */
+    public static final class VersionChangeException extends dev.touchstone.harness.BadInputException {
+        private static final long serialVersionUID = 1L;
+
+        public VersionChangeException(String message) {
+            super(message);
+        }
     }
 
     /** The output folder cannot be used. */

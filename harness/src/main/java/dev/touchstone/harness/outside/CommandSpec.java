@@ -18,12 +18,21 @@ import java.util.List;
  * @param onWorkers   whether the learners file says the command is installed on the workers of
  *                    a cluster engine too (field {@code installed_on_workers}); not part of the
  *                    fingerprint, since it does not change what the command computes
+ * @param version     the version the learners file declares (field {@code version}), or null;
+ *                    recorded with every run, not part of the fingerprint (a new version of
+ *                    the same method keeps its runs' keys, and a resume says what changed)
  */
 public record CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Path dir,
-                          String source, boolean onWorkers) {
+                          String source, boolean onWorkers, String version) {
 
     public CommandSpec {
         command = List.copyOf(command);
+    }
+
+    /** A command with no declared version. */
+    public CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Path dir,
+                       String source, boolean onWorkers) {
+        this(description, command, output, dir, source, onWorkers, null);
     }
 
     /** A command installed on this machine only. */

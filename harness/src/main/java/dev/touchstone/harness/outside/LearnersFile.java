@@ -32,6 +32,7 @@ import java.util.Set;
  *     accepts: [continuous]   # continuous, discrete, mixed
  *     missing_values: rejects # or own-method (the command handles empty cells itself)
  *     installed_on_workers: false # true: the command is installed on a cluster's workers too
+ *     version: "1.2"          # recorded with every run; default: a SHA-256 of the command's files
  *     parameters:
  *       - {name: alpha, type: real, default: 0.05, min: 0, max: 1, meaning: significance level}
  * </pre>
@@ -41,7 +42,7 @@ import java.util.Set;
 public final class LearnersFile {
 
     static final List<String> ENTRY_FIELDS = List.of("id", "summary", "publication", "command", "output", "returns",
-            "accepts", "missing_values", "parameters", "installed_on_workers");
+            "accepts", "missing_values", "parameters", "installed_on_workers", "version");
     static final List<String> PARAMETER_FIELDS = List.of("name", "type", "default", "min", "max", "choices", "meaning");
     private static final Set<String> RESERVED = Set.of("data", "output", "seed", "dir", "workdir", "kinds",
             "knowledge");
@@ -197,7 +198,15 @@ public final class LearnersFile {
             }
             onWorkers = (Boolean) ow.value();
         }
-        return new CommandSpec(b.build(), command, format, dir, source, onWorkers);
+        String version = null;
+        Node vn = e.get("version");
+        if (vn != null && !vn.isNull()) {
+            if (!vn.isScalar() || vn.value() instanceof Boolean || text(vn).isBlank()) {
+                throw StudyException.at(vn, "expected the version as text, e.g. \"1.2\", found " + vn.describe());
+            }
+            version = text(vn).trim();
+        }
+        return new CommandSpec(b.build(), command, format, dir, source, onWorkers, version);
     }
 
     private static ParameterSpec parameter(Node p) {

@@ -2,8 +2,6 @@ package dev.touchstone.harness.report;
 
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.generators.audit.SortabilityAudit;
 import dev.touchstone.harness.execution.Aggregator;
 import dev.touchstone.harness.execution.Replicate;
@@ -47,9 +45,10 @@ import java.util.Set;
  *
  * <p>Aggregates, comparisons and rankings come from the metrics module, seeded from the
  * study seed, so a report re-rendered later shows the same numbers. The sortability audit
- * and the graph pictures need the data, which the journal does not keep: they re-draw
- * replicate 0 of each setting (deterministic, from the same seeds) and re-run the learners
- * of the first setting on it, so pictures show exactly what those runs returned.
+ * needs the data, which the journal does not keep: it re-draws replicate 0 of each setting
+ * (deterministic, from the same seeds). The graph pictures show the estimates kept beside the
+ * journal ({@code estimates.jsonl}) for replicate 0 of the first setting, against its true
+ * graph; no learner is ever run again, so a report needs neither the learners nor their files.
  */
 public final class StudyReports {
 
@@ -93,9 +92,11 @@ public final class StudyReports {
      *
      * @param runs    the recorded runs in plan order (fewer than the plan's when partial)
      * @param partial whether the study is unfinished
+     * @param estimates the kept estimates by run key (runs without one are not pictured)
      */
     public static ReportData gather(Plan plan, List<RunResult> runs, boolean partial, Simulator simulator,
-                                    Aggregator aggregator, Map<String, String> provenance) {
+                                    Aggregator aggregator, Map<String, String> provenance,
+                                    Map<String, Estimate> estimates) {
         long statsSeed = Seeds.derive(plan.study().seed(), "statistics");
         List<String> metrics = plan.study().allMetrics();
         ReportData.Builder b = ReportData.builder(plan.study().name())
@@ -126,11 +127,12 @@ public final class StudyReports {
             }
         }
         b.rankings(rankings);
-        redraw(plan, simulator, b);
+        redraw(plan, simulator, estimates, b);
         return b.build();
     }
 
-    private static void redraw(Plan plan, Simulator simulator, ReportData.Builder b) {
+    private static void redraw(Plan plan, Simulator simulator, Map<String, Estimate> estimates,
+                               ReportData.Builder b) {
         SettingLayout layout = new SettingLayout(plan);
         int rows = StudyRunner.largestRows(plan);
         List<ReportData.Audit> audits = new ArrayList<>();
@@ -169,7 +171,7 @@ public final class StudyReports {
             LearnerConfig config = run.config();
             if (truth.index() == picturedTruth && !run.sample().isOracle() && pictured.size() < PICTURED_CONFIGURATIONS
                     && rep.trueDag().size() <= PICTURE_VARIABLES && !pictured.contains(config.label())) {
-                Estimate e = rerun(run, rep);
+                Estimate e = estimates.get(run.key());
                 if (e != null) {
                     pictured.add(config.label());
                     Graph truthGraph = TruthSelection.forEstimate(rep.trueDag(), e.graphClass()).reference();
@@ -179,18 +181,6 @@ public final class StudyReports {
             }
         }
         b.audits(audits).examples(examples);
-    }
-
-    /** The estimate the run returned, recomputed (learners are deterministic for a seed), or null if it failed. */
-    private static Estimate rerun(RunDefinition run, Replicate rep) {
-        try {
-            LearnerInput input = rep.input(run.sample());
-            run.config().learner().description().checkAccepts(input);
-            return run.config().learner().learn(input, rep.knowledge(run.config().knowledge()), run.config().values(),
-                    RunContext.of(run.learnerSeed(), run.limit(), 1));
-        } catch (RuntimeException e) {
-            return null;
-        }
     }
 
     private static Double finite(double v) {

@@ -38,6 +38,20 @@ public final class VersionInfo {
         return dirty;
     }
 
+    /** Whether this is a released build: a version that is known and not a snapshot. */
+    public boolean released() {
+        return !version.equals("unknown") && !version.endsWith("-SNAPSHOT");
+    }
+
+    /**
+     * The version as recorded with every run: the version alone for a released build; for an
+     * unreleased one the source revision too ({@code 0.1.0-SNAPSHOT+abc1234}, with
+     * {@code -dirty} when built from uncommitted changes), since two snapshots differ.
+     */
+    public String label() {
+        return released() ? version : version + "+" + commit + (dirty ? "-dirty" : "");
+    }
+
     @Override
     public String toString() {
         return "touchstone " + version + " (commit " + commit + (dirty ? ", with uncommitted changes" : "") + ")";

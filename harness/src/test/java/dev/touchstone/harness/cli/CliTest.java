@@ -40,7 +40,7 @@ class CliTest {
     @DisplayName("every verb answers --help with its usage (exit 0), so the hint after a usage error works")
     void helpOnEveryVerb() {
         for (String verb : List.of("run", "check", "learners", "learn", "simulate", "score", "report", "demo",
-                "calibrate")) {
+                "calibrate", "show")) {
             Result r = cli(verb, "--help");
             assertEquals(0, r.status(), verb + ": " + r.err());
             assertTrue(r.out().startsWith("Usage: touchstone " + verb), r.out());

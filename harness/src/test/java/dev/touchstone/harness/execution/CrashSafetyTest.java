@@ -59,6 +59,10 @@ class CrashSafetyTest {
         assertTrue(child.waitFor(30, TimeUnit.SECONDS));
         int survived = lines(journal);
         assertTrue(survived < plan.runs().size(), "killed mid-study: " + survived);
+        // Right after the kill: every run the journal holds has its kept estimate (estimates are
+        // synced first), and what is kept beyond the journal's runs is left out when read.
+        var afterKill = Journal.read(journal).lines().keySet();
+        assertEquals(afterKill, Journal.readEstimates(journal).keySet(), "estimates consistent with the journal");
 
         StudyRunner.Outcome o = TestWorld.runner().run(plan, new StudyRunner.Options(out, 2, Progress.quiet(),
                 new PrintWriter(new StringWriter())));
@@ -71,6 +75,12 @@ class CrashSafetyTest {
             assertTrue(keys.add(JournalCodec.read(l).result().key()), "duplicated run in the journal: " + l);
         }
         assertEquals(plan.runs().size(), keys.size(), "no run lost");
+        List<String> estimateLines = Files.readAllLines(out.resolve(Journal.ESTIMATES_FILE));
+        Set<String> estimateKeys = new HashSet<>();
+        for (String l : estimateLines) {
+            assertTrue(estimateKeys.add(EstimateCodec.key(l)), "duplicated estimate: " + l);
+        }
+        assertEquals(keys, estimateKeys, "one kept estimate per journal line after the resume");
 
         Path clean = tmp.resolve("clean");
         TestWorld.runner().run(plan, new StudyRunner.Options(clean, 1, Progress.quiet(),
