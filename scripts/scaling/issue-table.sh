@@ -71,13 +71,15 @@ want() {
 
 tool=(java -Djava.awt.headless=true ${TOUCHSTONE_JAVA_OPTS:-} -jar "$JAR")
 echo "job,seconds,peak_mb,note"
-sim() { # sim DIR NODES SAMPLES
-  "${tool[@]}" simulate --graph erdos-renyi --set nodes="$2" --set mean_degree=2 --model linear-gaussian \
-      --samples "$3" --seed 1 --out "$1"
+# The simulate command line for DIR NODES SAMPLES (an array, so /usr/bin/time can run it).
+sim() {
+  simcmd=("${tool[@]}" simulate --graph erdos-renyi --set nodes="$2" --set mean_degree=2 --model linear-gaussian
+      --samples "$3" --seed 1 --out "$1")
 }
 if want 1 || { want 3 && [ ! -f "$work/wide/data.csv" ]; }; then
   rm -rf "$work/wide"
-  measure "simulate 200000 x 50 linear Gaussian to CSV" "$(date -u +%FT%TZ)" sim "$work/wide" 50 200000
+  sim "$work/wide" 50 200000
+  measure "simulate 200000 x 50 linear Gaussian to CSV" "$(date -u +%FT%TZ)" "${simcmd[@]}"
 fi
 if want 2; then
   if python3 -c 'import numpy' 2>/dev/null; then
@@ -109,7 +111,8 @@ if want 3; then
 fi
 if want 4 || { { want 5 || want 6; } && [ ! -f "$work/deep/data.csv" ]; }; then
   rm -rf "$work/deep"
-  measure "simulate 10000 variables mean degree 2 n=1000" "$(date -u +%FT%TZ)" sim "$work/deep" 10000 1000
+  sim "$work/deep" 10000 1000
+  measure "simulate 10000 variables mean degree 2 n=1000" "$(date -u +%FT%TZ)" "${simcmd[@]}"
 fi
 if want 5; then
   measure "read 10000 x 1000 CSV (learn empty)" "$(du -m "$work/deep/data.csv" | cut -f1) MB" \
@@ -121,7 +124,8 @@ if want 6; then
 fi
 if want 7; then
   rm -rf "$work/ges"
-  sim "$work/ges" 1000 1000 >/dev/null 2>&1
+  sim "$work/ges" 1000 1000
+  "${simcmd[@]}" >/dev/null 2>&1
   measure "GES p=1000 mean degree 2 n=1000 with loading" "limit ${pc_seconds} s" \
       "${tool[@]}" learn --data "$work/ges/data.csv" --learner ges --seconds "$pc_seconds" --out "$work/ges.json"
 fi
