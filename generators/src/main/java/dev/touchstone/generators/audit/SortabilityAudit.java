@@ -28,22 +28,32 @@ import java.util.Locale;
  * Pairs are observed variables joined by a directed path in the full DAG (paths may pass
  * through hidden variables). Variances use each column's non-missing cells; R² uses the
  * covariance of the complete rows. Both are NaN when undefined: data not all continuous,
- * no directed path between observed variables, or a singular covariance (R² only). Cost
- * O(L · p² / 64 · p) for path counting (L the longest path) plus O(n p² + p³).
+ * no directed path between observed variables, or a singular covariance (R² only). R² is
+ * not computed for more than {@link #R2_MAX_VARIABLES} observed variables ({@link
+ * #r2Skipped()}), because it needs the p × p covariance and its inverse. Cost
+ * O(L · p² / 64 · p) for path counting (L the longest path) plus, for R², O(n p² + p³).
  */
 public final class SortabilityAudit {
 
     /** Relative tolerance under which two values count as tied. */
     public static final double TIE_TOLERANCE = 1e-9;
 
+    /**
+     * The most observed variables for which R² is computed: the inverse covariance costs
+     * O(p³) time and O(p²) memory (at 2,000, about 10¹⁰ operations and 32 MB per matrix).
+     */
+    public static final int R2_MAX_VARIABLES = 2000;
+
     private final double varsortability;
     private final double r2Sortability;
     private final long pathPairs;
+    private final boolean r2Skipped;
 
-    private SortabilityAudit(double varsortability, double r2Sortability, long pathPairs) {
+    private SortabilityAudit(double varsortability, double r2Sortability, long pathPairs, boolean r2Skipped) {
         this.varsortability = varsortability;
         this.r2Sortability = r2Sortability;
         this.pathPairs = pathPairs;
+        this.r2Skipped = r2Skipped;
     }
 
     /** The audit of {@code data} (columns matched to the DAG by name) against the true {@code dag}. */
@@ -59,14 +69,15 @@ public final class SortabilityAudit {
         }
         long pairs = countPaths(dag, node, null);
         if (!continuous || pairs == 0) {
-            return new SortabilityAudit(Double.NaN, Double.NaN, pairs);
+            return new SortabilityAudit(Double.NaN, Double.NaN, pairs, false);
         }
         double[] variance = new double[q];
         for (int j = 0; j < q; j++) {
             variance[j] = variance(data.continuous(j));
         }
-        double[] r2 = rSquared(data.covariance());
-        return new SortabilityAudit(sortability(dag, node, variance), sortability(dag, node, r2), pairs);
+        boolean skip = q > R2_MAX_VARIABLES;
+        double r2 = skip ? Double.NaN : sortability(dag, node, rSquared(data.covariance()));
+        return new SortabilityAudit(sortability(dag, node, variance), r2, pairs, skip);
     }
 
     /**
@@ -216,6 +227,11 @@ public final class SortabilityAudit {
         return r2Sortability;
     }
 
+    /** Whether R²-sortability was left out because there are more than {@link #R2_MAX_VARIABLES} variables. */
+    public boolean r2Skipped() {
+        return r2Skipped;
+    }
+
     /** The number of (path length, ordered observed pair) combinations counted. */
     public long pathPairs() {
         return pathPairs;
@@ -230,7 +246,7 @@ public final class SortabilityAudit {
     public boolean equals(Object o) {
         return o instanceof SortabilityAudit && Double.compare(((SortabilityAudit) o).varsortability, varsortability) == 0
                 && Double.compare(((SortabilityAudit) o).r2Sortability, r2Sortability) == 0
-                && ((SortabilityAudit) o).pathPairs == pathPairs;
+                && ((SortabilityAudit) o).pathPairs == pathPairs && ((SortabilityAudit) o).r2Skipped == r2Skipped;
     }
 
     @Override

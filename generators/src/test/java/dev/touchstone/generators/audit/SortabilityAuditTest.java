@@ -42,6 +42,26 @@ class SortabilityAuditTest {
         assertEquals(1.0, a.varsortability(), 0);
     }
 
+    @Test
+    @DisplayName("R² is left out above R2_MAX_VARIABLES, varsortability is still the worked fraction (chain of increasing variances: 1)")
+    void rSquaredSkippedForManyVariables() {
+        int p = SortabilityAudit.R2_MAX_VARIABLES + 1;
+        dev.touchstone.core.graph.MutableGraph b = Graph.builder(java.util.stream.IntStream.range(0, p).mapToObj(i -> "x" + i).toList());
+        DataSet.Builder d = DataSet.builder(3);
+        for (int i = 0; i < p; i++) {
+            if (i > 0) {
+                b.addDirected(i - 1, i);
+            }
+            // Variance grows along the chain: (i+1)² times that of {-1, 0, 1}.
+            d.continuous("x" + i, new double[] {-(i + 1), 0, i + 1});
+        }
+        SortabilityAudit a = SortabilityAudit.of(b.freeze(), d.build());
+        assertTrue(a.r2Skipped());
+        assertTrue(Double.isNaN(a.r2Sortability()));
+        assertEquals(1.0, a.varsortability(), 0);
+        assertEquals((long) p * (p - 1) / 2, a.pathPairs(), "a chain joins every ordered pair by one path");
+    }
+
     private static double meanAudit(boolean standardize, boolean r2) {
         Simulation sim = Simulation.builder()
                 .graph(GraphFamilies.byId("erdos-renyi"), Map.of("nodes", 20, "mean_degree", 2))

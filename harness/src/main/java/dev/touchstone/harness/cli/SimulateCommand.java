@@ -356,6 +356,10 @@ final class SimulateCommand implements Callable<Integer> {
         putNumber(o, "varsortability", a.varsortability());
         putNumber(o, "r2_sortability", a.r2Sortability());
         o.put("path_pairs", a.pathPairs());
+        if (a.r2Skipped()) {
+            o.put("r2_sortability_note", "not computed for more than " + SortabilityAudit.R2_MAX_VARIABLES
+                    + " variables: R² of each variable on all others needs the inverse of the p × p covariance");
+        }
         o.put("note", a.isDefined() ? "0.5 is what a random order scores; near 1 means sorting by the criterion"
                 + " finds the causal order (Reisach, Seiler and Weichwald 2021)"
                 : "undefined: the audit needs continuous data with at least one directed path between observed"

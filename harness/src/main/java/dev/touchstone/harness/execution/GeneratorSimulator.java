@@ -25,8 +25,8 @@ public final class GeneratorSimulator implements Simulator {
 
     /** A drawn truth with {@code rows} rows of its data (none for 0). */
     public static Replicate replicate(SimulatedTruth t, int rows) {
-        return new Replicate(t.dag(), rows > 0 ? t.sample(rows).data() : null,
-                t.populationCovariance().orElse(null), tiersOnly(t.knowledge()));
+        return Replicate.withLazyCovariance(t.dag(), rows > 0 ? t.sample(rows).data() : null,
+                () -> t.populationCovariance().orElse(null), tiersOnly(t.knowledge()));
     }
 
     /** The tiers of the truth's knowledge (what {@code knowledge: tiers} hands to runs). */

@@ -10,18 +10,22 @@ import dev.touchstone.harness.study.KnowledgeSource;
 import dev.touchstone.harness.study.SampleSize;
 
 import java.util.Objects;
+import java.util.function.Supplier;
 
 /**
  * One replicate's draw, shared by all its runs: the true DAG (hidden variables flagged),
  * one data set of the largest sample size over the observed variables (smaller sample sizes
  * are its prefixes, so they are nested) and, when the model has one, the exact population
- * covariance of the observed variables. Immutable.
+ * covariance of the observed variables, which may be given as a supplier called on first
+ * use (it is p × p, so a simulation that never asks for it should not pay for it). Immutable.
  */
 public final class Replicate {
 
     private final Graph trueDag;
     private final DataSet data;
-    private final CovarianceMatrix populationCovariance;
+    private final Supplier<CovarianceMatrix> covarianceSupplier;
+    private volatile CovarianceMatrix populationCovariance;
+    private volatile boolean covarianceKnown;
     private final Knowledge tiers;
     private volatile Oracle oracle;
 
@@ -40,7 +44,26 @@ public final class Replicate {
     public Replicate(Graph trueDag, DataSet data, CovarianceMatrix populationCovariance, Knowledge tiers) {
         this.trueDag = Objects.requireNonNull(trueDag, "trueDag");
         this.data = data;
+        this.covarianceSupplier = null;
         this.populationCovariance = populationCovariance;
+        this.covarianceKnown = true;
+        this.tiers = Objects.requireNonNull(tiers, "tiers");
+    }
+
+    /**
+     * A replicate whose population covariance is computed on first use.
+     *
+     * @param populationCovariance gives the exact covariance over the observed variables, or null
+     */
+    public static Replicate withLazyCovariance(Graph trueDag, DataSet data,
+            Supplier<CovarianceMatrix> populationCovariance, Knowledge tiers) {
+        return new Replicate(trueDag, data, Objects.requireNonNull(populationCovariance, "populationCovariance"), tiers, true);
+    }
+
+    private Replicate(Graph trueDag, DataSet data, Supplier<CovarianceMatrix> supplier, Knowledge tiers, boolean lazy) {
+        this.trueDag = Objects.requireNonNull(trueDag, "trueDag");
+        this.data = data;
+        this.covarianceSupplier = supplier;
         this.tiers = Objects.requireNonNull(tiers, "tiers");
     }
 
@@ -58,7 +81,16 @@ public final class Replicate {
         return data;
     }
 
+    /** The exact covariance over the observed variables, or null when the model has none. */
     public CovarianceMatrix populationCovariance() {
+        if (!covarianceKnown) {
+            synchronized (this) {
+                if (!covarianceKnown) {
+                    populationCovariance = covarianceSupplier.get();
+                    covarianceKnown = true;
+                }
+            }
+        }
         return populationCovariance;
     }
 

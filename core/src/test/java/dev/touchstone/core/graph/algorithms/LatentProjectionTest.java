@@ -107,6 +107,21 @@ class LatentProjectionTest {
     }
 
     @Test
+    @DisplayName("with nothing hidden the MAG is the DAG itself (Richardson and Spirtes 2002: no inducing path joins non-adjacent vertices of a DAG), and the shortcut equals the general pair search on 100 random DAGs")
+    void nothingHiddenGivesTheDagItself() {
+        int edges = 0;
+        for (long seed = 1; seed <= 100; seed++) {
+            Graph dag = seed % 2 == 0 ? RandomDags.erdosRenyi(5 + (int) (seed % 30), 1 + seed % 4, seed)
+                    : RandomDags.scaleFree(5 + (int) (seed % 30), 1 + (int) (seed % 3), seed);
+            Graph searched = LatentProjection.bySearch(dag);
+            assertEquals(dag, searched, "seed " + seed);
+            assertEquals(searched, LatentProjection.mag(dag), "seed " + seed);
+            edges += dag.edges().size();
+        }
+        assertTrue(edges > 500, "the DAGs have edges: " + edges);
+    }
+
+    @Test
     @DisplayName("adjacent in the MAG iff no subset of the observed variables d-separates the pair (Richardson and Spirtes 2002, inducing-path theorem; from memory), exhaustively on small DAGs")
     void adjacencyMeansNoSeparatingSet() {
         int pairs = 0;
