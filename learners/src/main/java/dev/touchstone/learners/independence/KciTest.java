@@ -11,7 +11,7 @@ import java.util.Arrays;
  * 2011, "Kernel-based conditional independence test and application in causal discovery",
  * UAI), with the gamma approximation of its null distribution, for continuous data.
  *
- * <p><b>Statistic.</b> With Gaussian kernels (widths by the median heuristic stated in
+ * <p><b>Statistic</b> (theorem numbers as recalled from memory). With Gaussian kernels (widths by the median heuristic stated in
  * {@link KernelAlgebra}, on standardised columns) and centred Gram matrices K̃ = HKH:
  * <ul>
  *   <li>S = ∅: T = tr(K̃_x K̃_y)/n, null ≈ gamma with mean tr(K̃_x) tr(K̃_y)/n² and variance
