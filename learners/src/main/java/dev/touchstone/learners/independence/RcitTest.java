@@ -149,7 +149,7 @@ public final class RcitTest implements IndependenceTest {
                 for (int j = 0; j < d; j++) {
                     t += w[j] * u[j][i];
                 }
-                fk[i] = root2 * KernelAlgebra.cos(t);
+                fk[i] = root2 * Math.cos(t);
             }
         }
         return KernelAlgebra.centreColumns(f);

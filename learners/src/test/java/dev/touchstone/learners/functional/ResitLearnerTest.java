@@ -18,7 +18,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * RESIT orients bivariate additive-noise pairs: for x → y with y = f(x) + e, f nonlinear,
- * the backward model does not hold (Hoyer, Janzing, Mooij, Peters and Schölkopf 2009, NIPS,
+ * the backward model does not hold (Hoyer, Janzing, Mooij, Peters and Schölkopf, NIPS 2008,
  * Theorem 1; Peters et al. 2014, JMLR 15, Section 4.1 report such behaviour). Threshold
  * (≥ 90% of 50 seeded cases) chosen here. Data invented for this check: cause Gaussian or
  * uniform, functions x³ + x, sin(2x) + x, tanh(2x)·2 + 0.5x², noise Gaussian or uniform,
