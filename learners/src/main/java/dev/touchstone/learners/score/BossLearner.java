@@ -19,7 +19,7 @@ import java.util.Map;
  * NeurIPS) with any of the local scores, returning a CPDAG: a search over variable orders
  * ({@link BossSearch}) whose orders are scored through grow-shrink trees
  * ({@link GrowShrinkTree}), then, by default, the backward phase of greedy equivalence
- * search on the CPDAG of the best order's DAG, as in the paper (Chickering 2002: from an
+ * search on the CPDAG of the best order's DAG, as in the paper (from memory; Chickering 2002: from an
  * I-map of the distribution the deletions reach the true class in the large-sample limit).
  * Stateless and thread-safe.
  */

@@ -12,7 +12,7 @@ import java.util.stream.IntStream;
 /**
  * Best order score search (Andrews, Ramsey, Sanchez-Romero, Camchong and Kummerfeld 2023,
  * "Fast scalable and accurate discovery of DAGs using the best order score search and
- * grow-shrink trees", NeurIPS, algorithms 1 and 2): a local search over variable orders in
+ * grow-shrink trees", NeurIPS; its move and loop as we recall them, from memory): a local search over variable orders in
  * which one move takes a variable out of the order and puts it back where the DAG the order
  * induces scores best.
  *

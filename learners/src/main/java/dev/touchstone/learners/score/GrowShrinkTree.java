@@ -5,7 +5,7 @@ import java.util.Arrays;
 /**
  * A grow-shrink tree of one variable (Andrews, Ramsey, Sanchez-Romero, Camchong and
  * Kummerfeld 2023, "Fast scalable and accurate discovery of DAGs using the best order score
- * search and grow-shrink trees", NeurIPS, §4): a memo of every grow-shrink parent search of
+ * search and grow-shrink trees", NeurIPS; the structure as we recall it): a memo of every grow-shrink parent search of
  * that variable made so far, shared by all the orders a permutation search visits.
  *
  * <p><b>What it answers.</b> Given the set Z of variables that precede the variable y in an

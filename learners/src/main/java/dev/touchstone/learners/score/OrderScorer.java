@@ -15,7 +15,7 @@ import java.util.List;
  * knowledge allows (required edges keep their tail before their head).
  *
  * <p>The trees persist for the whole search, across moves and restarts, which is what makes
- * re-scoring an order cheap (Andrews et al. 2023, §4). Not thread-safe as a whole; distinct
+ * re-scoring an order cheap (Andrews et al. 2023). Not thread-safe as a whole; distinct
  * trees may be queried from distinct threads at once.
  */
 final class OrderScorer {

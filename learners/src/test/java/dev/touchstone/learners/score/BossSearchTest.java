@@ -42,7 +42,7 @@ class BossSearchTest {
 
     @Test
     @DisplayName("a better mutation moves v to the best of all insertion indices, scored from scratch (Andrews et al."
-            + " 2023, algorithm 2), or leaves the order when none beats the current one")
+            + " 2023, its better-mutation move, from memory), or leaves the order when none beats the current one")
     void betterMutationTakesTheBestIndex() {
         UniformRandomProvider rng = Seeds.random(5);
         int moves = 0;

@@ -17,7 +17,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 class GrowShrinkTreeTest {
 
-    /** Grow-shrink straight from its definition (Margaritis and Thrun 2000; Andrews et al. 2023, §4), no tree. */
+    /** Grow-shrink straight from its definition (Margaritis and Thrun 2000; Andrews et al. 2023), no tree. */
     static int[] bruteForceParents(LocalScore s, int y, boolean[] prefix) {
         int[] current = new int[0];
         double best = s.localScore(y, current);
