@@ -217,11 +217,75 @@ final class StudyView {
         return new Headline(title, t.build(), notRun);
     }
 
+    /** The identity index of a configuration (its position in the study's learner order), for its colour and marker. */
+    int identity(String config) {
+        return configurations().indexOf(config);
+    }
+
+    /** Each configuration's swatch (inline SVG of its colour and marker), by label. */
+    Map<String, String> swatches() {
+        Map<String, String> m = new LinkedHashMap<>();
+        for (String c : configurations()) {
+            m.put(c, dev.touchstone.reports.charts.SeriesStyle.swatchSvg(identity(c)));
+        }
+        return m;
+    }
+
+    /** The classes of truth that ok runs were scored against, in first-appearance order (words: dag, cpdag, pag). */
+    List<String> truthClasses() {
+        Set<String> out = new LinkedHashSet<>();
+        for (RunResult r : data.runs()) {
+            if (r.isOk() && r.scoredAgainst() != null) {
+                out.add(r.scoredAgainst().word());
+            }
+        }
+        return new ArrayList<>(out);
+    }
+
+    /** The classes of truth one configuration's ok runs were scored against, upper case. */
+    List<String> truthClassesOf(String config) {
+        Set<String> out = new LinkedHashSet<>();
+        for (RunResult r : data.runs()) {
+            if (r.isOk() && r.scoredAgainst() != null && r.configurationId().equals(config)) {
+                out.add(r.scoredAgainst().word().toUpperCase(java.util.Locale.ROOT));
+            }
+        }
+        return new ArrayList<>(out);
+    }
+
+    /** The class of truth a configuration's ok runs on a setting were scored against (the first), or null. */
+    String truthClassOf(Setting setting, String config) {
+        for (RunResult r : data.runs()) {
+            if (r.isOk() && r.scoredAgainst() != null && r.configurationId().equals(config)
+                    && r.setting().equals(setting)) {
+                return r.scoredAgainst().word();
+            }
+        }
+        return null;
+    }
+
+    /** A setting's label without the coordinates that never vary (the full label when nothing is left). */
+    String shortLabel(Setting s) {
+        Set<String> constant = constantCoordinates();
+        List<String> parts = new ArrayList<>();
+        s.coordinates().forEach((k, v) -> {
+            if (!constant.contains(k) && v != null && !v.isEmpty()) {
+                parts.add(k + "=" + v);
+            }
+        });
+        return parts.isEmpty() ? s.label() : String.join(", ", parts);
+    }
+
     /** The paired comparisons as a table (differences are configuration − reference). */
     Table comparisons() {
+        return comparisons(data.comparisons());
+    }
+
+    /** These paired comparisons as a table. */
+    Table comparisons(List<dev.touchstone.metrics.results.ComparisonRow> rows) {
         Table.Builder t = Table.builder(List.of("setting", "metric", "learner configuration", "pairs",
                 "mean difference [95% interval]", "Wilcoxon p", "Holm p", "wins / ties / losses"));
-        for (var c : data.comparisons()) {
+        for (var c : rows) {
             String wtl = c.wins() == null ? Numbers.UNDEFINED : c.wins() + " / " + c.ties() + " / " + c.losses();
             t.row(c.setting().label(), c.metric(), c.configurationId(), Integer.toString(c.pairs()),
                     Numbers.withInterval(c.meanDifference(), c.low(), c.high()), Numbers.format(c.pValue()),

@@ -37,6 +37,27 @@ public final class CriticalDifferenceDiagram {
     }
 
     /**
+     * The fewest settings (blocks) N for which Friedman's test of k configurations can reach
+     * significance at {@code alpha} at all: under the null hypothesis each setting ranks the k
+     * configurations in one of k! equally likely orders, independently, so the most extreme
+     * outcome (every setting ranking alike, the largest statistic) has exact probability
+     * k!·(1/k!)^N = (k!)^-(N-1) (Friedman 1937, JASA 32, the permutation distribution of the
+     * statistic without ties); below that N no outcome can be significant. At least 2.
+     */
+    public static int minimumSettings(int k, double alpha) {
+        if (k < 2) {
+            throw new IllegalArgumentException("ranking needs at least two configurations, got " + k);
+        }
+        double logFactorial = 0;
+        for (int i = 2; i <= k; i++) {
+            logFactorial += Math.log(i);
+        }
+        // smallest N with -(N-1) log k! <= log alpha
+        int n = 1 + (int) Math.ceil(-Math.log(alpha) / logFactorial - 1e-12);
+        return Math.max(2, n);
+    }
+
+    /**
      * The groups to join: maximal runs of learners (in rank order) whose mean ranks span
      * less than the critical difference, leaving out runs contained in a longer one.
      * Each group is given as [first, last] positions in rank order.

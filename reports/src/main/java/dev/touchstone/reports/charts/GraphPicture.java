@@ -4,13 +4,7 @@ import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.Mark;
 import org.jfree.svg.SVGGraphics2D;
-import org.jgrapht.alg.drawing.FRLayoutAlgorithm2D;
-import org.jgrapht.alg.drawing.model.Box2D;
-import org.jgrapht.alg.drawing.model.LayoutModel2D;
-import org.jgrapht.alg.drawing.model.MapLayoutModel2D;
 import org.jgrapht.alg.drawing.model.Point2D;
-import org.jgrapht.graph.DefaultEdge;
-import org.jgrapht.graph.SimpleGraph;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
@@ -21,23 +15,20 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.util.EnumMap;
-import java.util.List;
 import java.util.Map;
-import java.util.Random;
 
 /**
- * The truth beside an estimate, over the same variables at the same positions (laid out
- * by JGraphT's Fruchterman–Reingold algorithm on the union of both skeletons; Fruchterman
- * and Reingold 1991). Edges are told apart by line style as well as colour, so the picture
- * reads in greyscale: correct solid black, missing (truth panel) dashed grey, extra dotted
- * red, wrong marks dash-dot orange. Arrowheads are filled triangles, circles open circles,
- * tails plain line ends.
+ * The truth beside an estimate, over the same variables at the same positions: a
+ * {@link GraphLayout} computed from the truth alone (layered by causal order), so every
+ * estimate of one truth is drawn over one layout. Edges are told apart by line style as well
+ * as colour, so the picture reads in greyscale: correct solid black, missing (truth panel)
+ * dashed grey, extra dotted red, wrong marks dash-dot orange. Arrowheads are filled
+ * triangles, circles open circles, tails plain line ends.
  */
 public final class GraphPicture {
 
-    private static final int PANEL = 360;
-    private static final int MARGIN = 34;
-    private static final double NODE_RADIUS = 13;
+    private static final int TOP = 24;
+    private static final double NODE_RADIUS = GraphLayout.RADIUS;
     private static final Map<EdgeVerdict, Color> COLOURS = new EnumMap<>(Map.of(
             EdgeVerdict.CORRECT, new Color(0x22, 0x22, 0x22),
             EdgeVerdict.MISSING, new Color(0x88, 0x88, 0x88),
@@ -46,20 +37,23 @@ public final class GraphPicture {
 
     private final Graph truth;
     private final Graph estimate;
-    private final long seed;
+    private final GraphLayout layout;
 
     /**
      * @param truth    the truth, of the estimate's class, over the same variables in the same order
      * @param estimate the estimate
-     * @param seed     seeds the layout, so the picture is reproducible
+     * @param layout   the truth's layout (shared by every estimate of it)
      */
-    public GraphPicture(Graph truth, Graph estimate, long seed) {
+    public GraphPicture(Graph truth, Graph estimate, GraphLayout layout) {
         if (!truth.names().equals(estimate.names())) {
             throw new IllegalArgumentException("truth and estimate must be over the same variables");
         }
+        if (layout.size() != truth.size()) {
+            throw new IllegalArgumentException("the layout has " + layout.size() + " nodes, the truth " + truth.size());
+        }
         this.truth = truth;
         this.estimate = estimate;
-        this.seed = seed;
+        this.layout = layout;
     }
 
     /** How the edge between {@code a} and {@code b} of {@code in} compares with {@code other}. */
@@ -74,48 +68,24 @@ public final class GraphPicture {
 
     /** Both panels side by side with a legend, as an {@code <svg>} element. */
     public String toSvg() {
-        int width = 2 * PANEL + 20;
-        int height = PANEL + 60;
-        Point2D[] at = layout();
+        int panel = (int) Math.ceil(layout.width());
+        int width = 2 * panel + 20;
+        int height = (int) Math.ceil(layout.height()) + TOP + 36;
+        Point2D[] at = new Point2D[truth.size()];
+        for (int v = 0; v < at.length; v++) {
+            at[v] = Point2D.of(layout.x(v), TOP + layout.y(v));
+        }
         SVGGraphics2D g = Svg.canvas(width, height);
         g.setColor(Color.WHITE);
         g.fillRect(0, 0, width, height);
         g.setFont(new Font("SansSerif", Font.BOLD, 12));
         g.setColor(Color.BLACK);
         g.drawString("truth", 10, 16);
-        g.drawString("estimate", PANEL + 30, 16);
+        g.drawString("estimate", panel + 30, 16);
         panel(g, truth, estimate, at, 0, true);
-        panel(g, estimate, truth, at, PANEL + 20, false);
-        legend(g, height - 22);
+        panel(g, estimate, truth, at, panel + 20, false);
+        legend(g, height - 14);
         return g.getSVGElement();
-    }
-
-    private Point2D[] layout() {
-        int n = truth.size();
-        SimpleGraph<Integer, DefaultEdge> skeleton = new SimpleGraph<>(DefaultEdge.class);
-        for (int v = 0; v < n; v++) {
-            skeleton.addVertex(v);
-        }
-        for (Graph g : List.of(truth, estimate)) {
-            for (Edge e : g.edges()) {
-                if (!skeleton.containsEdge(e.a(), e.b())) {
-                    skeleton.addEdge(e.a(), e.b());
-                }
-            }
-        }
-        double size = PANEL - 2 * MARGIN;
-        LayoutModel2D<Integer> model = new MapLayoutModel2D<>(new Box2D(size, size));
-        new FRLayoutAlgorithm2D<Integer, DefaultEdge>(300, 0.5, new Random(seed)).layout(skeleton, model);
-        Point2D[] at = new Point2D[n];
-        for (int v = 0; v < n; v++) {
-            Point2D p = model.get(v);
-            at[v] = Point2D.of(MARGIN + clamp(p.getX(), size), 24 + MARGIN + clamp(p.getY(), size));
-        }
-        return at;
-    }
-
-    private static double clamp(double v, double size) {
-        return Double.isNaN(v) ? size / 2 : Math.max(0, Math.min(size, v));
     }
 
     private void panel(SVGGraphics2D g, Graph drawn, Graph other, Point2D[] at, int dx, boolean isTruth) {

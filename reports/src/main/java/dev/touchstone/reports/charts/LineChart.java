@@ -1,9 +1,7 @@
 package dev.touchstone.reports.charts;
 
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
-import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.XYPlot;
@@ -109,10 +107,11 @@ public final class LineChart {
             renderer = new XYLineAndShapeRenderer(true, true);
         }
         for (int i = 0; i < series.size(); i++) {
-            renderer.setSeriesPaint(i, SeriesStyle.colour(i));
-            renderer.setSeriesFillPaint(i, SeriesStyle.colour(i));
-            renderer.setSeriesStroke(i, bands ? SeriesStyle.stroke(i) : new BasicStroke(1f));
-            renderer.setSeriesShape(i, SeriesStyle.shape(i));
+            int id = series.get(i).identity() < 0 ? i : series.get(i).identity();
+            renderer.setSeriesPaint(i, SeriesStyle.colour(id));
+            renderer.setSeriesFillPaint(i, SeriesStyle.colour(id));
+            renderer.setSeriesStroke(i, bands ? SeriesStyle.stroke(id) : new BasicStroke(1f));
+            renderer.setSeriesShape(i, SeriesStyle.shape(id));
         }
         renderer.setUseFillPaint(false);
         XYPlot plot = new XYPlot(data, axis(xLabel, xScale, null, null), axis(yLabel, yScale, yMin, yMax), renderer);
@@ -123,7 +122,7 @@ public final class LineChart {
         JFreeChart chart = new JFreeChart(title, new Font("SansSerif", Font.BOLD, 14), plot, true);
         chart.setBackgroundPaint(Color.WHITE);
         LegendTitle legend = chart.getLegend();
-        legend.setPosition(RectangleEdge.RIGHT);
+        legend.setPosition(RectangleEdge.BOTTOM);
         legend.setFrame(BlockBorder.NONE);
         legend.setItemFont(new Font("SansSerif", Font.PLAIN, 11));
         return chart;
@@ -136,14 +135,7 @@ public final class LineChart {
     private static ValueAxis axis(String label, AxisScale scale, Double min, Double max) {
         ValueAxis a;
         if (scale == AxisScale.LOG) {
-            LogAxis log = new LogAxis(label);
-            log.setBase(10);
-            log.setSmallestValue(1e-6);
-            // Whole powers of ten only, printed as plain numbers (100, 1000) rather than 10^2.1.
-            log.setTickUnit(new NumberTickUnit(1.0));
-            log.setNumberFormatOverride(new java.text.DecimalFormat("0.######"));
-            log.setMinorTickMarksVisible(true);
-            a = log;
+            a = new OneTwoFiveLogAxis(label);
         } else {
             NumberAxis n = new NumberAxis(label);
             n.setAutoRangeIncludesZero(false);
