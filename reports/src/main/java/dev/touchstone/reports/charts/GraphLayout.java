@@ -88,23 +88,60 @@ public final class GraphLayout {
             byLayer.get(layer[v]).add(v);
         }
         barycentre(truth, byLayer);
+        GraphLayout best = null;
+        // Wider spacing gives the repair room; the first spacing that leaves every edge clear is kept.
+        for (double spread : new double[] {1, 1.3, 1.7, 2.2, 3}) {
+            GraphLayout l = place(truth, byLayer, spread);
+            if (best == null || l.conflicts(truth) < best.conflicts(truth)) {
+                best = l;
+            }
+            if (best.conflicts(truth) == 0) {
+                break;
+            }
+        }
+        return best;
+    }
+
+    private static GraphLayout place(Graph truth, List<List<Integer>> byLayer, double spread) {
+        int n = truth.size();
+        int layers = byLayer.size();
+        double gap = NODE_GAP * spread;
         int widest = byLayer.stream().mapToInt(List::size).max().orElse(1);
-        double width = Math.max(300, 2 * MARGIN + (widest - 1) * NODE_GAP + NODE_GAP / 2);
+        double width = Math.max(300, 2 * MARGIN + (widest - 1) * gap + gap / 2);
         double height = Math.max(200, 2 * MARGIN + (layers - 1) * LAYER_GAP + LAYER_GAP / 2);
         double[] x = new double[n];
         double[] y = new double[n];
         for (int l = 0; l < layers; l++) {
             List<Integer> row = byLayer.get(l);
-            double span = (row.size() - 1) * NODE_GAP;
-            double start = (width - span) / 2 + (l % 2 == 1 ? NODE_GAP / 4 : -NODE_GAP / 4);
+            double span = (row.size() - 1) * gap;
+            double start = (width - span) / 2 + (l % 2 == 1 ? gap / 4 : -gap / 4);
             for (int i = 0; i < row.size(); i++) {
                 int v = row.get(i);
-                x[v] = start + i * NODE_GAP;
+                x[v] = start + i * gap;
                 y[v] = MARGIN + l * LAYER_GAP + (i % 2 == 1 ? LAYER_GAP / 4 : 0);
             }
         }
         repair(truth, x, y, width, height);
         return new GraphLayout(x, y, width, height);
+    }
+
+    /** Node–edge pairs closer than {@link #CLEARANCE}, plus node pairs that overlap. */
+    int conflicts(Graph g) {
+        int count = 0;
+        for (int w = 0; w < x.length; w++) {
+            for (Edge e : g.edges()) {
+                if (e.a() != w && e.b() != w && distanceToSegment(x[w], y[w], x[e.a()], y[e.a()], x[e.b()],
+                        y[e.b()]) < CLEARANCE) {
+                    count++;
+                }
+            }
+            for (int v = w + 1; v < x.length; v++) {
+                if (Math.hypot(x[w] - x[v], y[w] - y[v]) < 2 * RADIUS + 4) {
+                    count++;
+                }
+            }
+        }
+        return count;
     }
 
     /**

@@ -25,6 +25,19 @@ public final class Svg {
         return g;
     }
 
+    /**
+     * An inline {@code <svg>} element as a standalone SVG 1.1 file: XML declaration first and
+     * the SVG namespace declared (JFreeSVG's element already carries it; added when missing).
+     */
+    public static String standalone(String svgElement) {
+        if (!svgElement.startsWith("<svg")) {
+            throw new IllegalArgumentException("not an <svg> element");
+        }
+        String svg = svgElement.contains("xmlns=\"http://www.w3.org/2000/svg\"") ? svgElement
+                : "<svg xmlns=\"http://www.w3.org/2000/svg\"" + svgElement.substring(4);
+        return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + svg + "\n";
+    }
+
     /** The chart drawn at this size, as an {@code <svg>} element. */
     public static String of(JFreeChart chart, int width, int height) {
         SVGGraphics2D g = canvas(width, height);
