@@ -41,8 +41,12 @@ public final class HtmlReport {
     /** Panels drawn per metric and axis at most; the rest are named in a note. */
     static final int MAX_PANELS = 12;
     /** Chart size: two charts sit side by side on a page 1100 px wide. */
-    private static final int WIDTH = 530;
-    private static final int HEIGHT = 320;
+    private static final int WIDTH = 340;
+    private static final int HEIGHT = 270;
+    /** Wider charts (many boxes, the heat map): two side by side, or one across the page. */
+    private static final int WIDE = 520;
+    private static final int WIDE_HEIGHT = 320;
+    private static final int FULL_WIDTH = 1050;
 
     private HtmlReport() {
     }
@@ -268,7 +272,7 @@ public final class HtmlReport {
             if (isUnitInterval(metric)) {
                 chart = chart.withRange(0, 1.02);
             }
-            page.figure("distribution " + metric, chart.toSvg(WIDTH, HEIGHT), capitalised(MetricWords.of(metric))
+            page.figure("distribution " + metric, chart.toSvg(WIDE, WIDE_HEIGHT), capitalised(MetricWords.of(metric))
                     + " across replicates, per setting.");
         }
         if (any) {
@@ -348,21 +352,20 @@ public final class HtmlReport {
                     + " coloured blue where the configuration is better and red where it is worse; a ring marks a"
                     + " Holm-adjusted Wilcoxon signed-rank p-value below 0.05 (Holm across configurations)."
                     + (empty == 0 ? "" : " " + empty + " comparisons without any pair of ok runs are left out."));
-            html.beginGrid();
+            List<DifferenceHeatMap.Cell> cells = new ArrayList<>();
+            List<DifferenceHeatMap.Block> blocks = new ArrayList<>();
+            Set<String> settings = new LinkedHashSet<>();
+            for (ComparisonRow c : rows) {
+                settings.add(view.shortLabel(c.setting()));
+            }
             for (String metric : data.metrics()) {
-                List<DifferenceHeatMap.Cell> cells = new ArrayList<>();
                 Set<String> configs = new LinkedHashSet<>();
-                Set<String> settings = new LinkedHashSet<>();
                 for (ComparisonRow c : rows) {
                     if (c.metric().equals(metric)) {
                         configs.add(c.configurationId());
-                        settings.add(view.shortLabel(c.setting()));
-                        cells.add(new DifferenceHeatMap.Cell(c.configurationId(), view.shortLabel(c.setting()),
+                        cells.add(new DifferenceHeatMap.Cell(metric, c.configurationId(), view.shortLabel(c.setting()),
                                 c.meanDifference(), c.pHolm()));
                     }
-                }
-                if (cells.isEmpty()) {
-                    continue;
                 }
                 List<String> ordered = new ArrayList<>();
                 for (String c : view.configurations()) {
@@ -370,11 +373,14 @@ public final class HtmlReport {
                         ordered.add(c);
                     }
                 }
-                String title = capitalised(MetricWords.of(metric)) + ": difference from " + data.reference();
-                page.figure("comparison " + metric, new DifferenceHeatMap(title, ordered, new ArrayList<>(settings),
-                        cells, data.higherIsBetter(metric)).toSvg(WIDTH), title + ", per setting.");
+                if (!ordered.isEmpty()) {
+                    blocks.add(new DifferenceHeatMap.Block(metric, capitalised(MetricWords.of(metric)),
+                            data.higherIsBetter(metric), ordered));
+                }
             }
-            html.endGrid();
+            String title = "Mean paired difference from " + data.reference() + " per setting";
+            page.figure("comparison heat map", new DifferenceHeatMap(title, blocks, new ArrayList<>(settings), cells)
+                    .toSvg(FULL_WIDTH), title + ", one block of rows per metric, each with its own colour scale.");
             Table full = view.comparisons(rows);
             html.beginDetails("The full table of paired comparisons (" + rows.size() + " rows; also in"
                     + " comparisons.csv)");
@@ -413,7 +419,7 @@ public final class HtmlReport {
         }
         double cd = r.criticalDifference() == null ? Double.NaN : r.criticalDifference();
         page.figure("ranks " + r.metric(), new CriticalDifferenceDiagram(capitalised(words) + ": mean ranks over "
-                + r.settingsUsed() + " settings", entries, cd).toSvg(WIDTH), "Friedman χ² = "
+                + r.settingsUsed() + " settings", entries, cd).toSvg(WIDE), "Friedman χ² = "
                 + Numbers.format(r.friedmanChiSquare()) + " on " + r.degreesOfFreedom() + " degrees of freedom, p = "
                 + Numbers.format(r.friedmanPValue()) + "; thick lines join configurations whose mean ranks differ by"
                 + " less than the Nemenyi critical difference at α = " + r.alpha() + " (Demšar 2006)."
@@ -516,11 +522,12 @@ public final class HtmlReport {
                 + " estimate has with the same marks; dashed grey, edges it misses; dash-dot orange, edges it"
                 + " has with other marks. Estimate panel: the same, and dotted red for edges the truth lacks.");
         GraphLayout.Cache layouts = new GraphLayout.Cache();
+        page.html().beginGrid();
         for (ReportData.Example e : data.examples()) {
-            page.html().subheading(e.title());
             page.figure("picture " + e.title(), new GraphPicture(e.truth(), e.estimate(), layouts.of(e.truth()))
-                    .toSvg(), "Truth (left) beside the estimate (right).");
+                    .toSvg(), e.title() + ": truth (left) beside the estimate (right).");
         }
+        page.html().endGrid();
     }
 
     /**

@@ -7,14 +7,13 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.geom.Rectangle2D;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 
 /**
- * The paired differences of each configuration against the reference as a heat map: one row
- * per configuration, one column per setting, each cell coloured by the mean difference turned
+ * The paired differences of each configuration against the reference as a heat map: one block
+ * of rows per metric (its own colour scale), one row per configuration, one column per setting, each cell coloured by the mean difference turned
  * so that blue means better than the reference and red worse (whatever the metric's
  * direction), with the value printed and a ring where the Holm-adjusted p-value is below
  * 0.05. The diverging scale runs between the end colours of the blue–red scheme that Tol
@@ -23,8 +22,15 @@ import java.util.Objects;
  */
 public final class DifferenceHeatMap {
 
-    /** One cell: configuration (row), setting (column), mean difference and adjusted p-value (null: none). */
-    public record Cell(String configuration, String setting, double difference, Double pAdjusted) {
+    /** One cell: metric and configuration (row), setting (column), mean difference and adjusted p-value (null: none). */
+    public record Cell(String metric, String configuration, String setting, double difference, Double pAdjusted) {
+    }
+
+    /** A block of rows: a metric (its title in words and its direction; null: none) and its configurations. */
+    public record Block(String metric, String title, Boolean higherIsBetter, List<String> configurations) {
+        public Block {
+            configurations = List.copyOf(configurations);
+        }
     }
 
     static final Color BETTER = new Color(0x21, 0x66, 0xAC);
@@ -33,24 +39,20 @@ public final class DifferenceHeatMap {
     private static final int ROW = 24;
 
     private final String title;
-    private final List<String> rows;
+    private final List<Block> blocks;
     private final List<String> columns;
     private final List<Cell> cells;
-    private final Boolean higherIsBetter;
     private final double alpha;
 
     /**
-     * @param rows           configurations in the study's order
-     * @param columns        settings (short labels, lines split at ", ")
-     * @param higherIsBetter the metric's direction; null for a metric without one (colour by sign)
+     * @param blocks  one per metric, configurations in the study's order
+     * @param columns settings (short labels, lines split at ", ")
      */
-    public DifferenceHeatMap(String title, List<String> rows, List<String> columns, List<Cell> cells,
-                             Boolean higherIsBetter) {
+    public DifferenceHeatMap(String title, List<Block> blocks, List<String> columns, List<Cell> cells) {
         this.title = Objects.requireNonNull(title);
-        this.rows = List.copyOf(rows);
+        this.blocks = List.copyOf(blocks);
         this.columns = List.copyOf(columns);
         this.cells = List.copyOf(cells);
-        this.higherIsBetter = higherIsBetter;
         this.alpha = 0.05;
     }
 
@@ -70,31 +72,33 @@ public final class DifferenceHeatMap {
         return (int) Math.round(a + (b - a) * u);
     }
 
-    private double better(double d) {
-        return higherIsBetter == null || higherIsBetter ? d : -d;
+    private static double better(Block b, double d) {
+        return b.higherIsBetter() == null || b.higherIsBetter() ? d : -d;
     }
 
     public String toSvg(int width) {
         Font font = new Font("SansSerif", Font.PLAIN, 10);
+        Font bold = new Font("SansSerif", Font.BOLD, 11);
         SVGGraphics2D probe = Svg.canvas(10, 10);
-        probe.setFont(font);
-        FontMetrics fm = probe.getFontMetrics();
+        FontMetrics fm = probe.getFontMetrics(font);
         int labelWidth = 0;
-        for (String r : rows) {
-            labelWidth = Math.max(labelWidth, fm.stringWidth(r));
+        for (Block b : blocks) {
+            for (String r : b.configurations()) {
+                labelWidth = Math.max(labelWidth, fm.stringWidth(r) + 16);
+            }
         }
         labelWidth = Math.min(labelWidth + 12, width / 3);
         int headerLines = 1;
         for (String c : columns) {
             headerLines = Math.max(headerLines, c.split(", ").length);
         }
-        int top = 26 + headerLines * 12 + 4;
+        int top = 26 + headerLines * 12 + 6;
         int cellWidth = Math.max(12, (width - labelWidth - 10) / Math.max(1, columns.size()));
-        int height = top + rows.size() * ROW + 34;
-        double max = 0;
-        for (Cell c : cells) {
-            max = Math.max(max, Math.abs(c.difference()));
+        int rowCount = 0;
+        for (Block b : blocks) {
+            rowCount += b.configurations().size();
         }
+        int height = top + blocks.size() * 18 + rowCount * ROW + 40;
         SVGGraphics2D g = Svg.canvas(width, height);
         g.setColor(Color.WHITE);
         g.fillRect(0, 0, width, height);
@@ -111,65 +115,78 @@ public final class DifferenceHeatMap {
             }
         }
         boolean numbers = cellWidth >= 40;
-        for (int i = 0; i < rows.size(); i++) {
-            int y = top + i * ROW;
-            g.setColor(Color.BLACK);
-            String label = fit(fm, rows.get(i), labelWidth - 8);
-            g.drawString(label, labelWidth - 6 - fm.stringWidth(label), y + ROW / 2f + 4);
-            for (int j = 0; j < columns.size(); j++) {
-                Cell c = find(rows.get(i), columns.get(j));
-                Rectangle2D box = new Rectangle2D.Double(labelWidth + j * cellWidth, y, cellWidth, ROW);
-                if (c == null) {
-                    g.setColor(Color.WHITE);
-                    g.fill(box);
-                    g.setColor(new Color(0xBB, 0xBB, 0xBB));
-                    g.drawString("–", (float) box.getCenterX() - 3, (float) box.getCenterY() + 4);
-                } else {
-                    Color fill = colour(better(c.difference()), max);
-                    g.setColor(fill);
-                    g.fill(box);
-                    boolean dark = 0.299 * fill.getRed() + 0.587 * fill.getGreen() + 0.114 * fill.getBlue() < 140;
-                    g.setColor(dark ? Color.WHITE : Color.BLACK);
-                    if (c.pAdjusted() != null && c.pAdjusted() < alpha) {
-                        g.setStroke(new BasicStroke(2f));
-                        g.draw(new Rectangle2D.Double(box.getX() + 2, box.getY() + 2, box.getWidth() - 4,
-                                box.getHeight() - 4));
-                    }
-                    if (numbers) {
-                        String v = number(c.difference());
-                        g.drawString(v, (float) (box.getCenterX() - fm.stringWidth(v) / 2.0),
-                                (float) box.getCenterY() + 4);
-                    }
+        int y = top;
+        for (Block b : blocks) {
+            double max = 0;
+            for (Cell c : cells) {
+                if (c.metric().equals(b.metric())) {
+                    max = Math.max(max, Math.abs(c.difference()));
                 }
-                g.setColor(Color.WHITE);
-                g.setStroke(new BasicStroke(1f));
-                g.draw(box);
+            }
+            g.setColor(Color.BLACK);
+            g.setFont(bold);
+            g.drawString(fit(fm, b.title() + " (colour scale ±" + number(max).replace("+", "") + ")",
+                    width - 12), 6, y + 13);
+            g.setFont(font);
+            y += 18;
+            for (String config : b.configurations()) {
+                g.setColor(Color.BLACK);
+                String label = fit(fm, config, labelWidth - 12);
+                g.drawString(label, labelWidth - 6 - fm.stringWidth(label), y + ROW / 2f + 4);
+                for (int j = 0; j < columns.size(); j++) {
+                    Cell c = find(b.metric(), config, columns.get(j));
+                    Rectangle2D box = new Rectangle2D.Double(labelWidth + j * cellWidth, y, cellWidth, ROW);
+                    if (c == null) {
+                        g.setColor(Color.WHITE);
+                        g.fill(box);
+                        g.setColor(new Color(0xBB, 0xBB, 0xBB));
+                        g.drawString("–", (float) box.getCenterX() - 3, (float) box.getCenterY() + 4);
+                    } else {
+                        Color fill = colour(better(b, c.difference()), max);
+                        g.setColor(fill);
+                        g.fill(box);
+                        boolean dark = 0.299 * fill.getRed() + 0.587 * fill.getGreen() + 0.114 * fill.getBlue() < 140;
+                        g.setColor(dark ? Color.WHITE : Color.BLACK);
+                        if (c.pAdjusted() != null && c.pAdjusted() < alpha) {
+                            g.setStroke(new BasicStroke(2f));
+                            g.draw(new Rectangle2D.Double(box.getX() + 2, box.getY() + 2, box.getWidth() - 4,
+                                    box.getHeight() - 4));
+                        }
+                        if (numbers) {
+                            String v = number(c.difference());
+                            g.drawString(v, (float) (box.getCenterX() - fm.stringWidth(v) / 2.0),
+                                    (float) box.getCenterY() + 4);
+                        }
+                    }
+                    g.setColor(Color.WHITE);
+                    g.setStroke(new BasicStroke(1f));
+                    g.draw(box);
+                }
+                y += ROW;
             }
         }
-        legend(g, fm, top + rows.size() * ROW + 14, labelWidth, max);
+        legend(g, fm, y + 12, labelWidth);
         return g.getSVGElement();
     }
 
-    private void legend(SVGGraphics2D g, FontMetrics fm, int y, int x, double max) {
+    private void legend(SVGGraphics2D g, FontMetrics fm, int y, int x) {
         int w = 120;
         for (int k = 0; k < w; k++) {
-            g.setColor(colour(max * (1 - 2.0 * k / (w - 1)), max));
+            g.setColor(colour(1 - 2.0 * k / (w - 1), 1));
             g.fillRect(x + k, y, 1, 10);
         }
         g.setColor(Color.BLACK);
-        String left = "better by " + number(max);
-        String right = "worse by " + number(max);
-        g.drawString(left, x, y + 22);
-        g.drawString(right, x + w - fm.stringWidth(right), y + 32);
-        int lx = x + w + 20;
+        g.drawString("better", x - 4 - fm.stringWidth("better"), y + 9);
+        g.drawString("worse than the reference", x + w + 4, y + 9);
+        int lx = x + w + 14 + fm.stringWidth("worse than the reference");
         g.setStroke(new BasicStroke(2f));
         g.drawRect(lx, y, 14, 10);
         g.drawString("Holm-adjusted p < " + alpha + "; – no pairs", lx + 20, y + 9);
     }
 
-    private Cell find(String row, String column) {
+    private Cell find(String metric, String row, String column) {
         for (Cell c : cells) {
-            if (c.configuration().equals(row) && c.setting().equals(column)) {
+            if (c.metric().equals(metric) && c.configuration().equals(row) && c.setting().equals(column)) {
                 return c;
             }
         }
@@ -197,8 +214,4 @@ public final class DifferenceHeatMap {
         return (v > 0 ? "+" : "") + s;
     }
 
-    /** The configurations drawn, for tests. */
-    List<String> rows() {
-        return new ArrayList<>(rows);
-    }
 }

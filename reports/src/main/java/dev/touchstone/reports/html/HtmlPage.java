@@ -28,7 +28,7 @@ public final class HtmlPage {
             // Headline cells may wrap between a mean and its interval, so a table of many metrics
             // fits the page at 1280 px instead of scrolling.
             "table.wrap td.num{white-space:normal;min-width:4.5em}table.wrap th{font-size:.92em}",
-            ".grid{display:flex;flex-wrap:wrap;gap:4px 12px}.grid figure{margin:.4em 0;flex:0 1 auto}",
+            ".grid{display:flex;flex-wrap:wrap;gap:4px 12px}.grid figure{margin:.4em 0;flex:0 1 auto;max-width:520px}",
             "svg{max-width:100%;height:auto}svg.swatch{vertical-align:middle;margin-right:4px}",
             "details{margin:.8em 0}summary{cursor:pointer;color:#135}",
             "th,td{border:1px solid #ccc;padding:3px 7px;text-align:left;vertical-align:top}",
