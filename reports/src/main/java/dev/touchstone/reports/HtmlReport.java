@@ -223,9 +223,7 @@ public final class HtmlReport {
             if (isUnitInterval(metric) && yScale == AxisScale.LINEAR) {
                 chart = chart.withRange(0, 1.02);
             }
-            page.figure(metric + " against " + axis + " " + panel.getKey(), chart.toSvg(WIDTH, HEIGHT),
-                    capitalised(heading) + (panel.getKey().isEmpty() ? "" : " for " + panel.getKey())
-                    + "; bands: 95% bootstrap interval of the mean over replicates.");
+            page.figure(metric + " against " + axis + " " + panel.getKey(), chart.toSvg(WIDTH, HEIGHT), "");
             drawn++;
         }
         page.html().endGrid();
@@ -272,8 +270,7 @@ public final class HtmlReport {
             if (isUnitInterval(metric)) {
                 chart = chart.withRange(0, 1.02);
             }
-            page.figure("distribution " + metric, chart.toSvg(WIDE, WIDE_HEIGHT), capitalised(MetricWords.of(metric))
-                    + " across replicates, per setting.");
+            page.figure("distribution " + metric, chart.toSvg(FULL_WIDTH, WIDE_HEIGHT), "");
         }
         if (any) {
             page.html().endGrid();
@@ -285,6 +282,8 @@ public final class HtmlReport {
     private static void precisionRecall(Page page, StudyView view) {
         ReportData data = view.data();
         page.html().section("precision-recall", "Precision against recall");
+        page.html().note("One point per learner configuration: its mean over its ok runs scored against the class of"
+                + " truth the chart names; runs scored against another class are in their own chart.");
         boolean any = false;
         page.html().beginGrid();
         for (String truth : view.truthClasses()) {
@@ -304,11 +303,8 @@ public final class HtmlReport {
                 String title = capitalised(kind) + " precision against recall, against the true "
                         + truth.toUpperCase(java.util.Locale.ROOT);
                 LineChart chart = LineChart.of(title, kind + " recall (0–1)", kind + " precision (0–1)", series)
-                        .pointsOnly().withRange(0, 1.02);
-                page.figure(kind + " precision recall " + truth, chart.toSvg(WIDTH, HEIGHT), "One point per learner"
-                        + " configuration: its mean over the ok runs scored against the true "
-                        + truth.toUpperCase(java.util.Locale.ROOT) + " (runs scored against another class are in"
-                        + " their own chart).");
+                        .pointsOnly().withRange(0, 1.02).withDomain(0, 1.02);
+                page.figure(kind + " precision recall " + truth, chart.toSvg(WIDTH, HEIGHT), "");
             }
         }
         page.html().endGrid();
@@ -387,28 +383,37 @@ public final class HtmlReport {
             page.table("comparisons", full);
             html.endDetails();
         }
+        List<String> notDrawn = new ArrayList<>();
+        html.beginGrid();
         for (RankingResult r : data.rankings()) {
-            rankingFigure(page, r);
+            String why = rankingFigure(page, r);
+            if (why != null) {
+                notDrawn.add(why);
+            }
+        }
+        html.endGrid();
+        if (!notDrawn.isEmpty()) {
+            html.note("No critical-difference diagram for " + String.join("; ", notDrawn) + ". A diagram ranks the"
+                    + " configurations over settings, and below that many settings the Friedman test cannot reach"
+                    + " p < 0.05 with any outcome: the most extreme one, every setting ranking alike, has exact"
+                    + " probability (k!)^-(N-1) for k configurations and N settings.");
         }
     }
 
-    private static void rankingFigure(Page page, RankingResult r) {
+    /** Draws the ranking's diagram, or returns why not (null when drawn or nothing to rank). */
+    private static String rankingFigure(Page page, RankingResult r) {
         int k = 0;
         for (Double rank : r.meanRanks()) {
             k += rank == null ? 0 : 1;
         }
         if (k < 2) {
-            return;
+            return null;
         }
         int needed = CriticalDifferenceDiagram.minimumSettings(k, r.alpha());
         String words = MetricWords.of(r.metric());
         if (r.settingsUsed() < needed) {
-            page.html().note("No critical-difference diagram for " + words + ": it ranks the configurations over"
-                    + " settings, and the Friedman test needs at least " + needed + " settings for " + k
-                    + " configurations before any outcome can reach p < " + r.alpha() + " (the most extreme"
-                    + " outcome, every setting ranking alike, has exact probability (" + k + "!)^-(N-1)); this study"
-                    + " has " + r.settingsUsed() + " where every configuration has a value.");
-            return;
+            return words + " (" + r.settingsUsed() + " settings with a value for every configuration; " + k
+                    + " configurations need at least " + needed + ")";
         }
         List<CriticalDifferenceDiagram.Entry> entries = new ArrayList<>();
         for (int i = 0; i < r.configurations().size(); i++) {
@@ -427,6 +432,7 @@ public final class HtmlReport {
                 + " suggests more than 10)." : "")
                 + (r.settingsDropped() > 0 ? " " + r.settingsDropped() + " settings lacked a value and were left out."
                 : ""));
+        return null;
     }
 
     private static void audit(Page p, StudyView view) {

@@ -193,7 +193,7 @@ public final class CriticalDifferenceDiagram {
             placed.add(new Placed("bar", "group", new Rectangle2D.Double(x0 - 2, y - 2, x1 - x0 + 4, 4)));
             level++;
         }
-        return g.getSVGElement();
+        return Svg.element(g);
     }
 
     /** Draws a text with its baseline at y and records its bounding box from the font's metrics. */

@@ -166,7 +166,7 @@ public final class DifferenceHeatMap {
             }
         }
         legend(g, fm, y + 12, labelWidth);
-        return g.getSVGElement();
+        return Svg.element(g);
     }
 
     private void legend(SVGGraphics2D g, FontMetrics fm, int y, int x) {

@@ -85,7 +85,7 @@ public final class GraphPicture {
         panel(g, truth, estimate, at, 0, true);
         panel(g, estimate, truth, at, panel + 20, false);
         legend(g, height - 14);
-        return g.getSVGElement();
+        return Svg.element(g);
     }
 
     private void panel(SVGGraphics2D g, Graph drawn, Graph other, Point2D[] at, int dx, boolean isTruth) {

@@ -35,6 +35,8 @@ public final class LineChart {
     private final boolean bands;
     private final Double yMin;
     private final Double yMax;
+    private Double xMin;
+    private Double xMax;
 
     private LineChart(String title, String xLabel, String yLabel, AxisScale xScale, AxisScale yScale,
                       List<ChartSeries> series, boolean bands, Double yMin, Double yMax) {
@@ -55,17 +57,32 @@ public final class LineChart {
     }
 
     public LineChart withScales(AxisScale x, AxisScale y) {
-        return new LineChart(title, xLabel, yLabel, x, y, series, bands, yMin, yMax);
+        return sameDomain(new LineChart(title, xLabel, yLabel, x, y, series, bands, yMin, yMax));
     }
 
     /** The same chart with a fixed value range (e.g. [0, 1] for precision). */
     public LineChart withRange(double min, double max) {
-        return new LineChart(title, xLabel, yLabel, xScale, yScale, series, bands, min, max);
+        return sameDomain(new LineChart(title, xLabel, yLabel, xScale, yScale, series, bands, min, max));
+    }
+
+    /** A fresh copy (set only here, before it is handed out) keeps this chart's horizontal range. */
+    private LineChart sameDomain(LineChart c) {
+        c.xMin = xMin;
+        c.xMax = xMax;
+        return c;
+    }
+
+    /** The same chart with a fixed range of the horizontal axis. */
+    public LineChart withDomain(double min, double max) {
+        LineChart c = new LineChart(title, xLabel, yLabel, xScale, yScale, series, bands, yMin, yMax);
+        c.xMin = min;
+        c.xMax = max;
+        return c;
     }
 
     /** Markers joined by thin lines, no bands. */
     public LineChart pointsOnly() {
-        return new LineChart(title, xLabel, yLabel, xScale, yScale, series, false, yMin, yMax);
+        return sameDomain(new LineChart(title, xLabel, yLabel, xScale, yScale, series, false, yMin, yMax));
     }
 
     public String title() {
@@ -114,7 +131,7 @@ public final class LineChart {
             renderer.setSeriesShape(i, SeriesStyle.shape(id));
         }
         renderer.setUseFillPaint(false);
-        XYPlot plot = new XYPlot(data, axis(xLabel, xScale, null, null), axis(yLabel, yScale, yMin, yMax), renderer);
+        XYPlot plot = new XYPlot(data, axis(xLabel, xScale, xMin, xMax), axis(yLabel, yScale, yMin, yMax), renderer);
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(new Color(0xDD, 0xDD, 0xDD));
         plot.setRangeGridlinePaint(new Color(0xDD, 0xDD, 0xDD));

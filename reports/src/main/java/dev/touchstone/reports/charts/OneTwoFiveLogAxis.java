@@ -32,8 +32,31 @@ public final class OneTwoFiveLogAxis extends LogAxis {
         setMinorTickMarksVisible(false);
     }
 
-    /** The tick values for a data range [lower, upper] (both positive). */
+    /**
+     * The tick values for a data range [lower, upper] (both positive). A range too narrow for
+     * three 1-2-5 ticks (8 to 16 variables) gets evenly spaced ones at a 1-2-5 step instead.
+     */
     public static List<Double> ticks(double lower, double upper) {
+        List<Double> out = decades(lower, upper);
+        if (out.size() >= 3 || !(lower > 0) || !(upper > lower)) {
+            return out;
+        }
+        double raw = (upper - lower) / 4;
+        double power = Math.pow(10, Math.floor(Math.log10(raw)));
+        double step = power;
+        for (double s : STEPS) {
+            if (s * power <= raw * 1.5) {
+                step = s * power;
+            }
+        }
+        List<Double> even = new ArrayList<>();
+        for (double v = Math.ceil(lower / step) * step; v <= upper * (1 + 1e-9); v += step) {
+            even.add(Double.parseDouble(String.format(Locale.ROOT, "%.6g", v)));
+        }
+        return even.size() >= out.size() ? even : out;
+    }
+
+    private static List<Double> decades(double lower, double upper) {
         List<Double> out = new ArrayList<>();
         if (!(lower > 0) || !(upper >= lower)) {
             return out;

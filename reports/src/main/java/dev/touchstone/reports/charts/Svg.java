@@ -26,6 +26,14 @@ public final class Svg {
     }
 
     /**
+     * The drawing as an {@code <svg>} element with its size and a view box, so that a page may
+     * scale it down to the width it has (CSS max-width) instead of cutting it off.
+     */
+    public static String element(SVGGraphics2D g) {
+        return g.getSVGElement(null, true, new org.jfree.svg.ViewBox(0, 0, g.getWidth(), g.getHeight()), null, null);
+    }
+
+    /**
      * An inline {@code <svg>} element as a standalone SVG 1.1 file: XML declaration first and
      * the SVG namespace declared (JFreeSVG's element already carries it; added when missing).
      */
@@ -42,6 +50,6 @@ public final class Svg {
     public static String of(JFreeChart chart, int width, int height) {
         SVGGraphics2D g = canvas(width, height);
         chart.draw(g, new Rectangle(0, 0, width, height));
-        return g.getSVGElement();
+        return Svg.element(g);
     }
 }

@@ -112,7 +112,8 @@ public final class HtmlPage {
         body.append("<div class=\"table-wrap\"><table").append(wrap ? " class=\"wrap\"" : "")
                 .append(">\n<thead><tr>");
         for (String c : t.columns()) {
-            body.append("<th>").append(escape(c)).append("</th>");
+            // metric names (orientation_precision) may break after an underscore in a narrow column
+            body.append("<th>").append(escape(c).replace("_", "_<wbr>")).append("</th>");
         }
         body.append("</tr></thead>\n<tbody>\n");
         for (List<Cell> row : t.rows()) {
@@ -149,8 +150,11 @@ public final class HtmlPage {
     /** An inline SVG picture (as produced by this module's charts) with a caption. */
     public HtmlPage figure(String svgElement, String caption) {
         requireSvg(svgElement);
-        body.append("<figure>").append(svgElement).append("<figcaption>").append(escape(caption))
-                .append("</figcaption></figure>\n");
+        body.append("<figure>").append(svgElement);
+        if (!caption.isEmpty()) {
+            body.append("<figcaption>").append(escape(caption)).append("</figcaption>");
+        }
+        body.append("</figure>\n");
         return this;
     }
 
