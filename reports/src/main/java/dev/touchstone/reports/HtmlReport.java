@@ -125,6 +125,9 @@ public final class HtmlReport {
             if (!h.title().isEmpty()) {
                 html.subheading("Headline: " + h.title());
             }
+            if (!h.scoredAgainst().isEmpty()) {
+                html.note(h.scoredAgainst());
+            }
             html.table(h.table(), view.swatches(), true);
             page.files().table("headline" + (h.title().isEmpty() ? "" : " " + h.title()), h.table());
             for (String line : h.notRun()) {
@@ -412,7 +415,8 @@ public final class HtmlReport {
         int needed = CriticalDifferenceDiagram.minimumSettings(k, r.alpha());
         String words = MetricWords.of(r.metric());
         if (r.settingsUsed() < needed) {
-            return words + " (" + r.settingsUsed() + " settings with a value for every configuration; " + k
+            return words + " (" + r.settingsUsed() + (r.settingsUsed() == 1 ? " setting" : " settings")
+                    + " with a value for every configuration; " + k
                     + " configurations need at least " + needed + ")";
         }
         List<CriticalDifferenceDiagram.Entry> entries = new ArrayList<>();

@@ -126,7 +126,7 @@ final class StudyView {
      * One headline table: its title ("" when the study has one group), the table, and one
      * line per configuration that has no ok run in it but was skipped (with the reason).
      */
-    record Headline(String title, Table table, List<String> notRun) {
+    record Headline(String title, Table table, List<String> notRun, String scoredAgainst) {
     }
 
     /**
@@ -214,7 +214,17 @@ final class StudyView {
             }
             t.row(row);
         }
-        return new Headline(title, t.build(), notRun);
+        Map<String, Set<String>> byClass = new LinkedHashMap<>();
+        for (RunResult r : data.runs()) {
+            if (in.test(r) && r.isOk() && r.scoredAgainst() != null) {
+                byClass.computeIfAbsent(r.scoredAgainst().word().toUpperCase(java.util.Locale.ROOT),
+                        k -> new LinkedHashSet<>()).add(r.configurationId());
+            }
+        }
+        List<String> parts = new ArrayList<>();
+        byClass.forEach((cls, configs) -> parts.add("the true " + cls + " (" + String.join(", ", configs) + ")"));
+        String scored = parts.isEmpty() ? "" : "Scored against " + String.join("; ", parts) + ".";
+        return new Headline(title, t.build(), notRun, scored);
     }
 
     /** The identity index of a configuration (its position in the study's learner order), for its colour and marker. */

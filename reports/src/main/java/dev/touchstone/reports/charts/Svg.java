@@ -41,7 +41,8 @@ public final class Svg {
         if (!svgElement.startsWith("<svg")) {
             throw new IllegalArgumentException("not an <svg> element");
         }
-        String svg = svgElement.contains("xmlns=\"http://www.w3.org/2000/svg\"") ? svgElement
+        String openingTag = svgElement.substring(0, svgElement.indexOf('>') + 1);
+        String svg = openingTag.matches("(?s).*\\sxmlns=[\"']http://www\\.w3\\.org/2000/svg[\"'].*") ? svgElement
                 : "<svg xmlns=\"http://www.w3.org/2000/svg\"" + svgElement.substring(4);
         return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + svg + "\n";
     }

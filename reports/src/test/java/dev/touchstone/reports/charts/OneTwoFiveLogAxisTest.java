@@ -16,6 +16,8 @@ class OneTwoFiveLogAxisTest {
         assertEquals(List.of(0.002, 0.005, 0.01, 0.02), OneTwoFiveLogAxis.ticks(0.0015, 0.03));
         // beyond four decades, powers of ten only
         assertEquals(List.of(1.0, 10.0, 100.0, 1000.0, 10000.0, 100000.0), OneTwoFiveLogAxis.ticks(1, 1e5));
+        // less than a decade (graph sizes 8 and 16 with the axis margins): evenly spaced at a 1-2-5 step
+        assertEquals(List.of(8.0, 10.0, 12.0, 14.0, 16.0), OneTwoFiveLogAxis.ticks(7.7, 16.6));
         assertEquals("0.002", OneTwoFiveLogAxis.label(0.002));
         assertEquals("2000", OneTwoFiveLogAxis.label(2000));
     }
