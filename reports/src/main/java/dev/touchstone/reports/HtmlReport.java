@@ -265,7 +265,6 @@ public final class HtmlReport {
                 page.html().note("Per setting, the values of each configuration across replicates: box from the"
                         + " lower to the upper quartile, line at the median, dot at the mean, whiskers to the most"
                         + " extreme values within 1.5 interquartile ranges (Tukey 1977), rings beyond.");
-                page.html().beginGrid();
             }
             any = true;
             BoxPlot chart = BoxPlot.of(capitalised(MetricWords.of(metric)) + " per setting",
@@ -275,9 +274,7 @@ public final class HtmlReport {
             }
             page.figure("distribution " + metric, chart.toSvg(FULL_WIDTH, WIDE_HEIGHT), "");
         }
-        if (any) {
-            page.html().endGrid();
-        } else {
+        if (!any) {
             page.html().note("No distributions: no ok run carries a value of the chosen metrics.");
         }
     }
