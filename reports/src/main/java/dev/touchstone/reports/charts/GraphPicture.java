@@ -14,6 +14,7 @@ import java.awt.Stroke;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
+import java.awt.geom.QuadCurve2D;
 import java.util.EnumMap;
 import java.util.Map;
 
@@ -95,20 +96,32 @@ public final class GraphPicture {
             Point2D b = shift(at[e.b()], dx);
             g.setColor(COLOURS.get(v));
             g.setStroke(stroke(v));
-            double len = Math.hypot(b.getX() - a.getX(), b.getY() - a.getY());
-            if (len < 1e-6) {
+            if (Math.hypot(b.getX() - a.getX(), b.getY() - a.getY()) < 1e-6) {
                 continue;
             }
-            double ux = (b.getX() - a.getX()) / len;
-            double uy = (b.getY() - a.getY()) / len;
+            Point2D c = control(e.a(), e.b());
+            Point2D cs = c == null ? null : shift(Point2D.of(c.getX(), TOP + c.getY()), dx);
+            // the directions into the edge at each end: towards the other end, or towards the curve's control point
+            Point2D towardsB = cs == null ? b : cs;
+            Point2D towardsA = cs == null ? a : cs;
+            double la = Math.hypot(towardsB.getX() - a.getX(), towardsB.getY() - a.getY());
+            double lb = Math.hypot(towardsA.getX() - b.getX(), towardsA.getY() - b.getY());
+            double ux = (towardsB.getX() - a.getX()) / la;
+            double uy = (towardsB.getY() - a.getY()) / la;
+            double vx = (towardsA.getX() - b.getX()) / lb;
+            double vy = (towardsA.getY() - b.getY()) / lb;
             double ax = a.getX() + ux * NODE_RADIUS;
             double ay = a.getY() + uy * NODE_RADIUS;
-            double bx = b.getX() - ux * NODE_RADIUS;
-            double by = b.getY() - uy * NODE_RADIUS;
-            g.draw(new Line2D.Double(ax, ay, bx, by));
+            double bx = b.getX() + vx * NODE_RADIUS;
+            double by = b.getY() + vy * NODE_RADIUS;
+            if (cs == null) {
+                g.draw(new Line2D.Double(ax, ay, bx, by));
+            } else {
+                g.draw(new QuadCurve2D.Double(ax, ay, cs.getX(), cs.getY(), bx, by));
+            }
             g.setStroke(new BasicStroke(1.2f));
             mark(g, e.atA(), ax, ay, ux, uy);
-            mark(g, e.atB(), bx, by, -ux, -uy);
+            mark(g, e.atB(), bx, by, vx, vy);
         }
         g.setFont(new Font("SansSerif", Font.PLAIN, 10));
         FontMetrics fm = g.getFontMetrics();
@@ -124,6 +137,67 @@ public final class GraphPicture {
             String name = shorten(drawn.name(v));
             g.drawString(name, (float) (p.getX() - fm.stringWidth(name) / 2.0), (float) (p.getY() + 4));
         }
+    }
+
+    /**
+     * The control point (layout coordinates) of a quadratic curve for the edge a–b when the
+     * straight line would pass within {@link GraphLayout#CLEARANCE} of a third node (an
+     * estimate's extra edge, which the truth's layout did not plan for); null when a straight
+     * line is clear. Bends further, on either side, until the curve clears every third node.
+     */
+    Point2D control(int a, int b) {
+        if (clear(a, b, null)) {
+            return null;
+        }
+        double ax = layout.x(a);
+        double ay = layout.y(a);
+        double bx = layout.x(b);
+        double by = layout.y(b);
+        double len = Math.hypot(bx - ax, by - ay);
+        double nx = -(by - ay) / len;
+        double ny = (bx - ax) / len;
+        double mx = (ax + bx) / 2;
+        double my = (ay + by) / 2;
+        Point2D fallback = null;
+        // Bend sideways, the apex also slid along the edge, until the curve passes every third node.
+        for (double bend = 30; bend <= 600; bend += 15) {
+            for (double slide : new double[] {0, 0.25, -0.25, 0.5, -0.5}) {
+                for (int side : new int[] {1, -1}) {
+                    Point2D c = Point2D.of(mx + side * nx * bend - slide * ny * len,
+                            my + side * ny * bend + slide * nx * len);
+                    if (fallback == null) {
+                        fallback = c;
+                    }
+                    if (clear(a, b, c)) {
+                        return c;
+                    }
+                }
+            }
+        }
+        return fallback;
+    }
+
+    /** Whether the edge a–b (straight, or the quadratic curve through control c) keeps clear of every third node. */
+    private boolean clear(int a, int b, Point2D c) {
+        java.awt.Shape shape = c == null ? new Line2D.Double(layout.x(a), layout.y(a), layout.x(b), layout.y(b))
+                : new QuadCurve2D.Double(layout.x(a), layout.y(a), c.getX(), c.getY(), layout.x(b), layout.y(b));
+        double[] pt = new double[6];
+        double px = 0;
+        double py = 0;
+        for (java.awt.geom.PathIterator it = shape.getPathIterator(null, 0.5); !it.isDone(); it.next()) {
+            int type = it.currentSegment(pt);
+            if (type == java.awt.geom.PathIterator.SEG_LINETO) {
+                for (int w = 0; w < layout.size(); w++) {
+                    if (w != a && w != b && GraphLayout.distanceToSegment(layout.x(w), layout.y(w), px, py, pt[0],
+                            pt[1]) < GraphLayout.CLEARANCE) {
+                        return false;
+                    }
+                }
+            }
+            px = pt[0];
+            py = pt[1];
+        }
+        return true;
     }
 
     /** Draws the mark at an end point; (ux, uy) points from that end into the edge. */

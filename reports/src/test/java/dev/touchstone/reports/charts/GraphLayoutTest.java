@@ -104,4 +104,41 @@ class GraphLayoutTest {
             assertEquals(first.y(v), fresh.y(v));
         }
     }
+
+    @Test
+    void estimateEdgesTheLayoutDidNotPlanForBendAroundNodes() {
+        Random rnd = new Random(99);
+        int bent = 0;
+        for (int t = 0; t < 50; t++) {
+            int n = 5 + rnd.nextInt(12);
+            Graph truth = randomDag(rnd, n, 2.0 / (n - 1), false);
+            Graph estimate = randomDag(rnd, n, 3.0 / (n - 1), t % 2 == 0);
+            GraphLayout layout = GraphLayout.of(truth);
+            GraphPicture picture = new GraphPicture(truth, estimate, layout);
+            for (Edge e : estimate.edges()) {
+                java.awt.geom.Point2D.Double a = new java.awt.geom.Point2D.Double(layout.x(e.a()), layout.y(e.a()));
+                java.awt.geom.Point2D.Double b = new java.awt.geom.Point2D.Double(layout.x(e.b()), layout.y(e.b()));
+                var c = picture.control(e.a(), e.b());
+                bent += c == null ? 0 : 1;
+                // sample the drawn line or quadratic Bezier B(t) = (1-t)^2 a + 2t(1-t) c + t^2 b at 400 points
+                for (int w = 0; w < n; w++) {
+                    if (w == e.a() || w == e.b()) {
+                        continue;
+                    }
+                    double least = Double.MAX_VALUE;
+                    for (int k = 0; k <= 400; k++) {
+                        double u = k / 400.0;
+                        double cx = c == null ? (a.x + b.x) / 2 : c.getX();
+                        double cy = c == null ? (a.y + b.y) / 2 : c.getY();
+                        double x = (1 - u) * (1 - u) * a.x + 2 * u * (1 - u) * cx + u * u * b.x;
+                        double y = (1 - u) * (1 - u) * a.y + 2 * u * (1 - u) * cy + u * u * b.y;
+                        least = Math.min(least, Math.hypot(x - layout.x(w), y - layout.y(w)));
+                    }
+                    assertTrue(least > GraphLayout.RADIUS, "truth " + t + ": estimate edge " + e + " passes " + least
+                            + " from node " + w);
+                }
+            }
+        }
+        assertTrue(bent > 0, "some extra edges needed a bend, so the check above was exercised");
+    }
 }
