@@ -48,6 +48,7 @@ public final class ReportData {
     private final String sampleCoordinate;
     private final String sizeCoordinate;
     private final List<String> groupCoordinates;
+    private final String pictureRule;
 
     private ReportData(Builder b) {
         this.studyName = b.studyName;
@@ -68,6 +69,7 @@ public final class ReportData {
         this.sampleCoordinate = b.sampleCoordinate;
         this.sizeCoordinate = b.sizeCoordinate;
         this.groupCoordinates = b.groupCoordinates;
+        this.pictureRule = b.pictureRule;
     }
 
     public static Builder builder(String studyName) {
@@ -155,6 +157,11 @@ public final class ReportData {
         return sizeCoordinate;
     }
 
+    /** The rule by which the pictured runs were chosen, in a sentence; empty when not stated. */
+    public String pictureRule() {
+        return pictureRule;
+    }
+
     /** Collects report data. */
     public static final class Builder {
         private final String studyName;
@@ -175,6 +182,7 @@ public final class ReportData {
         private String sampleCoordinate = "samples";
         private String sizeCoordinate = "nodes";
         private List<String> groupCoordinates = List.of();
+        private String pictureRule = "";
 
         private Builder(String studyName) {
             this.studyName = Objects.requireNonNull(studyName);
@@ -263,6 +271,12 @@ public final class ReportData {
          */
         public Builder groupBy(List<String> coordinates) {
             this.groupCoordinates = List.copyOf(coordinates);
+            return this;
+        }
+
+        /** States the rule by which the runs in {@link #examples(List)} were chosen. */
+        public Builder pictureRule(String rule) {
+            this.pictureRule = rule == null ? "" : rule;
             return this;
         }
 

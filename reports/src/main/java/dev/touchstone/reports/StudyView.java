@@ -127,7 +127,7 @@ final class StudyView {
      * One headline table: its title ("" when the study has one group), the table, and one
      * line per configuration that has no ok run in it but was skipped (with the reason).
      */
-    record Headline(String title, Table table, List<String> notRun) {
+    record Headline(String title, Table table, List<String> notRun, String scoredAgainst) {
     }
 
     /**
@@ -215,7 +215,76 @@ final class StudyView {
             }
             t.row(row);
         }
-        return new Headline(title, t.build(), notRun);
+        Map<String, Set<String>> byClass = new LinkedHashMap<>();
+        for (RunResult r : data.runs()) {
+            if (in.test(r) && r.isOk() && r.scoredAgainst() != null) {
+                byClass.computeIfAbsent(r.scoredAgainst().word().toUpperCase(java.util.Locale.ROOT),
+                        k -> new LinkedHashSet<>()).add(r.configurationId());
+            }
+        }
+        List<String> parts = new ArrayList<>();
+        byClass.forEach((cls, configs) -> parts.add("the true " + cls + " (" + String.join(", ", configs) + ")"));
+        String scored = parts.isEmpty() ? "" : "Scored against " + String.join("; ", parts) + ".";
+        return new Headline(title, t.build(), notRun, scored);
+    }
+
+    /** The identity index of a configuration (its position in the study's learner order), for its colour and marker. */
+    int identity(String config) {
+        return configurations().indexOf(config);
+    }
+
+    /** Each configuration's swatch (inline SVG of its colour and marker), by label. */
+    Map<String, String> swatches() {
+        Map<String, String> m = new LinkedHashMap<>();
+        for (String c : configurations()) {
+            m.put(c, dev.touchstone.reports.charts.SeriesStyle.swatchSvg(identity(c)));
+        }
+        return m;
+    }
+
+    /** The classes of truth that ok runs were scored against, in first-appearance order (words: dag, cpdag, pag). */
+    List<String> truthClasses() {
+        Set<String> out = new LinkedHashSet<>();
+        for (RunResult r : data.runs()) {
+            if (r.isOk() && r.scoredAgainst() != null) {
+                out.add(r.scoredAgainst().word());
+            }
+        }
+        return new ArrayList<>(out);
+    }
+
+    /** The classes of truth one configuration's ok runs were scored against, upper case. */
+    List<String> truthClassesOf(String config) {
+        Set<String> out = new LinkedHashSet<>();
+        for (RunResult r : data.runs()) {
+            if (r.isOk() && r.scoredAgainst() != null && r.configurationId().equals(config)) {
+                out.add(r.scoredAgainst().word().toUpperCase(java.util.Locale.ROOT));
+            }
+        }
+        return new ArrayList<>(out);
+    }
+
+    /** The class of truth a configuration's ok runs on a setting were scored against (the first), or null. */
+    String truthClassOf(Setting setting, String config) {
+        for (RunResult r : data.runs()) {
+            if (r.isOk() && r.scoredAgainst() != null && r.configurationId().equals(config)
+                    && r.setting().equals(setting)) {
+                return r.scoredAgainst().word();
+            }
+        }
+        return null;
+    }
+
+    /** A setting's label without the coordinates that never vary (the full label when nothing is left). */
+    String shortLabel(Setting s) {
+        Set<String> constant = constantCoordinates();
+        List<String> parts = new ArrayList<>();
+        s.coordinates().forEach((k, v) -> {
+            if (!constant.contains(k) && v != null && !v.isEmpty()) {
+                parts.add(k + "=" + v);
+            }
+        });
+        return parts.isEmpty() ? s.label() : String.join(", ", parts);
     }
 
     /**
@@ -311,9 +380,14 @@ final class StudyView {
 
     /** The paired comparisons as a table (differences are configuration − reference). */
     Table comparisons() {
+        return comparisons(data.comparisons());
+    }
+
+    /** These paired comparisons as a table. */
+    Table comparisons(List<dev.touchstone.metrics.results.ComparisonRow> rows) {
         Table.Builder t = Table.builder(List.of("setting", "metric", "learner configuration", "pairs",
                 "mean difference [95% interval]", "Wilcoxon p", "Holm p", "wins / ties / losses"));
-        for (var c : data.comparisons()) {
+        for (var c : rows) {
             String wtl = c.wins() == null ? Numbers.UNDEFINED : c.wins() + " / " + c.ties() + " / " + c.losses();
             t.row(c.setting().label(), c.metric(), c.configurationId(), Integer.toString(c.pairs()),
                     Numbers.withInterval(c.meanDifference(), c.low(), c.high()), Numbers.format(c.pValue()),

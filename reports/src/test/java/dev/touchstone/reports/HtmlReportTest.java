@@ -31,8 +31,11 @@ class HtmlReportTest {
         selfContained(d);
         // shd and adjacency_f1 against samples and nodes: 2 metrics × (1 panel vs samples per nodes value = 2,
         // + 1 panel vs nodes per samples value = 2) = 8 panels (adjacency_f1 has no summary rows: 4);
-        // run time vs nodes: 2 panels; precision-recall (adjacency): 1; CD diagram: 1; one graph picture.
-        int expected = 4 + 2 + 1 + 1 + 1;
+        // distributions: one box chart per metric with values other than seconds (shd, adjacency_f1): 2;
+        // run time vs nodes: 2 panels; precision-recall (adjacency, all scored against the CPDAG): 1; one heat map
+        // of paired differences (the fixture compares shd only): 1; no CD diagram: 4 settings are fewer than the 6
+        // that Friedman's test of 2 configurations needs ((1/2)^5 = 0.031 <= 0.05 < (1/2)^4); one graph picture.
+        int expected = 4 + 2 + 2 + 1 + 1 + 1;
         assertEquals(expected, d.select("figure > svg").size(), "one SVG per expected chart");
         assertEquals(1, d.select("div.caution").size(), "the cautions are there");
         assertTrue(d.text().contains("0 failed"), d.text());

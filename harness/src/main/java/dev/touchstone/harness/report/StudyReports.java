@@ -25,7 +25,12 @@ import dev.touchstone.metrics.scoring.Metric;
 import dev.touchstone.metrics.truth.TruthSelection;
 import dev.touchstone.reports.HtmlReport;
 import dev.touchstone.reports.MarkdownReport;
+import dev.touchstone.reports.ReportArtifacts;
 import dev.touchstone.reports.ReportData;
+import dev.touchstone.reports.charts.Svg;
+import dev.touchstone.reports.tables.LatexTable;
+import dev.touchstone.reports.tables.MarkdownTable;
+import dev.touchstone.reports.tables.Table;
 import dev.touchstone.core.random.Seeds;
 
 import java.io.IOException;
@@ -127,12 +132,12 @@ public final class StudyReports {
             }
         }
         b.rankings(rankings);
-        redraw(plan, simulator, estimates, b);
+        redraw(plan, simulator, estimates, b, runs);
         return b.build();
     }
 
     private static void redraw(Plan plan, Simulator simulator, Map<String, Estimate> estimates,
-                               ReportData.Builder b) {
+                               ReportData.Builder b, List<RunResult> recorded) {
         SettingLayout layout = new SettingLayout(plan);
         int rows = StudyRunner.largestRows(plan);
         List<ReportData.Audit> audits = new ArrayList<>();
@@ -174,26 +179,59 @@ public final class StudyReports {
                 Estimate e = estimates.get(run.key());
                 if (e != null) {
                     pictured.add(config.label());
-                    Graph truthGraph = TruthSelection.forEstimate(rep.trueDag(), e.graphClass()).reference();
+                    // Name and draw the truth class the run was scored against (runs.csv), which for a
+                    // PAG study is the PAG even when the estimate's own class would suggest another.
+                    dev.touchstone.core.graph.GraphClass scored = scoredAgainst(recorded, run);
+                    dev.touchstone.core.graph.GraphClass truthClass = scored == null ? e.graphClass() : scored;
+                    Graph truthGraph = TruthSelection.forEstimate(rep.trueDag(), truthClass).reference();
                     examples.add(new ReportData.Example(config.label() + " on " + setting.label() + ", replicate 0"
-                            + " (scored against the true " + e.graphClass().word() + ")", truthGraph, e.graph()));
+                            + " (scored against the true " + truthClass.word().toUpperCase(java.util.Locale.ROOT)
+                            + ")", truthGraph, e.graph()));
                 }
             }
         }
-        b.audits(audits).examples(examples);
+        b.audits(audits).examples(examples).pictureRule("Pictured: replicate 0 of the first setting in the plan"
+                + " whose truth has at most " + PICTURE_VARIABLES + " variables, for each of the first "
+                + PICTURED_CONFIGURATIONS + " learner configurations in the study's order that ran ok on it (sample"
+                + " data, not an oracle); each estimate is drawn against the truth of the class its run was scored"
+                + " against.");
+    }
+
+    /** The class of truth a recorded run was scored against, or null when it is not recorded. */
+    private static dev.touchstone.core.graph.GraphClass scoredAgainst(List<RunResult> runs, RunDefinition run) {
+        for (RunResult r : runs) {
+            if (r.key().equals(run.key())) {
+                return r.scoredAgainst();
+            }
+        }
+        return null;
     }
 
     private static Double finite(double v) {
         return Double.isFinite(v) ? v : null;
     }
 
-    /** Writes report.html and report.md into {@code folder}; returns the HTML file. */
+    /**
+     * Writes report.html and report.md into {@code folder}, and beside them every chart as a
+     * standalone SVG file in {@code figures/} and every table as Markdown and LaTeX (booktabs)
+     * in {@code tables/}, for a paper to include as they are; returns the HTML file.
+     */
     public static Path write(Path folder, ReportData data) {
         try {
             Files.createDirectories(folder);
             Path html = folder.resolve("report.html");
-            AtomicFiles.writeString(html, HtmlReport.render(data));
+            ReportArtifacts artifacts = HtmlReport.build(data);
+            AtomicFiles.writeString(html, artifacts.html());
             AtomicFiles.writeString(folder.resolve("report.md"), MarkdownReport.render(data));
+            Path figures = Files.createDirectories(folder.resolve("figures"));
+            for (Map.Entry<String, String> f : artifacts.figures().entrySet()) {
+                AtomicFiles.writeString(figures.resolve(f.getKey() + ".svg"), Svg.standalone(f.getValue()));
+            }
+            Path tables = Files.createDirectories(folder.resolve("tables"));
+            for (Map.Entry<String, Table> t : artifacts.tables().entrySet()) {
+                AtomicFiles.writeString(tables.resolve(t.getKey() + ".md"), MarkdownTable.render(t.getValue()));
+                AtomicFiles.writeString(tables.resolve(t.getKey() + ".tex"), LatexTable.render(t.getValue()));
+            }
             return html;
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the report into " + folder + ": " + e.getMessage(), e);

@@ -11,6 +11,7 @@ import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -71,6 +72,28 @@ class DemoCommandTest {
                 "the search gap of the score-based learner, and only of it: " + md);
         assertTrue(Files.readString(out.resolve("runs.csv")).lines().findFirst().orElseThrow()
                 .contains(",search_score_gap,search_shd,score_shd,"), "search-gap columns in runs.csv");
+        // Every chart of the page is also a standalone SVG file, every table a Markdown and a LaTeX file.
+        long figures = html.split("<figure><svg", -1).length - 1;
+        List<Path> svgs;
+        try (var files = Files.list(out.resolve("figures"))) {
+            svgs = files.filter(f -> f.toString().endsWith(".svg")).toList();
+        }
+        assertEquals(figures, svgs.size(), "one SVG file per chart");
+        for (Path svg : svgs) {
+            String text = Files.readString(svg);
+            assertTrue(text.startsWith("<?xml") && text.contains("http://www.w3.org/2000/svg"), svg.toString());
+            try {
+                // well-formed XML whose root is an svg element (the JDK's own parser)
+                var doc = javax.xml.parsers.DocumentBuilderFactory.newInstance().newDocumentBuilder().parse(svg.toFile());
+                assertEquals("svg", doc.getDocumentElement().getTagName(), svg.toString());
+            } catch (javax.xml.parsers.ParserConfigurationException | org.xml.sax.SAXException e) {
+                throw new AssertionError(svg + " is not well-formed XML: " + e.getMessage(), e);
+            }
+        }
+        for (String t : new String[] {"configurations", "comparisons", "provenance"}) {
+            assertTrue(Files.isRegularFile(out.resolve("tables/" + t + ".md")), t + ".md");
+            assertTrue(Files.readString(out.resolve("tables/" + t + ".tex")).contains("\\toprule"), t + ".tex");
+        }
 
         String[] again = run("report", out.toString(), "--out", dir.resolve("again").toString());
         assertEquals("0", again[0], again[2]);

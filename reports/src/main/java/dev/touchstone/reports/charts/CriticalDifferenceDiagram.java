@@ -7,6 +7,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontMetrics;
 import java.awt.geom.Line2D;
+import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -37,6 +38,27 @@ public final class CriticalDifferenceDiagram {
     }
 
     /**
+     * The fewest settings (blocks) N for which Friedman's test of k configurations can reach
+     * significance at {@code alpha} at all: under the null hypothesis each setting ranks the k
+     * configurations in one of k! equally likely orders, independently, so the most extreme
+     * outcome (every setting ranking alike, the largest statistic) has exact probability
+     * k!·(1/k!)^N = (k!)^-(N-1) (Friedman 1937, JASA 32, the permutation distribution of the
+     * statistic without ties); below that N no outcome can be significant. At least 2.
+     */
+    public static int minimumSettings(int k, double alpha) {
+        if (k < 2) {
+            throw new IllegalArgumentException("ranking needs at least two configurations, got " + k);
+        }
+        double logFactorial = 0;
+        for (int i = 2; i <= k; i++) {
+            logFactorial += Math.log(i);
+        }
+        // smallest N with -(N-1) log k! <= log alpha
+        int n = 1 + (int) Math.ceil(-Math.log(alpha) / logFactorial - 1e-12);
+        return Math.max(2, n);
+    }
+
+    /**
      * The groups to join: maximal runs of learners (in rank order) whose mean ranks span
      * less than the critical difference, leaving out runs contained in a longer one.
      * Each group is given as [first, last] positions in rank order.
@@ -58,51 +80,90 @@ public final class CriticalDifferenceDiagram {
         return out;
     }
 
+    /** Something drawn: a text ({@code text}) or a horizontal bar ({@code bar}) and its bounding box. */
+    public record Placed(String kind, String content, Rectangle2D box) {
+    }
+
     /** The diagram as an {@code <svg>} element. */
     public String toSvg(int width) {
+        return draw(width, new ArrayList<>());
+    }
+
+    /** The texts and horizontal bars of the diagram at this width with their bounding boxes (for overlap checks). */
+    public List<Placed> placed(int width) {
+        List<Placed> out = new ArrayList<>();
+        draw(width, out);
+        return out;
+    }
+
+    private String draw(int requestedWidth, List<Placed> placed) {
+        int width = requestedWidth;
         int k = entries.size();
         int half = (k + 1) / 2;
         int rowHeight = 18;
-        int axisY = 70;
+        // Top to bottom: title; critical-difference bar with its value; axis label; tick numbers and axis;
+        // group bars; label rows; each in its own band so that no bar crosses a text.
+        int cdY = 36;
+        int axisY = 76;
         List<int[]> groups = groups();
         int rowsTop = axisY + 22 + groups.size() * 6;
-        int height = rowsTop + Math.max(half, k - half) * rowHeight + 20;
-        SVGGraphics2D g = Svg.canvas(width, height);
-        g.setColor(Color.WHITE);
-        g.fillRect(0, 0, width, height);
+        int height = rowsTop + Math.max(half, k - half) * rowHeight + 12;
         Font font = new Font("SansSerif", Font.PLAIN, 11);
-        g.setFont(new Font("SansSerif", Font.BOLD, 13));
-        g.setColor(Color.BLACK);
-        g.drawString(title, 10, 18);
-        g.setFont(font);
-        FontMetrics fm = g.getFontMetrics();
+        FontMetrics fm = Svg.canvas(1, 1).getFontMetrics(font);
         int labelWidth = 0;
         for (Entry e : entries) {
             labelWidth = Math.max(labelWidth, fm.stringWidth(label(e)));
         }
-        double left = Math.min(width / 3.0, labelWidth + 30);
+        // Long labels widen the picture (it scales down on the page) rather than running off its edge.
+        width = Math.max(width, 2 * (labelWidth + 30) + 160);
+        placed.add(new Placed("frame", "", new Rectangle2D.Double(0, 0, width, height)));
+        SVGGraphics2D g = Svg.canvas(width, height);
+        g.setColor(Color.WHITE);
+        g.fillRect(0, 0, width, height);
+        g.setFont(new Font("SansSerif", Font.BOLD, 13));
+        g.setColor(Color.BLACK);
+        text(g, placed, title, 10, 18);
+        g.setFont(font);
+        double left = labelWidth + 30;
         double right = width - left;
         int maxRank = Math.max(k, 2);
         java.util.function.DoubleUnaryOperator xOf = r -> left + (r - 1) / (maxRank - 1) * (right - left);
 
         g.setStroke(new BasicStroke(1f));
         g.draw(new Line2D.Double(left, axisY, right, axisY));
+        // Number every rank while the numbers fit, else every 2nd, 5th or 10th (ticks stay on every rank).
+        double spacing = (right - left) / (maxRank - 1);
+        int every = 1;
+        for (int step : new int[] {1, 2, 5, 10, 20, 50}) {
+            every = step;
+            if (step * spacing >= fm.stringWidth(Integer.toString(maxRank)) + 6) {
+                break;
+            }
+        }
         for (int r = 1; r <= maxRank; r++) {
             double x = xOf.applyAsDouble(r);
             g.draw(new Line2D.Double(x, axisY, x, axisY - 5));
-            String t = Integer.toString(r);
-            g.drawString(t, (float) (x - fm.stringWidth(t) / 2.0), axisY - 8);
+            if (r == 1 || r % every == 0) {
+                String t = Integer.toString(r);
+                text(g, placed, t, (float) (x - fm.stringWidth(t) / 2.0), axisY - 8);
+            }
         }
-        g.drawString("mean rank (1 = best)", (float) left, axisY - 24);
+        String axisLabel = "mean rank (1 = best)";
+        text(g, placed, axisLabel, (float) ((left + right) / 2 - fm.stringWidth(axisLabel) / 2.0), axisY - 22);
         if (criticalDifference > 0 && !Double.isNaN(criticalDifference)) {
             double x0 = xOf.applyAsDouble(1);
             double x1 = xOf.applyAsDouble(Math.min(1 + criticalDifference, maxRank));
             g.setStroke(new BasicStroke(2f));
-            g.draw(new Line2D.Double(x0, 40, x1, 40));
-            g.draw(new Line2D.Double(x0, 36, x0, 44));
-            g.draw(new Line2D.Double(x1, 36, x1, 44));
+            g.draw(new Line2D.Double(x0, cdY, x1, cdY));
+            g.draw(new Line2D.Double(x0, cdY - 4, x0, cdY + 4));
+            g.draw(new Line2D.Double(x1, cdY - 4, x1, cdY + 4));
+            placed.add(new Placed("bar", "critical difference", new Rectangle2D.Double(x0, cdY - 4, x1 - x0, 8)));
             String cd = String.format(Locale.ROOT, "CD = %.2f", criticalDifference);
-            g.drawString(cd, (float) (x1 + 6), 44);
+            double cx = x1 + 6 + fm.stringWidth(cd) <= width ? x1 + 6 : x0 - 6 - fm.stringWidth(cd);
+            if (cx < 0) {
+                cx = x0;
+            }
+            text(g, placed, cd, (float) cx, cx == x0 ? cdY - 8 : cdY + 4);
         }
         g.setStroke(new BasicStroke(1f));
         for (int i = 0; i < k; i++) {
@@ -116,21 +177,31 @@ public final class CriticalDifferenceDiagram {
             String text = label(e);
             if (onLeft) {
                 g.draw(new Line2D.Double(left - 10, y, x, y));
-                g.drawString(text, (float) (left - 14 - fm.stringWidth(text)), (float) (y + 4));
+                text(g, placed, text, (float) (left - 14 - fm.stringWidth(text)), (float) (y + 4));
             } else {
                 g.draw(new Line2D.Double(x, y, right + 10, y));
-                g.drawString(text, (float) (right + 14), (float) (y + 4));
+                text(g, placed, text, (float) (right + 14), (float) (y + 4));
             }
         }
         g.setStroke(new BasicStroke(4f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
         int level = 0;
         for (int[] grp : groups) {
             double y = axisY + 10 + level * 6;
-            g.draw(new Line2D.Double(xOf.applyAsDouble(entries.get(grp[0]).meanRank()) - 3, y,
-                    xOf.applyAsDouble(entries.get(grp[1]).meanRank()) + 3, y));
+            double x0 = xOf.applyAsDouble(entries.get(grp[0]).meanRank()) - 3;
+            double x1 = xOf.applyAsDouble(entries.get(grp[1]).meanRank()) + 3;
+            g.draw(new Line2D.Double(x0, y, x1, y));
+            placed.add(new Placed("bar", "group", new Rectangle2D.Double(x0 - 2, y - 2, x1 - x0 + 4, 4)));
             level++;
         }
-        return g.getSVGElement();
+        return Svg.element(g);
+    }
+
+    /** Draws a text with its baseline at y and records its bounding box from the font's metrics. */
+    private static void text(SVGGraphics2D g, List<Placed> placed, String s, float x, float y) {
+        FontMetrics fm = g.getFontMetrics();
+        g.drawString(s, x, y);
+        placed.add(new Placed("text", s, new Rectangle2D.Double(x, y - fm.getAscent(), fm.stringWidth(s),
+                fm.getAscent() + fm.getDescent())));
     }
 
     private static String label(Entry e) {

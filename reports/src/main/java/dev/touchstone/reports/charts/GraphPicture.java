@@ -4,13 +4,7 @@ import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.Mark;
 import org.jfree.svg.SVGGraphics2D;
-import org.jgrapht.alg.drawing.FRLayoutAlgorithm2D;
-import org.jgrapht.alg.drawing.model.Box2D;
-import org.jgrapht.alg.drawing.model.LayoutModel2D;
-import org.jgrapht.alg.drawing.model.MapLayoutModel2D;
 import org.jgrapht.alg.drawing.model.Point2D;
-import org.jgrapht.graph.DefaultEdge;
-import org.jgrapht.graph.SimpleGraph;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
@@ -20,24 +14,22 @@ import java.awt.Stroke;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
+import java.awt.geom.QuadCurve2D;
 import java.util.EnumMap;
-import java.util.List;
 import java.util.Map;
-import java.util.Random;
 
 /**
- * The truth beside an estimate, over the same variables at the same positions (laid out
- * by JGraphT's Fruchterman–Reingold algorithm on the union of both skeletons; Fruchterman
- * and Reingold 1991). Edges are told apart by line style as well as colour, so the picture
- * reads in greyscale: correct solid black, missing (truth panel) dashed grey, extra dotted
- * red, wrong marks dash-dot orange. Arrowheads are filled triangles, circles open circles,
- * tails plain line ends.
+ * The truth beside an estimate, over the same variables at the same positions: a
+ * {@link GraphLayout} computed from the truth alone (layered by causal order), so every
+ * estimate of one truth is drawn over one layout. Edges are told apart by line style as well
+ * as colour, so the picture reads in greyscale: correct solid black, missing (truth panel)
+ * dashed grey, extra dotted red, wrong marks dash-dot orange. Arrowheads are filled
+ * triangles, circles open circles, tails plain line ends.
  */
 public final class GraphPicture {
 
-    private static final int PANEL = 360;
-    private static final int MARGIN = 34;
-    private static final double NODE_RADIUS = 13;
+    private static final int TOP = 24;
+    private static final double NODE_RADIUS = GraphLayout.RADIUS;
     private static final Map<EdgeVerdict, Color> COLOURS = new EnumMap<>(Map.of(
             EdgeVerdict.CORRECT, new Color(0x22, 0x22, 0x22),
             EdgeVerdict.MISSING, new Color(0x88, 0x88, 0x88),
@@ -46,20 +38,23 @@ public final class GraphPicture {
 
     private final Graph truth;
     private final Graph estimate;
-    private final long seed;
+    private final GraphLayout layout;
 
     /**
      * @param truth    the truth, of the estimate's class, over the same variables in the same order
      * @param estimate the estimate
-     * @param seed     seeds the layout, so the picture is reproducible
+     * @param layout   the truth's layout (shared by every estimate of it)
      */
-    public GraphPicture(Graph truth, Graph estimate, long seed) {
+    public GraphPicture(Graph truth, Graph estimate, GraphLayout layout) {
         if (!truth.names().equals(estimate.names())) {
             throw new IllegalArgumentException("truth and estimate must be over the same variables");
         }
+        if (layout.size() != truth.size()) {
+            throw new IllegalArgumentException("the layout has " + layout.size() + " nodes, the truth " + truth.size());
+        }
         this.truth = truth;
         this.estimate = estimate;
-        this.seed = seed;
+        this.layout = layout;
     }
 
     /** How the edge between {@code a} and {@code b} of {@code in} compares with {@code other}. */
@@ -74,48 +69,24 @@ public final class GraphPicture {
 
     /** Both panels side by side with a legend, as an {@code <svg>} element. */
     public String toSvg() {
-        int width = 2 * PANEL + 20;
-        int height = PANEL + 60;
-        Point2D[] at = layout();
+        int panel = (int) Math.ceil(layout.width());
+        int width = 2 * panel + 20;
+        int height = (int) Math.ceil(layout.height()) + TOP + 36;
+        Point2D[] at = new Point2D[truth.size()];
+        for (int v = 0; v < at.length; v++) {
+            at[v] = Point2D.of(layout.x(v), TOP + layout.y(v));
+        }
         SVGGraphics2D g = Svg.canvas(width, height);
         g.setColor(Color.WHITE);
         g.fillRect(0, 0, width, height);
         g.setFont(new Font("SansSerif", Font.BOLD, 12));
         g.setColor(Color.BLACK);
         g.drawString("truth", 10, 16);
-        g.drawString("estimate", PANEL + 30, 16);
+        g.drawString("estimate", panel + 30, 16);
         panel(g, truth, estimate, at, 0, true);
-        panel(g, estimate, truth, at, PANEL + 20, false);
-        legend(g, height - 22);
-        return g.getSVGElement();
-    }
-
-    private Point2D[] layout() {
-        int n = truth.size();
-        SimpleGraph<Integer, DefaultEdge> skeleton = new SimpleGraph<>(DefaultEdge.class);
-        for (int v = 0; v < n; v++) {
-            skeleton.addVertex(v);
-        }
-        for (Graph g : List.of(truth, estimate)) {
-            for (Edge e : g.edges()) {
-                if (!skeleton.containsEdge(e.a(), e.b())) {
-                    skeleton.addEdge(e.a(), e.b());
-                }
-            }
-        }
-        double size = PANEL - 2 * MARGIN;
-        LayoutModel2D<Integer> model = new MapLayoutModel2D<>(new Box2D(size, size));
-        new FRLayoutAlgorithm2D<Integer, DefaultEdge>(300, 0.5, new Random(seed)).layout(skeleton, model);
-        Point2D[] at = new Point2D[n];
-        for (int v = 0; v < n; v++) {
-            Point2D p = model.get(v);
-            at[v] = Point2D.of(MARGIN + clamp(p.getX(), size), 24 + MARGIN + clamp(p.getY(), size));
-        }
-        return at;
-    }
-
-    private static double clamp(double v, double size) {
-        return Double.isNaN(v) ? size / 2 : Math.max(0, Math.min(size, v));
+        panel(g, estimate, truth, at, panel + 20, false);
+        legend(g, height - 14);
+        return Svg.element(g);
     }
 
     private void panel(SVGGraphics2D g, Graph drawn, Graph other, Point2D[] at, int dx, boolean isTruth) {
@@ -125,20 +96,32 @@ public final class GraphPicture {
             Point2D b = shift(at[e.b()], dx);
             g.setColor(COLOURS.get(v));
             g.setStroke(stroke(v));
-            double len = Math.hypot(b.getX() - a.getX(), b.getY() - a.getY());
-            if (len < 1e-6) {
+            if (Math.hypot(b.getX() - a.getX(), b.getY() - a.getY()) < 1e-6) {
                 continue;
             }
-            double ux = (b.getX() - a.getX()) / len;
-            double uy = (b.getY() - a.getY()) / len;
+            Point2D c = control(e.a(), e.b());
+            Point2D cs = c == null ? null : shift(Point2D.of(c.getX(), TOP + c.getY()), dx);
+            // the directions into the edge at each end: towards the other end, or towards the curve's control point
+            Point2D towardsB = cs == null ? b : cs;
+            Point2D towardsA = cs == null ? a : cs;
+            double la = Math.hypot(towardsB.getX() - a.getX(), towardsB.getY() - a.getY());
+            double lb = Math.hypot(towardsA.getX() - b.getX(), towardsA.getY() - b.getY());
+            double ux = (towardsB.getX() - a.getX()) / la;
+            double uy = (towardsB.getY() - a.getY()) / la;
+            double vx = (towardsA.getX() - b.getX()) / lb;
+            double vy = (towardsA.getY() - b.getY()) / lb;
             double ax = a.getX() + ux * NODE_RADIUS;
             double ay = a.getY() + uy * NODE_RADIUS;
-            double bx = b.getX() - ux * NODE_RADIUS;
-            double by = b.getY() - uy * NODE_RADIUS;
-            g.draw(new Line2D.Double(ax, ay, bx, by));
+            double bx = b.getX() + vx * NODE_RADIUS;
+            double by = b.getY() + vy * NODE_RADIUS;
+            if (cs == null) {
+                g.draw(new Line2D.Double(ax, ay, bx, by));
+            } else {
+                g.draw(new QuadCurve2D.Double(ax, ay, cs.getX(), cs.getY(), bx, by));
+            }
             g.setStroke(new BasicStroke(1.2f));
             mark(g, e.atA(), ax, ay, ux, uy);
-            mark(g, e.atB(), bx, by, -ux, -uy);
+            mark(g, e.atB(), bx, by, vx, vy);
         }
         g.setFont(new Font("SansSerif", Font.PLAIN, 10));
         FontMetrics fm = g.getFontMetrics();
@@ -154,6 +137,67 @@ public final class GraphPicture {
             String name = shorten(drawn.name(v));
             g.drawString(name, (float) (p.getX() - fm.stringWidth(name) / 2.0), (float) (p.getY() + 4));
         }
+    }
+
+    /**
+     * The control point (layout coordinates) of a quadratic curve for the edge a–b when the
+     * straight line would pass within {@link GraphLayout#CLEARANCE} of a third node (an
+     * estimate's extra edge, which the truth's layout did not plan for); null when a straight
+     * line is clear. Bends further, on either side, until the curve clears every third node.
+     */
+    Point2D control(int a, int b) {
+        if (clear(a, b, null)) {
+            return null;
+        }
+        double ax = layout.x(a);
+        double ay = layout.y(a);
+        double bx = layout.x(b);
+        double by = layout.y(b);
+        double len = Math.hypot(bx - ax, by - ay);
+        double nx = -(by - ay) / len;
+        double ny = (bx - ax) / len;
+        double mx = (ax + bx) / 2;
+        double my = (ay + by) / 2;
+        Point2D fallback = null;
+        // Bend sideways, the apex also slid along the edge, until the curve passes every third node.
+        for (double bend = 30; bend <= 600; bend += 15) {
+            for (double slide : new double[] {0, 0.25, -0.25, 0.5, -0.5}) {
+                for (int side : new int[] {1, -1}) {
+                    Point2D c = Point2D.of(mx + side * nx * bend - slide * ny * len,
+                            my + side * ny * bend + slide * nx * len);
+                    if (fallback == null) {
+                        fallback = c;
+                    }
+                    if (clear(a, b, c)) {
+                        return c;
+                    }
+                }
+            }
+        }
+        return fallback;
+    }
+
+    /** Whether the edge a–b (straight, or the quadratic curve through control c) keeps clear of every third node. */
+    private boolean clear(int a, int b, Point2D c) {
+        java.awt.Shape shape = c == null ? new Line2D.Double(layout.x(a), layout.y(a), layout.x(b), layout.y(b))
+                : new QuadCurve2D.Double(layout.x(a), layout.y(a), c.getX(), c.getY(), layout.x(b), layout.y(b));
+        double[] pt = new double[6];
+        double px = 0;
+        double py = 0;
+        for (java.awt.geom.PathIterator it = shape.getPathIterator(null, 0.5); !it.isDone(); it.next()) {
+            int type = it.currentSegment(pt);
+            if (type == java.awt.geom.PathIterator.SEG_LINETO) {
+                for (int w = 0; w < layout.size(); w++) {
+                    if (w != a && w != b && GraphLayout.distanceToSegment(layout.x(w), layout.y(w), px, py, pt[0],
+                            pt[1]) < GraphLayout.CLEARANCE) {
+                        return false;
+                    }
+                }
+            }
+            px = pt[0];
+            py = pt[1];
+        }
+        return true;
     }
 
     /** Draws the mark at an end point; (ux, uy) points from that end into the edge. */

@@ -1,9 +1,7 @@
 package dev.touchstone.reports.charts;
 
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
-import org.jfree.chart.axis.NumberTickUnit;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.XYPlot;
@@ -37,6 +35,8 @@ public final class LineChart {
     private final boolean bands;
     private final Double yMin;
     private final Double yMax;
+    private Double xMin;
+    private Double xMax;
 
     private LineChart(String title, String xLabel, String yLabel, AxisScale xScale, AxisScale yScale,
                       List<ChartSeries> series, boolean bands, Double yMin, Double yMax) {
@@ -57,17 +57,32 @@ public final class LineChart {
     }
 
     public LineChart withScales(AxisScale x, AxisScale y) {
-        return new LineChart(title, xLabel, yLabel, x, y, series, bands, yMin, yMax);
+        return sameDomain(new LineChart(title, xLabel, yLabel, x, y, series, bands, yMin, yMax));
     }
 
     /** The same chart with a fixed value range (e.g. [0, 1] for precision). */
     public LineChart withRange(double min, double max) {
-        return new LineChart(title, xLabel, yLabel, xScale, yScale, series, bands, min, max);
+        return sameDomain(new LineChart(title, xLabel, yLabel, xScale, yScale, series, bands, min, max));
+    }
+
+    /** A fresh copy (set only here, before it is handed out) keeps this chart's horizontal range. */
+    private LineChart sameDomain(LineChart c) {
+        c.xMin = xMin;
+        c.xMax = xMax;
+        return c;
+    }
+
+    /** The same chart with a fixed range of the horizontal axis. */
+    public LineChart withDomain(double min, double max) {
+        LineChart c = new LineChart(title, xLabel, yLabel, xScale, yScale, series, bands, yMin, yMax);
+        c.xMin = min;
+        c.xMax = max;
+        return c;
     }
 
     /** Markers joined by thin lines, no bands. */
     public LineChart pointsOnly() {
-        return new LineChart(title, xLabel, yLabel, xScale, yScale, series, false, yMin, yMax);
+        return sameDomain(new LineChart(title, xLabel, yLabel, xScale, yScale, series, false, yMin, yMax));
     }
 
     public String title() {
@@ -109,13 +124,14 @@ public final class LineChart {
             renderer = new XYLineAndShapeRenderer(true, true);
         }
         for (int i = 0; i < series.size(); i++) {
-            renderer.setSeriesPaint(i, SeriesStyle.colour(i));
-            renderer.setSeriesFillPaint(i, SeriesStyle.colour(i));
-            renderer.setSeriesStroke(i, bands ? SeriesStyle.stroke(i) : new BasicStroke(1f));
-            renderer.setSeriesShape(i, SeriesStyle.shape(i));
+            int id = series.get(i).identity() < 0 ? i : series.get(i).identity();
+            renderer.setSeriesPaint(i, SeriesStyle.colour(id));
+            renderer.setSeriesFillPaint(i, SeriesStyle.colour(id));
+            renderer.setSeriesStroke(i, bands ? SeriesStyle.stroke(id) : new BasicStroke(1f));
+            renderer.setSeriesShape(i, SeriesStyle.shape(id));
         }
         renderer.setUseFillPaint(false);
-        XYPlot plot = new XYPlot(data, axis(xLabel, xScale, null, null), axis(yLabel, yScale, yMin, yMax), renderer);
+        XYPlot plot = new XYPlot(data, axis(xLabel, xScale, xMin, xMax), axis(yLabel, yScale, yMin, yMax), renderer);
         plot.setBackgroundPaint(Color.WHITE);
         plot.setDomainGridlinePaint(new Color(0xDD, 0xDD, 0xDD));
         plot.setRangeGridlinePaint(new Color(0xDD, 0xDD, 0xDD));
@@ -123,7 +139,7 @@ public final class LineChart {
         JFreeChart chart = new JFreeChart(title, new Font("SansSerif", Font.BOLD, 14), plot, true);
         chart.setBackgroundPaint(Color.WHITE);
         LegendTitle legend = chart.getLegend();
-        legend.setPosition(RectangleEdge.RIGHT);
+        legend.setPosition(RectangleEdge.BOTTOM);
         legend.setFrame(BlockBorder.NONE);
         legend.setItemFont(new Font("SansSerif", Font.PLAIN, 11));
         return chart;
@@ -136,14 +152,7 @@ public final class LineChart {
     private static ValueAxis axis(String label, AxisScale scale, Double min, Double max) {
         ValueAxis a;
         if (scale == AxisScale.LOG) {
-            LogAxis log = new LogAxis(label);
-            log.setBase(10);
-            log.setSmallestValue(1e-6);
-            // Whole powers of ten only, printed as plain numbers (100, 1000) rather than 10^2.1.
-            log.setTickUnit(new NumberTickUnit(1.0));
-            log.setNumberFormatOverride(new java.text.DecimalFormat("0.######"));
-            log.setMinorTickMarksVisible(true);
-            a = log;
+            a = new OneTwoFiveLogAxis(label);
         } else {
             NumberAxis n = new NumberAxis(label);
             n.setAutoRangeIncludesZero(false);

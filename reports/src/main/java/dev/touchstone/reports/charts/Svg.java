@@ -25,10 +25,32 @@ public final class Svg {
         return g;
     }
 
+    /**
+     * The drawing as an {@code <svg>} element with its size and a view box, so that a page may
+     * scale it down to the width it has (CSS max-width) instead of cutting it off.
+     */
+    public static String element(SVGGraphics2D g) {
+        return g.getSVGElement(null, true, new org.jfree.svg.ViewBox(0, 0, g.getWidth(), g.getHeight()), null, null);
+    }
+
+    /**
+     * An inline {@code <svg>} element as a standalone SVG 1.1 file: XML declaration first and
+     * the SVG namespace declared (JFreeSVG's element already carries it; added when missing).
+     */
+    public static String standalone(String svgElement) {
+        if (!svgElement.startsWith("<svg")) {
+            throw new IllegalArgumentException("not an <svg> element");
+        }
+        String openingTag = svgElement.substring(0, svgElement.indexOf('>') + 1);
+        String svg = openingTag.matches("(?s).*\\sxmlns=[\"']http://www\\.w3\\.org/2000/svg[\"'].*") ? svgElement
+                : "<svg xmlns=\"http://www.w3.org/2000/svg\"" + svgElement.substring(4);
+        return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + svg + "\n";
+    }
+
     /** The chart drawn at this size, as an {@code <svg>} element. */
     public static String of(JFreeChart chart, int width, int height) {
         SVGGraphics2D g = canvas(width, height);
         chart.draw(g, new Rectangle(0, 0, width, height));
-        return g.getSVGElement();
+        return Svg.element(g);
     }
 }

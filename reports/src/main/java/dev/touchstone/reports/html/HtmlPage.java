@@ -25,6 +25,12 @@ public final class HtmlPage {
             ".table-wrap{max-width:100%;overflow-x:auto}",
             ".table-wrap td:first-child,.table-wrap th:first-child{position:sticky;left:0;background:#fff}",
             ".table-wrap th:first-child{background:#f0f0f0}",
+            // Headline cells may wrap between a mean and its interval, so a table of many metrics
+            // fits the page at 1280 px instead of scrolling.
+            "table.wrap td.num{white-space:normal;min-width:4.5em}table.wrap th{font-size:.92em}",
+            ".grid{display:flex;flex-wrap:wrap;gap:4px 12px}.grid figure{margin:.4em 0;flex:0 1 auto;max-width:520px}",
+            "svg{max-width:100%;height:auto}svg.swatch{vertical-align:middle;margin-right:4px}",
+            "details{margin:.8em 0}summary{cursor:pointer;color:#135}",
             "th,td{border:1px solid #ccc;padding:3px 7px;text-align:left;vertical-align:top}",
             "th{background:#f0f0f0}td.best{font-weight:bold;background:#eef5ee}td.num{white-space:nowrap}",
             ".note{color:#555;font-size:.9em}",
@@ -94,14 +100,34 @@ public final class HtmlPage {
     }
 
     public HtmlPage table(Table t) {
-        body.append("<div class=\"table-wrap\"><table>\n<thead><tr>");
+        return table(t, java.util.Map.of(), false);
+    }
+
+    /**
+     * A table whose first-column cells found in {@code swatches} get that inline SVG swatch
+     * (a configuration's colour and marker) before their text; {@code wrap} lets number cells
+     * wrap (a wide headline).
+     */
+    public HtmlPage table(Table t, java.util.Map<String, String> swatches, boolean wrap) {
+        body.append("<div class=\"table-wrap\"><table").append(wrap ? " class=\"wrap\"" : "")
+                .append(">\n<thead><tr>");
         for (String c : t.columns()) {
-            body.append("<th>").append(escape(c)).append("</th>");
+            // metric names (orientation_precision) may break after an underscore in a narrow column
+            body.append("<th>").append(escape(c).replace("_", "_<wbr>")).append("</th>");
         }
         body.append("</tr></thead>\n<tbody>\n");
         for (List<Cell> row : t.rows()) {
             body.append("<tr>");
+            boolean first = true;
             for (Cell c : row) {
+                String swatch = first ? swatches.get(c.text()) : null;
+                first = false;
+                if (swatch != null) {
+                    requireSvg(swatch);
+                    body.append(c.best() ? "<td class=\"best\">" : "<td>").append(swatch).append(escape(c.text()))
+                            .append("</td>");
+                    continue;
+                }
                 String classes = (c.best() ? "best " : "") + (numeric(c.text()) ? "num" : "");
                 body.append(classes.isEmpty() ? "<td>" : "<td class=\"" + classes.trim() + "\">")
                         .append(escape(c.text())).append("</td>");
@@ -123,11 +149,40 @@ public final class HtmlPage {
 
     /** An inline SVG picture (as produced by this module's charts) with a caption. */
     public HtmlPage figure(String svgElement, String caption) {
+        requireSvg(svgElement);
+        body.append("<figure>").append(svgElement);
+        if (!caption.isEmpty()) {
+            body.append("<figcaption>").append(escape(caption)).append("</figcaption>");
+        }
+        body.append("</figure>\n");
+        return this;
+    }
+
+    private static void requireSvg(String svgElement) {
         if (!svgElement.startsWith("<svg")) {
             throw new IllegalArgumentException("a figure must be an <svg> element");
         }
-        body.append("<figure>").append(svgElement).append("<figcaption>").append(escape(caption))
-                .append("</figcaption></figure>\n");
+    }
+
+    /** Starts a block where figures sit side by side as wide as the page allows. */
+    public HtmlPage beginGrid() {
+        body.append("<div class=\"grid\">\n");
+        return this;
+    }
+
+    public HtmlPage endGrid() {
+        body.append("</div>\n");
+        return this;
+    }
+
+    /** Starts a collapsible block, closed at first, opened by its summary line. */
+    public HtmlPage beginDetails(String summary) {
+        body.append("<details><summary>").append(escape(summary)).append("</summary>\n");
+        return this;
+    }
+
+    public HtmlPage endDetails() {
+        body.append("</details>\n");
         return this;
     }
 
