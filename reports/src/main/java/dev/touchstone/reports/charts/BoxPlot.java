@@ -25,7 +25,7 @@ import java.util.Objects;
  * box per learner configuration (coloured by its identity). Boxes span the quartiles with the
  * median as a line and the mean as a dot; whiskers reach the most extreme values within 1.5
  * interquartile ranges of the box and points beyond are drawn as outliers (Tukey 1977,
- * "Exploratory Data Analysis", ch. 2; computed by JFreeChart's {@code BoxAndWhiskerCalculator}).
+ * "Exploratory Data Analysis"; computed by JFreeChart's {@code BoxAndWhiskerCalculator}).
  */
 public final class BoxPlot {
 

@@ -17,7 +17,7 @@ import java.util.Objects;
  * so that blue means better than the reference and red worse (whatever the metric's
  * direction), with the value printed and a ring where the Holm-adjusted p-value is below
  * 0.05. The diverging scale runs between the end colours of the blue–red scheme that Tol
- * (2021, "Colour schemes", SRON/EPS/TN/09-002, fig. 3) recommends as colour-blind safe
+ * (2021, "Colour schemes", SRON/EPS/TN/09-002) recommends as colour-blind safe
  * (#2166AC, #F7F7F7, #B2182B, from memory), scaled to the largest absolute difference.
  */
 public final class DifferenceHeatMap {
