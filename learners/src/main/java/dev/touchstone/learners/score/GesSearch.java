@@ -58,6 +58,16 @@ import java.util.stream.IntStream;
  * then scores higher than the truth. Greedy local optima below the truth's score also occur.
  * See docs/dev/score.md for the evidence and the penalty multiplier's effect.
  *
+ * <p><b>Variants</b> ({@link Variants}, all off by default), each of which only accepts moves
+ * or results that raise the score, so none can end below the plain search: the phases run again
+ * until a whole round makes no move (common practice); a turning phase after the backward one
+ * applies the best improving Turn(u, v, C) — reversing an edge of the class, after Hauser and
+ * Bühlmann (2012, JMLR 13, §5; see {@link #turnsOf} and {@link #afterTurn}) — while one exists;
+ * and seeded perturbed starts re-run the phases from random edge additions and removals of the
+ * best class so far. Each turn costs a consistent extension and a completion, and a turning
+ * sweep rates every edge in both directions over the cliques of v's undirected neighbours, so
+ * the phase is meant for small and medium p (it is what the exact optimum can judge).
+ *
  * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with two local scores each; a
  * forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those next to
  * two of them); Insert enumerates the cliques of T₀ (exponential only in dense graphs,
@@ -795,6 +805,9 @@ final class GesSearch {
             context.checkDeadline();
             List<Candidate> improving = new ArrayList<>();
             for (int v = 0; v < p; v++) {
+                if ((v & 15) == 15) {
+                    context.checkDeadline();
+                }
                 for (int k = 0; k < graph.degree(v); k++) {
                     int u = graph.neighbour(v, k);
                     if (graph.directed(v, u) || graph.undirected(u, v)) {
@@ -810,6 +823,7 @@ final class GesSearch {
             double current = improving.isEmpty() ? 0 : classScore(graph);
             boolean moved = false;
             for (Candidate c : improving) {
+                context.checkDeadline();
                 Pdag next = afterTurn(c);
                 if (next != null && higher(classScore(next), current)) {
                     graph = next;
