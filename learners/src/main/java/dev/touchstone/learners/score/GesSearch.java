@@ -62,7 +62,7 @@ import java.util.stream.IntStream;
  * or results that raise the score, so none can end below the plain search: the phases run again
  * until a whole round makes no move (common practice); a turning phase after the backward one
  * applies the best improving Turn(u, v, C) — reversing an edge of the class, after Hauser and
- * Bühlmann (2012, JMLR 13, §5; see {@link #turnsOf} and {@link #afterTurn}) — while one exists;
+ * Bühlmann (2012, JMLR 13; see {@link #turnsOf} and {@link #afterTurn}) — while one exists;
  * and seeded perturbed starts re-run the phases from random edge additions and removals of the
  * best class so far. Each turn costs a consistent extension and a completion, and a turning
  * sweep rates every edge in both directions over the cliques of v's undirected neighbours, so
@@ -841,7 +841,7 @@ final class GesSearch {
     /**
      * Every turn of the edge between u and v (now v → u or u — v) into u → v, rated, valid or
      * not: Turn(u, v, C) for C a clique of v's undirected neighbours other than u, as Hauser
-     * and Bühlmann (2012, JMLR 13, §5, the turning operator) define it: pick a DAG D of the
+     * and Bühlmann (2012, JMLR 13, the turning operator of their greedy interventional equivalence search; definition from memory) define it: pick a DAG D of the
      * class with v → u whose parents of v among its undirected neighbours are exactly C, and
      * reverse v → u. Under a decomposable score the change is local to u and v: with
      * Pa_D(v) = Pa(v) ∪ C and Pa_D(u) = Pa(u) ∪ {v} ∪ (C ∩ Ne(u)) (each c in C with c — u
