@@ -26,6 +26,7 @@ import java.util.Map;
  * below the truth. Usage: {@code GesScaling threads rows p1 p2 ...}; the system properties
  * {@code score} ({@code bic} or {@code ebic}, default bic), {@code penalty} (the BIC penalty
  * multiplier, default 1) and {@code gamma} (the extended BIC's, default 0.5) set the score.
+ * {@code turning=true} adds GES's turning phase.
  * The CPU time of the whole process is printed too: on a
  * shared, loaded machine that time divided by the threads used is a floor for the wall time
  * the run would need on idle cores.
@@ -43,7 +44,8 @@ public final class GesScaling {
         double penalty = Double.parseDouble(System.getProperty("penalty", "1"));
         double gamma = Double.parseDouble(System.getProperty("gamma", "0.5"));
         ParameterValues values = ParameterValues.resolve("ges", ges.description().parameters(),
-                Map.of("score", score, "penalty", penalty, "gamma", gamma));
+                Map.of("score", score, "penalty", penalty, "gamma", gamma,
+                        "turning_phase", Boolean.getBoolean("turning")));
         java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
         com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
                 java.lang.management.ManagementFactory.getOperatingSystemMXBean();

@@ -39,4 +39,10 @@ final class CpdagCompletion implements GesSearch.Completion {
         }
         return Pdag.of(cpdag);
     }
+
+    @Override
+    public Pdag extend(Pdag pdag) {
+        Graph dag = DagExtension.of(pdag.toGraph(names));
+        return dag == null ? null : Pdag.of(dag);
+    }
 }

@@ -8,6 +8,7 @@ import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 
 import java.util.List;
@@ -17,6 +18,10 @@ import java.util.Map;
  * Greedy equivalence search (Chickering 2002) with a decomposable local score, returning a
  * CPDAG; with the oracle it scores the exact population covariance with the BIC (see
  * {@link BicScore} for why that is consistent). Method, caching and cost: {@link GesSearch}.
+ * Off by default, three additions that can only raise the score reached: repeating the phases
+ * until a round makes no move (common practice), a turning phase of edge reversals between
+ * classes (Hauser and Bühlmann 2012, "Characterization and greedy learning of interventional
+ * Markov equivalence classes of directed acyclic graphs", JMLR 13), and seeded perturbed starts.
  * Stateless and thread-safe.
  */
 public final class GesLearner implements Learner {
@@ -24,17 +29,40 @@ public final class GesLearner implements Learner {
     /** The learner id. */
     public static final String ID = "ges";
 
+    static final String REPEAT_PHASES = "repeat_phases";
+    static final String TURNING_PHASE = "turning_phase";
+    static final String PERTURBED_STARTS = HillClimbLearner.PERTURBED_STARTS;
+    static final String RANDOM_MOVES_PER_START = HillClimbLearner.RANDOM_MOVES_PER_START;
+
     private static final LearnerDescription DESCRIPTION = describe();
 
     private static LearnerDescription describe() {
         return ScoreSettings.describe(ID,
                         "greedy equivalence search: forward insertions then backward deletions over Markov"
-                                + " equivalence classes, maximising a decomposable score",
+                                + " equivalence classes, maximising a decomposable score; optionally repeated,"
+                                + " with a turning phase, and from perturbed starts",
                         "Chickering (2002), Optimal structure identification with greedy search,"
-                                + " Journal of Machine Learning Research 3",
+                                + " Journal of Machine Learning Research 3; turning phase after Hauser and"
+                                + " Bühlmann (2012), Journal of Machine Learning Research 13",
                         GraphClass.CPDAG)
                 .assumption("a consistent score and faithfulness for the large-sample guarantee")
+                .parameter(ParameterSpec.bool(REPEAT_PHASES, false,
+                        "run the forward and backward phases (and the turning phase, when on) again until a"
+                                + " whole round makes no move"))
+                .parameter(ParameterSpec.bool(TURNING_PHASE, false,
+                        "after the backward phase, reverse edges of the class while that raises the score"
+                                + " (turning operator of Hauser and Bühlmann 2012)"))
+                .parameter(ParameterSpec.integer(PERTURBED_STARTS, 0, 0, 1000,
+                        "number of further searches, each from the best class so far after random edge"
+                                + " additions or removals; the best-scoring class is kept (0: none)"))
+                .parameter(ParameterSpec.integer(RANDOM_MOVES_PER_START, 3, 1, 10000,
+                        "random edge additions or removals applied before each further search"))
                 .build();
+    }
+
+    static GesSearch.Variants variants(ParameterValues parameters) {
+        return new GesSearch.Variants(parameters.getBoolean(REPEAT_PHASES), parameters.getBoolean(TURNING_PHASE),
+                parameters.getInt(PERTURBED_STARTS), parameters.getInt(RANDOM_MOVES_PER_START));
     }
 
     @Override
@@ -50,10 +78,13 @@ public final class GesLearner implements Learner {
         KnowledgeIndex index = HillClimbLearner.indexKnowledge(knowledge, names);
         LocalScore score = ScoreCache.of(ScoreSettings.build(ID, input, parameters), context);
         GesSearch search = new GesSearch(score, index, new CpdagCompletion(names, knowledge),
-                ScoreSettings.maxParents(parameters), context);
+                ScoreSettings.maxParents(parameters), context)
+                .variants(variants(parameters));
         Graph cpdag = search.run().toGraph(names);
         return new Estimate(cpdag, GraphClass.CPDAG, Map.of(
                 "forward-moves", (double) search.forwardMoves(),
-                "backward-moves", (double) search.backwardMoves()));
+                "backward-moves", (double) search.backwardMoves(),
+                "turning-moves", (double) search.turningMoves(),
+                "perturbed-starts-improved", (double) search.startsImproved()));
     }
 }

@@ -2,6 +2,7 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.learner.RunContext;
+import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -57,6 +58,16 @@ import java.util.stream.IntStream;
  * then scores higher than the truth. Greedy local optima below the truth's score also occur.
  * See docs/dev/score.md for the evidence and the penalty multiplier's effect.
  *
+ * <p><b>Variants</b> ({@link Variants}, all off by default), each of which only accepts moves
+ * or results that raise the score, so none can end below the plain search: the phases run again
+ * until a whole round makes no move (common practice); a turning phase after the backward one
+ * applies the best improving Turn(u, v, C) — reversing an edge of the class, after Hauser and
+ * Bühlmann (2012, JMLR 13; see {@link #turnsOf} and {@link #afterTurn}) — while one exists;
+ * and seeded perturbed starts re-run the phases from random edge additions and removals of the
+ * best class so far. Each turn costs a consistent extension and a completion, and a turning
+ * sweep rates every edge in both directions over the cliques of v's undirected neighbours, so
+ * the phase is meant for small and medium p (it is what the exact optimum can judge).
+ *
  * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with two local scores each; a
  * forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those next to
  * two of them); Insert enumerates the cliques of T₀ (exponential only in dense graphs,
@@ -81,11 +92,29 @@ final class GesSearch {
     private Pdag graph;
     private int forwardMoves;
     private int backwardMoves;
+    private int turningMoves;
+    private int startsImproved;
+    private Variants variants = Variants.PLAIN;
     private ForkJoinPool pool;
+
+    /**
+     * The additions to the plain two-phase search, all off in {@link #PLAIN}:
+     * {@code repeatPhases} runs the phases again until a whole round makes no move (common
+     * practice); {@code turning} adds a phase of edge turns after the backward phase (Hauser
+     * and Bühlmann 2012); {@code perturbedStarts} further searches, each from the best class
+     * so far after {@code randomMovesPerStart} random edge additions or removals, keeping the
+     * best-scoring class.
+     */
+    record Variants(boolean repeatPhases, boolean turning, int perturbedStarts, int randomMovesPerStart) {
+        static final Variants PLAIN = new Variants(false, false, 0, 0);
+    }
 
     /** Re-completes a PDAG after a move; see {@link CpdagCompletion}. */
     interface Completion {
         Pdag complete(Pdag pdag);
+
+        /** A consistent DAG extension of the PDAG (Dor and Tarsi 1992), or null when it has none. */
+        Pdag extend(Pdag pdag);
     }
 
     GesSearch(LocalScore score, KnowledgeIndex knowledge, Completion completion, int maxParents, RunContext context) {
@@ -97,7 +126,17 @@ final class GesSearch {
         this.p = score.variableCount();
     }
 
-    /** Runs both phases from the graph of required edges and returns the final PDAG. */
+    /** Sets the additions to the plain search; call before {@link #run}. */
+    GesSearch variants(Variants chosen) {
+        this.variants = chosen;
+        return this;
+    }
+
+    /**
+     * Runs the phases from the graph of required edges (forward, backward, then turning when
+     * asked; again until a round makes no move when asked), then the perturbed starts, and
+     * returns the final PDAG.
+     */
     Pdag run() {
         Pdag start = new Pdag(p);
         for (int[] e : knowledge.requiredEdges()) {
@@ -107,8 +146,10 @@ final class GesSearch {
         context.checkDeadline();
         pool = context.threads() > 1 ? new ForkJoinPool(context.threads()) : null;
         try {
-            forward();
-            backward();
+            phases();
+            if (variants.perturbedStarts() > 0) {
+                perturbedStarts();
+            }
         } finally {
             if (pool != null) {
                 pool.shutdownNow();
@@ -150,6 +191,131 @@ final class GesSearch {
 
     int backwardMoves() {
         return backwardMoves;
+    }
+
+    int turningMoves() {
+        return turningMoves;
+    }
+
+    /** The number of perturbed starts that ended in a better class than the best before them. */
+    int startsImproved() {
+        return startsImproved;
+    }
+
+    /**
+     * Forward, backward and (when asked) turning phase; with {@code repeatPhases} again until a
+     * whole round makes no move. Every move raises the score by more than
+     * {@link #MIN_IMPROVEMENT}, so the rounds end (there are finitely many classes).
+     */
+    private void phases() {
+        while (true) {
+            int before = forwardMoves + backwardMoves + turningMoves;
+            forward();
+            backward();
+            if (variants.turning()) {
+                turning();
+            }
+            if (!variants.repeatPhases() || forwardMoves + backwardMoves + turningMoves == before) {
+                return;
+            }
+        }
+    }
+
+    // ---------------------------------------------------------------- whole-class score
+
+    /** The score of the class: the sum of local scores of a consistent extension (all members score alike). */
+    double classScore(Pdag pdag) {
+        Pdag dag = completion.extend(pdag);
+        if (dag == null) {
+            throw new IllegalStateException("a GES state without a consistent extension");
+        }
+        double s = 0;
+        for (int v = 0; v < p; v++) {
+            s += score.localScore(v, dag.parents(v));
+        }
+        return s;
+    }
+
+    private static boolean higher(double candidate, double best) {
+        return candidate > best + MIN_IMPROVEMENT * Math.max(1.0, Math.abs(best));
+    }
+
+    // ---------------------------------------------------------------- perturbed starts
+
+    /**
+     * Seeded restarts: each takes a DAG of the best class so far, makes
+     * {@code randomMovesPerStart} random edge additions (acyclic, allowed by knowledge and the
+     * parent limit) or removals (of edges knowledge does not require), re-completes it to its
+     * class and runs the phases from there; the best class over all is kept. It only ever
+     * replaces the result by a better-scoring one, so it cannot end below the plain search.
+     */
+    private void perturbedStarts() {
+        UniformRandomProvider rng = context.random("ges perturbed starts");
+        Pdag best = graph;
+        double bestScore = classScore(best);
+        for (int r = 0; r < variants.perturbedStarts(); r++) {
+            context.checkDeadline();
+            graph = completion.complete(perturb(best, rng));
+            phases();
+            double s = classScore(graph);
+            if (higher(s, bestScore)) {
+                best = graph;
+                bestScore = s;
+                startsImproved++;
+            }
+        }
+        graph = best;
+    }
+
+    private Pdag perturb(Pdag cls, UniformRandomProvider rng) {
+        Pdag dag = completion.extend(cls);
+        int moves = variants.randomMovesPerStart();
+        int done = 0;
+        for (int tries = 0; done < moves && tries < 100 * moves + 100 && p > 1; tries++) {
+            int x = rng.nextInt(p);
+            int y = rng.nextInt(p);
+            if (x == y) {
+                continue;
+            }
+            if (dag.adjacent(x, y)) {
+                if (!knowledge.isRequiredEitherWay(x, y)) {
+                    dag.remove(x, y);
+                    done++;
+                }
+            } else if (!knowledge.isForbidden(x, y) && dag.parents(y).length < maxParents
+                    && !directedPath(dag, y, x)) {
+                dag.addDirected(x, y);
+                done++;
+            }
+        }
+        return dag;
+    }
+
+    /** Whether a directed path leads from {@code from} to {@code to} (edges u → w only). */
+    private boolean directedPath(Pdag g, int from, int to) {
+        if (from == to) {
+            return true;
+        }
+        boolean[] seen = new boolean[p];
+        int[] stack = new int[p];
+        int top = 0;
+        stack[top++] = from;
+        seen[from] = true;
+        while (top > 0) {
+            int u = stack[--top];
+            for (int k = 0; k < g.degree(u); k++) {
+                int w = g.neighbour(u, k);
+                if (seen[w] || g.state(u, w) != Pdag.OUT) {
+                    continue;
+                }
+                if (w == to) {
+                    return true;
+                }
+                seen[w] = true;
+                stack[top++] = w;
+            }
+        }
+        return false;
     }
 
     // ---------------------------------------------------------------- forward phase
@@ -642,6 +808,188 @@ final class GesSearch {
         int[] out = Arrays.copyOf(a, na + b.length);
         System.arraycopy(b, 0, out, na, b.length);
         return out;
+    }
+
+    // ---------------------------------------------------------------- turning phase
+
+    /**
+     * The turning phase: while some valid turn improves the score, apply the best one. Turns
+     * are rated by their score change (exact: see {@link #turnsOf}), tried best first, and a
+     * turn is taken only when the class it reaches scores higher than the current one by the
+     * whole-class score, which also keeps the phase sound with background knowledge (whose
+     * orientations the completion adds after the move).
+     */
+    private void turning() {
+        while (true) {
+            context.checkDeadline();
+            List<Candidate> improving = new ArrayList<>();
+            for (int v = 0; v < p; v++) {
+                if ((v & 15) == 15) {
+                    context.checkDeadline();
+                }
+                for (int k = 0; k < graph.degree(v); k++) {
+                    int u = graph.neighbour(v, k);
+                    if (graph.directed(v, u) || graph.undirected(u, v)) {
+                        for (Candidate c : turnsOf(u, v)) {
+                            if (c.delta > MIN_IMPROVEMENT) {
+                                improving.add(c);
+                            }
+                        }
+                    }
+                }
+            }
+            improving.sort(BEST_FIRST.thenComparing(c -> Arrays.toString(c.set)));
+            double current = improving.isEmpty() ? 0 : classScore(graph);
+            boolean moved = false;
+            for (Candidate c : improving) {
+                context.checkDeadline();
+                Pdag next = afterTurn(c);
+                if (next != null && higher(classScore(next), current)) {
+                    graph = next;
+                    turningMoves++;
+                    moved = true;
+                    break;
+                }
+            }
+            if (!moved) {
+                return;
+            }
+        }
+    }
+
+    /**
+     * Every turn of the edge between u and v (now v → u or u — v) into u → v, rated, valid or
+     * not: Turn(u, v, C) for C a clique of v's undirected neighbours other than u, as Hauser
+     * and Bühlmann (2012, JMLR 13, the turning operator of their greedy interventional equivalence search; definition from memory) define it: pick a DAG D of the
+     * class with v → u whose parents of v among its undirected neighbours are exactly C, and
+     * reverse v → u. Under a decomposable score the change is local to u and v: with
+     * Pa_D(v) = Pa(v) ∪ C and Pa_D(u) = Pa(u) ∪ {v} ∪ (C ∩ Ne(u)) (each c in C with c — u
+     * must point into u, or c → v → u → c would be a cycle),
+     * s(v, Pa_D(v) ∪ {u}) − s(v, Pa_D(v)) + s(u, Pa_D(u) \ {v}) − s(u, Pa_D(u)). All members
+     * D with that C give the same change and the same class after the turn (the class of the
+     * result is fixed by its skeleton and v-structures, which C determines), so one member
+     * suffices; whether one exists whose reversal is acyclic is decided by {@link #afterTurn}.
+     */
+    List<Candidate> turnsOf(int u, int v) {
+        List<Candidate> out = new ArrayList<>();
+        if (knowledge.isForbidden(u, v) || knowledge.isRequired(v, u)) {
+            return out;
+        }
+        int[] paV = graph.parents(v);
+        if (paV.length + 1 > maxParents) {
+            return out;
+        }
+        int[] ne = graph.undirectedNeighbours(v);
+        int[] options = new int[ne.length];
+        int n = 0;
+        for (int c : ne) {
+            if (c != u && !knowledge.isForbidden(c, v)) {
+                options[n++] = c;
+            }
+        }
+        enumerateTurns(u, v, paV, Arrays.copyOf(options, n), 0, new int[n], 0, out);
+        return out;
+    }
+
+    private void enumerateTurns(int u, int v, int[] paV, int[] options, int from, int[] chosen, int nChosen,
+                                List<Candidate> out) {
+        int[] c = Arrays.copyOf(chosen, nChosen);
+        int[] vWithout = union(paV, paV.length, c);
+        int[] vWith = Arrays.copyOf(vWithout, vWithout.length + 1);
+        vWith[vWithout.length] = u;
+        int[] paU = graph.parents(u);
+        int[] uWith = Arrays.copyOf(paU, paU.length + 1 + nChosen);
+        int nu = paU.length;
+        if (!graph.directed(v, u)) {
+            uWith[nu++] = v;
+        }
+        for (int w : c) {
+            if (graph.undirected(w, u)) {
+                uWith[nu++] = w;
+            }
+        }
+        uWith = Arrays.copyOf(uWith, nu);
+        int[] uWithout = new int[nu - 1];
+        int m = 0;
+        for (int w : uWith) {
+            if (w != v) {
+                uWithout[m++] = w;
+            }
+        }
+        double delta = score.localScore(v, vWith) - score.localScore(v, vWithout)
+                + score.localScore(u, uWithout) - score.localScore(u, uWith);
+        out.add(new Candidate(delta, u, v, c));
+        if (vWith.length + 1 > maxParents) {
+            return;
+        }
+        for (int i = from; i < options.length; i++) {
+            int t = options[i];
+            boolean clique = true;
+            for (int k = 0; k < nChosen && clique; k++) {
+                clique = graph.adjacent(t, chosen[k]);
+            }
+            if (!clique) {
+                continue;
+            }
+            chosen[nChosen] = t;
+            enumerateTurns(u, v, paV, options, i + 1, chosen, nChosen + 1, out);
+        }
+    }
+
+    /**
+     * The class after Turn(u, v, C), or null when the turn is not valid. The member D is built
+     * by orienting v → u, C → v, v → w for v's other undirected neighbours, c → u for c in C
+     * with c — u and u → w for u's other undirected neighbours (so that as few edges as
+     * possible enter u, which leaves the fewest directed paths from v to u), then taking a
+     * consistent extension (Dor and Tarsi 1992). The turn is valid when that extension exists
+     * and has no directed path from v to u besides the edge, so that reversing it stays
+     * acyclic. Which D to pick is our own construction; the brute-force test compares it with
+     * every member of the class.
+     */
+    Pdag afterTurn(Candidate turn) {
+        int u = turn.x;
+        int v = turn.y;
+        Pdag h = new Pdag(graph);
+        if (h.undirected(u, v)) {
+            h.orient(v, u);
+        }
+        for (int w : graph.undirectedNeighbours(v)) {
+            if (w != u) {
+                if (contains(turn.set, w)) {
+                    h.orient(w, v);
+                } else {
+                    h.orient(v, w);
+                }
+            }
+        }
+        for (int w : graph.undirectedNeighbours(u)) {
+            if (w != v && h.undirected(u, w)) {
+                if (contains(turn.set, w)) {
+                    h.orient(w, u);
+                } else {
+                    h.orient(u, w);
+                }
+            }
+        }
+        Pdag d = completion.extend(h);
+        if (d == null) {
+            return null;
+        }
+        d.remove(v, u);
+        if (directedPath(d, v, u)) {
+            return null;
+        }
+        d.addDirected(u, v);
+        return completion.complete(d);
+    }
+
+    private static boolean contains(int[] a, int x) {
+        for (int v : a) {
+            if (v == x) {
+                return true;
+            }
+        }
+        return false;
     }
 
     // ---------------------------------------------------------------- threads

@@ -40,7 +40,7 @@ class GesOperatorsBruteForceTest {
     private record Expected(double delta, Graph cpdag) {
     }
 
-    private static String key(int[] set) {
+    static String key(int[] set) {
         int[] s = set.clone();
         Arrays.sort(s);
         return Arrays.toString(s);
@@ -140,7 +140,7 @@ class GesOperatorsBruteForceTest {
         return false;
     }
 
-    private static boolean[][] copy(boolean[][] g) {
+    static boolean[][] copy(boolean[][] g) {
         boolean[][] out = new boolean[g.length][];
         for (int i = 0; i < g.length; i++) {
             out[i] = g[i].clone();
@@ -148,7 +148,7 @@ class GesOperatorsBruteForceTest {
         return out;
     }
 
-    private static Graph toGraph(boolean[][] arrow, List<String> names) {
+    static Graph toGraph(boolean[][] arrow, List<String> names) {
         MutableGraph g = Graph.builder(names);
         for (int a = 0; a < arrow.length; a++) {
             for (int b = 0; b < arrow.length; b++) {
@@ -164,7 +164,7 @@ class GesOperatorsBruteForceTest {
      * Every DAG of the class of a CPDAG, by exhaustion: each orientation of the undirected
      * edges that is acyclic and has exactly the CPDAG's v-structures (a consistent extension).
      */
-    private static List<boolean[][]> classMembers(Pdag pdag) {
+    static List<boolean[][]> classMembers(Pdag pdag) {
         int p = pdag.size();
         List<int[]> undirected = new ArrayList<>();
         for (int a = 0; a < p; a++) {
@@ -222,7 +222,7 @@ class GesOperatorsBruteForceTest {
         return sb.toString();
     }
 
-    private static boolean acyclic(boolean[][] arrow, int p) {
+    static boolean acyclic(boolean[][] arrow, int p) {
         int[] indegree = new int[p];
         for (int a = 0; a < p; a++) {
             for (int b = 0; b < p; b++) {
