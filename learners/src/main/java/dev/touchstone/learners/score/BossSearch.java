@@ -1,13 +1,10 @@
 package dev.touchstone.learners.score;
 
-import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.learner.RunContext;
 import org.apache.commons.rng.UniformRandomProvider;
 
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ForkJoinPool;
 import java.util.function.IntConsumer;
-import java.util.stream.IntStream;
 
 /**
  * Best order score search (Andrews, Ramsey, Sanchez-Romero, Camchong and Kummerfeld 2023,
@@ -207,23 +204,6 @@ final class BossSearch {
     }
 
     private void parallel(int count, IntConsumer body) {
-        if (pool == null) {
-            for (int i = 0; i < count; i++) {
-                body.accept(i);
-            }
-            return;
-        }
-        try {
-            pool.submit(() -> IntStream.range(0, count).parallel().forEach(body)).get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new DeadlineExceededException("interrupted");
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException) {
-                throw (RuntimeException) cause;
-            }
-            throw new IllegalStateException(cause);
-        }
+        PoolLoop.run(pool, count, body);
     }
 }

@@ -1,6 +1,5 @@
 package dev.touchstone.learners.score;
 
-import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.learner.RunContext;
 import org.apache.commons.rng.UniformRandomProvider;
 
@@ -9,7 +8,6 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.PriorityQueue;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ForkJoinPool;
 import java.util.function.IntConsumer;
 import java.util.stream.IntStream;
@@ -995,25 +993,9 @@ final class GesSearch {
     // ---------------------------------------------------------------- threads
 
     private void parallel(int count, IntConsumer body) {
-        if (pool == null || count < 64) {
-            for (int i = 0; i < count; i++) {
-                body.accept(i);
-            }
-            return;
-        }
-        try {
-            pool.submit(() -> IntStream.range(0, count).parallel().forEach(body)).get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new DeadlineExceededException("interrupted");
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException) {
-                throw (RuntimeException) cause;
-            }
-            throw new IllegalStateException(cause);
-        }
+        PoolLoop.run(count < 64 ? null : pool, count, body);
     }
+
 
     /** A rated operator: Insert(x, y, T) in the forward phase, Delete(x, y, H) in the backward one. */
     static final class Candidate {
