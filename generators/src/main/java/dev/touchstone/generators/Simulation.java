@@ -41,6 +41,7 @@ public final class Simulation {
     private final ModelKind kind;
     private final ParameterValues modelValues;
     private final ReferenceNetwork network;
+    private final TruthParameters fixed;
     private final HiddenOption hidden;
     private final ParameterValues hiddenValues;
     private final MissingnessMechanism missing;
@@ -52,6 +53,7 @@ public final class Simulation {
         this.kind = b.kind;
         this.modelValues = b.modelValues;
         this.network = b.network;
+        this.fixed = b.fixed;
         this.hidden = b.hidden;
         this.hiddenValues = b.hiddenValues;
         this.missing = b.missing;
@@ -67,6 +69,11 @@ public final class Simulation {
         return network;
     }
 
+    /** The truth fixed by a model file, used instead of a family and kind or a network, or null. */
+    public TruthParameters fixed() {
+        return fixed;
+    }
+
     public GraphFamily family() {
         return family;
     }
@@ -80,6 +87,11 @@ public final class Simulation {
      * Deterministic in {@code replicateSeed}.
      */
     public SimulatedTruth drawTruth(long replicateSeed) {
+        if (fixed != null) {
+            // every parameter is given (graph, hidden flags, mechanisms, missingness, tiers):
+            // a replicate draws only its own data
+            return fixed.truth(Seeds.derive(replicateSeed, "data"));
+        }
         Graph dag;
         Knowledge knowledge;
         List<String> order;
@@ -138,7 +150,7 @@ public final class Simulation {
     }
 
     /**
-     * Collects the parts. A family with a kind, or a network, is required; hidden defaults
+     * Collects the parts. A family with a kind, a network, or a fixed truth is required; hidden defaults
      * to {@code none} and missingness to {@code none}.
      */
     public static final class Builder {
@@ -147,6 +159,7 @@ public final class Simulation {
         private ModelKind kind;
         private ParameterValues modelValues;
         private ReferenceNetwork network;
+        private TruthParameters fixed;
         private HiddenOption hidden = HiddenOptions.byId(HiddenOptions.NONE);
         private ParameterValues hiddenValues = ParameterValues.none();
         private MissingnessMechanism missing = MissingnessMechanisms.byId(MissingnessMechanisms.NONE);
@@ -174,6 +187,15 @@ public final class Simulation {
 
         public Builder model(ModelKind k, Map<String, ?> raw) {
             return model(k, k.resolve(raw));
+        }
+
+        /**
+         * A truth with every parameter fixed (as a model file gives it), instead of a family
+         * and kind or a network; it carries its own hidden variables and missingness.
+         */
+        public Builder fixed(TruthParameters parameters) {
+            this.fixed = Objects.requireNonNull(parameters, "parameters");
+            return this;
         }
 
         public Builder network(ReferenceNetwork n) {
@@ -208,6 +230,17 @@ public final class Simulation {
          *     given, or both were
          */
         public Simulation build() {
+            if (fixed != null) {
+                if (network != null || family != null || kind != null) {
+                    throw new IllegalStateException("a model file fixes the graph and the model: give no network,"
+                            + " graph family or model kind with it");
+                }
+                if (!hidden.id().equals(HiddenOptions.NONE) || !missing.id().equals(MissingnessMechanisms.NONE)) {
+                    throw new IllegalStateException("a model file carries its own hidden variables and missingness:"
+                            + " give no hidden option or missingness mechanism with it");
+                }
+                return new Simulation(this);
+            }
             if (network != null && (family != null || kind != null)) {
                 throw new IllegalStateException("give either a network or a graph family and model kind, not both");
             }

@@ -1,7 +1,9 @@
 package dev.touchstone.harness.study;
 
+import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.generators.Simulation;
+import dev.touchstone.generators.TruthParameters;
 import dev.touchstone.generators.graphs.GivenGraphFamily;
 import dev.touchstone.generators.graphs.GraphFamilies;
 import dev.touchstone.generators.graphs.GraphFamily;
@@ -14,6 +16,7 @@ import dev.touchstone.generators.models.ModelKinds;
 import dev.touchstone.generators.networks.ReferenceNetwork;
 import dev.touchstone.generators.networks.ReferenceNetworks;
 import dev.touchstone.harness.io.FileFormatException;
+import dev.touchstone.harness.io.ModelFile;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.harness.io.GraphFiles;
 
@@ -56,6 +59,10 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
     public static final String MODEL = "model";
     public static final String HIDDEN = "hidden";
     public static final String MISSING = "missing";
+    /** A model file written by {@code simulate}: a truth with every parameter fixed. */
+    public static final String MODEL_FILE = "model_file";
+    /** The one format of a model file. */
+    static final String MODEL_FILE_FORMAT = "json";
 
     /** The given graph family's parameter naming the file. */
     static final String GIVEN_FILE = "file";
@@ -86,7 +93,15 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
         for (MissingnessMechanism m : MissingnessMechanisms.all()) {
             missing.add(new Kind(m.id(), m.summary(), m.parameters()));
         }
+        Kind modelFile = new Kind(MODEL_FILE_FORMAT, "a model.json written by simulate (docs/formats.md): graph, hidden"
+                + " variables, every mechanism's parameters, missingness and tiers as written; each replicate draws"
+                + " new data from it; a relative path is read from the study file's folder",
+                List.of(ParameterSpec.text(GIVEN_FILE, "", "the model file")));
         sections = List.of(
+                new Section(MODEL_FILE, "format", null, MODEL_FILE_FORMAT, GIVEN_FILE,
+                        "A truth read from a model file, used instead of `graph`, `model`, `hidden` and `missing`"
+                                + " (a bare path is enough: `model_file: truths/model.json`).",
+                        List.of(modelFile), List.of(GRAPH, MODEL, HIDDEN, MISSING)),
                 new Section(NETWORK, "name", null, null, "name",
                         "A built-in reference network with its own graph and parameters, used instead of `graph` and"
                                 + " `model` (a bare name or list of names is enough: `network: sprinkler`).",
@@ -118,6 +133,15 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
 
     @Override
     public Object bind(String section, String kind, String parameter, Object value, Path baseDir) {
+        if (isModelFile(section, parameter)) {
+            String text = value.toString().trim();
+            if (text.isEmpty()) {
+                throw new IllegalArgumentException("model_file needs the path of a model file (model.json)");
+            }
+            Path file = baseDir.resolve(text).toAbsolutePath().normalize();
+            modelFile(file.toString());
+            return file.toString();
+        }
         if (!isGraphFile(section, kind, parameter)) {
             return value;
         }
@@ -132,6 +156,9 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
 
     @Override
     public String fingerprint(String section, String kind, ParameterValues values) {
+        if (section.equals(MODEL_FILE) && !values.get(GIVEN_FILE).toString().isBlank()) {
+            return modelFile(values.get(GIVEN_FILE).toString()).digest();
+        }
         if (!section.equals(GRAPH) || !kind.equals(GivenGraphFamily.ID)
                 || values.get(GIVEN_FILE).toString().isBlank()) {
             return ""; // no file: refused with a clear message by checkCombination
@@ -141,13 +168,70 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
 
     @Override
     public Set<String> locations(String section, String kind) {
-        return section.equals(GRAPH) && kind.equals(GivenGraphFamily.ID) ? Set.of(GIVEN_FILE) : Set.of();
+        return section.equals(GRAPH) && kind.equals(GivenGraphFamily.ID) || section.equals(MODEL_FILE)
+                ? Set.of(GIVEN_FILE) : Set.of();
+    }
+
+    private static boolean isModelFile(String section, String parameter) {
+        return section.equals(MODEL_FILE) && parameter.equals(GIVEN_FILE);
     }
 
     private static boolean isGraphFile(String section, String kind, String parameter) {
         return section.equals(GRAPH) && kind.equals(GivenGraphFamily.ID) && parameter.equals(GIVEN_FILE);
     }
 
+
+    /** A model file as read, with the digest of its bytes. */
+    private record GivenModel(TruthParameters parameters, String digest) {
+    }
+
+    /** Parsed model files by path and digest, as for graph files. */
+    private static final Map<String, GivenModel> MODELS = new ConcurrentHashMap<>();
+
+    /**
+     * The truth in a model file as it is now (parsed once per path and content).
+     *
+     * @throws IllegalArgumentException naming the file and what is wrong with it
+     */
+    private static GivenModel modelFile(String path) {
+        Path file = Path.of(path);
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new IllegalArgumentException(path + ": no such model file (check the path)");
+        } catch (IOException e) {
+            throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
+        }
+        String digest = digest(bytes);
+        GivenModel m = MODELS.get(path + "#" + digest);
+        if (m != null) {
+            return m;
+        }
+        try {
+            m = new GivenModel(ModelFile.read(file), digest);
+        } catch (IOException e) {
+            throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
+        } catch (FileFormatException e) {
+            throw new IllegalArgumentException(e.getMessage());
+        }
+        MODELS.putIfAbsent(path + "#" + digest, m);
+        return m;
+    }
+
+    /** The truth of a model-file choice, refusing a file that changed since the study was read. */
+    private static TruthParameters modelFile(TruthSetting.Choice c) {
+        String path = c.values().get(GIVEN_FILE).toString();
+        if (path.isBlank()) {
+            throw new IllegalArgumentException("model_file needs the path of a model file (model.json)");
+        }
+        GivenModel found = modelFile(path);
+        if (!c.fingerprint().isEmpty() && !found.digest().equals(c.fingerprint())) {
+            throw new IllegalStateException(path + ": the model file changed since the study was read; read the"
+                    + " study again");
+        }
+        return found.parameters();
+    }
 
     /** A graph file as read, with the digest of its bytes. */
     private record GivenGraph(GivenGraphFamily family, String digest) {
@@ -221,13 +305,16 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
 
     /** The generators' recipe for a truth setting. */
     public static Simulation simulation(TruthSetting t) {
+        TruthSetting.Choice f = t.choice(MODEL_FILE);
         TruthSetting.Choice n = t.choice(NETWORK);
         TruthSetting.Choice g = t.choice(GRAPH);
         TruthSetting.Choice m = t.choice(MODEL);
         TruthSetting.Choice h = t.choice(HIDDEN);
         TruthSetting.Choice x = t.choice(MISSING);
         Simulation.Builder b = Simulation.builder();
-        if (n != null) {
+        if (f != null) {
+            b.fixed(modelFile(f));
+        } else if (n != null) {
             b.network(ReferenceNetworks.byId(n.kind()));
         } else {
             GraphFamily family = g.kind().equals(GivenGraphFamily.ID) ? given(g) : GraphFamilies.byId(g.kind());

@@ -161,7 +161,7 @@ public final class StudyReader {
             TruthCatalog.Kind kind = section.kind(section.shorthandKind());
             ParameterSpec spec = kind.parameter(section.shorthand());
             Map<String, List<Object>> axes = new LinkedHashMap<>();
-            axes.put(spec.name(), axis(node, spec));
+            axes.put(spec.name(), bind(section, kind.name(), spec.name(), node, axis(node, spec), baseDir));
             return new ComponentSpec(section.name(), section.kindField(), kind.name(), axes);
         }
         Node kindNode = node.get(section.kindField());

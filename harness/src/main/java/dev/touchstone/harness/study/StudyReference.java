@@ -118,13 +118,13 @@ public final class StudyReference {
     }
 
     private static String replacedBy(TruthCatalog truth, String section) {
-        StringBuilder sb = new StringBuilder();
+        List<String> by = new java.util.ArrayList<>();
         for (TruthCatalog.Section other : truth.sections()) {
             if (other.replaces().contains(section)) {
-                sb.append(" unless `").append(other.name()).append("` is given");
+                by.add("`" + other.name() + "`");
             }
         }
-        return sb.toString();
+        return by.isEmpty() ? "" : " unless " + String.join(" or ", by) + " is given";
     }
 
     private static void parameters(StringBuilder sb, List<ParameterSpec> ps) {

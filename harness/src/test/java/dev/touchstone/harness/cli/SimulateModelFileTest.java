@@ -86,4 +86,60 @@ class SimulateModelFileTest {
         assertTrue(bad.err().contains("m.json, field 'model_file': missing"), bad.err());
         assertTrue(!Files.exists(tmp.resolve("x")), "nothing written for a bad model file");
     }
+
+    @Test
+    void aStudyReadsAModelFileAsItsTruth() throws IOException {
+        Path model = tmp.resolve("model");
+        CliTest.Result made = cli("simulate", "--model", "additive-nonlinear", "--set", "nodes=5", "--hidden", "1",
+                "--missing", "mcar", "--set", "rate=0.1", "--samples", "50", "--seed", "8", "--out", model.toString());
+        assertEquals(0, made.status(), made.err());
+        Path study = Files.writeString(tmp.resolve("fixed.yaml"), """
+                name: fixed-truth
+                seed: 5
+                replicates: 2
+                truth:
+                  model_file: model/model.json
+                samples: [200]
+                learners: [pc]
+                metrics: [shd]
+                """);
+        CliTest.Result checked = cli("check", study.toString());
+        assertEquals(0, checked.status(), checked.err());
+        Path out = tmp.resolve("replicates");
+        CliTest.Result r = cli("simulate", study.toString(), "--out", out.toString());
+        assertEquals(0, r.status(), r.err());
+        java.util.List<String> index = Files.readAllLines(out.resolve("replicates.csv"));
+        assertEquals(3, index.size(), String.join("\n", index));
+        int seedColumn = java.util.Arrays.asList(index.get(0).split(",")).indexOf("seed");
+        int folderColumn = 0;
+        Path[] folders = new Path[2];
+        for (int i = 0; i < 2; i++) {
+            String[] row = index.get(i + 1).split(",");
+            folders[i] = out.resolve(row[folderColumn]);
+            // every replicate has the model's own graph, hidden variable included
+            assertEquals(Files.readString(model.resolve("truth.json")), Files.readString(folders[i].resolve("truth.json")));
+            // and its data are those simulate --model draws with the replicate's seed
+            Path again = tmp.resolve("again" + i);
+            CliTest.Result a = cli("simulate", "--model", model.resolve("model.json").toString(), "--samples", "200",
+                    "--seed", row[seedColumn], "--out", again.toString());
+            assertEquals(0, a.status(), a.err());
+            assertEquals(Files.readString(again.resolve("data.csv")), Files.readString(folders[i].resolve("data.csv")));
+        }
+        assertNotEquals(Files.readString(folders[0].resolve("data.csv")), Files.readString(folders[1].resolve("data.csv")),
+                "each replicate draws new data from the fixed truth");
+        Path clash = Files.writeString(tmp.resolve("clash.yaml"), """
+                name: clash
+                seed: 5
+                replicates: 1
+                truth:
+                  model_file: model/model.json
+                  graph: {family: erdos-renyi, nodes: 4}
+                samples: [100]
+                learners: [pc]
+                metrics: [shd]
+                """);
+        CliTest.Result refused = cli("check", clash.toString());
+        assertEquals(2, refused.status(), refused.err());
+        assertTrue(refused.err().startsWith("error: ") && refused.err().contains("graph"), refused.err());
+    }
 }

@@ -162,7 +162,7 @@ class TruthSourcesTest {
                 Arguments.of("unknown network", "truth: {network: kitchen-garden}\n", "truth.network", 4,
                         new String[] {"unknown network name 'kitchen-garden'", "chest-clinic, sprinkler, community-garden"}),
                 Arguments.of("neither graph nor network", "truth: {model: {kind: linear-gaussian}}\n", "truth.graph", 4,
-                        new String[] {"required", "or give network instead"}),
+                        new String[] {"required", "or give model_file or network instead"}),
                 Arguments.of("network with a parameter", "truth: {network: {name: sprinkler, nodes: 5}}\n",
                         "truth.network.nodes", 4, new String[] {"unknown parameter 'nodes'", "allowed: none"}),
                 Arguments.of("missing graph file", "truth:\n  graph: {family: given, file: nowhere.json}\n"
