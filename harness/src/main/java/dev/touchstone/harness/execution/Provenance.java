@@ -44,6 +44,7 @@ public record Provenance(String tool, String commit, String studyName, String st
 
     public String json() {
         ObjectNode o = JSON.createObjectNode();
+        o.put("tables_schema", ResultTables.SCHEMA);
         ObjectNode tool = o.putObject("tool");
         tool.put("name", "touchstone");
         tool.put("version", this.tool);
