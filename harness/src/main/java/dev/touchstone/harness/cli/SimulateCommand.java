@@ -9,6 +9,8 @@ import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.algorithms.Cpdags;
 import dev.touchstone.generators.audit.SortabilityAudit;
 import dev.touchstone.harness.execution.Cells;
+import dev.touchstone.harness.execution.SeedCells;
+import dev.touchstone.harness.execution.SettingCells;
 import dev.touchstone.harness.execution.GeneratorSimulator;
 import dev.touchstone.harness.execution.Replicate;
 import dev.touchstone.harness.execution.StudyRunner;
@@ -162,13 +164,17 @@ final class SimulateCommand implements Callable<Integer> {
                 Replicate rep = GeneratorSimulator.replicate(truth, rows);
                 String name = String.format(Locale.ROOT, "t%d-r%d", t.index(), r);
                 write(out.resolve(name), truth, rep.data(), name, formats);
-                index.add(List.of(name, Integer.toString(t.index()), Integer.toString(r), Integer.toString(rows),
-                        Long.toString(seeds.replicateSeed()), t.label()));
+                List<String> row = new ArrayList<>(List.of(name, Integer.toString(t.index()), Integer.toString(r),
+                        Integer.toString(rows)));
+                row.addAll(SeedCells.cells(seeds.replicateSeed()));
+                row.add(t.label());
+                index.add(row);
                 written++;
             }
         }
-        AtomicFiles.writeString(out.resolve("replicates.csv"), Cells.csv(List.of("folder", "truth_setting",
-                "replicate", "rows", "seed", "setting"), index));
+        AtomicFiles.writeString(out.resolve("replicates.csv"), Cells.csv(List.of("folder",
+                SettingCells.TRUTH_SETTING, "replicate", "n_rows", "seed", SeedCells.HIGH, SeedCells.LOW, "setting"),
+                index));
         StringBuilder sizes = new StringBuilder();
         for (SampleSize n : plan.study().samples()) {
             sizes.append(sizes.length() == 0 ? "" : ", ").append(n.word());

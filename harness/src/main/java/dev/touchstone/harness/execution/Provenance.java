@@ -14,7 +14,8 @@ import java.util.Map;
 /**
  * Where results came from (Tribuo's habit, style.md): tool version and commit, Java, OS and
  * CPU, when the study started and ended, the study's name and hashes, the threads used and
- * how the runs ended. Written as {@code provenance.json} at the start and again at the end.
+ * how the runs ended, and the version of the CSV tables' layout ({@code tables_schema},
+ * {@link ResultTables#SCHEMA}). Written as {@code provenance.json} at the start and again at the end.
  *
  * @param tool        tool version
  * @param commit      the commit the tool was built from ("unknown" outside git)
@@ -44,6 +45,7 @@ public record Provenance(String tool, String commit, String studyName, String st
 
     public String json() {
         ObjectNode o = JSON.createObjectNode();
+        o.put("tables_schema", ResultTables.SCHEMA);
         ObjectNode tool = o.putObject("tool");
         tool.put("name", "touchstone");
         tool.put("version", this.tool);

@@ -202,7 +202,7 @@ public final class StudyRunner {
                 structural.add(m);
             }
         }
-        List<String> columns = layout.columns();
+        SettingCells columns = SettingCells.of(plan, layout);
         OutputFiles.write(out.resolve(RUNS_FILE), ResultTables.runs(columns, structural, ordered));
         long statsSeed = dev.touchstone.core.random.Seeds.derive(plan.study().seed(), "statistics");
         OutputFiles.write(out.resolve(SUMMARY_FILE), ResultTables.summary(columns,

@@ -22,6 +22,10 @@ import java.nio.file.StandardOpenOption;
  * recipe; common practice). A reader therefore sees the old file or the new one, never a
  * torn one. If writing fails, the temporary file is removed and the target is untouched.
  * Cost: one extra fsync of the file and one of the folder per write.
+ *
+ * <p>The temporary file is created with a plain {@code CREATE_NEW} open, so the file gets the
+ * permissions the user's umask gives any new file ({@code Files.createTempFile} would force
+ * owner-only access, 0600, on POSIX systems, and the rename would carry that over).
  */
 public final class AtomicFiles {
 
@@ -36,6 +40,8 @@ public final class AtomicFiles {
     public interface ByteBody {
         void writeTo(OutputStream out) throws IOException;
     }
+
+    private static final java.security.SecureRandom RANDOM = new java.security.SecureRandom();
 
     private AtomicFiles() {
     }
@@ -59,11 +65,13 @@ public final class AtomicFiles {
         Path absolute = target.toAbsolutePath();
         Path folder = absolute.getParent();
         Files.createDirectories(folder);
-        Path temp = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".partial");
+        Path temp = folder.resolve("." + absolute.getFileName() + "." + Long.toUnsignedString(RANDOM.nextLong(), 36)
+                + ".partial");
         boolean moved = false;
+        // CREATE_NEW fails if the name is taken, so a writer never writes into (or removes) a file it did not create.
+        FileChannel opened = FileChannel.open(temp, StandardOpenOption.WRITE, StandardOpenOption.CREATE_NEW);
         try {
-            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE,
-                    StandardOpenOption.TRUNCATE_EXISTING)) {
+            try (FileChannel channel = opened) {
                 // Closing the stream would close the channel before force(), so close only flushes.
                 BufferedOutputStream out = new BufferedOutputStream(Channels.newOutputStream(channel)) {
                     @Override

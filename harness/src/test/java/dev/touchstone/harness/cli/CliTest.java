@@ -174,7 +174,7 @@ class CliTest {
         }
         List<String> index = Files.readAllLines(out.resolve("replicates.csv"));
         assertEquals(9, index.size());
-        assertEquals("folder,truth_setting,replicate,rows,seed,setting", index.get(0));
+        assertEquals("folder,truth_setting,replicate,n_rows,seed,seed_high,seed_low,setting", index.get(0));
         assertTrue(index.get(1).startsWith("t0-r0,0,0,1000,"), index.get(1));
     }
 

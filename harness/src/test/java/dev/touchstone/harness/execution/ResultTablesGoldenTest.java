@@ -25,7 +25,10 @@ class ResultTablesGoldenTest {
 
     static final Setting SETTING = Setting.of("graph", "erdos-renyi", "model", "linear-gaussian", "nodes", "10",
             "samples", "100");
-    static final List<String> COLUMNS = List.of("graph", "model", "nodes", "samples");
+    static final Setting ORACLE = Setting.of("graph", "erdos-renyi", "model", "linear-gaussian", "nodes", "10",
+            "samples", "oracle");
+    static final SettingCells COLUMNS = new SettingCells(List.of("graph", "model", "nodes", "samples"),
+            Map.of(SETTING, 3, ORACLE, 4));
 
     static String golden(String name) throws IOException {
         try (var in = ResultTablesGoldenTest.class.getResourceAsStream("/golden/" + name)) {
@@ -47,7 +50,9 @@ class ResultTablesGoldenTest {
         none.put("shd", null);
         none.put("adjacency_f1", null);
         none.put("orientation_f1", null);
-        RunResult failed = new RunResult("fedcba9876543210", SETTING, 1, "mine", "my-method", Map.of(), 7L,
+        // 2^53 + 1: the first integer a double cannot hold, so seed_high and seed_low are needed to keep it.
+        RunResult failed = new RunResult("fedcba9876543210", ORACLE, 1, "mine", "my-method", Map.of("depth", "3"),
+                9_007_199_254_740_993L,
                 RunStatus.FAILED, "exited with status 3; it said: \"bad, very bad\"", null, null, none, Timings.NONE);
         String csv = ResultTables.runs(COLUMNS, List.of("shd", "adjacency_f1", "orientation_f1"),
                 List.of(new AbstractMap.SimpleEntry<>(0, ok), new AbstractMap.SimpleEntry<>(1, failed)));
@@ -59,7 +64,7 @@ class ResultTablesGoldenTest {
     void summaryAndComparisons() throws IOException {
         AggregateRow a = new AggregateRow(SETTING, "pc[alpha=0.01]", "pc", "shd", 9, 1, 0,
                 new Summary(9, 3.5, 1.25, 2.75, 4.25, 3.0, 2.0, 5.0));
-        AggregateRow b = new AggregateRow(SETTING, "mine", "my-method", "shd", 0, 10, 0, Summary.EMPTY);
+        AggregateRow b = new AggregateRow(ORACLE, "mine", "my-method", "shd", 0, 10, 0, Summary.EMPTY);
         assertEquals(golden("summary.csv"), ResultTables.summary(COLUMNS, List.of(a, b)));
         ComparisonRow c = new ComparisonRow(SETTING, "shd", "pc[alpha=0.01]", "mine", 8, -1.5, -2.5, -0.5, 0.0234,
                 0.0468, 6, 1, 1);

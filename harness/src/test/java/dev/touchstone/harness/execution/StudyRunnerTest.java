@@ -99,11 +99,18 @@ class StudyRunnerTest {
         String runs = Files.readString(out.resolve("runs.csv"));
         assertTrue(runs.contains("skipped,learner empty-test cannot use the oracle"), runs);
         // the oracle skeleton of a chain/star is the true skeleton: shd 0 at the oracle for skel
-        for (String line : runs.lines().toList()) {
-            if (line.contains(",oracle,") && line.contains(",skel,")) {
-                assertTrue(line.contains(",ok,"), line);
+        int oracleSkeletons = 0;
+        try (CSVParser p = CSVParser.parse(new StringReader(runs), CSVFormat.DEFAULT.builder().setHeader()
+                .setSkipHeaderRecord(true).get())) {
+            for (CSVRecord r : p) {
+                if (r.get("oracle").equals("true") && r.get("configuration").equals("skel")) {
+                    assertEquals("ok", r.get("status"), r.toString());
+                    assertEquals("", r.get("samples"), "the oracle has no sample size: " + r);
+                    oracleSkeletons++;
+                }
             }
         }
+        assertEquals(2 * 2 * 3, oracleSkeletons, "one oracle run of skel per replicate");
         assertTrue(Files.readString(out.resolve("provenance.json")).contains("\"finished\""));
         assertEquals(plan.runs().size(), Files.readAllLines(out.resolve("journal.jsonl")).size());
     }

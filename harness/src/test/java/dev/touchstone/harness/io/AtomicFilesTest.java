@@ -1,11 +1,16 @@
 package dev.touchstone.harness.io;
 
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
 import java.util.stream.Stream;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
@@ -51,5 +56,23 @@ class AtomicFilesTest {
             throw new IllegalStateException("bug");
         }));
         assertEquals(1, filesIn(dir), "an unchecked failure leaves nothing either");
+    }
+
+    @Test
+    @DisplayName("a written file gets the permissions the umask gives any new file, not owner-only 0600")
+    void honoursTheUmask() throws IOException {
+        Assumptions.assumeTrue(dir.getFileSystem().supportedFileAttributeViews().contains("posix"),
+                "permissions are POSIX-only");
+        // A file opened the ordinary way is the reference: the kernel applies the umask to it.
+        Path plain = dir.resolve("plain.txt");
+        Files.writeString(plain, "x");
+        Set<PosixFilePermission> expected = Files.getPosixFilePermissions(plain);
+        Path atomic = dir.resolve("atomic.txt");
+        AtomicFiles.writeString(atomic, "x");
+        assertEquals(PosixFilePermissions.toString(expected),
+                PosixFilePermissions.toString(Files.getPosixFilePermissions(atomic)));
+        AtomicFiles.writeString(atomic, "replaced");
+        assertEquals(PosixFilePermissions.toString(expected),
+                PosixFilePermissions.toString(Files.getPosixFilePermissions(atomic)), "after a replacement too");
     }
 }
