@@ -1,6 +1,5 @@
 package dev.touchstone.harness.io;
 
-import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -53,20 +52,7 @@ public final class GraphJson {
      * @throws FileFormatException naming the file and the edge or field at fault
      */
     public static Graph read(Path file, GraphClass expected) throws IOException {
-        JsonNode root;
-        try (JsonParser parser = MAPPER.createParser(InputFiles.reader(file))) {
-            root = MAPPER.readTree(parser);
-            if (root != null && parser.nextToken() != null) {
-                throw new FileFormatException(file, "line " + parser.currentTokenLocation().getLineNr() + ", column "
-                        + parser.currentTokenLocation().getColumnNr(),
-                        "unexpected content after the end of the JSON object (remove it)");
-            }
-        } catch (JsonParseException e) {
-            throw new FileFormatException(file, "line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr(), "not valid JSON: " + e.getOriginalMessage());
-        } catch (JsonProcessingException e) {
-            throw new FileFormatException(file, null, "not valid JSON: " + e.getOriginalMessage());
-        }
+        JsonNode root = JsonTrees.read(file, MAPPER);
         if (root == null || root.isMissingNode()) {
             throw new FileFormatException(file, null, "the file is empty (expected a JSON object with variables and edges)");
         }

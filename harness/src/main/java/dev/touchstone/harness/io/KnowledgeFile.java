@@ -77,7 +77,7 @@ public final class KnowledgeFile {
             String where = e.getLocation() == null ? null : "line " + e.getLocation().getLineNr() + ", column "
                     + e.getLocation().getColumnNr();
             throw new FileFormatException(file, where, "not valid " + (json ? "JSON" : "YAML") + ": "
-                    + e.getOriginalMessage());
+                    + JsonTrees.parserWords(e));
         }
     }
 

@@ -1,6 +1,5 @@
 package dev.touchstone.harness.io;
 
-import com.fasterxml.jackson.core.JsonParseException;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
@@ -235,15 +234,7 @@ public final class ModelFile {
      * @throws FileFormatException naming the file and the field at fault
      */
     public static TruthParameters read(Path file) throws IOException {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(InputFiles.reader(file));
-        } catch (JsonParseException e) {
-            throw new FileFormatException(file, "line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr(), "not valid JSON: " + e.getOriginalMessage());
-        } catch (JsonProcessingException e) {
-            throw new FileFormatException(file, null, "not valid JSON: " + e.getOriginalMessage());
-        }
+        JsonNode root = JsonTrees.read(file, MAPPER);
         if (root == null || !root.isObject()) {
             throw new FileFormatException(file, null, "expected a JSON object with the model's parameters");
         }
