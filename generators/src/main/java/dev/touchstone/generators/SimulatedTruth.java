@@ -40,6 +40,11 @@ public final class SimulatedTruth {
         this.dataSeed = dataSeed;
     }
 
+    /** The same truth drawing its data with another seed: nothing of the model is rebuilt. */
+    SimulatedTruth withDataSeed(long otherDataSeed) {
+        return new SimulatedTruth(seed, dag, knowledge, causalOrder, model, missingness, otherDataSeed);
+    }
+
     /** The replicate seed this truth was drawn from. */
     public long seed() {
         return seed;

@@ -42,6 +42,8 @@ public final class Simulation {
     private final ParameterValues modelValues;
     private final ReferenceNetwork network;
     private final TruthParameters fixed;
+    /** The truth {@link #fixed} describes, built once: replicates differ only in their data seed. */
+    private final SimulatedTruth fixedTruth;
     private final HiddenOption hidden;
     private final ParameterValues hiddenValues;
     private final MissingnessMechanism missing;
@@ -54,6 +56,7 @@ public final class Simulation {
         this.modelValues = b.modelValues;
         this.network = b.network;
         this.fixed = b.fixed;
+        this.fixedTruth = b.fixed == null ? null : b.fixed.truth();
         this.hidden = b.hidden;
         this.hiddenValues = b.hiddenValues;
         this.missing = b.missing;
@@ -87,10 +90,10 @@ public final class Simulation {
      * Deterministic in {@code replicateSeed}.
      */
     public SimulatedTruth drawTruth(long replicateSeed) {
-        if (fixed != null) {
+        if (fixedTruth != null) {
             // every parameter is given (graph, hidden flags, mechanisms, missingness, tiers):
             // a replicate draws only its own data
-            return fixed.truth(Seeds.derive(replicateSeed, "data"));
+            return fixedTruth.withDataSeed(Seeds.derive(replicateSeed, "data"));
         }
         Graph dag;
         Knowledge knowledge;
@@ -117,7 +120,8 @@ public final class Simulation {
                 Seeds.derive(replicateSeed, "data"));
     }
 
-    private static List<String> topologicalNames(Graph dag) {
+    /** The variables' names in a topological order of {@code dag}. */
+    static List<String> topologicalNames(Graph dag) {
         List<String> out = new ArrayList<>();
         for (int v : dev.touchstone.core.graph.algorithms.Ancestry.topologicalOrder(dag)) {
             out.add(dag.name(v));

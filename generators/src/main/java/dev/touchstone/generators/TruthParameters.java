@@ -46,10 +46,7 @@ public record TruthParameters(long seed, long dataSeed, ModelParameters model, L
         for (List<String> tier : tiers) {
             k.tier(tier);
         }
-        List<String> order = new ArrayList<>();
-        for (int v : dev.touchstone.core.graph.algorithms.Ancestry.topologicalOrder(dag)) {
-            order.add(dag.name(v));
-        }
+        List<String> order = Simulation.topologicalNames(dag);
         for (MissingnessDriver d : missingness) {
             if (dag.indexOf(d.variable()) < 0 || (d.driver() != null && dag.indexOf(d.driver()) < 0)) {
                 throw new IllegalArgumentException("missingness of '" + d.variable() + "': not a variable of the model"

@@ -64,7 +64,7 @@ final class BossSearch {
     /** The best order found over all starts. */
     int[] run() {
         UniformRandomProvider rng = context.random("boss starting orders");
-        pool = context.threads() > 1 && p >= 64 ? new ForkJoinPool(context.threads()) : null;
+        pool = context.threads() > 1 && p >= PoolLoop.MIN_PARALLEL ? new ForkJoinPool(context.threads()) : null;
         try {
             int[] best = null;
             double bestScore = Double.NEGATIVE_INFINITY;

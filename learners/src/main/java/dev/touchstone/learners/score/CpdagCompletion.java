@@ -33,11 +33,13 @@ final class CpdagCompletion implements GesSearch.Completion {
         if (dag == null) {
             throw new IllegalStateException("the PDAG after a GES move has no consistent extension");
         }
+        return Pdag.of(classOf(dag, knowledge));
+    }
+
+    /** The CPDAG of {@code dag}, with the orientations knowledge demands closed under Meek's rules. */
+    static Graph classOf(Graph dag, Knowledge knowledge) {
         Graph cpdag = Cpdags.of(dag);
-        if (!knowledge.isEmpty()) {
-            cpdag = MeekRules.apply(cpdag, knowledge);
-        }
-        return Pdag.of(cpdag);
+        return knowledge.isEmpty() ? cpdag : MeekRules.apply(cpdag, knowledge);
     }
 
     @Override

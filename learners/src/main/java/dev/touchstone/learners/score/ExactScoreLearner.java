@@ -3,8 +3,6 @@ package dev.touchstone.learners.score;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.graph.algorithms.Cpdags;
-import dev.touchstone.core.graph.algorithms.MeekRules;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.Learner;
@@ -122,7 +120,6 @@ public final class ExactScoreLearner implements Learner {
 
     /** The CPDAG of the DAG, with the orientations knowledge demands closed under Meek's rules (as GES returns). */
     private static Graph classOf(int[] parents, List<String> names, Knowledge knowledge) {
-        Graph cpdag = Cpdags.of(dagOf(parents, names));
-        return knowledge.isEmpty() ? cpdag : MeekRules.apply(cpdag, knowledge);
+        return CpdagCompletion.classOf(dagOf(parents, names), knowledge);
     }
 }

@@ -142,17 +142,12 @@ final class GesSearch {
         }
         graph = completion.complete(start);
         context.checkDeadline();
-        pool = context.threads() > 1 ? new ForkJoinPool(context.threads()) : null;
-        try {
+        withPool(() -> {
             phases();
             if (variants.perturbedStarts() > 0) {
                 perturbedStarts();
             }
-        } finally {
-            if (pool != null) {
-                pool.shutdownNow();
-            }
-        }
+        });
         return graph;
     }
 
@@ -164,14 +159,7 @@ final class GesSearch {
     Pdag backwardFrom(Pdag start) {
         graph = completion.complete(start);
         context.checkDeadline();
-        pool = context.threads() > 1 ? new ForkJoinPool(context.threads()) : null;
-        try {
-            backward();
-        } finally {
-            if (pool != null) {
-                pool.shutdownNow();
-            }
-        }
+        withPool(this::backward);
         return graph;
     }
 
@@ -818,6 +806,7 @@ final class GesSearch {
      * orientations the completion adds after the move).
      */
     private void turning() {
+        Double current = null; // the class score of graph, computed when first needed and kept after each turn
         while (true) {
             context.checkDeadline();
             List<Candidate> improving = new ArrayList<>();
@@ -837,13 +826,17 @@ final class GesSearch {
                 }
             }
             improving.sort(BEST_FIRST.thenComparing(c -> Arrays.toString(c.set)));
-            double current = improving.isEmpty() ? 0 : classScore(graph);
+            if (!improving.isEmpty() && current == null) {
+                current = classScore(graph);
+            }
             boolean moved = false;
             for (Candidate c : improving) {
                 context.checkDeadline();
                 Pdag next = afterTurn(c);
-                if (next != null && higher(classScore(next), current)) {
+                double reached = next == null ? Double.NEGATIVE_INFINITY : classScore(next);
+                if (next != null && higher(reached, current)) {
                     graph = next;
+                    current = reached;
                     turningMoves++;
                     moved = true;
                     break;
@@ -992,8 +985,20 @@ final class GesSearch {
 
     // ---------------------------------------------------------------- threads
 
+    /** Runs {@code search} with this run's threads, releasing them afterwards. */
+    private void withPool(Runnable search) {
+        pool = context.threads() > 1 ? new ForkJoinPool(context.threads()) : null;
+        try {
+            search.run();
+        } finally {
+            if (pool != null) {
+                pool.shutdownNow();
+            }
+        }
+    }
+
     private void parallel(int count, IntConsumer body) {
-        PoolLoop.run(count < 64 ? null : pool, count, body);
+        PoolLoop.run(pool, count, body);
     }
 
 

@@ -63,13 +63,8 @@ final class GrowShrinkTree {
         for (int r : base) {
             this.admissible[r] = false;
         }
-        this.root = new Node(base, score.localScore(y, base), base.length);
+        this.root = new Node(base, score.localScore(y, base));
         this.nodes = 1;
-    }
-
-    /** The variable whose parents this tree finds. */
-    int variable() {
-        return y;
     }
 
     /** Nodes created so far (for the cost figures). */
@@ -173,24 +168,22 @@ final class GrowShrinkTree {
         /** The grown set, sorted. */
         final int[] parents;
         final double score;
-        final int depth;
         /** Additions that raise the score, best first (ties: smaller variable first); null until expanded. */
         int[] childVars;
         double[] childScores;
         Node[] children;
         Result shrunk;
 
-        Node(int[] parents, double score, int depth) {
+        Node(int[] parents, double score) {
             this.parents = parents;
             this.score = score;
-            this.depth = depth;
         }
 
         void expand() {
             if (childVars != null) {
                 return;
             }
-            if (depth >= maxParents) {
+            if (parents.length >= maxParents) {
                 childVars = new int[0];
                 childScores = new double[0];
                 children = new Node[0];
@@ -236,7 +229,7 @@ final class GrowShrinkTree {
                 int[] grown = Arrays.copyOf(parents, parents.length + 1);
                 grown[parents.length] = childVars[i];
                 Arrays.sort(grown);
-                children[i] = new Node(grown, childScores[i], depth + 1);
+                children[i] = new Node(grown, childScores[i]);
                 nodes++;
             }
             return children[i];

@@ -61,10 +61,6 @@ final class OrderScorer {
         return p;
     }
 
-    LocalScore localScore() {
-        return score;
-    }
-
     GrowShrinkTree tree(int v) {
         return trees[v];
     }

@@ -10,15 +10,19 @@ import java.util.stream.IntStream;
 /**
  * The parallel loop of the score searches: items 0 … count−1 on the search's own pool (so a
  * run uses the threads it was given, not the common pool), or on the caller's thread when
- * there is no pool. A failure in a worker, such as a passed deadline, is rethrown as it was.
+ * there is no pool or too few items to repay handing them out. A failure in a worker, such as
+ * a passed deadline, is rethrown as it was.
  */
 final class PoolLoop {
+
+    /** Fewer items than this run on the caller's thread. */
+    static final int MIN_PARALLEL = 64;
 
     private PoolLoop() {
     }
 
     static void run(ForkJoinPool pool, int count, IntConsumer body) {
-        if (pool == null) {
+        if (pool == null || count < MIN_PARALLEL) {
             for (int i = 0; i < count; i++) {
                 body.accept(i);
             }

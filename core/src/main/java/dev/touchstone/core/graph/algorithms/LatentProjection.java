@@ -43,7 +43,7 @@ public final class LatentProjection {
      */
     public static Graph mag(Graph dag) {
         requireDag(dag);
-        if (dag.observedIndices().length == dag.size()) {
+        if (!dag.hasHidden()) {
             // With nothing hidden every inner vertex of an inducing path is a collider. Two
             // colliders cannot be adjacent in a DAG (their edge would need two arrowheads), so
             // the path is a → c ← b, and c, an ancestor of a or b, would close a directed
