@@ -62,14 +62,6 @@ final class ConstraintParameters {
         return b.build();
     }
 
-    /**
-     * The test the values name, the kernel tests' randomness drawn from seed 0 (the same in every
-     * run); learners with a {@code RunContext} should pass a seed derived from it instead.
-     */
-    static IndependenceTest test(LearnerInput input, ParameterValues values) {
-        return test(input, values, 0L);
-    }
-
     /** The test the values name; the kernel tests draw their randomness from {@code seed}. */
     static IndependenceTest test(LearnerInput input, ParameterValues values, long seed) {
         return IndependenceTests.forInput(input, values, seed);

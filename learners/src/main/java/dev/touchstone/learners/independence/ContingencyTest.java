@@ -67,6 +67,11 @@ public final class ContingencyTest implements IndependenceTest {
             return word;
         }
 
+        /** The words of every rule, in declaration order. */
+        public static java.util.List<String> words() {
+            return java.util.Arrays.stream(values()).map(DegreesOfFreedom::word).toList();
+        }
+
         /** The rule named by {@code word}. */
         public static DegreesOfFreedom parse(String word) {
             for (DegreesOfFreedom d : values()) {
@@ -74,7 +79,8 @@ public final class ContingencyTest implements IndependenceTest {
                     return d;
                 }
             }
-            throw new IllegalArgumentException("unknown degrees-of-freedom rule '" + word + "' (allowed: reduced, textbook)");
+            throw new IllegalArgumentException("unknown degrees-of-freedom rule '" + word + "' (allowed: "
+                    + String.join(", ", words()) + ")");
         }
     }
 

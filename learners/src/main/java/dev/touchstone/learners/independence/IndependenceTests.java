@@ -44,8 +44,7 @@ public final class IndependenceTests {
 
     /** The {@code degrees_of_freedom} parameter of the G² and χ² tests. */
     public static final ParameterSpec DEGREES_OF_FREEDOM = ParameterSpec.choice("degrees_of_freedom",
-            ContingencyTest.DegreesOfFreedom.REDUCED.word(), List.of(ContingencyTest.DegreesOfFreedom.REDUCED.word(),
-                    ContingencyTest.DegreesOfFreedom.TEXTBOOK.word()),
+            ContingencyTest.DegreesOfFreedom.REDUCED.word(), ContingencyTest.DegreesOfFreedom.words(),
             "degrees of freedom of g-square and chi-square: reduced counts only the non-empty rows and columns of each "
                     + "stratum with data (common practice); textbook is (|X|-1)(|Y|-1) times the number of configurations "
                     + "of the conditioning set (Agresti 2002)");

@@ -181,8 +181,8 @@ public final class KciTest implements IndependenceTest {
         double offDiagonal = 0;
         double meanSum = 0;
         for (int s = 0; s < n; s++) {
-            double kx = dot(rx, s * cx, rx, s * cx, cx);
-            double ky = dot(ry, s * cy, ry, s * cy, cy);
+            double kx = KernelAlgebra.dot(rx, s * cx, rx, s * cx, cx);
+            double ky = KernelAlgebra.dot(ry, s * cy, ry, s * cy, cy);
             meanSum += kx * ky;
             diagonal += kx * kx * ky * ky;
             offDiagonal += squaredProducts(rx, ry, cx, cy, s, n);
@@ -233,29 +233,10 @@ public final class KciTest implements IndependenceTest {
             total += (e0 * e0 + e1 * e1) + (e2 * e2 + e3 * e3);
         }
         for (; u < n; u++) {
-            double e = dot(rx, s * cx, rx, u * cx, cx) * dot(ry, s * cy, ry, u * cy, cy);
+            double e = KernelAlgebra.dot(rx, s * cx, rx, u * cx, cx) * KernelAlgebra.dot(ry, s * cy, ry, u * cy, cy);
             total += e * e;
         }
         return total;
-    }
-
-    /** A dot product of two stretches of row-major arrays, with four partial sums (see {@link KernelAlgebra#dot}). */
-    private static double dot(double[] a, int offA, double[] b, int offB, int len) {
-        double s0 = 0;
-        double s1 = 0;
-        double s2 = 0;
-        double s3 = 0;
-        int k = 0;
-        for (; k + 3 < len; k += 4) {
-            s0 += a[offA + k] * b[offB + k];
-            s1 += a[offA + k + 1] * b[offB + k + 1];
-            s2 += a[offA + k + 2] * b[offB + k + 2];
-            s3 += a[offA + k + 3] * b[offB + k + 3];
-        }
-        for (; k < len; k++) {
-            s0 += a[offA + k] * b[offB + k];
-        }
-        return (s0 + s1) + (s2 + s3);
     }
 
     private static double[] rowMajor(double[][] cols, int n) {

@@ -292,20 +292,24 @@ public final class KernelAlgebra {
      * which makes the products of the kernel tests several times faster.
      */
     static double dot(double[] a, double[] b) {
-        int n = a.length;
+        return dot(a, 0, b, 0, a.length);
+    }
+
+    /** The dot product of two stretches of arrays (row-major blocks), summed as {@link #dot(double[], double[])}. */
+    static double dot(double[] a, int offA, double[] b, int offB, int len) {
         double s0 = 0;
         double s1 = 0;
         double s2 = 0;
         double s3 = 0;
         int k = 0;
-        for (; k + 3 < n; k += 4) {
-            s0 += a[k] * b[k];
-            s1 += a[k + 1] * b[k + 1];
-            s2 += a[k + 2] * b[k + 2];
-            s3 += a[k + 3] * b[k + 3];
+        for (; k + 3 < len; k += 4) {
+            s0 += a[offA + k] * b[offB + k];
+            s1 += a[offA + k + 1] * b[offB + k + 1];
+            s2 += a[offA + k + 2] * b[offB + k + 2];
+            s3 += a[offA + k + 3] * b[offB + k + 3];
         }
-        for (; k < n; k++) {
-            s0 += a[k] * b[k];
+        for (; k < len; k++) {
+            s0 += a[offA + k] * b[offB + k];
         }
         return (s0 + s1) + (s2 + s3);
     }
