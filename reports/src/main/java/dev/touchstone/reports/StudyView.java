@@ -30,6 +30,9 @@ final class StudyView {
     private final Map<String, String> learnerOf = new LinkedHashMap<>();
     private final Map<String, Map<String, String>> parametersOf = new LinkedHashMap<>();
     private final Map<String, Map<String, Summary>> pooled = new LinkedHashMap<>();
+    /** Computed once: every chart, table and label asks for them, and the runs do not change. */
+    private final List<Setting> settings;
+    private final Set<String> constantCoordinates;
 
     StudyView(ReportData data) {
         this.data = data;
@@ -41,6 +44,8 @@ final class StudyView {
             learnerOf.putIfAbsent(a.configurationId(), a.learnerId());
         }
         pooled.putAll(pool(r -> true));
+        settings = List.copyOf(distinctSettings(data));
+        constantCoordinates = java.util.Collections.unmodifiableSet(constantOver(settings));
     }
 
     /** Each configuration's summary of each metric over the ok runs that pass {@code in}. */
@@ -87,6 +92,10 @@ final class StudyView {
 
     /** The distinct settings, in first-appearance order. */
     List<Setting> settings() {
+        return new ArrayList<>(settings);
+    }
+
+    private static Set<Setting> distinctSettings(ReportData data) {
         Set<Setting> s = new LinkedHashSet<>();
         for (RunResult r : data.runs()) {
             s.add(r.setting());
@@ -94,13 +103,17 @@ final class StudyView {
         for (AggregateRow a : data.summary()) {
             s.add(a.setting());
         }
-        return new ArrayList<>(s);
+        return s;
     }
 
     /** Coordinates with one value over all settings (left out of chart titles; listed under Settings). */
     Set<String> constantCoordinates() {
+        return constantCoordinates;
+    }
+
+    private static Set<String> constantOver(List<Setting> settings) {
         Map<String, Set<String>> values = new LinkedHashMap<>();
-        for (Setting s : settings()) {
+        for (Setting s : settings) {
             s.coordinates().forEach((k, v) -> values.computeIfAbsent(k, x -> new LinkedHashSet<>()).add(v));
         }
         Set<String> out = new LinkedHashSet<>();

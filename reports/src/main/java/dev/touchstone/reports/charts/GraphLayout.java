@@ -89,13 +89,16 @@ public final class GraphLayout {
         }
         barycentre(truth, byLayer);
         GraphLayout best = null;
+        int bestConflicts = Integer.MAX_VALUE;
         // Wider spacing gives the repair room; the first spacing that leaves every edge clear is kept.
         for (double spread : new double[] {1, 1.3, 1.7, 2.2, 3}) {
             GraphLayout l = place(truth, byLayer, spread);
-            if (best == null || l.conflicts(truth) < best.conflicts(truth)) {
+            int c = l.conflicts(truth);
+            if (best == null || c < bestConflicts) {
                 best = l;
+                bestConflicts = c;
             }
-            if (best.conflicts(truth) == 0) {
+            if (bestConflicts == 0) {
                 break;
             }
         }
@@ -128,8 +131,9 @@ public final class GraphLayout {
     /** Node–edge pairs closer than {@link #CLEARANCE}, plus node pairs that overlap. */
     int conflicts(Graph g) {
         int count = 0;
+        List<Edge> edges = g.edges();
         for (int w = 0; w < x.length; w++) {
-            for (Edge e : g.edges()) {
+            for (Edge e : edges) {
                 if (e.a() != w && e.b() != w && distanceToSegment(x[w], y[w], x[e.a()], y[e.a()], x[e.b()],
                         y[e.b()]) < CLEARANCE) {
                     count++;
