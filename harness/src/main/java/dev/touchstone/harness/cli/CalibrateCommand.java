@@ -101,7 +101,7 @@ final class CalibrateCommand implements Callable<Integer> {
     SeedOption seed;
 
     @Mixin
-    LearnerSources sources;
+    LearnerSourceOptions sources;
 
     @Option(names = "--seconds", paramLabel = "S", description = "Time limit per run (default: 60).")
     double seconds = 60;

@@ -24,7 +24,7 @@ final class CheckCommand implements Callable<Integer> {
     Path study;
 
     @Mixin
-    LearnerSources sources;
+    LearnerSourceOptions sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

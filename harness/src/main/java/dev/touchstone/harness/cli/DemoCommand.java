@@ -56,7 +56,7 @@ final class DemoCommand implements Callable<Integer> {
         Toolkit kit = new Toolkit(null, null).acceptVersionChange(acceptVersionChange);
         Path file = study != null ? study : bundledStudy();
         Plan plan = kit.plan(kit.readStudy(file));
-        StudyRunner.Outcome o = kit.run(plan, out, threads.threads, quiet, err);
+        StudyRunner.Outcome o = kit.run(plan, out, threads.value(), quiet, err);
         ReportData data = kit.reportData(plan, out);
         Path html = dev.touchstone.harness.report.StudyReports.write(out, data);
         w.printf(Locale.ROOT, "demo study '%s': %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped)%n%n",

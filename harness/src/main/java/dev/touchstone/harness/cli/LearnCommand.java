@@ -68,7 +68,7 @@ final class LearnCommand implements Callable<Integer> {
     Double seconds;
 
     @Mixin
-    LearnerSources sources;
+    LearnerSourceOptions sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

@@ -28,7 +28,7 @@ final class LearnersCommand implements Callable<Integer> {
     boolean json;
 
     @Mixin
-    LearnerSources sources;
+    LearnerSourceOptions sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

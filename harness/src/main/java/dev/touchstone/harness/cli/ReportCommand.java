@@ -28,7 +28,7 @@ final class ReportCommand implements Callable<Integer> {
     Path to;
 
     @Mixin
-    LearnerSources sources;
+    LearnerSourceOptions sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

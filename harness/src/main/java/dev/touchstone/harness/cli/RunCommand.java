@@ -30,7 +30,7 @@ final class RunCommand implements Callable<Integer> {
     ThreadsOption threads;
 
     @Mixin
-    LearnerSources sources;
+    LearnerSourceOptions sources;
 
     @Option(names = "--engine", paramLabel = "NAME", description = "Where runs are performed: local (default) or"
             + " spark (needs the spark module; see docs/spark.md).")
@@ -58,7 +58,7 @@ final class RunCommand implements Callable<Integer> {
         Toolkit kit = sources.toolkit().acceptVersionChange(acceptVersionChange);
         Plan plan = kit.plan(kit.readStudy(study));
         Path folder = this.out != null ? this.out : Path.of(plan.study().name() + "-results");
-        StudyRunner.Outcome o = kit.run(plan, folder, threads.threads, quiet, err, engine(plan));
+        StudyRunner.Outcome o = kit.run(plan, folder, threads.value(), quiet, err, engine(plan));
         out.printf(Locale.ROOT, "done: %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped; %,d done now);"
                         + " results in %s%n", o.total(), o.count(RunStatus.OK), o.count(RunStatus.FAILED),
                 o.count(RunStatus.TIMEOUT), o.count(RunStatus.SKIPPED), o.performed(), folder);

@@ -127,7 +127,7 @@ final class SimulateCommand implements Callable<Integer> {
     List<String> graphFormats = List.of();
 
     @Mixin
-    LearnerSources sources;
+    LearnerSourceOptions sources;
 
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;

@@ -14,13 +14,8 @@ final class ThreadsOption {
     int value() {
         int n = threads == null ? LocalExecutor.defaultThreads() : threads;
         if (n < 1) {
-            throw new UsageException("--threads: " + n + " is not a positive number of threads");
+            throw new UsageException("--threads must be at least 1, got " + n);
         }
         return n;
-    }
-
-    /** Whether {@code --threads} was given. */
-    boolean given() {
-        return threads != null;
     }
 }

@@ -4,7 +4,6 @@ import dev.touchstone.harness.catalog.LearnerCatalog;
 import dev.touchstone.harness.execution.GeneratorSimulator;
 import dev.touchstone.harness.execution.Engine;
 import dev.touchstone.harness.execution.Journal;
-import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.MetricsAggregator;
 import dev.touchstone.harness.execution.MetricsScorer;
 import dev.touchstone.harness.execution.Progress;
@@ -101,12 +100,12 @@ final class Toolkit {
     }
 
     /**
-     * Runs (or resumes) a plan into {@code folder} with {@code threads} workers (null: all
-     * cores), showing progress on {@code err} unless {@code quiet}: live on a terminal,
+     * Runs (or resumes) a plan into {@code folder} with {@code threads} workers (see
+     * {@link ThreadsOption#value()}), showing progress on {@code err} unless {@code quiet}: live on a terminal,
      * plain periodic lines otherwise. Bad thread counts and unusable folders or journals are
      * bad input (exit 2).
      */
-    StudyRunner.Outcome run(Plan plan, Path folder, Integer threads, boolean quiet, PrintWriter err) {
+    StudyRunner.Outcome run(Plan plan, Path folder, int threads, boolean quiet, PrintWriter err) {
         return run(plan, folder, threads, quiet, err, Engine.LOCAL);
     }
 
@@ -116,12 +115,8 @@ final class Toolkit {
         return quiet ? Progress.quiet() : Progress.lines(err, terminal, terminal ? 0.2 : 5.0);
     }
 
-    /** As {@link #run(Plan, Path, Integer, boolean, PrintWriter)}, on the given engine. */
-    StudyRunner.Outcome run(Plan plan, Path folder, Integer threads, boolean quiet, PrintWriter err, Engine engine) {
-        int n = threads == null ? LocalExecutor.defaultThreads() : threads;
-        if (n < 1) {
-            throw new UsageException("--threads must be at least 1, got " + n);
-        }
+    /** As {@link #run(Plan, Path, int, boolean, PrintWriter)}, on the given engine. */
+    StudyRunner.Outcome run(Plan plan, Path folder, int n, boolean quiet, PrintWriter err, Engine engine) {
         Progress progress = progress(quiet, err);
         try {
             return runner().on(engine).keeping(dev.touchstone.harness.execution.RunRecipe.of(plan, learnersFile,

@@ -37,11 +37,6 @@ public final class JournalCodec {
         public Line(int run, String coordinates, RunResult result) {
             this(run, coordinates, result, null);
         }
-
-        /** The same line with these versions. */
-        public Line stamped(RunVersions.Stamp stamp) {
-            return new Line(run, coordinates, result, stamp);
-        }
     }
 
     /** The line's JSON text, without the newline. Streams with a generator (no tree): a few microseconds per line. */

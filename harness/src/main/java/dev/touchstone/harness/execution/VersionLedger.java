@@ -20,10 +20,9 @@ import java.util.Set;
  *                    (e.g. {@code tool 0.1.0 → 0.2.0}), in plan order, without repeats
  * @param byVersion   runs of the plan by the versions they have (kept: recorded; others: this
  *                    session's), keyed by a phrase such as {@code tool 0.2.0, learner pc 0.2.0}
- * @param unrecorded  kept runs whose lines record no versions
  * @param mixed       whether some learner's runs were made with more than one set of versions
  */
-public record VersionLedger(List<String> changes, Map<String, Integer> byVersion, int unrecorded, boolean mixed) {
+public record VersionLedger(List<String> changes, Map<String, Integer> byVersion, boolean mixed) {
 
     public VersionLedger {
         changes = List.copyOf(changes);
@@ -34,7 +33,6 @@ public record VersionLedger(List<String> changes, Map<String, Integer> byVersion
     public static VersionLedger of(Plan plan, Map<String, JournalCodec.Line> existing, RunVersions now) {
         Set<String> changes = new LinkedHashSet<>();
         Map<String, Integer> byVersion = new LinkedHashMap<>();
-        int unrecorded = 0;
         Map<String, Set<RunVersions.Stamp>> stampsByLearner = new LinkedHashMap<>();
         for (RunDefinition r : plan.runs()) {
             String learner = r.config().learner().description().id();
@@ -42,7 +40,6 @@ public record VersionLedger(List<String> changes, Map<String, Integer> byVersion
             JournalCodec.Line done = existing.get(r.key());
             RunVersions.Stamp had = done == null ? current : done.versions();
             if (had == null) {
-                unrecorded++;
                 byVersion.merge("not recorded", 1, Integer::sum);
                 continue;
             }
@@ -60,7 +57,7 @@ public record VersionLedger(List<String> changes, Map<String, Integer> byVersion
             }
         }
         boolean mixed = stampsByLearner.values().stream().anyMatch(v -> v.size() > 1);
-        return new VersionLedger(new ArrayList<>(changes), byVersion, unrecorded, mixed);
+        return new VersionLedger(new ArrayList<>(changes), byVersion, mixed);
     }
 
     /** The one line a refused resume says. */

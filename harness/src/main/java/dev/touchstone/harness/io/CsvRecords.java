@@ -154,7 +154,7 @@ final class CsvRecords implements Closeable {
         if ((flags[k] & ESCAPED) != 0) {
             t = t.replace("\"\"", "\"");
         }
-        return (flags[k] & QUOTED) != 0 ? t : strip(t);
+        return (flags[k] & QUOTED) != 0 ? t : t.strip();
     }
 
     private String decode(int s, int e) {
@@ -172,18 +172,6 @@ final class CsvRecords implements Closeable {
         decoder.flush(out);
         out.flip();
         return out.toString();
-    }
-
-    private static String strip(String t) {
-        int a = 0;
-        int b = t.length();
-        while (a < b && Character.isWhitespace(t.charAt(a))) {
-            a++;
-        }
-        while (b > a && Character.isWhitespace(t.charAt(b - 1))) {
-            b--;
-        }
-        return a == 0 && b == t.length() ? t : t.substring(a, b);
     }
 
     /** White space that Commons CSV drops around a cell, among the bytes below 128 (not CR or LF). */

@@ -181,93 +181,44 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
     }
 
 
-    /** A model file as read, with the digest of its bytes. */
-    private record GivenModel(TruthParameters parameters, String digest) {
+    /** A file as parsed, with the digest of its bytes. */
+    private record ReadFile<T>(T value, String digest) {
     }
 
-    /** Parsed model files by path and digest, as for graph files. */
-    private static final Map<String, GivenModel> MODELS = new ConcurrentHashMap<>();
+    /** How a kind of file named in a study is parsed into what the truth needs. */
+    @FunctionalInterface
+    private interface FileParser<T> {
+        T parse(Path file) throws IOException;
+    }
+
+    /** Parsed graph and model files by path and digest: a file edited while the tool runs is read again. */
+    private static final Map<String, ReadFile<GivenGraphFamily>> GIVEN = new ConcurrentHashMap<>();
+    private static final Map<String, ReadFile<TruthParameters>> MODELS = new ConcurrentHashMap<>();
 
     /**
-     * The truth in a model file as it is now (parsed once per path and content).
+     * The file's content as it is now, parsed once per path and content.
      *
+     * @param noun what the file is in messages ("graph", "model")
      * @throws IllegalArgumentException naming the file and what is wrong with it
      */
-    private static GivenModel modelFile(String path) {
+    private static <T> ReadFile<T> read(String path, String noun, Map<String, ReadFile<T>> cache,
+                                        FileParser<T> parser) {
         Path file = Path.of(path);
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(file);
         } catch (NoSuchFileException e) {
-            throw new IllegalArgumentException(path + ": no such model file (check the path)");
+            throw new IllegalArgumentException(path + ": no such " + noun + " file (check the path)");
         } catch (IOException e) {
             throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
         }
         String digest = digest(bytes);
-        GivenModel m = MODELS.get(path + "#" + digest);
-        if (m != null) {
-            return m;
+        ReadFile<T> found = cache.get(path + "#" + digest);
+        if (found != null) {
+            return found;
         }
         try {
-            m = new GivenModel(ModelFile.read(file), digest);
-        } catch (IOException e) {
-            throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
-        } catch (FileFormatException e) {
-            throw new IllegalArgumentException(e.getMessage());
-        }
-        MODELS.putIfAbsent(path + "#" + digest, m);
-        return m;
-    }
-
-    /** The truth of a model-file choice, refusing a file that changed since the study was read. */
-    private static TruthParameters modelFile(TruthSetting.Choice c) {
-        String path = c.values().get(GIVEN_FILE).toString();
-        if (path.isBlank()) {
-            throw new IllegalArgumentException("model_file needs the path of a model file (model.json)");
-        }
-        GivenModel found = modelFile(path);
-        if (!c.fingerprint().isEmpty() && !found.digest().equals(c.fingerprint())) {
-            throw new IllegalStateException(path + ": the model file changed since the study was read; read the"
-                    + " study again");
-        }
-        return found.parameters();
-    }
-
-    /** A graph file as read, with the digest of its bytes. */
-    private record GivenGraph(GivenGraphFamily family, String digest) {
-    }
-
-    /** Parsed graph files by path and digest: a file edited while the tool runs is read again. */
-    private static final Map<String, GivenGraph> GIVEN = new ConcurrentHashMap<>();
-
-    /**
-     * The DAG in a graph file as it is now (parsed once per path and content).
-     *
-     * @throws IllegalArgumentException naming the file and what is wrong with it
-     */
-    private static GivenGraph given(String path) {
-        Path file = Path.of(path);
-        byte[] bytes;
-        try {
-            bytes = Files.readAllBytes(file);
-        } catch (NoSuchFileException e) {
-            throw new IllegalArgumentException(path + ": no such graph file (check the path)");
-        } catch (IOException e) {
-            throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
-        }
-        String digest = digest(bytes);
-        GivenGraph g = GIVEN.get(path + "#" + digest);
-        if (g != null) {
-            return g;
-        }
-        try {
-            Graph dag = GraphFiles.read(file, null);
-            if (dag.observedIndices().length == 0) {
-                throw new IllegalArgumentException(dag.size() == 0 ? "the graph has no variables; list at least one"
-                        : "every variable of the graph is hidden, so there would be no data; leave at least one"
-                        + " variable out of 'hidden'");
-            }
-            g = new GivenGraph(GivenGraphFamily.of(dag), digest);
+            found = new ReadFile<>(parser.parse(file), digest);
         } catch (IOException e) {
             throw new IllegalArgumentException(path + ": cannot be read: " + e.getMessage());
         } catch (FileFormatException e) {
@@ -275,23 +226,56 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException(path + ": " + e.getMessage());
         }
-        GIVEN.putIfAbsent(path + "#" + digest, g);
-        return g;
+        cache.putIfAbsent(path + "#" + digest, found);
+        return found;
     }
 
-    /** The graph of a given-graph choice, refusing a file that changed since the study was read. */
+    /** The content of the file a choice names, refusing a file that changed since the study was read. */
+    private static <T> T current(TruthSetting.Choice c, String noun, Map<String, ReadFile<T>> cache,
+                                 FileParser<T> parser) {
+        String path = c.values().get(GIVEN_FILE).toString();
+        ReadFile<T> found = read(path, noun, cache, parser);
+        if (!c.fingerprint().isEmpty() && !found.digest().equals(c.fingerprint())) {
+            throw new IllegalStateException(path + ": the " + noun + " file changed since the study was read; read"
+                    + " the study again");
+        }
+        return found.value();
+    }
+
+    private static ReadFile<TruthParameters> modelFile(String path) {
+        return read(path, "model", MODELS, ModelFile::read);
+    }
+
+    /** The truth of a model-file choice. */
+    private static TruthParameters modelFile(TruthSetting.Choice c) {
+        if (c.values().get(GIVEN_FILE).toString().isBlank()) {
+            throw new IllegalArgumentException("model_file needs the path of a model file (model.json)");
+        }
+        return current(c, "model", MODELS, ModelFile::read);
+    }
+
+    private static ReadFile<GivenGraphFamily> given(String path) {
+        return read(path, "graph", GIVEN, GeneratorTruthCatalog::givenGraph);
+    }
+
+    /** The DAG of a graph file, refused when it leaves no variable observed. */
+    private static GivenGraphFamily givenGraph(Path file) throws IOException {
+        Graph dag = GraphFiles.read(file, null);
+        if (dag.observedIndices().length == 0) {
+            throw new IllegalArgumentException(dag.size() == 0 ? "the graph has no variables; list at least one"
+                    : "every variable of the graph is hidden, so there would be no data; leave at least one"
+                    + " variable out of 'hidden'");
+        }
+        return GivenGraphFamily.of(dag);
+    }
+
+    /** The graph of a given-graph choice. */
     private static GivenGraphFamily given(TruthSetting.Choice g) {
-        String path = g.values().get(GIVEN_FILE).toString();
-        if (path.isBlank()) {
+        if (g.values().get(GIVEN_FILE).toString().isBlank()) {
             throw new IllegalArgumentException("the given graph family needs a graph file: set graph.file to a JSON"
                     + " or CSV edge-list file");
         }
-        GivenGraph found = given(path);
-        if (!g.fingerprint().isEmpty() && !found.digest().equals(g.fingerprint())) {
-            throw new IllegalStateException(g.values().get(GIVEN_FILE) + ": the graph file changed since the study"
-                    + " was read; read the study again");
-        }
-        return found.family();
+        return current(g, "graph", GIVEN, GeneratorTruthCatalog::givenGraph);
     }
 
     private static String digest(byte[] bytes) {

@@ -9,7 +9,7 @@ import java.nio.file.Path;
  * command that names learners: {@code --learners FILE} (outside commands declared in a
  * learners file) and {@code --plugins DIR} (Java plug-in jars).
  */
-final class LearnerSources {
+final class LearnerSourceOptions {
 
     @Option(names = "--learners", paramLabel = "FILE",
             description = "A learners file declaring outside command learners (see docs/outside-learners.md).")
