@@ -10,6 +10,7 @@ import dev.touchstone.metrics.results.Summary;
 import dev.touchstone.reports.charts.AxisScale;
 import dev.touchstone.reports.charts.BoxPlot;
 import dev.touchstone.reports.charts.DifferenceHeatMap;
+import dev.touchstone.reports.charts.Figure;
 import dev.touchstone.reports.charts.GraphLayout;
 import dev.touchstone.reports.charts.ChartPoint;
 import dev.touchstone.reports.charts.ChartSeries;
@@ -77,9 +78,10 @@ public final class HtmlReport {
 
     /** The page being written and the files collected beside it. */
     private record Page(HtmlPage html, ReportArtifacts.Collector files) {
-        void figure(String name, String svg, String caption) {
+        void figure(String name, Figure figure, String caption) {
+            String svg = figure.toSvg();
             html.figure(svg, caption);
-            files.figure(name, svg);
+            files.figure(name, new ReportArtifacts.Chart(svg, figure));
         }
 
         void table(String name, Table t) {
@@ -227,7 +229,7 @@ public final class HtmlReport {
             if (isUnitInterval(metric) && yScale == AxisScale.LINEAR) {
                 chart = chart.withRange(0, 1.02);
             }
-            page.figure(metric + " against " + axis + " " + panel.getKey(), chart.toSvg(WIDTH, HEIGHT), "");
+            page.figure(metric + " against " + axis + " " + panel.getKey(), chart.figure(WIDTH, HEIGHT), "");
             drawn++;
         }
         page.html().endGrid();
@@ -273,7 +275,7 @@ public final class HtmlReport {
             if (isUnitInterval(metric)) {
                 chart = chart.withRange(0, 1.02);
             }
-            page.figure("distribution " + metric, chart.toSvg(FULL_WIDTH, WIDE_HEIGHT), "");
+            page.figure("distribution " + metric, chart.figure(FULL_WIDTH, WIDE_HEIGHT), "");
         }
         if (!any) {
             page.html().note("No distributions: no ok run carries a value of the chosen metrics.");
@@ -305,7 +307,7 @@ public final class HtmlReport {
                         + truth.toUpperCase(java.util.Locale.ROOT);
                 LineChart chart = LineChart.of(title, kind + " recall (0–1)", kind + " precision (0–1)", series)
                         .pointsOnly().withRange(0, 1.02).withDomain(0, 1.02);
-                page.figure(kind + " precision recall " + truth, chart.toSvg(WIDTH, HEIGHT), "");
+                page.figure(kind + " precision recall " + truth, chart.figure(WIDTH, HEIGHT), "");
             }
         }
         page.html().endGrid();
@@ -388,7 +390,7 @@ public final class HtmlReport {
             }
             String title = "Mean paired difference from " + data.reference() + " per setting";
             page.figure("comparison heat map", new DifferenceHeatMap(title, blocks, new ArrayList<>(settings), cells)
-                    .toSvg(FULL_WIDTH), title + ", one block of rows per metric, each with its own colour scale.");
+                    .figure(FULL_WIDTH), title + ", one block of rows per metric, each with its own colour scale.");
             Table full = view.comparisons(rows);
             html.beginDetails("The full table of paired comparisons (" + rows.size() + " rows; also in"
                     + " comparisons.csv)");
@@ -437,7 +439,7 @@ public final class HtmlReport {
         }
         double cd = r.criticalDifference() == null ? Double.NaN : r.criticalDifference();
         page.figure("ranks " + r.metric(), new CriticalDifferenceDiagram(capitalised(words) + ": mean ranks over "
-                + r.settingsUsed() + " settings", entries, cd).toSvg(WIDE), "Friedman χ² = "
+                + r.settingsUsed() + " settings", entries, cd).figure(WIDE), "Friedman χ² = "
                 + Numbers.format(r.friedmanChiSquare()) + " on " + r.degreesOfFreedom() + " degrees of freedom, p = "
                 + Numbers.format(r.friedmanPValue()) + "; thick lines join configurations whose mean ranks differ by"
                 + " less than the Nemenyi critical difference at α = " + r.alpha() + " (Demšar 2006)."
@@ -544,7 +546,7 @@ public final class HtmlReport {
         page.html().beginGrid();
         for (ReportData.Example e : data.examples()) {
             page.figure("picture " + e.title(), new GraphPicture(e.truth(), e.estimate(), layouts.of(e.truth()))
-                    .toSvg(), e.title() + ": truth (left) beside the estimate (right).");
+                    .figure(), e.title() + ": truth (left) beside the estimate (right).");
         }
         page.html().endGrid();
     }

@@ -80,12 +80,12 @@ class IdentityAcrossChartsTest {
         Map<String, Set<String>> colours = new LinkedHashMap<>();
         Map<String, Integer> charts = new LinkedHashMap<>();
         for (var f : a.figures().entrySet()) {
-            legendColours(f.getValue(), Set.copyOf(configs)).forEach((label, colour) -> {
+            legendColours(f.getValue().svg(), Set.copyOf(configs)).forEach((label, colour) -> {
                 colours.computeIfAbsent(label, k -> new LinkedHashSet<>()).add(colour);
                 charts.merge(label, 1, Integer::sum);
             });
             for (String learner : List.of("learner-alpha", "learner-beta")) {
-                assertFalse(f.getValue().contains(">" + learner + "<"), "legends name configurations, not learners: "
+                assertFalse(f.getValue().svg().contains(">" + learner + "<"), "legends name configurations, not learners: "
                         + f.getKey());
             }
         }

@@ -27,7 +27,6 @@ import dev.touchstone.reports.HtmlReport;
 import dev.touchstone.reports.MarkdownReport;
 import dev.touchstone.reports.ReportArtifacts;
 import dev.touchstone.reports.ReportData;
-import dev.touchstone.reports.charts.Svg;
 import dev.touchstone.reports.tables.LatexTable;
 import dev.touchstone.reports.tables.MarkdownTable;
 import dev.touchstone.reports.tables.Table;
@@ -213,7 +212,7 @@ public final class StudyReports {
 
     /**
      * Writes report.html and report.md into {@code folder}, and beside them every chart as a
-     * standalone SVG file in {@code figures/} and every table as Markdown and LaTeX (booktabs)
+     * standalone SVG file and a one-page PDF in {@code figures/} and every table as Markdown and LaTeX (booktabs)
      * in {@code tables/}, for a paper to include as they are; returns the HTML file.
      */
     public static Path write(Path folder, ReportData data) {
@@ -224,8 +223,10 @@ public final class StudyReports {
             AtomicFiles.writeString(html, artifacts.html());
             AtomicFiles.writeString(folder.resolve("report.md"), MarkdownReport.render(data));
             Path figures = Files.createDirectories(folder.resolve("figures"));
-            for (Map.Entry<String, String> f : artifacts.figures().entrySet()) {
-                AtomicFiles.writeString(figures.resolve(f.getKey() + ".svg"), Svg.standalone(f.getValue()));
+            for (Map.Entry<String, ReportArtifacts.Chart> f : artifacts.figures().entrySet()) {
+                AtomicFiles.writeString(figures.resolve(f.getKey() + ".svg"), f.getValue().svgFile());
+                byte[] pdf = f.getValue().pdfFile();
+                AtomicFiles.writeBytes(figures.resolve(f.getKey() + ".pdf"), out -> out.write(pdf));
             }
             Path tables = Files.createDirectories(folder.resolve("tables"));
             for (Map.Entry<String, Table> t : artifacts.tables().entrySet()) {

@@ -72,7 +72,7 @@ class DemoCommandTest {
                 "the search gap of the score-based learner, and only of it: " + md);
         assertTrue(Files.readString(out.resolve("runs.csv")).lines().findFirst().orElseThrow()
                 .contains(",search_score_gap,search_shd,score_shd,"), "search-gap columns in runs.csv");
-        // Every chart of the page is also a standalone SVG file, every table a Markdown and a LaTeX file.
+        // Every chart of the page is also a standalone SVG file and a PDF, every table a Markdown and a LaTeX file.
         long figures = html.split("<figure><svg", -1).length - 1;
         List<Path> svgs;
         try (var files = Files.list(out.resolve("figures"))) {
@@ -89,6 +89,12 @@ class DemoCommandTest {
             } catch (javax.xml.parsers.ParserConfigurationException | org.xml.sax.SAXException e) {
                 throw new AssertionError(svg + " is not well-formed XML: " + e.getMessage(), e);
             }
+        }
+        for (Path svg : svgs) {
+            // the same chart as a PDF beside it (read back with PDFBox in the reports module's PdfExportTest)
+            Path pdf = svg.resolveSibling(svg.getFileName().toString().replaceFirst("\\.svg$", ".pdf"));
+            byte[] head = Files.readAllBytes(pdf);
+            assertEquals("%PDF-", new String(head, 0, 5, java.nio.charset.StandardCharsets.US_ASCII), pdf.toString());
         }
         for (String t : new String[] {"configurations", "comparisons", "provenance"}) {
             assertTrue(Files.isRegularFile(out.resolve("tables/" + t + ".md")), t + ".md");

@@ -63,7 +63,13 @@ public final class BoxPlot {
         return title;
     }
 
+    /** The chart as an {@code <svg>} element of this size. */
     public String toSvg(int width, int height) {
+        return figure(width, height).toSvg();
+    }
+
+    /** The chart as a figure of this size (for SVG and PDF). */
+    public Figure figure(int width, int height) {
         DefaultBoxAndWhiskerCategoryDataset data = new DefaultBoxAndWhiskerCategoryDataset();
         Map<String, Integer> identities = new LinkedHashMap<>();
         for (Group g : groups) {
@@ -105,6 +111,6 @@ public final class BoxPlot {
         legend.setPosition(RectangleEdge.BOTTOM);
         legend.setFrame(BlockBorder.NONE);
         legend.setItemFont(new Font("SansSerif", Font.PLAIN, 11));
-        return Svg.of(chart, width, height);
+        return Figure.of(chart, width, height);
     }
 }

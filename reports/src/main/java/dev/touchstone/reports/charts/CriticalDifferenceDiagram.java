@@ -1,11 +1,10 @@
 package dev.touchstone.reports.charts;
 
-import org.jfree.svg.SVGGraphics2D;
-
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontMetrics;
+import java.awt.Graphics2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
@@ -24,6 +23,13 @@ public final class CriticalDifferenceDiagram {
     /** A learner configuration and its mean rank over settings. */
     public record Entry(String name, double meanRank) {
     }
+
+    // Top to bottom: title; critical-difference bar with its value; axis label; tick numbers and axis;
+    // group bars; label rows; each in its own band so that no bar crosses a text.
+    private static final int CD_Y = 36;
+    private static final int AXIS_Y = 76;
+    private static final int ROW_HEIGHT = 18;
+    private static final Font FONT = new Font("SansSerif", Font.PLAIN, 11);
 
     private final String title;
     private final List<Entry> entries;
@@ -86,51 +92,67 @@ public final class CriticalDifferenceDiagram {
 
     /** The diagram as an {@code <svg>} element. */
     public String toSvg(int width) {
-        return draw(width, new ArrayList<>());
+        return figure(width).toSvg();
+    }
+
+    /**
+     * The diagram as a figure (for SVG and PDF), at least {@code width} wide: long labels widen
+     * the picture (it scales down on the page) rather than running off its edge.
+     */
+    public Figure figure(int width) {
+        int labelWidth = labelWidth();
+        int wide = Math.max(width, 2 * (labelWidth + 30) + 160);
+        return new Figure(wide, height(), g -> draw(g, labelWidth, wide, new ArrayList<>()));
     }
 
     /** The texts and horizontal bars of the diagram at this width with their bounding boxes (for overlap checks). */
     public List<Placed> placed(int width) {
+        Figure f = figure(width);
         List<Placed> out = new ArrayList<>();
-        draw(width, out);
+        draw(Svg.canvas(f.width(), f.height()), labelWidth(), f.width(), out);
         return out;
     }
 
-    private String draw(int requestedWidth, List<Placed> placed) {
-        int width = requestedWidth;
-        int k = entries.size();
-        int half = (k + 1) / 2;
-        int rowHeight = 18;
-        // Top to bottom: title; critical-difference bar with its value; axis label; tick numbers and axis;
-        // group bars; label rows; each in its own band so that no bar crosses a text.
-        int cdY = 36;
-        int axisY = 76;
-        List<int[]> groups = groups();
-        int rowsTop = axisY + 22 + groups.size() * 6;
-        int height = rowsTop + Math.max(half, k - half) * rowHeight + 12;
-        Font font = new Font("SansSerif", Font.PLAIN, 11);
-        FontMetrics fm = Svg.canvas(1, 1).getFontMetrics(font);
+    private int labelWidth() {
+        FontMetrics fm = Svg.metrics(FONT);
         int labelWidth = 0;
         for (Entry e : entries) {
             labelWidth = Math.max(labelWidth, fm.stringWidth(label(e)));
         }
-        // Long labels widen the picture (it scales down on the page) rather than running off its edge.
-        width = Math.max(width, 2 * (labelWidth + 30) + 160);
+        return labelWidth;
+    }
+
+    private int rowsTop() {
+        return AXIS_Y + 22 + groups().size() * 6;
+    }
+
+    private int height() {
+        int k = entries.size();
+        int half = (k + 1) / 2;
+        return rowsTop() + Math.max(half, k - half) * ROW_HEIGHT + 12;
+    }
+
+    private void draw(Graphics2D g, int labelWidth, int width, List<Placed> placed) {
+        int k = entries.size();
+        int half = (k + 1) / 2;
+        List<int[]> groups = groups();
+        int rowsTop = rowsTop();
+        int height = height();
+        FontMetrics fm = Svg.metrics(FONT);
         placed.add(new Placed("frame", "", new Rectangle2D.Double(0, 0, width, height)));
-        SVGGraphics2D g = Svg.canvas(width, height);
         g.setColor(Color.WHITE);
         g.fillRect(0, 0, width, height);
         g.setFont(new Font("SansSerif", Font.BOLD, 13));
         g.setColor(Color.BLACK);
         text(g, placed, title, 10, 18);
-        g.setFont(font);
+        g.setFont(FONT);
         double left = labelWidth + 30;
         double right = width - left;
         int maxRank = Math.max(k, 2);
         java.util.function.DoubleUnaryOperator xOf = r -> left + (r - 1) / (maxRank - 1) * (right - left);
 
         g.setStroke(new BasicStroke(1f));
-        g.draw(new Line2D.Double(left, axisY, right, axisY));
+        g.draw(new Line2D.Double(left, AXIS_Y, right, AXIS_Y));
         // Number every rank while the numbers fit, else every 2nd, 5th or 10th (ticks stay on every rank).
         double spacing = (right - left) / (maxRank - 1);
         int every = 1;
@@ -142,28 +164,28 @@ public final class CriticalDifferenceDiagram {
         }
         for (int r = 1; r <= maxRank; r++) {
             double x = xOf.applyAsDouble(r);
-            g.draw(new Line2D.Double(x, axisY, x, axisY - 5));
+            g.draw(new Line2D.Double(x, AXIS_Y, x, AXIS_Y - 5));
             if (r == 1 || r % every == 0) {
                 String t = Integer.toString(r);
-                text(g, placed, t, (float) (x - fm.stringWidth(t) / 2.0), axisY - 8);
+                text(g, placed, t, (float) (x - fm.stringWidth(t) / 2.0), AXIS_Y - 8);
             }
         }
         String axisLabel = "mean rank (1 = best)";
-        text(g, placed, axisLabel, (float) ((left + right) / 2 - fm.stringWidth(axisLabel) / 2.0), axisY - 22);
+        text(g, placed, axisLabel, (float) ((left + right) / 2 - fm.stringWidth(axisLabel) / 2.0), AXIS_Y - 22);
         if (criticalDifference > 0 && !Double.isNaN(criticalDifference)) {
             double x0 = xOf.applyAsDouble(1);
             double x1 = xOf.applyAsDouble(Math.min(1 + criticalDifference, maxRank));
             g.setStroke(new BasicStroke(2f));
-            g.draw(new Line2D.Double(x0, cdY, x1, cdY));
-            g.draw(new Line2D.Double(x0, cdY - 4, x0, cdY + 4));
-            g.draw(new Line2D.Double(x1, cdY - 4, x1, cdY + 4));
-            placed.add(new Placed("bar", "critical difference", new Rectangle2D.Double(x0, cdY - 4, x1 - x0, 8)));
+            g.draw(new Line2D.Double(x0, CD_Y, x1, CD_Y));
+            g.draw(new Line2D.Double(x0, CD_Y - 4, x0, CD_Y + 4));
+            g.draw(new Line2D.Double(x1, CD_Y - 4, x1, CD_Y + 4));
+            placed.add(new Placed("bar", "critical difference", new Rectangle2D.Double(x0, CD_Y - 4, x1 - x0, 8)));
             String cd = String.format(Locale.ROOT, "CD = %.2f", criticalDifference);
             double cx = x1 + 6 + fm.stringWidth(cd) <= width ? x1 + 6 : x0 - 6 - fm.stringWidth(cd);
             if (cx < 0) {
                 cx = x0;
             }
-            text(g, placed, cd, (float) cx, cx == x0 ? cdY - 8 : cdY + 4);
+            text(g, placed, cd, (float) cx, cx == x0 ? CD_Y - 8 : CD_Y + 4);
         }
         g.setStroke(new BasicStroke(1f));
         for (int i = 0; i < k; i++) {
@@ -171,9 +193,9 @@ public final class CriticalDifferenceDiagram {
             double x = xOf.applyAsDouble(e.meanRank());
             boolean onLeft = i < half;
             int row = onLeft ? i : k - 1 - i;
-            double y = rowsTop + row * rowHeight;
+            double y = rowsTop + row * ROW_HEIGHT;
             g.setColor(Color.BLACK);
-            g.draw(new Line2D.Double(x, axisY, x, y));
+            g.draw(new Line2D.Double(x, AXIS_Y, x, y));
             String text = label(e);
             if (onLeft) {
                 g.draw(new Line2D.Double(left - 10, y, x, y));
@@ -186,18 +208,17 @@ public final class CriticalDifferenceDiagram {
         g.setStroke(new BasicStroke(4f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
         int level = 0;
         for (int[] grp : groups) {
-            double y = axisY + 10 + level * 6;
+            double y = AXIS_Y + 10 + level * 6;
             double x0 = xOf.applyAsDouble(entries.get(grp[0]).meanRank()) - 3;
             double x1 = xOf.applyAsDouble(entries.get(grp[1]).meanRank()) + 3;
             g.draw(new Line2D.Double(x0, y, x1, y));
             placed.add(new Placed("bar", "group", new Rectangle2D.Double(x0 - 2, y - 2, x1 - x0 + 4, 4)));
             level++;
         }
-        return Svg.element(g);
     }
 
     /** Draws a text with its baseline at y and records its bounding box from the font's metrics. */
-    private static void text(SVGGraphics2D g, List<Placed> placed, String s, float x, float y) {
+    private static void text(Graphics2D g, List<Placed> placed, String s, float x, float y) {
         FontMetrics fm = g.getFontMetrics();
         g.drawString(s, x, y);
         placed.add(new Placed("text", s, new Rectangle2D.Double(x, y - fm.getAscent(), fm.stringWidth(s),

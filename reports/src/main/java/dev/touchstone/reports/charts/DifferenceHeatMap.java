@@ -1,11 +1,10 @@
 package dev.touchstone.reports.charts;
 
-import org.jfree.svg.SVGGraphics2D;
-
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontMetrics;
+import java.awt.Graphics2D;
 import java.awt.geom.Rectangle2D;
 import java.util.List;
 import java.util.Locale;
@@ -37,6 +36,8 @@ public final class DifferenceHeatMap {
     static final Color NEUTRAL = new Color(0xF7, 0xF7, 0xF7);
     static final Color WORSE = new Color(0xB2, 0x18, 0x2B);
     private static final int ROW = 24;
+    private static final Font FONT = new Font("SansSerif", Font.PLAIN, 10);
+    private static final Font BOLD = new Font("SansSerif", Font.BOLD, 11);
 
     private final String title;
     private final List<Block> blocks;
@@ -76,18 +77,21 @@ public final class DifferenceHeatMap {
         return b.higherIsBetter() == null || b.higherIsBetter() ? d : -d;
     }
 
+    /** The heat map at this width as an {@code <svg>} element. */
     public String toSvg(int width) {
-        Font font = new Font("SansSerif", Font.PLAIN, 10);
-        Font bold = new Font("SansSerif", Font.BOLD, 11);
-        SVGGraphics2D probe = Svg.canvas(10, 10);
-        FontMetrics fm = probe.getFontMetrics(font);
-        int labelWidth = 0;
+        return figure(width).toSvg();
+    }
+
+    /** The heat map at this width as a figure (for SVG and PDF); its height follows from the rows. */
+    public Figure figure(int width) {
+        FontMetrics fm = Svg.metrics(FONT);
+        int widest = 0;
         for (Block b : blocks) {
             for (String r : b.configurations()) {
-                labelWidth = Math.max(labelWidth, fm.stringWidth(r) + 16);
+                widest = Math.max(widest, fm.stringWidth(r) + 16);
             }
         }
-        labelWidth = Math.min(labelWidth + 12, width / 3);
+        int labelWidth = Math.min(widest + 12, width / 3);
         int headerLines = 1;
         for (String c : columns) {
             headerLines = Math.max(headerLines, c.split(", ").length);
@@ -99,13 +103,24 @@ public final class DifferenceHeatMap {
             rowCount += b.configurations().size();
         }
         int height = top + blocks.size() * 18 + rowCount * ROW + 40;
-        SVGGraphics2D g = Svg.canvas(width, height);
+        Grid grid = new Grid(width, height, labelWidth, top, cellWidth);
+        return new Figure(width, height, g -> draw(g, fm, grid));
+    }
+
+    /** The sizes {@link #figure} works out: the picture, the label column, the top of the rows, a cell's width. */
+    private record Grid(int width, int height, int labelWidth, int top, int cellWidth) {
+    }
+
+    private void draw(Graphics2D g, FontMetrics fm, Grid grid) {
+        int width = grid.width();
+        int labelWidth = grid.labelWidth();
+        int cellWidth = grid.cellWidth();
         g.setColor(Color.WHITE);
-        g.fillRect(0, 0, width, height);
+        g.fillRect(0, 0, width, grid.height());
         g.setColor(Color.BLACK);
         g.setFont(new Font("SansSerif", Font.BOLD, 13));
         g.drawString(title, 6, 16);
-        g.setFont(font);
+        g.setFont(FONT);
         for (int j = 0; j < columns.size(); j++) {
             String[] lines = columns.get(j).split(", ");
             int x = labelWidth + j * cellWidth;
@@ -115,7 +130,7 @@ public final class DifferenceHeatMap {
             }
         }
         boolean numbers = cellWidth >= 40;
-        int y = top;
+        int y = grid.top();
         for (Block b : blocks) {
             double max = 0;
             for (Cell c : cells) {
@@ -124,10 +139,10 @@ public final class DifferenceHeatMap {
                 }
             }
             g.setColor(Color.BLACK);
-            g.setFont(bold);
+            g.setFont(BOLD);
             g.drawString(fit(fm, b.title() + " (colour scale ±" + number(max).replace("+", "") + ")",
                     width - 12), 6, y + 13);
-            g.setFont(font);
+            g.setFont(FONT);
             y += 18;
             for (String config : b.configurations()) {
                 g.setColor(Color.BLACK);
@@ -166,10 +181,9 @@ public final class DifferenceHeatMap {
             }
         }
         legend(g, fm, y + 12, labelWidth);
-        return Svg.element(g);
     }
 
-    private void legend(SVGGraphics2D g, FontMetrics fm, int y, int x) {
+    private void legend(Graphics2D g, FontMetrics fm, int y, int x) {
         int w = 120;
         for (int k = 0; k < w; k++) {
             g.setColor(colour(1 - 2.0 * k / (w - 1), 1));

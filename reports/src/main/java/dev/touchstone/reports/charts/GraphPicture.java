@@ -3,13 +3,13 @@ package dev.touchstone.reports.charts;
 import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.Mark;
-import org.jfree.svg.SVGGraphics2D;
 import org.jgrapht.alg.drawing.model.Point2D;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.awt.FontMetrics;
+import java.awt.Graphics2D;
 import java.awt.Stroke;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
@@ -69,14 +69,22 @@ public final class GraphPicture {
 
     /** Both panels side by side with a legend, as an {@code <svg>} element. */
     public String toSvg() {
+        return figure().toSvg();
+    }
+
+    /** Both panels side by side with a legend, as a figure (for SVG and PDF). */
+    public Figure figure() {
         int panel = (int) Math.ceil(layout.width());
         int width = 2 * panel + 20;
         int height = (int) Math.ceil(layout.height()) + TOP + 36;
+        return new Figure(width, height, g -> draw(g, panel, width, height));
+    }
+
+    private void draw(Graphics2D g, int panel, int width, int height) {
         Point2D[] at = new Point2D[truth.size()];
         for (int v = 0; v < at.length; v++) {
             at[v] = Point2D.of(layout.x(v), TOP + layout.y(v));
         }
-        SVGGraphics2D g = Svg.canvas(width, height);
         g.setColor(Color.WHITE);
         g.fillRect(0, 0, width, height);
         g.setFont(new Font("SansSerif", Font.BOLD, 12));
@@ -86,10 +94,9 @@ public final class GraphPicture {
         panel(g, truth, estimate, at, 0, true);
         panel(g, estimate, truth, at, panel + 20, false);
         legend(g, height - 14);
-        return Svg.element(g);
     }
 
-    private void panel(SVGGraphics2D g, Graph drawn, Graph other, Point2D[] at, int dx, boolean isTruth) {
+    private void panel(Graphics2D g, Graph drawn, Graph other, Point2D[] at, int dx, boolean isTruth) {
         for (Edge e : drawn.edges()) {
             EdgeVerdict v = verdict(drawn, other, e.a(), e.b(), isTruth);
             Point2D a = shift(at[e.a()], dx);
@@ -201,7 +208,7 @@ public final class GraphPicture {
     }
 
     /** Draws the mark at an end point; (ux, uy) points from that end into the edge. */
-    private static void mark(SVGGraphics2D g, Mark m, double x, double y, double ux, double uy) {
+    private static void mark(Graphics2D g, Mark m, double x, double y, double ux, double uy) {
         if (m == Mark.ARROW) {
             double len = 9;
             double w = 4.5;
@@ -244,7 +251,7 @@ public final class GraphPicture {
         }
     }
 
-    private static void legend(SVGGraphics2D g, int y) {
+    private static void legend(Graphics2D g, int y) {
         g.setFont(new Font("SansSerif", Font.PLAIN, 11));
         int x = 10;
         for (EdgeVerdict v : EdgeVerdict.values()) {

@@ -22,7 +22,7 @@ import java.util.Objects;
  * A chart of a value against a numeric axis, one line per series with its interval drawn
  * as a translucent band (JFreeChart's {@link DeviationRenderer}), or, with
  * {@link #pointsOnly()}, markers joined by thin lines (for precision against recall).
- * Rendered to inline SVG.
+ * Drawn as a {@link Figure}.
  */
 public final class LineChart {
 
@@ -95,7 +95,12 @@ public final class LineChart {
 
     /** The chart as an {@code <svg>} element of this size. */
     public String toSvg(int width, int height) {
-        return Svg.of(build(), width, height);
+        return figure(width, height).toSvg();
+    }
+
+    /** The chart as a figure of this size (for SVG and PDF). */
+    public Figure figure(int width, int height) {
+        return Figure.of(build(), width, height);
     }
 
     JFreeChart build() {

@@ -1,13 +1,14 @@
 package dev.touchstone.reports.charts;
 
-import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 
-import java.awt.Rectangle;
+import java.awt.Font;
+import java.awt.FontMetrics;
 import java.util.concurrent.atomic.AtomicLong;
 
 /**
- * Renders Java2D drawings and JFreeChart charts to inline SVG elements with JFreeSVG.
+ * Renders {@link Figure}s (Java2D drawings, JFreeChart charts among them) to inline SVG elements
+ * with JFreeSVG.
  * Each drawing gets its own prefix for clip-path and gradient ids, so many charts can be
  * inlined in one HTML page without their ids colliding.
  */
@@ -23,6 +24,11 @@ public final class Svg {
         SVGGraphics2D g = new SVGGraphics2D(width, height);
         g.setDefsKeyPrefix("c" + COUNTER.incrementAndGet() + "_");
         return g;
+    }
+
+    /** The metrics of a font as the SVG canvas measures it, for laying a figure out before drawing it. */
+    public static FontMetrics metrics(Font font) {
+        return canvas(1, 1).getFontMetrics(font);
     }
 
     /**
@@ -47,10 +53,10 @@ public final class Svg {
         return "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n" + svg + "\n";
     }
 
-    /** The chart drawn at this size, as an {@code <svg>} element. */
-    public static String of(JFreeChart chart, int width, int height) {
-        SVGGraphics2D g = canvas(width, height);
-        chart.draw(g, new Rectangle(0, 0, width, height));
-        return Svg.element(g);
+    /** The figure drawn on a fresh canvas of its size, as an {@code <svg>} element. */
+    public static String of(Figure figure) {
+        SVGGraphics2D g = canvas(figure.width(), figure.height());
+        figure.draw(g);
+        return element(g);
     }
 }
