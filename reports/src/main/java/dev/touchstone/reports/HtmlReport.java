@@ -275,7 +275,9 @@ public final class HtmlReport {
             if (isUnitInterval(metric)) {
                 chart = chart.withRange(0, 1.02);
             }
-            page.figure("distribution " + metric, chart.figure(FULL_WIDTH, WIDE_HEIGHT), "");
+            // Boxes of configurations scored against different classes of truth stand side by side: say which is which.
+            page.figure("distribution " + metric, chart.figure(FULL_WIDTH, WIDE_HEIGHT),
+                    view.truthClasses().size() > 1 ? view.scoredAgainst(r -> r.value(metric) != null) : "");
         }
         if (!any) {
             page.html().note("No distributions: no ok run carries a value of the chosen metrics.");
@@ -361,7 +363,8 @@ public final class HtmlReport {
                     + " sets: the mean of the paired differences (configuration minus reference) per setting,"
                     + " coloured blue where the configuration is better and red where it is worse; a ring marks a"
                     + " Holm-adjusted Wilcoxon signed-rank p-value below 0.05 (Holm across configurations)."
-                    + (empty == 0 ? "" : " " + empty + " comparisons without any pair of ok runs are left out."));
+                    + (empty == 0 ? "" : " " + empty + " comparisons without any pair of ok runs are left out.")
+                    + (view.truthClasses().size() > 1 ? " " + view.scoredAgainst(r -> true) : ""));
             List<DifferenceHeatMap.Cell> cells = new ArrayList<>();
             List<DifferenceHeatMap.Block> blocks = new ArrayList<>();
             Set<String> settings = new LinkedHashSet<>();

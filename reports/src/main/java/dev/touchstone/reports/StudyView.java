@@ -228,6 +228,16 @@ final class StudyView {
             }
             t.row(row);
         }
+        return new Headline(title, t.build(), notRun, scoredAgainst(in));
+    }
+
+    /**
+     * The classes of truth the ok runs that {@code in} selects were scored against, with the
+     * configurations of each ("Scored against the true CPDAG (pc, ges); the true DAG (lingam)."),
+     * for a table or chart that shows several configurations side by side; empty when no run
+     * records its class.
+     */
+    String scoredAgainst(Predicate<RunResult> in) {
         Map<String, Set<String>> byClass = new LinkedHashMap<>();
         for (RunResult r : data.runs()) {
             if (in.test(r) && r.isOk() && r.scoredAgainst() != null) {
@@ -237,8 +247,7 @@ final class StudyView {
         }
         List<String> parts = new ArrayList<>();
         byClass.forEach((cls, configs) -> parts.add("the true " + cls + " (" + String.join(", ", configs) + ")"));
-        String scored = parts.isEmpty() ? "" : "Scored against " + String.join("; ", parts) + ".";
-        return new Headline(title, t.build(), notRun, scored);
+        return parts.isEmpty() ? "" : "Scored against " + String.join("; ", parts) + ".";
     }
 
     /** The identity index of a configuration (its position in the study's learner order), for its colour and marker. */

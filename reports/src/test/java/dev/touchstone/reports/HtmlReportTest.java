@@ -1,9 +1,14 @@
 package dev.touchstone.reports;
 
+import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.metrics.results.RunResult;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
 import org.jsoup.nodes.Element;
 import org.junit.jupiter.api.Test;
+
+import java.util.ArrayList;
+import java.util.List;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -39,6 +44,26 @@ class HtmlReportTest {
         assertEquals(expected, d.select("figure > svg").size(), "one SVG per expected chart");
         assertEquals(1, d.select("div.caution").size(), "the cautions are there");
         assertTrue(d.text().contains("0 failed"), d.text());
+    }
+
+    @Test
+    void chartsThatSetConfigurationsScoredAgainstDifferentClassesSideBySideNameTheClasses() {
+        // beta scored against the true DAG, alpha against the true CPDAG: the box plots and the paired comparison
+        // put them side by side, so their captions say which configuration was scored against which class.
+        ReportData base = ReportFixtures.study(true, false).build();
+        List<RunResult> runs = new ArrayList<>();
+        for (RunResult r : base.runs()) {
+            runs.add(!r.configurationId().equals("beta") ? r : new RunResult(r.key(), r.setting(), r.replicate(),
+                    r.configurationId(), r.learnerId(), r.parameters(), r.seed(), r.status(), r.message(), GraphClass.DAG,
+                    GraphClass.DAG, r.metrics(), r.timings()));
+        }
+        Document d = render(ReportFixtures.study(true, false).runs(runs).build());
+        String classes = "Scored against the true CPDAG (alpha); the true DAG (beta).";
+        assertEquals(2, d.select("figcaption").stream()
+                .filter(c -> c.text().equals(classes)).count(), "both box plots name the classes: " + d.text());
+        assertTrue(d.text().contains("(Holm across configurations). " + classes), "so does the paired comparison");
+        assertFalse(render(base).select("figcaption").text().contains("Scored against"),
+                "one class only: the headline says it, the charts need not");
     }
 
     @Test
