@@ -1,13 +1,13 @@
 package dev.touchstone.learners.independence;
 
+import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.random.Seeds;
+import org.apache.commons.statistics.inference.KolmogorovSmirnovTest;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
 import java.util.Arrays;
 
-import static dev.touchstone.learners.independence.KciTestTest.pValues;
-import static dev.touchstone.learners.independence.KciTestTest.rejections;
-import static dev.touchstone.learners.independence.KciTestTest.uniformity;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -32,8 +32,33 @@ class KernelCalibrationTest {
     private static final int CASES = 300;
     private static final int N = 500;
 
-    private static final KciTestTest.IndependenceTestFactory KCI = d -> KciTest.of(d, 0.05, KciTest.Settings.defaults(3));
-    private static final KciTestTest.IndependenceTestFactory RCIT = d -> RcitTest.of(d, 0.05, RcitTest.Settings.defaults(4));
+    private static final IndependenceTestFactory KCI = d -> KciTest.of(d, 0.05, KciTest.Settings.defaults(3));
+    private static final IndependenceTestFactory RCIT = d -> RcitTest.of(d, 0.05, RcitTest.Settings.defaults(4));
+
+    /** p-values of x ⟂ y | z (or given ∅) over seeded samples. */
+    private static double[] pValues(IndependenceTestFactory factory, KernelNullData.Case c, int[] z, int cases, int n, long seed) {
+        double[] p = new double[cases];
+        for (int k = 0; k < cases; k++) {
+            DataSet data = KernelNullData.sample(c, n, Seeds.derive(seed, c, k));
+            p[k] = factory.of(data).pValue(0, 1, z);
+        }
+        return p;
+    }
+
+    /** Builds a test on a data set. */
+    interface IndependenceTestFactory {
+        IndependenceTest of(DataSet data);
+    }
+
+    /** The KS p-value of the sample against the uniform on [0, 1] (Commons Statistics). */
+    private static double uniformity(double[] p) {
+        return KolmogorovSmirnovTest.withDefaults().test(p, v -> Math.min(1, Math.max(0, v))).getPValue();
+    }
+
+    /** How many p-values fall below alpha. */
+    private static int rejections(double[] p, double alpha) {
+        return (int) Arrays.stream(p).filter(v -> v < alpha).count();
+    }
 
     private static void assertUniform(String what, double[] p) {
         double ks = uniformity(p);
