@@ -53,14 +53,7 @@ final class KernelRidgeRegression {
         if (x.length == 0) {
             return yc;
         }
-        int[] rows = new int[n];
-        for (int i = 0; i < n; i++) {
-            rows[i] = i;
-        }
-        double[][] u = new double[x.length][];
-        for (int d = 0; d < x.length; d++) {
-            u[d] = KernelAlgebra.standardised(x[d], rows);
-        }
+        double[][] u = KernelAlgebra.standardised(x);
         double[][] g = KernelAlgebra.centreColumns(
                 KernelAlgebra.incompleteCholesky(u, KernelAlgebra.medianWidth(u), maxRank));
         int r = g.length;

@@ -95,7 +95,9 @@ public final class ResitLearner implements Learner {
         MutableGraph g = Graph.builder(input.variableNames());
         for (int k = 1; k < p; k++) {
             int target = order[k];
-            double[][] predecessors = select(x, Arrays.copyOf(order, k));
+            // Every pruning test of this target is against the same predecessors: their
+            // centred Gram matrix (O(n²) time and memory) is built once, not once per test.
+            Hsic.Sample predecessors = Hsic.sample(select(x, Arrays.copyOf(order, k)));
             List<Integer> parents = new ArrayList<>();
             for (int a = 0; a < k; a++) {
                 parents.add(order[a]);
@@ -108,7 +110,7 @@ public final class ResitLearner implements Learner {
                 double[] residual = KernelRidgeRegression.residuals(select(x, rest.stream().mapToInt(i -> i).toArray()),
                         x[target], rank);
                 context.countTests(1);
-                if (Hsic.test(new double[][] {residual}, predecessors).pValue() > alpha) {
+                if (Hsic.test(Hsic.sample(new double[][] {residual}), predecessors).pValue() > alpha) {
                     parents = rest;
                 }
             }

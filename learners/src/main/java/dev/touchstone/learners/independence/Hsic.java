@@ -37,40 +37,62 @@ public final class Hsic {
     }
 
     /**
+     * One sample's part of the test: its centred Gram matrix HKH (row-major n × n), the mean
+     * μ of the off-diagonal entries of K before centring, and the kernel width. Built once, it
+     * serves every test against the same sample (RESIT tests many residuals against the same
+     * predecessors); it is never modified after construction.
+     */
+    public static final class Sample {
+        private final double[] centred;
+        private final double offDiagonalMean;
+        private final double width;
+        private final int n;
+
+        private Sample(double[] gram, int n, double width) {
+            this.offDiagonalMean = offDiagonalMean(gram, n);
+            centre(gram, n);
+            this.centred = gram;
+            this.n = n;
+            this.width = width;
+        }
+
+        /** The number of points. */
+        public int size() {
+            return n;
+        }
+    }
+
+    /**
+     * The sample {@code u}, column-major ({@code double[d][n]}, d coordinates of n points),
+     * prepared for tests: its coordinates standardised, the width by the median heuristic, the
+     * Gram matrix centred. The array is not modified.
+     */
+    public static Sample sample(double[][] u) {
+        double[][] su = KernelAlgebra.standardised(u);
+        double w = KernelAlgebra.medianWidth(su);
+        return new Sample(KernelAlgebra.gram(su, w), su[0].length, w);
+    }
+
+    /**
      * The test on samples {@code u} and {@code v}, given column-major ({@code double[d][n]},
      * d coordinates of n points; both with the same n). The coordinates are standardised
      * first; the arrays are not modified.
      */
     public static Result test(double[][] u, double[][] v) {
-        int n = u[0].length;
-        if (v[0].length != n) {
-            throw new IllegalArgumentException("samples of different sizes: " + n + " and " + v[0].length);
+        if (v[0].length != u[0].length) {
+            throw new IllegalArgumentException("samples of different sizes: " + u[0].length + " and " + v[0].length);
         }
-        int[] all = new int[n];
-        for (int i = 0; i < n; i++) {
-            all[i] = i;
-        }
-        double[][] su = standardise(u, all);
-        double[][] sv = standardise(v, all);
-        double wu = KernelAlgebra.medianWidth(su);
-        double wv = KernelAlgebra.medianWidth(sv);
-        return fromGrams(KernelAlgebra.gram(su, wu), KernelAlgebra.gram(sv, wv), n, wu, wv);
+        return test(sample(u), sample(v));
     }
 
-    private static double[][] standardise(double[][] u, int[] rows) {
-        double[][] s = new double[u.length][];
-        for (int d = 0; d < u.length; d++) {
-            s[d] = KernelAlgebra.standardised(u[d], rows);
+    /** The test on two prepared samples of the same size (the same result as from their columns). */
+    public static Result test(Sample u, Sample v) {
+        int n = u.n;
+        if (v.n != n) {
+            throw new IllegalArgumentException("samples of different sizes: " + n + " and " + v.n);
         }
-        return s;
-    }
-
-    /** The test from two n × n Gram matrices (row-major; modified: they are centred in place). */
-    static Result fromGrams(double[] k, double[] l, int n, double widthU, double widthV) {
-        double muK = offDiagonalMean(k, n);
-        double muL = offDiagonalMean(l, n);
-        centre(k, n);
-        centre(l, n);
+        double[] k = u.centred;
+        double[] l = v.centred;
         double trace = 0;
         double b = 0;
         for (int i = 0; i < n; i++) {
@@ -84,14 +106,16 @@ public final class Hsic {
         }
         double statistic = trace / n; // n · tr(KHLH)/n², as tr(KHLH) = Σ (HKH)∘(HLH) for symmetric K, L
         if (n < 6) {
-            return new Result(statistic, Double.NaN, Double.NaN, 1.0, widthU, widthV);
+            return new Result(statistic, Double.NaN, Double.NaN, 1.0, u.width, v.width);
         }
+        double muK = u.offDiagonalMean;
+        double muL = v.offDiagonalMean;
         double dn = n;
         double mean = (1 + muK * muL - muK - muL) / dn;
         double variance = 2 * (dn - 4) * (dn - 5) / (dn * (dn - 1) * (dn - 2) * (dn - 3)) * b / (dn * (dn - 1));
         // The gamma for n·HSIC_b: mean n·E, variance n²·var, i.e. shape E²/var and scale n·var/E.
         double p = KernelAlgebra.gammaSurvival(statistic, dn * mean, dn * dn * variance);
-        return new Result(statistic, mean, variance, p, widthU, widthV);
+        return new Result(statistic, mean, variance, p, u.width, v.width);
     }
 
     private static double offDiagonalMean(double[] k, int n) {

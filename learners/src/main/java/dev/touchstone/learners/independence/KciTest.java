@@ -64,7 +64,6 @@ public final class KciTest implements IndependenceTest {
     private final DataSet data;
     private final double alpha;
     private final Settings settings;
-    private final KernelAlgebra.WidthCache widths = new KernelAlgebra.WidthCache();
 
     private KciTest(DataSet data, double alpha, Settings settings) {
         if (!(alpha > 0 && alpha < 1)) {
@@ -120,13 +119,13 @@ public final class KciTest implements IndependenceTest {
         xz[0] = a;
         System.arraycopy(z, 0, xz, 1, z.length);
         double[][] gx = factor(xz, rows, allRows);
-        double[][] gz = factor(z, rows, allRows);
-        return conditional(residualise(gx, gz, settings.ridge()), residualise(gy, gz, settings.ridge()), n);
+        Residualiser onZ = new Residualiser(factor(z, rows, allRows), settings.ridge());
+        return conditional(onZ.apply(gx), onZ.apply(gy), n);
     }
 
     private double[][] factor(int[] vars, int[] rows, boolean allRows) {
-        double[][] u = columns(data, rows, vars);
-        double width = allRows ? widths.width(vars, u) : KernelAlgebra.medianWidth(u);
+        double[][] u = KernelAlgebra.standardised(data, rows, vars);
+        double width = allRows ? KernelAlgebra.sharedWidth(data, vars, u) : KernelAlgebra.medianWidth(u);
         return KernelAlgebra.centreColumns(KernelAlgebra.incompleteCholesky(u, width, settings.maxRank()));
     }
 
@@ -139,35 +138,50 @@ public final class KciTest implements IndependenceTest {
         return new Result(t, mean, variance, KernelAlgebra.gammaSurvival(t, mean, variance), n);
     }
 
-    /** R_S G = G − G_S (G_SᵀG_S + εI)⁻¹ G_Sᵀ G (Woodbury), for centred factors G and G_S. */
-    static double[][] residualise(double[][] g, double[][] gz, double ridge) {
-        int q = gz.length;
-        int c = g.length;
-        double[][] out = new double[c][];
-        for (int j = 0; j < c; j++) {
-            out[j] = g[j].clone();
+    /**
+     * R_S G = G − G_S (G_SᵀG_S + εI)⁻¹ G_Sᵀ G (Woodbury) for centred factors G and G_S: the
+     * q × q system of G_S is factorised once and serves both residual kernels of a test.
+     */
+    static final class Residualiser {
+        private final double[][] gz;
+        private final double[] chol;
+
+        Residualiser(double[][] gz, double ridge) {
+            this.gz = gz;
+            int q = gz.length;
+            double[] m = KernelAlgebra.crossProduct(gz, gz);
+            for (int i = 0; i < q; i++) {
+                m[i * q + i] += ridge;
+            }
+            this.chol = q == 0 ? m : KernelAlgebra.cholesky(m, q);
         }
-        if (q == 0) {
-            return out;
-        }
-        double[] m = KernelAlgebra.crossProduct(gz, gz);
-        for (int i = 0; i < q; i++) {
-            m[i * q + i] += ridge;
-        }
-        double[] coef = KernelAlgebra.crossProduct(gz, g); // q × c
-        KernelAlgebra.choleskySolve(KernelAlgebra.cholesky(m, q), q, coef, c);
-        int n = g[0].length;
-        for (int k = 0; k < q; k++) {
-            double[] zk = gz[k];
+
+        /** R_S G for a centred factor G (a new column set; G is not modified). */
+        double[][] apply(double[][] g) {
+            int q = gz.length;
+            int c = g.length;
+            double[][] out = new double[c][];
             for (int j = 0; j < c; j++) {
-                double w = coef[k * c + j];
-                double[] oj = out[j];
-                for (int i = 0; i < n; i++) {
-                    oj[i] -= w * zk[i];
+                out[j] = g[j].clone();
+            }
+            if (q == 0) {
+                return out;
+            }
+            double[] coef = KernelAlgebra.crossProduct(gz, g); // q × c
+            KernelAlgebra.choleskySolve(chol, q, coef, c);
+            int n = g[0].length;
+            for (int k = 0; k < q; k++) {
+                double[] zk = gz[k];
+                for (int j = 0; j < c; j++) {
+                    double w = coef[k * c + j];
+                    double[] oj = out[j];
+                    for (int i = 0; i < n; i++) {
+                        oj[i] -= w * zk[i];
+                    }
                 }
             }
+            return out;
         }
-        return out;
     }
 
     static Result conditional(double[][] bx, double[][] by, int n) {
@@ -249,15 +263,6 @@ public final class KciTest implements IndependenceTest {
             }
         }
         return out;
-    }
-
-    /** Standardised copies of the columns {@code vars} at {@code rows}. */
-    static double[][] columns(DataSet data, int[] rows, int[] vars) {
-        double[][] u = new double[vars.length][];
-        for (int k = 0; k < vars.length; k++) {
-            u[k] = KernelAlgebra.standardised(data.continuous(vars[k]), rows);
-        }
-        return u;
     }
 
     /**

@@ -1,5 +1,7 @@
 package dev.touchstone.learners.independence;
 
+import dev.touchstone.core.data.DataSet;
+
 import java.util.Arrays;
 
 /**
@@ -33,17 +35,64 @@ public final class KernelAlgebra {
     public static final int MEDIAN_ROWS = 500;
     /** Largest remaining diagonal at which the incomplete Cholesky factorisation stops. */
     public static final double CHOLESKY_TOLERANCE = 1e-6;
+    /** Rows per block of {@link #symmetricCrossProduct}: 100 columns of 1,024 doubles fill about 800 KB. */
+    static final int PRODUCT_BLOCK = 1024;
 
     private KernelAlgebra() {
     }
 
     /** A standardised copy (mean 0, sd 1 with divisor n) of {@code values} at {@code rows}; a constant column becomes 0. */
     public static double[] standardised(double[] values, int[] rows) {
-        int n = rows.length;
-        double[] v = new double[n];
+        return standardisedCopy(values, rows, rows.length);
+    }
+
+    /** Standardised copies (as {@link #standardised(double[], int[])}) of every column of {@code columns}, all rows. */
+    public static double[][] standardised(double[][] columns) {
+        double[][] s = new double[columns.length][];
+        for (int d = 0; d < columns.length; d++) {
+            s[d] = standardisedCopy(columns[d], null, columns[d].length);
+        }
+        return s;
+    }
+
+    /** Standardised copies (as {@link #standardised(double[], int[])}) of every column of {@code columns} at {@code rows}. */
+    public static double[][] standardised(double[][] columns, int[] rows) {
+        double[][] s = new double[columns.length][];
+        for (int d = 0; d < columns.length; d++) {
+            s[d] = standardisedCopy(columns[d], rows, rows.length);
+        }
+        return s;
+    }
+
+    /**
+     * Standardised copies of the continuous columns {@code vars} of {@code data} at
+     * {@code rows}. When the rows are all of the data's, each column's copy is made once per
+     * data set and shared through {@link DataSet#shared} (read-only: callers must not write to
+     * it), since the kernel tests of a PC run standardise the same columns for every test.
+     */
+    static double[][] standardised(DataSet data, int[] rows, int[] vars) {
+        boolean allRows = rows.length == data.rows(); // usable rows are sorted and distinct: all of them, in order
+        double[][] u = new double[vars.length][];
+        for (int k = 0; k < vars.length; k++) {
+            int v = vars[k];
+            u[k] = allRows ? data.shared(new StandardisedKey(v), d -> standardised(d.continuous(v), rows))
+                    : standardised(data.continuous(v), rows);
+        }
+        return u;
+    }
+
+    /** The key of a shared standardised column. */
+    private record StandardisedKey(int column) {
+    }
+
+    /** The one standardisation rule of the kernel tests and regressions: {@code rows} null means the first n. */
+    private static double[] standardisedCopy(double[] values, int[] rows, int n) {
+        double[] v = rows == null ? Arrays.copyOf(values, n) : new double[n];
         double mean = 0;
         for (int r = 0; r < n; r++) {
-            v[r] = values[rows[r]];
+            if (rows != null) {
+                v[r] = values[rows[r]];
+            }
             mean += v[r];
         }
         mean /= n;
@@ -131,17 +180,17 @@ public final class KernelAlgebra {
     }
 
     /**
-     * Kernel widths remembered per variable set, for tests that use every row of their data
-     * (the width depends only on the data of the set, and PC asks about the same sets often).
+     * The median-heuristic width of the variables {@code vars} of {@code data} on all its rows,
+     * given their standardised columns {@code u}: computed once per data set and variable set
+     * and shared through {@link DataSet#shared} by every kernel test on the same data (the
+     * width depends only on the data of the set, and PC asks about the same sets often).
      */
-    static final class WidthCache {
-        private final java.util.concurrent.ConcurrentHashMap<String, Double> widths =
-                new java.util.concurrent.ConcurrentHashMap<>();
+    static double sharedWidth(DataSet data, int[] vars, double[][] u) {
+        return data.shared(new WidthKey(Arrays.stream(vars).boxed().toList()), d -> medianWidth(u));
+    }
 
-        /** The median-heuristic width of standardised points {@code u} of the variables {@code vars} on all rows. */
-        double width(int[] vars, double[][] u) {
-            return widths.computeIfAbsent(Arrays.toString(vars), k -> medianWidth(u));
-        }
+    /** The key of a shared kernel width: the variable set, in the order the test uses it. */
+    private record WidthKey(java.util.List<Integer> vars) {
     }
 
     static double squaredDistance(double[][] u, int i, int j) {
@@ -246,39 +295,47 @@ public final class KernelAlgebra {
      * The symmetric r × r matrix Aᵀ A of a column set A (row-major), each entry computed once.
      * Four entries of a row are accumulated together, so each element of column i is loaded
      * once for four products (the O(n r²) products of RCIT's conditioning features dominate
-     * its cost).
+     * its cost), and the rows are taken in blocks of {@value #PRODUCT_BLOCK}, so that the
+     * block of every column stays in the processor's cache while it is multiplied with all the
+     * others, instead of each column being streamed from memory r/4 times. Up to
+     * {@value #PRODUCT_BLOCK} rows the sums are those of unblocked dot products to the bit.
      */
     public static double[] symmetricCrossProduct(double[][] a) {
         int r = a.length;
         double[] out = new double[r * r];
-        for (int i = 0; i < r; i++) {
-            double[] ai = a[i];
-            int n = ai.length;
-            int j = i;
-            for (; j + 3 < r; j += 4) {
-                double[] b0 = a[j];
-                double[] b1 = a[j + 1];
-                double[] b2 = a[j + 2];
-                double[] b3 = a[j + 3];
-                double s0 = 0;
-                double s1 = 0;
-                double s2 = 0;
-                double s3 = 0;
-                for (int k = 0; k < n; k++) {
-                    double v = ai[k];
-                    s0 += v * b0[k];
-                    s1 += v * b1[k];
-                    s2 += v * b2[k];
-                    s3 += v * b3[k];
+        int n = r == 0 ? 0 : a[0].length;
+        for (int from = 0; from < n; from += PRODUCT_BLOCK) {
+            int to = Math.min(n, from + PRODUCT_BLOCK);
+            for (int i = 0; i < r; i++) {
+                double[] ai = a[i];
+                int j = i;
+                for (; j + 3 < r; j += 4) {
+                    double[] b0 = a[j];
+                    double[] b1 = a[j + 1];
+                    double[] b2 = a[j + 2];
+                    double[] b3 = a[j + 3];
+                    double s0 = 0;
+                    double s1 = 0;
+                    double s2 = 0;
+                    double s3 = 0;
+                    for (int k = from; k < to; k++) {
+                        double v = ai[k];
+                        s0 += v * b0[k];
+                        s1 += v * b1[k];
+                        s2 += v * b2[k];
+                        s3 += v * b3[k];
+                    }
+                    out[i * r + j] += s0;
+                    out[i * r + j + 1] += s1;
+                    out[i * r + j + 2] += s2;
+                    out[i * r + j + 3] += s3;
                 }
-                out[i * r + j] = s0;
-                out[i * r + j + 1] = s1;
-                out[i * r + j + 2] = s2;
-                out[i * r + j + 3] = s3;
+                for (; j < r; j++) {
+                    out[i * r + j] += dot(ai, from, a[j], from, to - from);
+                }
             }
-            for (; j < r; j++) {
-                out[i * r + j] = dot(ai, a[j]);
-            }
+        }
+        for (int i = 0; i < r; i++) {
             for (int c = i + 1; c < r; c++) {
                 out[c * r + i] = out[i * r + c];
             }

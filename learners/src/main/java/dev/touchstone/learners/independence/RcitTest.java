@@ -6,6 +6,9 @@ import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 
 import java.util.Arrays;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
 
 /**
  * The randomized conditional independence test RCIT (Strobl, Zhang and Visweswaran 2019,
@@ -40,6 +43,8 @@ public final class RcitTest implements IndependenceTest {
 
     /** The ridge of the regression of features on the conditioning set's features. */
     static final double RIDGE = 1e-10;
+    /** At most this many doubles (32 MB) of conditioning-set Cholesky factors are kept per test object. */
+    private static final long CACHED_FACTOR_DOUBLES = 1L << 22;
 
     /** The number of random features for ẍ and y, for S, and the seed they are drawn from. */
     public record Settings(int features, int conditioningFeatures, long seed) {
@@ -59,7 +64,18 @@ public final class RcitTest implements IndependenceTest {
     private final DataSet data;
     private final double alpha;
     private final Settings settings;
-    private final KernelAlgebra.WidthCache widths = new KernelAlgebra.WidthCache();
+    /**
+     * The Cholesky factors of (f_Sᵀf_S + λnI) of recent conditioning sets, for tests on every
+     * row: PC asks about the same set for many pairs, and the O(n m_S²) products of f_S with
+     * itself are the largest part of a test. The features themselves are cheaper to draw again
+     * (n m_S cosines) than to keep (n m_S doubles per set).
+     */
+    private final Map<String, double[]> factors = Collections.synchronizedMap(new LinkedHashMap<>(16, 0.75f, true) {
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<String, double[]> eldest) {
+            return size() * (long) settings.conditioningFeatures() * settings.conditioningFeatures() > CACHED_FACTOR_DOUBLES;
+        }
+    });
 
     private RcitTest(DataSet data, double alpha, Settings settings) {
         if (!(alpha > 0 && alpha < 1)) {
@@ -114,24 +130,44 @@ public final class RcitTest implements IndependenceTest {
         double[][] fy = features(rows, allRows, settings.features(), "y", new int[] {b});
         if (s.length > 0) {
             double[][] fz = features(rows, allRows, settings.conditioningFeatures(), "z", s);
-            double[] czz = KernelAlgebra.symmetricCrossProduct(fz);
-            int q = fz.length;
-            for (int i = 0; i < q; i++) {
-                czz[i * q + i] += RIDGE * n;
+            double[] chol = allRows ? factors.get(Arrays.toString(s)) : null;
+            if (chol == null) {
+                chol = conditioningFactor(fz, n);
+                if (allRows) {
+                    factors.put(Arrays.toString(s), chol);
+                }
             }
-            double[] chol = KernelAlgebra.cholesky(czz, q);
-            fx = residuals(fx, fz, chol);
-            fy = residuals(fy, fz, chol);
+            // x's and y's features are regressed together: each column of f_S is read once.
+            int cx = fx.length;
+            double[][] both = residuals(concat(fx, fy), fz, chol);
+            fx = Arrays.copyOfRange(both, 0, cx);
+            fy = Arrays.copyOfRange(both, cx, both.length);
         }
         return statistic(fx, fy, n);
     }
 
+    /** The lower Cholesky factor of f_Sᵀf_S + λnI. */
+    private static double[] conditioningFactor(double[][] fz, int n) {
+        double[] czz = KernelAlgebra.symmetricCrossProduct(fz);
+        int q = fz.length;
+        for (int i = 0; i < q; i++) {
+            czz[i * q + i] += RIDGE * n;
+        }
+        return KernelAlgebra.cholesky(czz, q);
+    }
+
+    private static double[][] concat(double[][] a, double[][] b) {
+        double[][] out = Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
+    }
+
     /** The centred random Fourier features (columns) of standardised points u, drawn from the seed and the variables. */
     private double[][] features(int[] rows, boolean allRows, int m, String role, int[] vars) {
-        double[][] u = KciTest.columns(data, rows, vars);
+        double[][] u = KernelAlgebra.standardised(data, rows, vars);
         int d = u.length;
         int n = u[0].length;
-        double sigma = allRows ? widths.width(vars, u) : KernelAlgebra.medianWidth(u);
+        double sigma = allRows ? KernelAlgebra.sharedWidth(data, vars, u) : KernelAlgebra.medianWidth(u);
         UniformRandomProvider rng = Seeds.random(Seeds.derive(settings.seed(), "rcit-features", role,
                 Arrays.toString(vars), m));
         ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng);
@@ -162,17 +198,21 @@ public final class RcitTest implements IndependenceTest {
         double[] beta = KernelAlgebra.crossProduct(fz, f);
         KernelAlgebra.choleskySolve(chol, q, beta, c);
         double[][] out = new double[c][];
-        int n = f[0].length;
         for (int j = 0; j < c; j++) {
-            double[] oj = f[j].clone();
-            for (int k = 0; k < q; k++) {
+            out[j] = f[j].clone();
+        }
+        int n = f[0].length;
+        // Each column of f_S is read once for all c outputs; every output still subtracts the
+        // terms in the order k = 0, 1, …, so the bits are those of one column at a time.
+        for (int k = 0; k < q; k++) {
+            double[] zk = fz[k];
+            for (int j = 0; j < c; j++) {
                 double bk = beta[k * c + j];
-                double[] zk = fz[k];
+                double[] oj = out[j];
                 for (int i = 0; i < n; i++) {
                     oj[i] -= bk * zk[i];
                 }
             }
-            out[j] = oj;
         }
         return out;
     }

@@ -11,22 +11,16 @@ import org.junit.jupiter.api.Test;
 
 import java.util.Arrays;
 
-import static dev.touchstone.learners.independence.KciTestTest.pValues;
-import static dev.touchstone.learners.independence.KciTestTest.rejections;
-import static dev.touchstone.learners.independence.KciTestTest.uniformity;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * RCIT (Strobl, Zhang and Visweswaran 2019, Journal of Causal Inference 7): its statistic
  * and gamma null checked against the eigenvalues of the product covariance computed with
  * Commons Math 3.6.1 (Σ λ_k z_k² has mean Σ λ_k and variance 2 Σ λ_k², a property of
- * weighted sums of independent χ²₁ variables), and its calibration and power on seeded
- * samples.
+ * weighted sums of independent χ²₁ variables). Its calibration and power over 300 seeded
+ * cases are in {@link KernelCalibrationTest}.
  */
 class RcitTestTest {
-
-    private static final KciTestTest.IndependenceTestFactory RCIT = d -> RcitTest.of(d, 0.05, RcitTest.Settings.defaults(4));
 
     @Test
     @DisplayName("statistic n‖Ĉ_xy‖² and gamma moments Σλ, 2Σλ² from Commons Math's Covariance and EigenDecomposition of the products r_x ⊗ r_y")
@@ -68,26 +62,6 @@ class RcitTestTest {
         assertEquals(mean, r.nullMean(), 1e-9 * mean);
         assertEquals(var, r.nullVariance(), 1e-9 * var);
         assertEquals(1 - new GammaDistribution(mean * mean / var, var / mean).cumulativeProbability(stat), r.pValue(), 1e-9);
-    }
-
-    @Test
-    @DisplayName("null calibration at n = 500: p-values uniform by KS (p > 0.01), independent (100 cases) and given a nonlinear common cause (100 cases)")
-    void calibration() {
-        double[] independent = pValues(RCIT, KernelNullData.Case.INDEPENDENT, new int[0], 100, 500, 31);
-        assertTrue(uniformity(independent) > 0.01, "KS p = " + uniformity(independent));
-        double[] conditional = pValues(RCIT, KernelNullData.Case.COMMON_CAUSE, new int[] {2}, 100, 500, 32);
-        assertTrue(uniformity(conditional) > 0.01, "KS p = " + uniformity(conditional) + " " + Arrays.toString(conditional));
-        double[] marginal = pValues(RCIT, KernelNullData.Case.COMMON_CAUSE, new int[0], 20, 500, 33);
-        assertTrue(rejections(marginal, 0.05) >= 18, Arrays.toString(marginal));
-    }
-
-    @Test
-    @DisplayName("power at n = 500, α = 0.05: y = sin(2x) + e and y = x² + e rejected in ≥ 90% of 50 cases each")
-    void power() {
-        double[] sine = pValues(RCIT, KernelNullData.Case.SINE, new int[0], 50, 500, 41);
-        double[] square = pValues(RCIT, KernelNullData.Case.SQUARE, new int[0], 50, 500, 42);
-        assertTrue(rejections(sine, 0.05) >= 45, Arrays.toString(sine));
-        assertTrue(rejections(square, 0.05) >= 45, Arrays.toString(square));
     }
 
     @Test
