@@ -64,7 +64,7 @@ public enum Handoff {
      * Why {@code receiver} cannot be given the estimate of {@code giver} this way, or null when it can.
      * Only what the descriptions show is checked here; what depends on the estimate is checked when it is handed on.
      */
-    String refusal(LearnerDescription giver, LearnerDescription receiver) {
+    public String refusal(LearnerDescription giver, LearnerDescription receiver) {
         switch (this) {
             case ALLOWED_EDGES:
                 return receiver.knowledge().contains(KnowledgeUse.FORBIDDEN_EDGES) ? null
