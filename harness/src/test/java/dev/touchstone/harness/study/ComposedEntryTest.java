@@ -122,7 +122,7 @@ class ComposedEntryTest {
     }
 
     @Test
-    @DisplayName("the steps of the study's examples are the catalogue's learners")
+    @DisplayName("a composed entry's steps are the catalogue's learners, in the order written")
     void stepsUseCatalogueLearners() {
         Plan p = plan(HEAD + "  - id: x\n    steps: [{use: pc}, {use: ges, given: allowed-edges}]\n");
         ComposedLearner c = (ComposedLearner) p.configs().get(0).learner();
