@@ -4,8 +4,11 @@ import dev.touchstone.core.learner.Learner;
 import dev.touchstone.harness.outside.CommandLearner;
 import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.RunDefinition;
+import dev.touchstone.learners.composed.ComposedLearner;
+import dev.touchstone.learners.composed.ComposedStep;
 
 import java.util.LinkedHashSet;
+import java.util.List;
 import java.util.Set;
 
 /**
@@ -27,10 +30,11 @@ final class WorkerCheck {
         Set<String> missing = new LinkedHashSet<>();
         String source = null;
         for (RunDefinition r : plan.runs()) {
-            Learner l = r.config().learner();
-            if (l instanceof CommandLearner c && !c.spec().onWorkers()) {
-                missing.add(c.description().id());
-                source = c.spec().source();
+            for (Learner l : stepsOf(r.config().learner())) {
+                if (l instanceof CommandLearner c && !c.spec().onWorkers()) {
+                    missing.add(c.description().id());
+                    source = c.spec().source();
+                }
             }
         }
         if (missing.isEmpty()) {
@@ -42,4 +46,13 @@ final class WorkerCheck {
                 + (missing.size() == 1 ? "it" : "them") + " on every worker and add `installed_on_workers: true`"
                 + " to " + (missing.size() == 1 ? "its entry" : "their entries") + " (docs/outside-learners.md)";
     }
+
+    /** The learners a run calls: the learner itself, or every step of a composed one. */
+    private static List<Learner> stepsOf(Learner learner) {
+        if (learner instanceof ComposedLearner c) {
+            return c.steps().stream().map(ComposedStep::learner).toList();
+        }
+        return List.of(learner);
+    }
+
 }

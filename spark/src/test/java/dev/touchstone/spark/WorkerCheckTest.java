@@ -44,6 +44,17 @@ class WorkerCheckTest {
     }
 
     @Test
+    @DisplayName("a command as a step of a composed learner is refused on a cluster too (the study travels as text)")
+    void composedStep() {
+        String study = STUDY.replace("  - {id: mine, use: my-method}\n", "  - id: mine\n    steps:\n"
+                + "      - {use: my-method}\n      - {use: hill-climbing, given: allowed-edges}\n");
+        Plan p = new RunRecipe(study, "learners.yaml", learners(""), "/tmp", null).rebuild().plan();
+        assertEquals("my-method-then-hill-climbing", p.configs().get(0).use());
+        String why = WorkerCheck.refusal(p, "spark://127.0.0.1:7077");
+        assertTrue(why != null && why.contains("my-method"), why);
+    }
+
+    @Test
     @DisplayName("through the command line: exit 2 and one line, before any Spark context starts")
     void commandLine(@TempDir Path tmp) throws IOException {
         Path study = Files.writeString(tmp.resolve("s.yaml"), STUDY);

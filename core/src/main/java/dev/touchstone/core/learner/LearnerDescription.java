@@ -31,6 +31,7 @@ public final class LearnerDescription {
     private final List<String> assumptions;
     private final List<ParameterSpec> parameters;
     private final OracleUse oracle;
+    private final boolean takesStartGraph;
 
     private LearnerDescription(Builder b) {
         this.id = b.id;
@@ -45,6 +46,7 @@ public final class LearnerDescription {
         this.assumptions = List.copyOf(b.assumptions);
         this.parameters = List.copyOf(b.parameters);
         this.oracle = b.oracle;
+        this.takesStartGraph = b.takesStartGraph;
     }
 
     /** Starts a description; {@code id} is lower-case words joined by hyphens, e.g. {@code pc-stable}. */
@@ -97,6 +99,11 @@ public final class LearnerDescription {
         return oracle;
     }
 
+    /** Whether the learner can start its search from a graph given with {@link LearnerInput#withStart}. */
+    public boolean takesStartGraph() {
+        return takesStartGraph;
+    }
+
     /** The declared parameter of this name, or null. */
     public ParameterSpec parameter(String name) {
         for (ParameterSpec p : parameters) {
@@ -108,11 +115,14 @@ public final class LearnerDescription {
     }
 
     /**
-     * Checks that this learner accepts the input: data kind, missing cells, oracle.
+     * Checks that this learner accepts the input: data kind, missing cells, oracle, start graph.
      *
      * @throws LearnerException saying what it got and what it accepts
      */
     public void checkAccepts(LearnerInput input) {
+        if (input.startGraph().isPresent() && !takesStartGraph) {
+            throw new LearnerException("learner " + id + " cannot start from a given graph");
+        }
         if (input.isOracle()) {
             if (oracle == OracleUse.NONE) {
                 throw new LearnerException("learner " + id + " cannot use the oracle");
@@ -154,6 +164,7 @@ public final class LearnerDescription {
         private final List<String> assumptions = new ArrayList<>();
         private final List<ParameterSpec> parameters = new ArrayList<>();
         private OracleUse oracle = OracleUse.NONE;
+        private boolean takesStartGraph;
 
         private Builder(String id) {
             if (id == null || !ID.matcher(id).matches()) {
@@ -215,6 +226,12 @@ public final class LearnerDescription {
 
         public Builder oracle(OracleUse o) {
             this.oracle = o;
+            return this;
+        }
+
+        /** Declares that the learner starts its search from the input's start graph when there is one. */
+        public Builder takesStartGraph() {
+            this.takesStartGraph = true;
             return this;
         }
 

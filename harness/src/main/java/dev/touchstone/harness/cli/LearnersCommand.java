@@ -54,7 +54,8 @@ final class LearnersCommand implements Callable<Integer> {
                 out.println("    " + d.summary());
                 out.println("    publication: " + d.publication());
                 out.println("    missing values: " + word(d.missingValues().name()) + "; oracle: " + d.oracle().word()
-                        + "; knowledge: " + (d.knowledge().isEmpty() ? "none" : knowledge(d)));
+                        + "; knowledge: " + (d.knowledge().isEmpty() ? "none" : knowledge(d))
+                        + (d.takesStartGraph() ? "; can start from a given graph" : ""));
                 for (String a : d.assumptions()) {
                     out.println("    assumes: " + a);
                 }
@@ -88,6 +89,7 @@ final class LearnersCommand implements Callable<Integer> {
             kn.add(word(k.name()));
         }
         o.put("oracle", d.oracle().word());
+        o.put("takes_start_graph", d.takesStartGraph());
         ArrayNode as = o.putArray("assumptions");
         d.assumptions().forEach(as::add);
         ArrayNode ps = o.putArray("parameters");

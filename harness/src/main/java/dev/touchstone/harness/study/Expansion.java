@@ -1,7 +1,10 @@
 package dev.touchstone.harness.study;
 
+import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.composed.ComposedLearner;
+import dev.touchstone.learners.composed.ComposedStep;
 
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -112,7 +115,7 @@ public final class Expansion {
         List<LearnerConfig> out = new ArrayList<>();
         Map<String, LearnerConfig> byCanonical = new HashMap<>();
         for (LearnerEntry e : study.learners()) {
-            var learner = learners.find(e.use()).learner();
+            Learner learner = learnerOf(e, learners);
             for (Map<String, Object> given : product(e.axes())) {
                 ParameterValues values;
                 try {
@@ -128,7 +131,7 @@ public final class Expansion {
                     }
                 });
                 LearnerConfig c = new LearnerConfig(out.size(), e.id(), learner, values, varied,
-                        fingerprints.apply(e.use()), e.knowledge());
+                        fingerprint(e, learner), e.knowledge());
                 LearnerConfig same = byCanonical.putIfAbsent(c.canonical(), c);
                 if (same != null) {
                     throw new StudyException(e.place(), "learners." + e.id(), "the configuration " + c.label()
@@ -139,6 +142,36 @@ public final class Expansion {
             }
         }
         return out;
+    }
+
+    /** The entry's learner: the catalogue's, or the composition of the catalogue learners its steps use. */
+    private static Learner learnerOf(LearnerEntry e, dev.touchstone.harness.catalog.LearnerCatalog learners) {
+        if (!e.composed()) {
+            return learners.find(e.use()).learner();
+        }
+        List<ComposedStep> steps = new ArrayList<>();
+        for (LearnerEntry.Step s : e.steps()) {
+            steps.add(new ComposedStep(learners.find(s.use()).learner(), s.given()));
+        }
+        return ComposedLearner.of(steps);
+    }
+
+    /**
+     * What defines the entry's learner beyond its id and values; for a composed entry its
+     * composition (so the hand-ons are part of a run's identity) and each step's own fingerprint.
+     */
+    private String fingerprint(LearnerEntry e, Learner learner) {
+        if (!(learner instanceof ComposedLearner c)) {
+            return fingerprints.apply(e.use());
+        }
+        StringBuilder sb = new StringBuilder(c.composition());
+        for (LearnerEntry.Step s : e.steps()) {
+            String f = fingerprints.apply(s.use());
+            if (!f.isEmpty()) {
+                sb.append(" [").append(s.use()).append(": ").append(f).append(']');
+            }
+        }
+        return sb.toString();
     }
 
     /** All combinations of the axes, in order (last axis fastest). */

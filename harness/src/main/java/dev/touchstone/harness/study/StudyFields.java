@@ -30,6 +30,10 @@ public final class StudyFields {
     public static final String ENTRY_USE = "use";
     public static final String ENTRY_WITH = "with";
     public static final String ENTRY_KNOWLEDGE = "knowledge";
+    public static final String ENTRY_STEPS = "steps";
+
+    /** Key of a composed entry's step besides {@code use} and {@code with}: how it receives the step before's estimate. */
+    public static final String STEP_GIVEN = "given";
 
     /** Keys of {@code limits}. */
     public static final String LIMIT_SECONDS = "seconds";
@@ -53,7 +57,8 @@ public final class StudyFields {
             new Field(SAMPLES, "list", true, null,
                     "Sample sizes: whole numbers of at least " + MIN_SAMPLES + ", and/or `oracle` (infinite sample)."),
             new Field(LEARNERS, "list", true, null,
-                    "Learner entries: `{id: NAME, use: LEARNER, with: {PARAMETER: VALUE or [VALUES]}}`, or just a learner id."),
+                    "Learner entries: `{id: NAME, use: LEARNER, with: {PARAMETER: VALUE or [VALUES]}}`, or just a learner id;"
+                            + " `{id: NAME, steps: [...]}` composes learners (see below)."),
             new Field(METRICS, "list", false, "the default metrics",
                     "Metric names to compute for every run."),
             new Field(LIMITS, "map", false, "no time limit; max_runs " + Limits.DEFAULT_MAX_RUNS,

@@ -6,6 +6,9 @@ import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.FormerNames;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.harness.catalog.LearnerCatalog;
+import dev.touchstone.learners.composed.ComposedLearner;
+import dev.touchstone.learners.composed.ComposedStep;
+import dev.touchstone.learners.composed.Handoff;
 
 import java.nio.file.Path;
 import java.time.Duration;
@@ -346,13 +349,22 @@ public final class StudyReader {
             throw StudyException.at(item, "expected a learner id or {id: …, use: …, with: {…}}, found "
                     + item.describe());
         }
+        if (item.get(StudyFields.ENTRY_STEPS) != null) {
+            return composedEntry(item);
+        }
         checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH,
-                StudyFields.ENTRY_KNOWLEDGE));
+                StudyFields.ENTRY_KNOWLEDGE, StudyFields.ENTRY_STEPS));
         Node useNode = required(item, StudyFields.ENTRY_USE);
         LearnerCatalog.Entry found = findLearner(useNode, text(useNode));
         Node idNode = item.get(StudyFields.ENTRY_ID);
         String id = idNode == null ? found.id() : checkId(idNode, text(idNode));
         LearnerDescription d = found.learner().description();
+        return new LearnerEntry(id, found.id(), axes(item, d), knowledge(item.get(StudyFields.ENTRY_KNOWLEDGE), d),
+                item.place());
+    }
+
+    /** The parameter axes of an entry or step's {@code with}, checked against the learner's declared parameters. */
+    private Map<String, List<Object>> axes(Node item, LearnerDescription d) {
         Map<String, List<Object>> axes = new LinkedHashMap<>();
         Node with = item.get(StudyFields.ENTRY_WITH);
         if (with != null && !with.isNull()) {
@@ -375,8 +387,70 @@ public final class StudyReader {
                         "learner " + d.id() + " needs this parameter (allowed: " + spec.allowed() + ")");
             }
         }
-        return new LearnerEntry(id, found.id(), axes, knowledge(item.get(StudyFields.ENTRY_KNOWLEDGE), d),
+        return axes;
+    }
+
+    /**
+     * An entry made of steps: {@code {id: …, steps: [{use: …, with: {…}}, {use: …, with: {…}, given: …}]}}.
+     * Each step is checked like a learner entry, and each hand-on against what the receiving
+     * learner honours, at the step's own line.
+     */
+    private LearnerEntry composedEntry(Node item) {
+        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_STEPS, StudyFields.ENTRY_KNOWLEDGE));
+        Node stepsNode = item.get(StudyFields.ENTRY_STEPS);
+        if (!stepsNode.isList() || stepsNode.items().size() < 2) {
+            throw StudyException.at(stepsNode, "expected a list of at least two steps ({use: …, with: {…}, given: …}),"
+                    + " found " + stepsNode.describe());
+        }
+        List<LearnerEntry.Step> steps = new ArrayList<>();
+        List<ComposedStep> composed = new ArrayList<>();
+        for (Node stepNode : stepsNode.items()) {
+            requireMap(stepNode);
+            checkKeys(stepNode, List.of(StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH, StudyFields.STEP_GIVEN));
+            Node useNode = required(stepNode, StudyFields.ENTRY_USE);
+            LearnerCatalog.Entry found = findLearner(useNode, text(useNode));
+            Handoff given = given(stepNode, composed, found.learner().description());
+            steps.add(new LearnerEntry.Step(found.id(), axes(stepNode, found.learner().description()), given));
+            composed.add(new ComposedStep(found.learner(), given));
+        }
+        ComposedLearner learner;
+        try {
+            learner = ComposedLearner.of(composed);
+        } catch (IllegalArgumentException e) {
+            throw StudyException.at(stepsNode, e.getMessage());
+        }
+        Node idNode = item.get(StudyFields.ENTRY_ID);
+        String id = idNode == null ? learner.description().id() : checkId(idNode, text(idNode));
+        return new LearnerEntry(id, steps, knowledge(item.get(StudyFields.ENTRY_KNOWLEDGE), learner.description()),
                 item.place());
+    }
+
+    /** A step's {@code given}: none for the first step, one of the hand-ons the receiving learner honours after it. */
+    private static Handoff given(Node stepNode, List<ComposedStep> before, LearnerDescription receiver) {
+        Node node = stepNode.get(StudyFields.STEP_GIVEN);
+        if (before.isEmpty()) {
+            if (node != null) {
+                throw StudyException.at(node, "the first step receives nothing, so it takes no '"
+                        + StudyFields.STEP_GIVEN + "'");
+            }
+            return null;
+        }
+        if (node == null) {
+            throw new StudyException(stepNode.place(), stepNode.path() + "." + StudyFields.STEP_GIVEN,
+                    "a step after the first must say how it is given the estimate of the step before (allowed: "
+                            + String.join(", ", Handoff.words()) + ")");
+        }
+        String word = text(node);
+        Handoff given = Handoff.of(word);
+        if (given == null) {
+            throw StudyException.at(node, "unknown hand-on '" + word + "' (allowed: "
+                    + String.join(", ", Handoff.words()) + ")");
+        }
+        String refusal = given.refusal(before.get(before.size() - 1).learner().description(), receiver);
+        if (refusal != null) {
+            throw StudyException.at(node, refusal);
+        }
+        return given;
     }
 
     /** The entry's {@code knowledge}: none (default) or tiers, which the learner must honour. */

@@ -54,11 +54,21 @@ public final class StudyWriter {
         for (LearnerEntry e : s.learners()) {
             Map<String, Object> entry = new LinkedHashMap<>();
             entry.put(StudyFields.ENTRY_ID, e.id());
-            entry.put(StudyFields.ENTRY_USE, e.use());
-            if (!e.axes().isEmpty()) {
-                Map<String, Object> with = new LinkedHashMap<>();
-                e.axes().forEach((k, v) -> with.put(k, v.size() == 1 ? v.get(0) : v));
-                entry.put(StudyFields.ENTRY_WITH, with);
+            if (e.composed()) {
+                List<Object> steps = new ArrayList<>();
+                for (LearnerEntry.Step step : e.steps()) {
+                    Map<String, Object> m2 = new LinkedHashMap<>();
+                    m2.put(StudyFields.ENTRY_USE, step.use());
+                    putWith(m2, step.axes());
+                    if (step.given() != null) {
+                        m2.put(StudyFields.STEP_GIVEN, step.given().word());
+                    }
+                    steps.add(m2);
+                }
+                entry.put(StudyFields.ENTRY_STEPS, steps);
+            } else {
+                entry.put(StudyFields.ENTRY_USE, e.use());
+                putWith(entry, e.axes());
             }
             if (e.knowledge() != KnowledgeSource.NONE) {
                 entry.put(StudyFields.ENTRY_KNOWLEDGE, e.knowledge().word());
@@ -83,6 +93,14 @@ public final class StudyWriter {
             return "# The study as run, normalised by touchstone: every field explicit.\n" + YAML.writeValueAsString(m);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("the study could not be written as YAML", e);
+        }
+    }
+
+    private static void putWith(Map<String, Object> entry, Map<String, List<Object>> axes) {
+        if (!axes.isEmpty()) {
+            Map<String, Object> with = new LinkedHashMap<>();
+            axes.forEach((k, v) -> with.put(k, v.size() == 1 ? v.get(0) : v));
+            entry.put(StudyFields.ENTRY_WITH, with);
         }
     }
 

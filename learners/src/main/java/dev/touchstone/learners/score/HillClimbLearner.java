@@ -18,7 +18,8 @@ import java.util.Map;
 /**
  * Hill climbing over DAGs with a tabu list and seeded restarts, with any of the local scores
  * (see {@link HillClimbSearch} for the method, its sources and its cost). Returns a DAG.
- * Stateless and thread-safe.
+ * The first climb starts from the input's start graph when there is one (see {@link StartDag}),
+ * otherwise from the empty graph. Stateless and thread-safe.
  */
 public final class HillClimbLearner implements Learner {
 
@@ -40,7 +41,8 @@ public final class HillClimbLearner implements Learner {
                                 + " Machine Learning 20; tabu search after Glover (1989)",
                         GraphClass.DAG)
                 .assumption("the DAG returned is one member of its equivalence class; its orientations within"
-                        + " the class are not identified by the data");
+                        + " the class are not identified by the data")
+                .takesStartGraph();
         b.parameter(ParameterSpec.integer(RECENT_MOVES_BARRED, 10, 0, 10000,
                 "number of recent moves whose inverse may not be taken (a tabu list, Glover 1989; 0: none)"));
         b.parameter(ParameterSpec.integer(PATIENCE, 10, 0, 100000,
@@ -67,7 +69,7 @@ public final class HillClimbLearner implements Learner {
         HillClimbSearch search = new HillClimbSearch(score, index, ScoreSettings.maxParents(parameters),
                 parameters.getInt(RECENT_MOVES_BARRED), parameters.getInt(PATIENCE), parameters.getInt(PERTURBED_STARTS),
                 parameters.getInt(RANDOM_MOVES_PER_START), context);
-        Graph dag = search.run().toGraph(names);
+        Graph dag = search.run(StartDag.of(input.startGraph(), names, knowledge)).toGraph(names);
         return new Estimate(dag, GraphClass.DAG, Map.of("steps", (double) search.steps()));
     }
 

@@ -61,12 +61,8 @@ final class HillClimbSearch {
         return steps;
     }
 
-    /** The best DAG found over all climbs. */
-    Pdag run() {
-        Pdag start = new Pdag(p);
-        for (int[] e : knowledge.requiredEdges()) {
-            start.addDirected(e[0], e[1]);
-        }
+    /** The best DAG found over all climbs, the first climb starting from {@code start} (a DAG holding the required edges). */
+    Pdag run(Pdag start) {
         Climb best = climb(start);
         UniformRandomProvider rng = context.random("hill-climbing restarts");
         for (int r = 0; r < restarts; r++) {
