@@ -64,11 +64,7 @@ public final class Covariances {
         double[] mean = new double[p];
         for (int j = 0; j < p; j++) {
             values[j] = asDoubles(data, j);
-            double sum = 0;
-            for (int r : keep) {
-                sum += values[j][r];
-            }
-            mean[j] = m == 0 ? 0 : sum / m;
+            mean[j] = mean(values[j], keep);
         }
         double[][] rows = new double[m][p];
         boolean all = m == n;
@@ -85,7 +81,16 @@ public final class Covariances {
         return rows;
     }
 
-    private static double[] asDoubles(DataSet data, int column) {
+    /** The mean of {@code values} over the rows {@code keep}, summed in their order (0 when there are none). */
+    static double mean(double[] values, int[] keep) {
+        double sum = 0;
+        for (int r : keep) {
+            sum += values[r];
+        }
+        return keep.length == 0 ? 0 : sum / keep.length;
+    }
+
+    static double[] asDoubles(DataSet data, int column) {
         if (!data.isDiscrete(column)) {
             return data.continuous(column);
         }

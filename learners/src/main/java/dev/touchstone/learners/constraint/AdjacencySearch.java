@@ -1,6 +1,7 @@
 package dev.touchstone.learners.constraint;
 
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.independence.FisherZTest;
 import dev.touchstone.learners.independence.IndependenceTest;
 
 import java.util.Arrays;
@@ -22,6 +23,9 @@ import java.util.Arrays;
  *
  * <p>Cost: at most O(p² · C(d, ℓ)) tests at level ℓ for maximum degree d; for sparse
  * truths the number of tests grows roughly as p² at level 0 and as p · d^(ℓ+1) after.
+ * Memory: the skeleton holds only the pairs level 0 keeps ({@link Skeleton}), and Fisher z
+ * screens level 0 without a p × p matrix above {@link FisherZTest#DENSE_LIMIT} variables, so
+ * a search needs O(n·p + edges) rather than O(p²).
  * The order-independent variant runs each level's pairs on {@link RunContext#threads()}
  * threads. The deadline is checked before every pair.
  */
@@ -56,38 +60,145 @@ final class AdjacencySearch {
 
     /** The skeleton the tests leave, forbidden pairs included; the caller removes them with {@link #removeForbidden}. */
     Skeleton searchKeepingForbidden() {
-        Skeleton s = new Skeleton(test.variables());
         context.checkDeadline();
-        if (variant == SkeletonVariant.SEQUENTIAL) {
-            sequential(s);
-        } else {
-            orderIndependent(s);
+        Skeleton s = levelZero();
+        if (maxDepth >= 1) {
+            if (variant == SkeletonVariant.SEQUENTIAL) {
+                sequential(s);
+            } else {
+                orderIndependent(s);
+            }
         }
         return s;
+    }
+
+    /**
+     * Level 0, the same for both variants (given ∅ no removal changes another pair's question):
+     * every pair not required by the knowledge is tested once, and the skeleton is built from
+     * the pairs that stay, so the p² complete graph is never stored. Fisher z screens all pairs
+     * in tiles ({@link FisherZTest#levelZero}); other tests are asked pair by pair on
+     * {@link RunContext#threads()} threads.
+     */
+    private Skeleton levelZero() {
+        int p = test.variables();
+        int[][] kept;
+        long required = requiredPairCount();
+        if (test instanceof FisherZTest fisher) {
+            kept = fisher.levelZero(context.threads(), context::checkDeadline);
+            context.countTests((long) p * (p - 1) / 2 - required);
+        } else {
+            kept = testPairsGivenNothing(p);
+        }
+        if (required > 0) {
+            kept = withRequired(kept);
+        }
+        return new Skeleton(kept);
+    }
+
+    /** The neighbour lists of the pairs that test dependent given ∅ (required pairs untested and left out). */
+    private int[][] testPairsGivenNothing(int p) {
+        int[][] above = new int[p][];
+        java.util.Queue<long[]> counts = new java.util.concurrent.ConcurrentLinkedQueue<>();
+        try {
+            ParallelLoop.run(p, context.threads(), () -> {
+                long[] tests = new long[1];
+                counts.add(tests);
+                int[] buffer = new int[p];
+                int[] none = NO_CANDIDATES;
+                return x -> {
+                    int k = 0;
+                    for (int y = x + 1; y < p; y++) {
+                        context.checkDeadline();
+                        if (knowledge.adjacencyRequired(x, y)) {
+                            continue;
+                        }
+                        tests[0]++;
+                        if (!test.independent(x, y, none)) {
+                            buffer[k++] = y;
+                        }
+                    }
+                    above[x] = Arrays.copyOf(buffer, k);
+                };
+            });
+        } finally {
+            for (long[] c : counts) {
+                context.countTests(c[0]);
+            }
+        }
+        return symmetric(above);
+    }
+
+    /** Full ascending neighbour lists from the lists of larger partners. */
+    private static int[][] symmetric(int[][] above) {
+        int p = above.length;
+        int[] degree = new int[p];
+        for (int x = 0; x < p; x++) {
+            degree[x] += above[x].length;
+            for (int y : above[x]) {
+                degree[y]++;
+            }
+        }
+        int[][] nb = new int[p][];
+        for (int v = 0; v < p; v++) {
+            nb[v] = new int[degree[v]];
+        }
+        int[] fill = new int[p];
+        // Smaller partners arrive in ascending order of x, before the larger ones: each list ends up sorted.
+        for (int x = 0; x < p; x++) {
+            for (int y : above[x]) {
+                nb[y][fill[y]++] = x;
+            }
+        }
+        for (int x = 0; x < p; x++) {
+            System.arraycopy(above[x], 0, nb[x], fill[x], above[x].length);
+        }
+        return nb;
+    }
+
+    /** The number of unordered pairs the knowledge requires adjacent. */
+    private long requiredPairCount() {
+        java.util.Set<Long> pairs = new java.util.HashSet<>();
+        int p = test.variables();
+        for (int[] r : knowledge.requiredPairs()) {
+            pairs.add((long) Math.min(r[0], r[1]) * p + Math.max(r[0], r[1]));
+        }
+        return pairs.size();
+    }
+
+    /** The lists with the required pairs added (they are never tested, so never removed). */
+    private int[][] withRequired(int[][] kept) {
+        int[][] out = kept.clone();
+        for (int[] r : knowledge.requiredPairs()) {
+            out[r[0]] = insert(out[r[0]], r[1]);
+            out[r[1]] = insert(out[r[1]], r[0]);
+        }
+        return out;
+    }
+
+    private static int[] insert(int[] sorted, int v) {
+        int i = Arrays.binarySearch(sorted, v);
+        if (i >= 0) {
+            return sorted;
+        }
+        int at = -i - 1;
+        int[] out = new int[sorted.length + 1];
+        System.arraycopy(sorted, 0, out, 0, at);
+        out[at] = v;
+        System.arraycopy(sorted, at, out, at + 1, sorted.length - at);
+        return out;
     }
 
     private void sequential(Skeleton s) {
         int p = s.size();
         SubsetSearch search = new SubsetSearch(test);
         try {
-            for (int level = 0; level <= maxDepth; level++) {
+            for (int level = 1; level <= maxDepth; level++) {
                 boolean any = false;
                 for (int x = 0; x < p; x++) {
                     int[] around = s.neighbours(x);
                     for (int y : around) {
                         context.checkDeadline();
                         if (!s.adjacent(x, y) || knowledge.adjacencyRequired(x, y)) {
-                            continue;
-                        }
-                        if (level == 0) {
-                            // Only ∅ to try: no candidate list (O(p) per pair), and (y, x | ∅) would repeat
-                            // the question (x, y | ∅) already asked when x < y, of a symmetric test.
-                            if (x < y) {
-                                any = true;
-                                if (search.find(x, y, NO_CANDIDATES, 0, 0) != null) {
-                                    s.remove(x, y, NO_CANDIDATES);
-                                }
-                            }
                             continue;
                         }
                         int[] cand = without(s.neighbours(x), y);
@@ -112,7 +223,7 @@ final class AdjacencySearch {
 
     private void orderIndependent(Skeleton s) {
         int p = s.size();
-        for (int level = 0; level <= maxDepth; level++) {
+        for (int level = 1; level <= maxDepth; level++) {
             int[][] nb = new int[p][];
             for (int v = 0; v < p; v++) {
                 nb[v] = s.neighbours(v);
@@ -192,13 +303,6 @@ final class AdjacencySearch {
             context.checkDeadline();
             int x = xs[i];
             int y = ys[i];
-            if (level == 0) {
-                // The empty set is the only candidate on either side: one test, and no candidate list
-                // (copying x's ~p neighbours for each of the ~p²/2 pairs made level 0 cost O(p³)). Asking
-                // (y, x | ∅) as well would repeat the same question of a symmetric test.
-                found[i] = search.find(x, y, cand, 0, 0);
-                return;
-            }
             int m = fill(nb[x], y);
             int[] sep = search.find(x, y, cand, m, level);
             if (sep == null) {

@@ -60,8 +60,8 @@ final class ColliderOrientation {
         int p = skeleton.size();
         MutableGraph g = Graph.builder(names);
         for (int a = 0; a < p; a++) {
-            for (int b = a + 1; b < p; b++) {
-                if (skeleton.adjacent(a, b)) {
+            for (int b : skeleton.neighbours(a)) {
+                if (b > a) {
                     g.addUndirected(a, b);
                 }
             }

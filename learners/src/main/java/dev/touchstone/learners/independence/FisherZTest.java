@@ -1,9 +1,15 @@
 package dev.touchstone.learners.independence;
 
+import dev.touchstone.core.data.CentredColumns;
 import dev.touchstone.core.data.CovarianceMatrix;
 import dev.touchstone.core.data.DataSet;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.numbers.gamma.Erfc;
+
+import java.util.Arrays;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.stream.IntStream;
 
 /**
  * Fisher's z test of zero partial correlation for (approximately) Gaussian data, on a
@@ -20,23 +26,44 @@ import org.apache.commons.numbers.gamma.Erfc;
  * <p>Declared choices: when x or y is a linear function of S (zero residual variance) the
  * partial correlation is undefined and the test accepts independence (p = 1), since the
  * variable carries no further information given S; when n − |S| − 3 ≤ 0 there are too few
- * rows to test and independence is accepted as well. Thread-safe and immutable.
+ * rows to test and independence is accepted as well.
+ *
+ * <p>Two ways to hold the correlations, with one switch point ({@link #DENSE_LIMIT}): up to
+ * that many variables the p × p matrix, shared through the data set; above it no matrix at
+ * all, but the centred columns ({@link CentredColumns}, n × p doubles) from which
+ * {@link #levelZero} screens every pair tile by tile, keeping the correlations of the pairs
+ * that test dependent, and from which any other pair a conditional test needs is computed
+ * when asked. Both give bitwise the same correlations, hence the same decisions; the matrix
+ * is faster when it fits, since every later read is one array access. Thread-safe; the
+ * decisions are a pure function of the arguments (level 0 only fills a cache).
  */
 public final class FisherZTest implements IndependenceTest {
 
+    /**
+     * The most variables for which {@link #of(DataSet, double)} builds the p × p correlation
+     * matrix (128 MB at this size, and about three times that while the covariance is formed);
+     * above it the test works from the centred columns.
+     */
+    public static final int DENSE_LIMIT = 4096;
+
     private static final double INV_SQRT2 = 0.7071067811865476;
+    /** Columns per tile of level 0: a 128 × 256 tile of sums (256 kB) stays in the level-2 cache. */
+    private static final int TILE_COLUMNS = 256;
+    private static final int TILE_ROWS = 128;
 
     private final double[] correlation;
+    private final ScreenedCorrelations screened;
     private final int p;
     private final long n;
     private final double alpha;
     private final double[] threshold;
 
-    private FisherZTest(double[] correlation, int p, long n, double alpha) {
+    private FisherZTest(double[] correlation, ScreenedCorrelations screened, int p, long n, double alpha) {
         if (!(alpha > 0 && alpha < 1)) {
             throw new IllegalArgumentException("alpha must be in (0, 1), got " + alpha);
         }
         this.correlation = correlation;
+        this.screened = screened;
         this.p = p;
         this.n = n;
         this.alpha = alpha;
@@ -49,16 +76,33 @@ public final class FisherZTest implements IndependenceTest {
         }
     }
 
-    /** The test on the data set's shared covariance (rows with a missing cell are left out). */
+    /**
+     * The test on the data set's correlations over the rows with no missing cell: the shared
+     * matrix up to {@link #DENSE_LIMIT} variables, the centred columns above.
+     */
     public static FisherZTest of(DataSet data, double alpha) {
+        if (data.columns() > DENSE_LIMIT) {
+            return fromColumns(data, alpha);
+        }
         CovarianceMatrix cov = data.covariance();
         double[] corr = data.shared(CorrelationKey.INSTANCE, d -> cov.correlation().toArray());
-        return new FisherZTest(corr, cov.dimension(), cov.sampleSize(), alpha);
+        return new FisherZTest(corr, null, cov.dimension(), cov.sampleSize(), alpha);
+    }
+
+    /**
+     * The test working from the data set's centred columns (shared through the data set) with
+     * no p × p matrix, whatever the number of variables: what {@link #of(DataSet, double)}
+     * does above {@link #DENSE_LIMIT}, open to callers that compare the two.
+     */
+    public static FisherZTest fromColumns(DataSet data, double alpha) {
+        CentredColumns columns = data.shared(ColumnsKey.INSTANCE, CentredColumns::of);
+        return new FisherZTest(null, new ScreenedCorrelations(columns), columns.dimension(), columns.sampleSize(),
+                alpha);
     }
 
     /** The test on a covariance matrix estimated from {@link CovarianceMatrix#sampleSize()} rows. */
     public static FisherZTest of(CovarianceMatrix cov, double alpha) {
-        return new FisherZTest(cov.correlation().toArray(), cov.dimension(), cov.sampleSize(), alpha);
+        return new FisherZTest(cov.correlation().toArray(), null, cov.dimension(), cov.sampleSize(), alpha);
     }
 
     @Override
@@ -78,7 +122,7 @@ public final class FisherZTest implements IndependenceTest {
 
     /** The sample partial correlation of x and y given z (NaN when x or y is determined by z). */
     public double partialCorrelation(int x, int y, int[] z) {
-        return PartialCorrelation.of(correlation, p, x, y, z);
+        return partial(x, y, z, z.length);
     }
 
     @Override
@@ -92,7 +136,7 @@ public final class FisherZTest implements IndependenceTest {
         if (k >= threshold.length) {
             return true;
         }
-        double r = PartialCorrelation.of(correlation, p, x, y, z, k);
+        double r = partial(x, y, z, k);
         // NaN (undefined partial correlation) fails the comparison and so counts as independent.
         return !(Math.abs(r) >= threshold[k]);
     }
@@ -100,6 +144,226 @@ public final class FisherZTest implements IndependenceTest {
     @Override
     public String name() {
         return "fisher-z";
+    }
+
+    /**
+     * Level 0 of the adjacency search for every pair at once: the neighbours of each variable
+     * (ascending) among the variables it tests dependent on given the empty set, exactly the
+     * pairs for which {@code independent(x, y, new int[0])} is false. Without a matrix the
+     * correlations are computed in tiles of 128 × 256 pairs from the centred columns and only
+     * those of the pairs kept are stored, for the conditional tests that follow. Cost:
+     * n·p²/2 multiply-adds, memory O(n·p + kept pairs).
+     *
+     * @param threads  how many threads to use (1: the calling thread only)
+     * @param deadline called before every tile; what it throws stops the screen and is rethrown
+     */
+    public int[][] levelZero(int threads, Runnable deadline) {
+        int blocks = (p + TILE_COLUMNS - 1) / TILE_COLUMNS;
+        // Tile t covers the columns of block jb and the rows [i0, i0 + 128) that start below the block's end.
+        int tiles = 0;
+        for (int jb = 0; jb < blocks; jb++) {
+            tiles += (Math.min(p, (jb + 1) * TILE_COLUMNS) + TILE_ROWS - 1) / TILE_ROWS;
+        }
+        int[] tileBlock = new int[tiles];
+        int[] tileRow = new int[tiles];
+        int t = 0;
+        for (int jb = 0; jb < blocks; jb++) {
+            int end = Math.min(p, (jb + 1) * TILE_COLUMNS);
+            for (int i0 = 0; i0 < end; i0 += TILE_ROWS) {
+                tileBlock[t] = jb;
+                tileRow[t] = i0;
+                t++;
+            }
+        }
+        Kept[] found = new Kept[tiles];
+        ThreadLocal<double[][]> scratch = ThreadLocal.withInitial(() -> new double[][] {
+            new double[TILE_ROWS * TILE_COLUMNS], new double[TILE_ROWS * TILE_COLUMNS]});
+        ThreadLocal<double[][]> panels = ThreadLocal.withInitial(() -> new double[256][TILE_COLUMNS]);
+        java.util.function.IntConsumer tile = k -> {
+            deadline.run();
+            double[][] s = scratch.get();
+            found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, panels.get(), s[0], s[1]);
+        };
+        if (threads <= 1) {
+            for (int k = 0; k < tiles; k++) {
+                tile.accept(k);
+            }
+        } else {
+            ForkJoinPool pool = new ForkJoinPool(threads);
+            try {
+                pool.submit(() -> IntStream.range(0, found.length).parallel().forEach(tile)).get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted during level 0", e);
+            } catch (ExecutionException e) {
+                if (e.getCause() instanceof RuntimeException re) {
+                    throw re;
+                }
+                throw new IllegalStateException("level 0 failed", e.getCause());
+            } finally {
+                pool.shutdown();
+            }
+        }
+        return collect(found);
+    }
+
+    /** The pairs i < j of one tile that test dependent given ∅, with their correlations. */
+    private Kept screenTile(int i0, int j0, double[][] panel, double[] sums, double[] r) {
+        int j1 = Math.min(p, j0 + TILE_COLUMNS);
+        int i1 = Math.min(j1, i0 + TILE_ROWS);
+        int width = j1 - j0;
+        if (screened != null) {
+            screened.columns().correlationTile(i0, i1, j0, j1, panel, sums, r);
+        } else {
+            for (int i = i0; i < i1; i++) {
+                System.arraycopy(correlation, i * p + j0, r, (i - i0) * width, width);
+            }
+        }
+        Kept out = new Kept();
+        double t0 = threshold[0];
+        for (int i = i0; i < i1; i++) {
+            int row = (i - i0) * width;
+            for (int j = Math.max(j0, i + 1); j < j1; j++) {
+                double rij = r[row + j - j0];
+                // The decision of independent(i, j, ∅): the k = 0 partial correlation on a unit diagonal.
+                if (Math.abs(PartialCorrelation.unconditional(rij)) >= t0) {
+                    out.add(i, j, rij);
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Each variable's kept partners in ascending order; remembers their correlations when there is no matrix. */
+    private int[][] collect(Kept[] found) {
+        int[] degree = new int[p];
+        for (Kept k : found) {
+            for (int e = 0; e < k.size; e++) {
+                degree[k.a[e]]++;
+                degree[k.b[e]]++;
+            }
+        }
+        int[][] partners = new int[p][];
+        double[][] values = screened == null ? null : new double[p][];
+        for (int v = 0; v < p; v++) {
+            partners[v] = new int[degree[v]];
+            if (values != null) {
+                values[v] = new double[degree[v]];
+            }
+        }
+        int[] fill = new int[p];
+        for (Kept k : found) {
+            for (int e = 0; e < k.size; e++) {
+                int a = k.a[e];
+                int b = k.b[e];
+                partners[a][fill[a]] = b;
+                partners[b][fill[b]] = a;
+                if (values != null) {
+                    values[a][fill[a]] = k.r[e];
+                    values[b][fill[b]] = k.r[e];
+                }
+                fill[a]++;
+                fill[b]++;
+            }
+        }
+        for (int v = 0; v < p; v++) {
+            sortTogether(partners[v], values == null ? null : values[v]);
+        }
+        if (screened != null) {
+            screened.keep(partners, values);
+        }
+        return partners;
+    }
+
+    /** Sorts {@code keys} ascending, permuting {@code values} (if any) alike. */
+    private static void sortTogether(int[] keys, double[] values) {
+        boolean sorted = true;
+        for (int i = 1; i < keys.length && sorted; i++) {
+            sorted = keys[i - 1] < keys[i];
+        }
+        if (sorted) {
+            return;
+        }
+        Integer[] order = new Integer[keys.length];
+        for (int i = 0; i < order.length; i++) {
+            order[i] = i;
+        }
+        Arrays.sort(order, (u, w) -> Integer.compare(keys[u], keys[w]));
+        int[] k = keys.clone();
+        for (int i = 0; i < order.length; i++) {
+            keys[i] = k[order[i]];
+        }
+        if (values != null) {
+            double[] v = values.clone();
+            for (int i = 0; i < order.length; i++) {
+                values[i] = v[order[i]];
+            }
+        }
+    }
+
+    /** The partial correlation from the matrix, or from the (k + 2)² correlations gathered when there is none. */
+    private double partial(int x, int y, int[] z, int k) {
+        if (correlation != null) {
+            return PartialCorrelation.of(correlation, p, x, y, z, k);
+        }
+        int q = k + 2;
+        Gathered g = GATHERED.get().ensure(q);
+        int[] idx = g.index;
+        idx[0] = x;
+        idx[1] = y;
+        System.arraycopy(z, 0, idx, 2, k);
+        double[] m = g.matrix;
+        for (int a = 0; a < q; a++) {
+            m[a * q + a] = 1.0;
+            for (int b = a + 1; b < q; b++) {
+                double v = screened.get(idx[a], idx[b]);
+                m[a * q + b] = v;
+                m[b * q + a] = v;
+            }
+        }
+        return PartialCorrelation.of(m, q, 0, 1, g.positions, k);
+    }
+
+    private static final ThreadLocal<Gathered> GATHERED = ThreadLocal.withInitial(Gathered::new);
+
+    /** Per-thread scratch for a gathered (k + 2)² matrix; positions[i] = i + 2 names z[i]'s row. */
+    private static final class Gathered {
+        int[] index = new int[0];
+        int[] positions = new int[0];
+        double[] matrix = new double[0];
+
+        Gathered ensure(int q) {
+            // Larger than needed is fine: the matrix is read with stride q.
+            if (index.length < q) {
+                index = new int[q];
+                positions = new int[q];
+                for (int i = 0; i < q; i++) {
+                    positions[i] = i + 2;
+                }
+                matrix = new double[q * q];
+            }
+            return this;
+        }
+    }
+
+    /** The pairs one tile kept, as parallel growable arrays. */
+    private static final class Kept {
+        int[] a = new int[16];
+        int[] b = new int[16];
+        double[] r = new double[16];
+        int size;
+
+        void add(int i, int j, double v) {
+            if (size == a.length) {
+                a = Arrays.copyOf(a, 2 * size);
+                b = Arrays.copyOf(b, 2 * size);
+                r = Arrays.copyOf(r, 2 * size);
+            }
+            a[size] = i;
+            b[size] = j;
+            r[size] = v;
+            size++;
+        }
     }
 
     /** Fisher's z statistic for a partial correlation r from n rows given k variables (NaN if n − k − 3 ≤ 0). */
@@ -126,4 +390,6 @@ public final class FisherZTest implements IndependenceTest {
     }
 
     private enum CorrelationKey { INSTANCE }
+
+    private enum ColumnsKey { INSTANCE }
 }

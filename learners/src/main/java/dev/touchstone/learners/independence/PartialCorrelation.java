@@ -66,6 +66,14 @@ final class PartialCorrelation {
         }
     }
 
+    /**
+     * The partial correlation given the empty set of two variables with correlation r on a unit
+     * diagonal: what {@link #of} returns for k = 0 on a correlation matrix (r clamped to [−1, 1]).
+     */
+    static double unconditional(double r) {
+        return finish(1.0, 1.0, r, 1.0, 1.0);
+    }
+
     private static double two(double[] m, int p, int xr, int yr, int a, int b,
                               double sxx, double syy, double sxy) {
         double saa = m[a * p + a];

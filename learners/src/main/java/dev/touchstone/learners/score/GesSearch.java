@@ -255,53 +255,21 @@ final class GesSearch {
 
     private Pdag perturb(Pdag cls, UniformRandomProvider rng) {
         Pdag dag = completion.extend(cls);
-        int moves = variants.randomMovesPerStart();
-        int done = 0;
-        for (int tries = 0; done < moves && tries < 100 * moves + 100 && p > 1; tries++) {
-            int x = rng.nextInt(p);
-            int y = rng.nextInt(p);
-            if (x == y) {
-                continue;
-            }
-            if (dag.adjacent(x, y)) {
-                if (!knowledge.isRequiredEitherWay(x, y)) {
-                    dag.remove(x, y);
-                    done++;
+        dag.perturb(rng, variants.randomMovesPerStart(), (g, x, y) -> {
+            if (g.adjacent(x, y)) {
+                if (knowledge.isRequiredEitherWay(x, y)) {
+                    return false;
                 }
-            } else if (!knowledge.isForbidden(x, y) && dag.parents(y).length < maxParents
-                    && !directedPath(dag, y, x)) {
-                dag.addDirected(x, y);
-                done++;
+                g.remove(x, y);
+                return true;
             }
-        }
-        return dag;
-    }
-
-    /** Whether a directed path leads from {@code from} to {@code to} (edges u → w only). */
-    private boolean directedPath(Pdag g, int from, int to) {
-        if (from == to) {
+            if (knowledge.isForbidden(x, y) || g.parents(y).length >= maxParents || g.directedPath(y, x, -1, -1)) {
+                return false;
+            }
+            g.addDirected(x, y);
             return true;
-        }
-        boolean[] seen = new boolean[p];
-        int[] stack = new int[p];
-        int top = 0;
-        stack[top++] = from;
-        seen[from] = true;
-        while (top > 0) {
-            int u = stack[--top];
-            for (int k = 0; k < g.degree(u); k++) {
-                int w = g.neighbour(u, k);
-                if (seen[w] || g.state(u, w) != Pdag.OUT) {
-                    continue;
-                }
-                if (w == to) {
-                    return true;
-                }
-                seen[w] = true;
-                stack[top++] = w;
-            }
-        }
-        return false;
+        });
+        return dag;
     }
 
     // ---------------------------------------------------------------- forward phase
@@ -967,7 +935,7 @@ final class GesSearch {
             return null;
         }
         d.remove(v, u);
-        if (directedPath(d, v, u)) {
+        if (d.directedPath(v, u, -1, -1)) {
             return null;
         }
         d.addDirected(u, v);

@@ -250,34 +250,10 @@ final class HillClimbSearch {
             return true;
         }
         if (kind == ADD) {
-            return !directedPath(dag, y, x, -1, -1);
+            return !dag.directedPath(y, x, -1, -1);
         }
         // reversing x → y is acyclic unless another directed path x ⇝ y exists
-        return !directedPath(dag, x, y, x, y);
-    }
-
-    /** Whether a directed path from → … → to exists, ignoring the edge skipFrom → skipTo. */
-    private boolean directedPath(Pdag dag, int from, int to, int skipFrom, int skipTo) {
-        boolean[] seen = new boolean[p];
-        int[] stack = new int[p];
-        int top = 0;
-        stack[top++] = from;
-        seen[from] = true;
-        while (top > 0) {
-            int u = stack[--top];
-            for (int k = 0; k < dag.degree(u); k++) {
-                int w = dag.neighbour(u, k);
-                if (seen[w] || !dag.directed(u, w) || (u == skipFrom && w == skipTo)) {
-                    continue;
-                }
-                if (w == to) {
-                    return true;
-                }
-                seen[w] = true;
-                stack[top++] = w;
-            }
-        }
-        return false;
+        return !dag.directedPath(x, y, x, y);
     }
 
     private static void apply(Pdag dag, int kind, int x, int y) {
@@ -296,34 +272,27 @@ final class HillClimbSearch {
 
     private Pdag perturb(Pdag from, UniformRandomProvider rng) {
         Pdag dag = new Pdag(from);
-        int done = 0;
-        int tries = 0;
-        while (done < perturbation && tries < 100 * perturbation + 100 && p > 1) {
-            tries++;
-            int x = rng.nextInt(p);
-            int y = rng.nextInt(p);
-            if (x == y) {
-                continue;
-            }
+        dag.perturb(rng, perturbation, (g, x, y) -> {
             int kind;
-            if (dag.directed(x, y)) {
+            if (g.directed(x, y)) {
                 kind = rng.nextBoolean() ? REMOVE : REVERSE;
-            } else if (!dag.adjacent(x, y)) {
+            } else if (!g.adjacent(x, y)) {
                 kind = ADD;
-                if (dag.parents(y).length >= maxParents) {
-                    continue;
+                if (g.parents(y).length >= maxParents) {
+                    return false;
                 }
             } else {
-                continue;
+                return false;
             }
-            if (kind == REVERSE && dag.parents(x).length >= maxParents) {
-                continue;
+            if (kind == REVERSE && g.parents(x).length >= maxParents) {
+                return false;
             }
-            if (allowed(kind, x, y) && keepsAcyclic(dag, kind, x, y)) {
-                apply(dag, kind, x, y);
-                done++;
+            if (allowed(kind, x, y) && keepsAcyclic(g, kind, x, y)) {
+                apply(g, kind, x, y);
+                return true;
             }
-        }
+            return false;
+        });
         return dag;
     }
 

@@ -4,6 +4,7 @@ import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
+import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.Arrays;
 import java.util.List;
@@ -213,6 +214,58 @@ final class Pdag {
             }
         }
         return true;
+    }
+
+    /**
+     * Whether a directed path from → … → to exists (edges u → w only), not using the edge
+     * skipFrom → skipTo (−1 for none); true when from = to. Depth-first, O(p + edges).
+     */
+    boolean directedPath(int from, int to, int skipFrom, int skipTo) {
+        if (from == to) {
+            return true;
+        }
+        boolean[] seen = new boolean[p];
+        int[] stack = new int[p];
+        int top = 0;
+        stack[top++] = from;
+        seen[from] = true;
+        while (top > 0) {
+            int u = stack[--top];
+            for (int k = 0; k < degree[u]; k++) {
+                int w = nbr[u][k];
+                if (seen[w] || state[u * p + w] != OUT || (u == skipFrom && w == skipTo)) {
+                    continue;
+                }
+                if (w == to) {
+                    return true;
+                }
+                seen[w] = true;
+                stack[top++] = w;
+            }
+        }
+        return false;
+    }
+
+    /** One random change a search's perturbation may make at an ordered pair; see {@link #perturb}. */
+    interface PairMove {
+        /** Makes the change at (x, y) when it is allowed there and says whether it did. */
+        boolean tryAt(Pdag g, int x, int y);
+    }
+
+    /**
+     * The random restarts' perturbation shared by the searches: draws ordered pairs x ≠ y
+     * uniformly and lets {@code move} try a change at each, until {@code moves} changes are
+     * made or 100·moves + 100 pairs were drawn (so that a graph with few legal changes ends).
+     */
+    void perturb(UniformRandomProvider rng, int moves, PairMove move) {
+        int done = 0;
+        for (int tries = 0; done < moves && tries < 100 * moves + 100 && p > 1; tries++) {
+            int x = rng.nextInt(p);
+            int y = rng.nextInt(p);
+            if (x != y && move.tryAt(this, x, y)) {
+                done++;
+            }
+        }
     }
 
     /** The number of edges. */
