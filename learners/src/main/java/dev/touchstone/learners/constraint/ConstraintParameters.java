@@ -17,10 +17,14 @@ import dev.touchstone.learners.independence.IndependenceTests;
 
 import java.util.List;
 
-/** The parameter declarations and description PC and FCI share, and the steps that read them, in one place. */
-final class ConstraintParameters {
+/**
+ * The parameter declarations and description PC and FCI share, and the steps that read them, in
+ * one place; public for the hybrid learners, whose constraint half declares the same parameters.
+ */
+public final class ConstraintParameters {
 
-    static final ParameterSpec MAX_DEPTH = ParameterSpec.integer("max_depth", -1, -1, 1000,
+    /** The largest conditioning set tried. */
+    public static final ParameterSpec MAX_DEPTH = ParameterSpec.integer("max_depth", -1, -1, 1000,
             "largest conditioning set the adjacency search tries; -1 for no limit");
     static final ParameterSpec SKELETON = ParameterSpec.choice("skeleton", SkeletonVariant.ORDER_INDEPENDENT.word(),
             SkeletonVariant.words(), "adjacency search: order-independent (levels frozen, parallel; Colombo and "
@@ -33,6 +37,17 @@ final class ConstraintParameters {
     static List<ParameterSpec> shared() {
         List<ParameterSpec> specs = new java.util.ArrayList<>(List.of(IndependenceTests.TEST, IndependenceTests.ALPHA,
                 IndependenceTests.MISSING, MAX_DEPTH, SKELETON, IndependenceTests.DEGREES_OF_FREEDOM));
+        specs.addAll(IndependenceTests.kernelParameters());
+        return List.copyOf(specs);
+    }
+
+    /**
+     * The independence test's declarations alone (test, alpha, missing, degrees_of_freedom, the
+     * kernel tests' settings), for learners that test without PC's adjacency search.
+     */
+    public static List<ParameterSpec> testParameters() {
+        List<ParameterSpec> specs = new java.util.ArrayList<>(List.of(IndependenceTests.TEST, IndependenceTests.ALPHA,
+                IndependenceTests.MISSING, IndependenceTests.DEGREES_OF_FREEDOM));
         specs.addAll(IndependenceTests.kernelParameters());
         return List.copyOf(specs);
     }

@@ -115,8 +115,8 @@ public final class FciLearner implements Learner {
         return new Estimate(g.freeze(), GraphClass.PAG, extras);
     }
 
-    /** The skeleton's adjacencies as edges ∘–∘. */
-    private static MutableGraph circles(List<String> names, Skeleton s) {
+    /** The skeleton's adjacencies as edges ∘–∘ (also RFCI's starting graph). */
+    static MutableGraph circles(List<String> names, Skeleton s) {
         MutableGraph g = Graph.builder(names);
         for (int a = 0; a < s.size(); a++) {
             for (int b : s.neighbours(a)) {
@@ -128,7 +128,8 @@ public final class FciLearner implements Learner {
         return g;
     }
 
-    private static int circleMarks(MutableGraph g) {
+    /** The number of circle marks left, reported by FCI and RFCI as how much stays unoriented. */
+    static int circleMarks(MutableGraph g) {
         int n = 0;
         for (int a = 0; a < g.size(); a++) {
             for (int b : g.neighbours(a)) {

@@ -12,11 +12,21 @@ import org.apache.commons.rng.UniformRandomProvider;
 /**
  * The exact covariance of a linear SEM X = BX + E with independent noise of covariance Ω:
  * Σ = (I − B)⁻¹ Ω (I − B)⁻ᵀ (common practice), computed with Commons Math. Edge weights
- * uniform on ±[low, high], noise variances uniform on [0.5, 1.5], seeded.
+ * uniform on ±[low, high], noise variances uniform on [0.5, 1.5], seeded. Public for the hybrid
+ * learners' oracle tests, which need the covariance of the observed variables alone.
  */
-final class PopulationCovariance {
+public final class PopulationCovariance {
 
     private PopulationCovariance() {
+    }
+
+    /**
+     * The covariance over the observed variables of a DAG with hidden ones: the rows and columns of
+     * the full covariance for the observed variables (a marginal of a Gaussian is the sub-matrix;
+     * common practice).
+     */
+    public static CovarianceMatrix observed(Graph dag, double low, double high, long seed) {
+        return of(dag, low, high, seed).select(dag.observedIndices());
     }
 
     static CovarianceMatrix of(Graph dag, double low, double high, long seed) {

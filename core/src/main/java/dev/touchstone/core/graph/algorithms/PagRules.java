@@ -382,11 +382,11 @@ public final class PagRules {
                         if (a == c || m(a, b) != Mark.ARROW || !adjacent(a, c) || !directed(a, c)) {
                             continue;
                         }
-                        int theta = discriminatingStart(a, b, c);
-                        if (theta < 0) {
+                        int[] path = discriminatingPath(a, b, c);
+                        if (path == null) {
                             continue;
                         }
-                        if (info.discriminatedCollider(theta, a, b, c)) {
+                        if (info.discriminatedCollider(path)) {
                             if (fits(a, b, Mark.ARROW) && fits(b, a, Mark.ARROW) && fits(b, c, Mark.ARROW)
                                     && fits(c, b, Mark.ARROW)) {
                                 changed |= set(a, b, Mark.ARROW) | set(b, a, Mark.ARROW)
@@ -403,14 +403,16 @@ public final class PagRules {
         }
 
         /**
-         * The first vertex theta of a discriminating path {@code <theta, ..., a, b, c>}, or −1:
-         * a breadth-first search back from {@code a} through vertices that are colliders on the
-         * path and parents of {@code c}, stopping at the first vertex not adjacent to {@code c}.
-         * Whether a vertex can be extended depends on that vertex only, so visiting each
-         * vertex once loses no path.
+         * A discriminating path {@code <theta, ..., a, b, c>} for {@code b}, from theta to c, or
+         * null: a breadth-first search back from {@code a} through vertices that are colliders on
+         * the path and parents of {@code c}, stopping at the first vertex not adjacent to
+         * {@code c}. Whether a vertex can be extended depends on that vertex only, so visiting
+         * each vertex once loses no path; {@code towardA[w]} is the vertex after w on the way
+         * back to a, from which the path is read once theta is found.
          */
-        private int discriminatingStart(int a, int b, int c) {
+        private int[] discriminatingPath(int a, int b, int c) {
             boolean[] seen = new boolean[n];
+            int[] towardA = new int[n];
             seen[a] = true;
             seen[b] = true;
             seen[c] = true;
@@ -425,15 +427,33 @@ public final class PagRules {
                         continue;
                     }
                     if (!adjacent(w, c)) {
-                        return w;
+                        towardA[w] = v;
+                        return pathFrom(w, towardA, a, b, c);
                     }
                     if (directed(w, c) && m(w, v) == Mark.ARROW) {
                         seen[w] = true;
+                        towardA[w] = v;
                         queue.add(w);
                     }
                 }
             }
-            return -1;
+            return null;
+        }
+
+        private int[] pathFrom(int theta, int[] towardA, int a, int b, int c) {
+            int length = 3;
+            for (int v = theta; v != a; v = towardA[v]) {
+                length++;
+            }
+            int[] out = new int[length];
+            int k = 0;
+            for (int v = theta; v != a; v = towardA[v]) {
+                out[k++] = v;
+            }
+            out[k++] = a;
+            out[k++] = b;
+            out[k] = c;
+            return out;
         }
 
         /**

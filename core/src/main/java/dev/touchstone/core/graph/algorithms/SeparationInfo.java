@@ -33,6 +33,17 @@ public interface SeparationInfo {
      */
     boolean discriminatedCollider(int theta, int a, int b, int c);
 
+    /**
+     * The same question given the whole discriminating path, {@code path[0]} = theta, then the
+     * colliders, and the last three {@code a, b, c}. The rules ask this form; learners that test
+     * along the path (RFCI's extra tests, Colombo et al. 2012) override it, the others answer
+     * from the ends through {@link #discriminatedCollider(int, int, int, int)}.
+     */
+    default boolean discriminatedCollider(int[] path) {
+        int k = path.length;
+        return discriminatedCollider(path[0], path[k - 3], path[k - 2], path[k - 1]);
+    }
+
     /** Membership in the separating sets a learner recorded. */
     @FunctionalInterface
     interface SeparatingSets {
