@@ -89,7 +89,6 @@ public final class CamLearner implements Learner {
             throw new LearnerException("learner " + ID + " needs at least " + MIN_ROWS + " rows, got " + data.rows());
         }
         List<String> names = input.variableNames();
-        knowledge.checkVariables(names);
         int p = data.columns();
         int segments = parameters.getInt(SEGMENTS.name());
         double[][] x = new double[p][];
@@ -99,17 +98,10 @@ public final class CamLearner implements Learner {
             x[j] = data.continuous(j);
             smoothers.add(PSplineSmoother.of(x[j], segments));
         }
-        boolean[][] allowed = new boolean[p][p];
-        boolean[][] required = new boolean[p][p];
-        for (int j = 0; j < p; j++) {
-            for (int k = 0; k < p; k++) {
-                required[j][k] = j != k && knowledge.isRequired(names.get(j), names.get(k));
-                allowed[j][k] = j != k && (required[j][k] || !knowledge.isForbidden(names.get(j), names.get(k)));
-            }
-        }
-        List<List<Integer>> parents = CamOrderSearch.search(x, smoothers, allowed, required,
+        CamEdgeRules rules = CamEdgeRules.of(knowledge, names);
+        List<List<Integer>> parents = CamOrderSearch.search(x, smoothers, rules,
                 parameters.getInt(CANDIDATES.name()), context);
-        List<List<Integer>> pruned = CamPruning.prune(x, smoothers, parents, required,
+        List<List<Integer>> pruned = CamPruning.prune(x, smoothers, parents, rules,
                 parameters.getDouble(PRUNING_LEVEL.name()), context);
         MutableGraph g = Graph.builder(names);
         for (int k = 0; k < p; k++) {

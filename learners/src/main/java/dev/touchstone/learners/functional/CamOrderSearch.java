@@ -13,17 +13,14 @@ import java.util.List;
  * −(n/2) Σ_k log σ̂²_k, where σ̂²_k is the residual variance of an additive fit of x_k on its
  * parents ({@link AdditiveRegression}).
  *
- * <p><b>Neighbourhood selection (declared choice).</b> The paper keeps a few candidate parents
- * per node from a sparse additive (boosting) fit of the node on all others. Here each node's
- * candidates are the {@code candidates} other variables with the largest gain of a univariate
- * P-spline fit, log σ̂²(x_k) − log σ̂²(x_k | x_j), ties by column. These gains are also the
- * search's first gains, so they are computed once.
+ * <p><b>Neighbourhood selection</b> keeps {@code candidates} candidate parents per node by
+ * componentwise boosting ({@link NeighbourhoodSelection}); only candidates are searched.
  *
  * <p><b>Search.</b> An edge is eligible when its parent is a candidate, knowledge allows it, it
  * is not yet there and it closes no cycle (ancestry kept as a reachability matrix). The best
  * eligible edge is added while its gain is positive; ties go to the smaller parent, then the
  * smaller child. After adding j → k only the gains into k change, so only those are refitted.
- * Required edges are placed before the search. Cost: p(p − 1) univariate fits, then one
+ * Required edges are placed before the search. Cost: the selection, one univariate fit per candidate, then one
  * additive fit per candidate of the child of each added edge.
  */
 final class CamOrderSearch {
@@ -47,23 +44,22 @@ final class CamOrderSearch {
      *
      * @param x the columns
      * @param smoothers one smoother per column
-     * @param allowed allowed[j][k]: knowledge permits j → k
-     * @param required required[j][k]: knowledge requires j → k (also allowed)
+     * @param rules the edges knowledge allows and requires
      * @param candidates number of candidate parents kept per node
      * @throws LearnerException if the required edges form a cycle
      */
-    static List<List<Integer>> search(double[][] x, List<PSplineSmoother> smoothers, boolean[][] allowed,
-            boolean[][] required, int candidates, RunContext context) {
-        return new CamOrderSearch(x, smoothers, context).run(allowed, required, candidates);
+    static List<List<Integer>> search(double[][] x, List<PSplineSmoother> smoothers, CamEdgeRules rules,
+            int candidates, RunContext context) {
+        return new CamOrderSearch(x, smoothers, context).run(rules, candidates);
     }
 
-    private List<List<Integer>> run(boolean[][] allowed, boolean[][] required, int candidates) {
+    private List<List<Integer>> run(CamEdgeRules rules, int candidates) {
         double[] logVariance = new double[p];
         for (int k = 0; k < p; k++) {
             logVariance[k] = logResidualVariance(k, List.of());
         }
-        double[][] gain = univariateGains(allowed, logVariance);
-        boolean[][] eligible = neighbourhoods(gain, allowed, required, candidates);
+        boolean[][] eligible = NeighbourhoodSelection.select(x, smoothers, rules, candidates, context);
+        double[][] gain = univariateGains(eligible, logVariance);
         List<List<Integer>> parents = new ArrayList<>();
         for (int k = 0; k < p; k++) {
             parents.add(new ArrayList<>());
@@ -71,10 +67,10 @@ final class CamOrderSearch {
         boolean[][] reach = new boolean[p][p];
         for (int j = 0; j < p; j++) {
             for (int k = 0; k < p; k++) {
-                if (required[j][k]) {
+                if (rules.required(j, k)) {
                     if (reach[k][j]) {
                         throw new LearnerException("learner " + CamLearner.ID + ": the required edges form a cycle through "
-                                + j + " -> " + k);
+                                + rules.name(j) + " -> " + rules.name(k));
                     }
                     addEdge(j, k, parents, reach, eligible);
                 }
@@ -109,39 +105,16 @@ final class CamOrderSearch {
         }
     }
 
-    /** gain[j][k] of x_j as the only parent of x_k, for the pairs knowledge allows (−∞ elsewhere). */
-    private double[][] univariateGains(boolean[][] allowed, double[] logVariance) {
+    /** gain[j][k] of x_j as the only parent of x_k, for the eligible pairs (−∞ elsewhere). */
+    private double[][] univariateGains(boolean[][] eligible, double[] logVariance) {
         double[][] gain = new double[p][p];
         for (int j = 0; j < p; j++) {
             context.checkDeadline();
             for (int k = 0; k < p; k++) {
-                gain[j][k] = allowed[j][k] ? logVariance[k] - logResidualVariance(k, List.of(j)) : Double.NEGATIVE_INFINITY;
+                gain[j][k] = eligible[j][k] ? logVariance[k] - logResidualVariance(k, List.of(j)) : Double.NEGATIVE_INFINITY;
             }
         }
         return gain;
-    }
-
-    /** eligible[j][k]: j is among the {@code candidates} best univariate parents of k, or j → k is required. */
-    private boolean[][] neighbourhoods(double[][] gain, boolean[][] allowed, boolean[][] required, int candidates) {
-        boolean[][] eligible = new boolean[p][p];
-        for (int k = 0; k < p; k++) {
-            List<Integer> ranked = new ArrayList<>();
-            for (int j = 0; j < p; j++) {
-                if (allowed[j][k]) {
-                    ranked.add(j);
-                }
-            }
-            final int child = k;
-            ranked.sort((a, b) -> gain[a][child] != gain[b][child]
-                    ? Double.compare(gain[b][child], gain[a][child]) : Integer.compare(a, b));
-            for (int r = 0; r < Math.min(candidates, ranked.size()); r++) {
-                eligible[ranked.get(r)][k] = true;
-            }
-            for (int j = 0; j < p; j++) {
-                eligible[j][k] |= required[j][k];
-            }
-        }
-        return eligible;
     }
 
     private void addEdge(int j, int k, List<List<Integer>> parents, boolean[][] reach, boolean[][] eligible) {

@@ -25,9 +25,9 @@ final class CamPruning {
     private CamPruning() {
     }
 
-    /** The parent lists with the non-significant parents removed; {@code required[j][k]} keeps j → k. */
+    /** The parent lists with the non-significant parents removed; required edges are kept. */
     static List<List<Integer>> prune(double[][] x, List<PSplineSmoother> smoothers, List<List<Integer>> parents,
-            boolean[][] required, double level, RunContext context) {
+            CamEdgeRules rules, double level, RunContext context) {
         List<List<Integer>> kept = new ArrayList<>();
         for (int k = 0; k < parents.size(); k++) {
             context.checkDeadline();
@@ -37,7 +37,7 @@ final class CamPruning {
                 AdditiveRegression.Fit full = fit(x[k], smoothers, pa, -1, context);
                 for (int a = 0; a < pa.size(); a++) {
                     int j = pa.get(a);
-                    if (required[j][k]) {
+                    if (rules.required(j, k)) {
                         out.add(j);
                         continue;
                     }

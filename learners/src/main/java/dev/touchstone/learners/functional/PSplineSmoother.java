@@ -141,9 +141,15 @@ final class PSplineSmoother {
         return p;
     }
 
-    /** Number of rows. */
-    int rows() {
-        return n;
+    /** The grid index whose effective degrees of freedom are nearest {@code df} (ties to the larger penalty). */
+    int indexNearestEdf(double df) {
+        int best = 0;
+        for (int k = 1; k < edf.length; k++) {
+            if (Math.abs(edf[k] - df) <= Math.abs(edf[best] - df)) {
+                best = k;
+            }
+        }
+        return best;
     }
 
     /** Number of penalties tried by generalised cross-validation. */
