@@ -27,8 +27,8 @@ import java.util.concurrent.TimeUnit;
 /**
  * CAM with default settings on p = 20, n = 1,000 (additive quadratic functions, Gaussian
  * noise, Erdős–Rényi, mean degree 2), against its near-irreducible part: the same learner with
- * one candidate parent per variable, which still builds every smoother and makes all p(p − 1)
- * univariate fits of the neighbourhood selection but leaves the search almost nothing to do.
+ * one candidate parent per variable, which still builds every smoother and runs the whole
+ * boosting neighbourhood selection but leaves the search almost nothing to do.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
