@@ -1,2 +1,2 @@
-/** JMH benchmarks of the functional (DirectLiNGAM) and continuous-optimisation (NOTEARS) learners. */
+/** JMH benchmarks of the functional (DirectLiNGAM, CAM) and continuous-optimisation (NOTEARS) learners. */
 package dev.touchstone.benchmarks.functional;

@@ -13,13 +13,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class ServiceRegistrationTest {
 
     @Test
-    @DisplayName("DirectLiNGAM and NOTEARS are found by Java's service loader (so they are listed and usable by id)")
-    void bothLearnersAreRegistered() {
+    @DisplayName("DirectLiNGAM, CAM and NOTEARS are found by Java's service loader (so they are listed and usable by id)")
+    void learnersAreRegistered() {
         Set<String> ids = new HashSet<>();
         for (Learner l : ServiceLoader.load(Learner.class)) {
             ids.add(l.description().id());
         }
         assertTrue(ids.contains("direct-lingam"), ids.toString());
         assertTrue(ids.contains("notears-linear"), ids.toString());
+        assertTrue(ids.contains("cam"), ids.toString());
     }
 }
