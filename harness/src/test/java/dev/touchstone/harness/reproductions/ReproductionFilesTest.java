@@ -45,9 +45,9 @@ class ReproductionFilesTest {
             }
             assertTrue(text.matches("(?s)# [a-z-]+: .*\\(\\d{4}\\).*"), name + " names its publication with its year");
         }
-        assertTrue(full >= 7, "at least seven reproductions, found " + full);
+        assertTrue(full >= 8, "at least eight reproductions, found " + full);
         for (String quick : List.of("high-dimensional-pc", "order-dependence", "conservative-colliders", "scale-artefacts",
-                "notears-design", "missing-data", "nonlinear-additive")) {
+                "notears-design", "missing-data", "nonlinear-additive", "permutation-search")) {
             assertTrue(Files.isRegularFile(BundledStudy.FOLDER.resolve(quick + "-quick.yaml")), quick);
         }
     }

@@ -96,10 +96,21 @@ final class OrderScorer {
         int[] pos = positions(order);
         double total = 0;
         for (int v : order) {
-            int at = pos[v];
-            total += trees[v].score(x -> pos[x] < at);
+            total += localScore(v, pos);
         }
         return total;
+    }
+
+    /** v's grow-shrink score with the variables before it in the order whose positions are {@code pos}. */
+    double localScore(int v, int[] pos) {
+        int at = pos[v];
+        return trees[v].score(x -> pos[x] < at);
+    }
+
+    /** v's grow-shrink parents (sorted) among the variables before it in the order whose positions are {@code pos}. */
+    int[] parents(int v, int[] pos) {
+        int at = pos[v];
+        return trees[v].parents(x -> pos[x] < at);
     }
 
     /** The DAG the order induces, as a PDAG with directed edges only. */
@@ -107,8 +118,7 @@ final class OrderScorer {
         int[] pos = positions(order);
         Pdag dag = new Pdag(p);
         for (int v : order) {
-            int at = pos[v];
-            for (int parent : trees[v].parents(x -> pos[x] < at)) {
+            for (int parent : parents(v, pos)) {
                 dag.addDirected(parent, v);
             }
         }
