@@ -22,7 +22,10 @@ import java.util.Map;
  *   Σ_truth draw × replicates + Σ_pair cost × replicates + runs × {@value #BOOKKEEPING_MS} ms
  * </pre>
  * and its wall time that divided by the workers that can run at once (the smaller of the
- * threads and the cores). The bookkeeping term is per-run journaling, tables and statistics,
+ * threads and the cores), plus {@value #FIXED_SECONDS} s for what every {@code run} costs
+ * whatever its size: starting the JVM and writing the report (measured on the bundled quick
+ * reproductions: their wall time exceeded the pilot's prediction without it by 0.5 to 3.5 s,
+ * depending on the load of the 2 shared cores). The bookkeeping term is per-run journaling, tables and statistics,
  * about 0.33 ms of wall time (0.66 ms of core time) per run in the harness benchmark
  * ({@code StudyRunnerBenchmark}), rounded up.
  *
@@ -43,6 +46,9 @@ public final class PilotEstimate {
 
     /** Per-run cost of journaling, tables and statistics, in core milliseconds (see the class comment). */
     static final double BOOKKEEPING_MS = 1.0;
+
+    /** Wall seconds of a {@code run} of any size: JVM start and report (see the class comment). */
+    static final double FIXED_SECONDS = 1.0;
 
     private PilotEstimate() {
     }
@@ -115,7 +121,7 @@ public final class PilotEstimate {
         int workers = Math.max(1, Math.min(Math.min(threads, Runtime.getRuntime().availableProcessors()),
                 plan.runs().size()));
         return new Figures(pairs, seconds(cap.toNanos()), capped, seconds(System.nanoTime() - started), draws, runs,
-                workers, (draws + runs) / workers, capped > 0);
+                workers, (draws + runs) / workers + FIXED_SECONDS, capped > 0);
     }
 
     /** Replicate 0's run of every (truth setting, sample size, configuration), by {@link #pairKey}. */
@@ -140,10 +146,10 @@ public final class PilotEstimate {
     /** The words {@code check} prints for these figures (two lines). */
     public static List<String> describe(Figures f) {
         return List.of(String.format(java.util.Locale.ROOT, "  time estimate: %s%.0f s of wall time with %d worker%s"
-                                + " (%.1f core-seconds: %.1f drawing data, %.1f learning and scoring)",
+                                + " (%.1f core-seconds: %.1f drawing data, %.1f learning and scoring; %.0f s to start and report)",
                         f.lowerBound() ? "at least " : "about ", Math.ceil(f.estimatedSeconds()), f.workers(),
                         f.workers() == 1 ? "" : "s", f.drawSeconds() + f.runSeconds(), f.drawSeconds(),
-                        f.runSeconds()),
+                        f.runSeconds(), FIXED_SECONDS),
                 String.format(java.util.Locale.ROOT, "  (from a pilot of %,d runs, one per learner configuration and"
                                 + " setting on replicate 0, each limited to %.2f s%s; it took %.1f s)", f.pilotRuns(),
                         f.capSeconds(), f.capped() == 0 ? "" : "; " + f.capped() + " hit that limit", f.pilotSeconds()));
