@@ -26,6 +26,18 @@ public class BadInputException extends RuntimeException {
     }
 
     /**
+     * The message as lines, one per problem: just the message, unless the input had several
+     * independent problems found at once (a study file). A wrapper restating its cause's
+     * message gives the cause's lines.
+     */
+    public java.util.List<String> lines() {
+        if (getCause() instanceof BadInputException b && java.util.Objects.equals(b.getMessage(), getMessage())) {
+            return b.lines();
+        }
+        return java.util.List.of(getMessage());
+    }
+
+    /**
      * The bad input behind {@code failure}, or null when it is not bad input (a fault of the
      * tool): a {@code BadInputException} anywhere in the cause chain, or a file-system refusal
      * that names the file (no such file, permission denied, exists already, not a folder).

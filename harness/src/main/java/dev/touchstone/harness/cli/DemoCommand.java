@@ -59,6 +59,7 @@ final class DemoCommand implements Callable<Integer> {
         StudyRunner.Outcome o = kit.run(plan, out, threads.value(), quiet, err);
         ReportData data = kit.reportData(plan, out);
         Path html = dev.touchstone.harness.report.StudyReports.write(out, data);
+        Toolkit.vouchReport(out, out);
         w.printf(Locale.ROOT, "demo study '%s': %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped)%n%n",
                 plan.study().name(), o.total(), o.count(RunStatus.OK), o.count(RunStatus.FAILED),
                 o.count(RunStatus.TIMEOUT), o.count(RunStatus.SKIPPED));

@@ -10,7 +10,8 @@ import java.io.PrintWriter;
 
 /**
  * The {@code touchstone} command line. Exit status: 0 done, 2 bad input or usage (one line
- * {@code error: …}), 1 anything else. A stack trace is printed only with {@code --debug}.
+ * {@code error: …} per problem: a study file with several independent problems gets one line
+ * each), 1 anything else. A stack trace is printed only with {@code --debug}.
  */
 @Command(name = "touchstone",
         mixinStandardHelpOptions = true,
@@ -59,7 +60,9 @@ public final class Main implements Runnable {
             }
             BadInputException bad = BadInputException.from(ex);
             if (bad != null) {
-                err.println("error: " + bad.getMessage());
+                for (String line : bad.lines()) {
+                    err.println("error: " + line);
+                }
                 return BAD_INPUT;
             }
             if (ex instanceof WorkStoppedException) {

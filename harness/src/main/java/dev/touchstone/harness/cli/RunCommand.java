@@ -62,7 +62,7 @@ final class RunCommand implements Callable<Integer> {
         out.printf(Locale.ROOT, "done: %,d runs (%,d ok, %,d failed, %,d timed out, %,d skipped; %,d done now);"
                         + " results in %s%n", o.total(), o.count(RunStatus.OK), o.count(RunStatus.FAILED),
                 o.count(RunStatus.TIMEOUT), o.count(RunStatus.SKIPPED), o.performed(), folder);
-        out.printf(Locale.ROOT, "report: %s%n", kit.report(plan, folder, folder));
+        out.printf(Locale.ROOT, "report: %s%n", kit.reportAfterRun(plan, o, folder));
         out.flush();
         return Main.DONE;
     }

@@ -59,7 +59,10 @@ final class ShowCommand implements Callable<Integer> {
         Map<String, EstimateCodec.Kept> kept;
         try {
             runs = Journal.read(journal).lines();
-            kept = Journal.readEstimates(journal);
+            // The journal is decoded once, the estimates are reconciled with its keys, and only
+            // the graphs to be shown are decoded (all of them for the listing).
+            boolean listing = key == null || !runs.containsKey(key);
+            kept = Journal.readEstimates(journal, runs.keySet(), k -> listing || k.equals(key));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + journal + ": " + e.getMessage(), e);
         }

@@ -73,7 +73,35 @@ final class Toolkit {
 
     /** Writes report.html and report.md for the study in {@code out} (finished or partial) into {@code to}. */
     Path report(Plan plan, Path out, Path to) {
-        return dev.touchstone.harness.report.StudyReports.write(to, reportData(plan, out));
+        Path html = dev.touchstone.harness.report.StudyReports.write(to, reportData(plan, out));
+        vouchReport(out, to);
+        return html;
+    }
+
+    /**
+     * A report just written into a finished study's own folder is added to its {@code finished.json}
+     * (nothing happens when the study is not finished), so a resume with nothing to do leaves it be.
+     */
+    static void vouchReport(Path out, Path to) {
+        if (to.toAbsolutePath().normalize().equals(out.toAbsolutePath().normalize())) {
+            dev.touchstone.harness.execution.FinishedIndex.vouch(out, dev.touchstone.harness.report.StudyReports.PAGES);
+        }
+    }
+
+    /**
+     * The report of a study just run into {@code out}: rewritten, unless the session found the
+     * study finished and its {@code finished.json} vouches for the report's pages as they are
+     * (then nothing is read or written). A report written from a finished study is added to that marker.
+     */
+    Path reportAfterRun(Plan plan, StudyRunner.Outcome outcome, Path out) {
+        List<String> pages = dev.touchstone.harness.report.StudyReports.PAGES;
+        if (outcome.alreadyFinished()) {
+            var index = dev.touchstone.harness.execution.FinishedIndex.read(out);
+            if (index != null && index.vouchesFor(pages)) {
+                return out.resolve(pages.get(0));
+            }
+        }
+        return report(plan, out, out);
     }
 
     /** The report data of the study in {@code out}, from its journal. */

@@ -108,7 +108,11 @@ public final class Journal implements AutoCloseable {
         if (!Files.exists(kept)) {
             return 0;
         }
-        byte[] bytes = Files.readAllBytes(kept);
+        return consistentPrefix(Files.readAllBytes(kept), journaled);
+    }
+
+    /** As {@link #consistentPrefix(Path, java.util.Set)}, on the file's bytes already read. */
+    private static long consistentPrefix(byte[] bytes, java.util.Set<String> journaled) {
         java.util.Set<String> seen = new java.util.HashSet<>();
         int start = 0;
         while (start < bytes.length) {
@@ -198,14 +202,24 @@ public final class Journal implements AutoCloseable {
      */
     public static Map<String, EstimateCodec.Kept> readEstimates(Path file, java.util.function.Predicate<String> wanted)
             throws IOException {
-        Contents c = read(file);
+        return readEstimates(file, read(file).lines().keySet(), wanted);
+    }
+
+    /**
+     * As {@link #readEstimates(Path, java.util.function.Predicate)}, for a caller that has read the
+     * journal already ({@link #read}): {@code journaled} is the keys it holds, so the journal is not
+     * decoded again, and the estimates file is read once.
+     */
+    public static Map<String, EstimateCodec.Kept> readEstimates(Path file, java.util.Set<String> journaled,
+                                                               java.util.function.Predicate<String> wanted)
+            throws IOException {
         Path kept = file.resolveSibling(ESTIMATES_FILE);
         Map<String, EstimateCodec.Kept> out = new LinkedHashMap<>();
         if (!Files.exists(kept)) {
             return out;
         }
-        long good = consistentPrefix(kept, c.lines().keySet());
         byte[] bytes = Files.readAllBytes(kept);
+        long good = consistentPrefix(bytes, journaled);
         String text = new String(bytes, 0, (int) good, StandardCharsets.UTF_8);
         int lineNo = 0;
         for (String line : text.split("\n")) {

@@ -33,6 +33,11 @@ import java.util.stream.Stream;
  * runs whose definition changed (same coordinates, different key) and new runs are done,
  * and the counts are said. Tables are always rebuilt from the journal, in plan order, so
  * they are identical for any thread count, order or number of interruptions.
+ *
+ * <p>A session that finishes every run ends by writing {@link FinishedIndex} ({@code
+ * finished.json}); a later session of the same plan, study text and versions that finds it
+ * matching the folder has nothing to do and returns at once, reading and writing nothing
+ * else (see {@link FinishedIndex} for what is checked).
  */
 public final class StudyRunner {
 
@@ -111,9 +116,17 @@ public final class StudyRunner {
         }
     }
 
-    /** What a session did: runs in the study, already done, redone because changed, done now, and runs by status. */
+    /**
+     * What a session did: runs in the study, already done, redone because changed, done now, runs by
+     * status, and whether the study was found finished by its {@link FinishedIndex} (then nothing was
+     * read beyond it, nor written).
+     */
     public record Outcome(int total, int reused, int changed, int performed, Map<RunStatus, Integer> byStatus,
-                          Path out) {
+                          Path out, boolean alreadyFinished) {
+        public Outcome(int total, int reused, int changed, int performed, Map<RunStatus, Integer> byStatus, Path out) {
+            this(total, reused, changed, performed, byStatus, out, false);
+        }
+
         public int count(RunStatus s) {
             return byStatus.getOrDefault(s, 0);
         }
@@ -124,6 +137,21 @@ public final class StudyRunner {
         prepareFolder(out, plan.study().name());
         Instant started = Instant.now();
         String studyText = StudyWriter.yaml(plan.study());
+        String studyHash = Canonical.hash(studyText);
+        String versionsHash = FinishedIndex.versionsHash(versions);
+        String planHash = plan.hash();
+        Outcome finished = alreadyFinished(plan, out, planHash, studyHash, versionsHash);
+        if (finished != null) {
+            if (options.messages() != null) {
+                options.messages().printf(java.util.Locale.ROOT, "resuming in %s: %,d of %,d runs already done; 0 to do"
+                        + " (the study is finished: %s matches the journal)%n", out, finished.total(), finished.total(),
+                        FinishedIndex.FILE_NAME);
+                options.messages().flush();
+            }
+            options.progress().start(finished.total(), finished.total());
+            options.progress().end();
+            return finished;
+        }
 
         SettingLayout layout = new SettingLayout(plan);
         Map<Integer, RunResult> results = new ConcurrentHashMap<>();
@@ -138,7 +166,9 @@ public final class StudyRunner {
                 throw new VersionChangeException(ledger.refusal(out));
             }
             // Only once the journal has been read and found sound: a damaged one is refused
-            // with the folder as it was.
+            // with the folder as it was. The finished marker goes first: it must never vouch for
+            // files this session is about to change.
+            FinishedIndex.remove(out);
             OutputFiles.write(out.resolve(STUDY_FILE), studyText);
             keepLearnersFile(out);
             Provenance running = provenance(plan, studyText, options.threads(), started, null, Map.of(), ledger);
@@ -218,7 +248,41 @@ public final class StudyRunner {
         counts.put("done_this_session", todo.size());
         OutputFiles.write(out.resolve(PROVENANCE_FILE), provenance(plan, studyText, options.threads(), started,
                 Instant.now(), counts, ledger).json());
+        List<String> vouched = new ArrayList<>(List.of(Journal.FILE_NAME, Journal.ESTIMATES_FILE, STUDY_FILE,
+                PROVENANCE_FILE, RUNS_FILE, SUMMARY_FILE, COMPARISONS_FILE));
+        vouched.addAll(FinishedIndex.present(out, List.of(LEARNERS_COPY + ".yaml", LEARNERS_COPY + ".json")));
+        FinishedIndex.of(out, planHash, studyHash, versionsHash, !ledger.changes().isEmpty(), counts, vouched)
+                .write(out);
         return new Outcome(plan.runs().size(), reused, changed, todo.size(), byStatus, out);
+    }
+
+    /**
+     * The outcome of a session with nothing to do, when the folder's {@link FinishedIndex} matches
+     * this plan, study text, versions and learners file; null when the journal must be read.
+     */
+    private Outcome alreadyFinished(Plan plan, Path out, String planHash, String studyHash, String versionsHash) {
+        FinishedIndex index = FinishedIndex.read(out);
+        if (index == null || index.total() != plan.runs().size() || index.versionChanges() && !acceptVersionChange
+                || !index.matches(out, planHash, studyHash, versionsHash) || !sameLearnersCopy(out)) {
+            return null;
+        }
+        return new Outcome(index.total(), index.total(), 0, 0, index.byStatus(), out, true);
+    }
+
+    /**
+     * Whether this session would keep no other learners file than the one kept already. Without
+     * one it keeps none, and the kept copy stays (the run keys already cover every command the plan uses).
+     */
+    private boolean sameLearnersCopy(Path out) {
+        if (recipe == null || recipe.learnersText() == null) {
+            return true;
+        }
+        Path kept = keptLearnersFile(out);
+        try {
+            return kept != null && Files.readString(kept).equals(recipe.learnersText());
+        } catch (IOException e) {
+            return false;
+        }
     }
 
     /** The number of rows each replicate's draw needs: the largest finite sample size, 0 for oracle-only studies. */

@@ -9,6 +9,7 @@ import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.harness.study.Node;
 import dev.touchstone.harness.study.NodeReader;
 import dev.touchstone.harness.study.StudyException;
+import dev.touchstone.harness.study.StudyProblems;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -37,7 +38,8 @@ import java.util.Set;
  *       - {name: alpha, type: real, default: 0.05, min: 0, max: 1, meaning: significance level}
  * </pre>
  *
- * Every problem is one {@link StudyException} with file, line, field and what is allowed.
+ * Every problem is one {@link StudyException} with file, line, field and what is allowed; the
+ * entries' problems are all collected ({@link StudyProblems}) and raised together.
  */
 public final class LearnersFile {
 
@@ -75,13 +77,18 @@ public final class LearnersFile {
         }
         List<CommandSpec> out = new ArrayList<>();
         Set<String> ids = new HashSet<>();
+        StudyProblems problems = new StudyProblems();
         for (Node e : list.items()) {
-            CommandSpec s = entry(e, dir, source);
+            CommandSpec s = problems.attempt(() -> entry(e, dir, source), null);
+            if (s == null) {
+                continue;
+            }
             if (!ids.add(s.description().id())) {
-                throw StudyException.at(e, "the id '" + s.description().id() + "' is declared twice");
+                problems.add(StudyException.at(e, "the id '" + s.description().id() + "' is declared twice"));
             }
             out.add(s);
         }
+        problems.throwIfAny();
         return out;
     }
 

@@ -40,6 +40,7 @@ public final class ReportFolder {
         Map<String, Estimate> estimates = new HashMap<>();
         try {
             lines = Journal.read(out.resolve(Journal.FILE_NAME)).lines();
+            // The journal is decoded once: its keys are what the kept estimates are reconciled with.
             // Only replicate 0 is pictured: the other runs' graphs are not decoded.
             java.util.Set<String> pictured = new java.util.HashSet<>();
             for (RunDefinition r : plan.runs()) {
@@ -47,7 +48,8 @@ public final class ReportFolder {
                     pictured.add(r.key());
                 }
             }
-            for (EstimateCodec.Kept k : Journal.readEstimates(out.resolve(Journal.FILE_NAME), pictured::contains)
+            for (EstimateCodec.Kept k : Journal.readEstimates(out.resolve(Journal.FILE_NAME), lines.keySet(),
+                            pictured::contains)
                     .values()) {
                 if (k.estimate() != null) {
                     estimates.put(k.key(), k.estimate());

@@ -56,6 +56,13 @@ import java.util.Set;
  */
 public final class StudyReports {
 
+    /** The report's HTML page in the folder it is written to. */
+    public static final String HTML_FILE = "report.html";
+    /** The report's Markdown page beside it. */
+    public static final String MARKDOWN_FILE = "report.md";
+    /** Both pages (the figures and tables are written after them). */
+    public static final List<String> PAGES = List.of(HTML_FILE, MARKDOWN_FILE);
+
     /** Settings whose replicate 0 is re-drawn for the audit, at most. */
     static final int AUDITED_SETTINGS = 24;
     /** Learner configurations pictured, at most. */
@@ -218,10 +225,10 @@ public final class StudyReports {
     public static Path write(Path folder, ReportData data) {
         try {
             Files.createDirectories(folder);
-            Path html = folder.resolve("report.html");
+            Path html = folder.resolve(HTML_FILE);
             ReportArtifacts artifacts = HtmlReport.build(data);
             AtomicFiles.writeString(html, artifacts.html());
-            AtomicFiles.writeString(folder.resolve("report.md"), MarkdownReport.render(data));
+            AtomicFiles.writeString(folder.resolve(MARKDOWN_FILE), MarkdownReport.render(data));
             Path figures = Files.createDirectories(folder.resolve("figures"));
             for (Map.Entry<String, ReportArtifacts.Chart> f : artifacts.figures().entrySet()) {
                 AtomicFiles.writeString(figures.resolve(f.getKey() + ".svg"), f.getValue().svgFile());

@@ -42,8 +42,10 @@ public final class Expansion {
 
     /** Expands a validated study. */
     public Plan expand(Study study, dev.touchstone.harness.catalog.LearnerCatalog learners) {
-        List<TruthSetting> truths = truths(study);
-        List<LearnerConfig> configs = configs(study, learners);
+        StudyProblems problems = new StudyProblems();
+        List<TruthSetting> truths = truths(study, problems);
+        List<LearnerConfig> configs = configs(study, learners, problems);
+        problems.throwIfAny();
         List<RunDefinition> runs = new ArrayList<>();
         for (TruthSetting t : truths) {
             for (int rep = 0; rep < study.replicates(); rep++) {
@@ -58,12 +60,13 @@ public final class Expansion {
         return new Plan(study, truths, configs, runs);
     }
 
-    private List<TruthSetting> truths(Study study) {
+    private List<TruthSetting> truths(Study study, StudyProblems problems) {
         List<TruthSetting> out = new ArrayList<>();
         for (int b = 0; b < study.truths().size(); b++) {
             List<List<TruthSetting.Choice>> perSection = new ArrayList<>();
             for (ComponentSpec c : study.truths().get(b)) {
-                perSection.add(choices(study, b, c));
+                int block = b;
+                perSection.add(problems.attempt(() -> choices(study, block, c), List.of()));
             }
             combine(perSection, 0, new ArrayList<>(), out);
         }
@@ -71,8 +74,8 @@ public final class Expansion {
             try {
                 catalog.checkCombination(t);
             } catch (IllegalArgumentException e) {
-                throw new StudyException(placeOf(study, "truth"), "truth", e.getMessage() + " (in the setting "
-                        + t.label() + ")");
+                problems.add(new StudyException(placeOf(study, "truth"), "truth", e.getMessage() + " (in the setting "
+                        + t.label() + ")"));
             }
         }
         return out;
@@ -111,7 +114,8 @@ public final class Expansion {
         }
     }
 
-    private List<LearnerConfig> configs(Study study, dev.touchstone.harness.catalog.LearnerCatalog learners) {
+    private List<LearnerConfig> configs(Study study, dev.touchstone.harness.catalog.LearnerCatalog learners,
+                                        StudyProblems problems) {
         List<LearnerConfig> out = new ArrayList<>();
         Map<String, LearnerConfig> byCanonical = new HashMap<>();
         for (LearnerEntry e : study.learners()) {
@@ -121,8 +125,9 @@ public final class Expansion {
                 try {
                     values = ParameterValues.resolve("learner " + e.use(), learner.description().parameters(), given);
                 } catch (ParameterException ex) {
-                    throw new StudyException(e.place(), "learners." + e.id() + ".with." + ex.parameter(),
-                            ex.getMessage());
+                    problems.add(new StudyException(e.place(), "learners." + e.id() + ".with." + ex.parameter(),
+                            ex.getMessage()));
+                    continue;
                 }
                 Map<String, Object> varied = new LinkedHashMap<>();
                 e.axes().forEach((k, v) -> {
@@ -134,9 +139,10 @@ public final class Expansion {
                         fingerprint(e, learner), e.knowledge());
                 LearnerConfig same = byCanonical.putIfAbsent(c.canonical(), c);
                 if (same != null) {
-                    throw new StudyException(e.place(), "learners." + e.id(), "the configuration " + c.label()
+                    problems.add(new StudyException(e.place(), "learners." + e.id(), "the configuration " + c.label()
                             + " is identical to " + same.label() + " (same learner, same parameter values);"
-                            + " remove one of them");
+                            + " remove one of them"));
+                    continue;
                 }
                 out.add(c);
             }

@@ -24,7 +24,9 @@ import java.util.regex.Pattern;
 /**
  * Reads and validates a study file against the catalogues of truth components, learners
  * and metrics, before anything runs. Every problem is reported as one
- * {@link StudyException} naming file, line, column, field and what is allowed.
+ * {@link StudyException} naming file, line, column, field and what is allowed; independent
+ * problems (fields, list items, parameters) are all collected in {@link StudyProblems} and
+ * raised together, the first found first.
  *
  * <p>Checks: unknown or missing fields; types; ranges and choices of every parameter (from
  * its {@code ParameterSpec}); unknown learners (with a reminder that command learners must
@@ -61,36 +63,55 @@ public final class StudyReader {
 
     /** Validates a parsed study whose relative paths (e.g. a graph file) resolve against {@code baseDir}. */
     public Study read(Node root, Path baseDir) {
-        checkKeys(root, StudyFields.names());
-        String name = text(required(root, StudyFields.NAME));
-        if (!NAME.matcher(name).matches()) {
-            throw StudyException.at(root.get(StudyFields.NAME), "'" + name
-                    + "' is not allowed (letters, digits, '.', '_' and '-', starting with a letter or digit)");
-        }
+        StudyProblems problems = new StudyProblems();
+        checkKeys(root, StudyFields.names(), problems);
+        String name = problems.attempt(() -> name(root), null);
         Node descriptionNode = root.get(StudyFields.DESCRIPTION);
-        String description = descriptionNode == null || descriptionNode.isNull() ? "" : text(descriptionNode);
-        long seed = integer(required(root, StudyFields.SEED), Long.MIN_VALUE, Long.MAX_VALUE);
+        String description = descriptionNode == null || descriptionNode.isNull() ? ""
+                : problems.attempt(() -> text(descriptionNode), "");
+        Long seed = problems.attempt(() -> integer(required(root, StudyFields.SEED), Long.MIN_VALUE, Long.MAX_VALUE),
+                null);
         Node repNode = root.get(StudyFields.REPLICATES);
-        int replicates = repNode == null ? 1 : (int) integer(repNode, 1, StudyFields.MAX_REPLICATES);
-        List<List<ComponentSpec>> truthSpecs = truths(required(root, StudyFields.TRUTH), baseDir);
-        List<SampleSize> samples = samples(required(root, StudyFields.SAMPLES));
-        List<LearnerEntry> entries = learners(required(root, StudyFields.LEARNERS));
-        List<String> metricNames = metrics(root.get(StudyFields.METRICS));
-        Limits limits = limits(root.get(StudyFields.LIMITS));
-        String compareTo = compareTo(root.get(StudyFields.COMPARE_TO), entries);
-        List<GraphClass> scoreAgainst = scoreAgainst(root.get(StudyFields.SCORE_AGAINST));
+        Integer replicates = repNode == null ? Integer.valueOf(1)
+                : problems.attempt(() -> (int) integer(repNode, 1, StudyFields.MAX_REPLICATES), null);
+        List<List<ComponentSpec>> truthSpecs = problems.attempt(() -> truths(required(root, StudyFields.TRUTH),
+                baseDir, problems), null);
+        List<SampleSize> samples = problems.attempt(() -> samples(required(root, StudyFields.SAMPLES), problems),
+                null);
+        int before = problems.all().size();
+        List<LearnerEntry> entries = problems.attempt(() -> learners(required(root, StudyFields.LEARNERS),
+                problems), null);
+        boolean entriesWhole = problems.all().size() == before;
+        List<String> metricNames = problems.attempt(() -> metrics(root.get(StudyFields.METRICS), problems), null);
+        Limits limits = problems.attempt(() -> limits(root.get(StudyFields.LIMITS), problems), null);
+        // compare_to names an entry: checked only when every entry could be read, or it would
+        // repeat an entry's own problem.
+        String compareTo = entriesWhole ? problems.attempt(() -> compareTo(root.get(StudyFields.COMPARE_TO), entries),
+                null) : null;
+        List<GraphClass> scoreAgainst = problems.attempt(() -> scoreAgainst(root.get(StudyFields.SCORE_AGAINST),
+                problems), null);
+        problems.throwIfAny();
         Study study = new Study(name, description, seed, replicates, truthSpecs, samples, entries, metricNames,
                 limits, compareTo, scoreAgainst, root);
         checkSize(root, study);
         return study;
     }
 
+    private static String name(Node root) {
+        String name = text(required(root, StudyFields.NAME));
+        if (!NAME.matcher(name).matches()) {
+            throw StudyException.at(root.get(StudyFields.NAME), "'" + name
+                    + "' is not allowed (letters, digits, '.', '_' and '-', starting with a letter or digit)");
+        }
+        return name;
+    }
+
     // ---- truth
 
     /** The {@code truth} field: one map, or a list of maps each expanding into its own grid. */
-    private List<List<ComponentSpec>> truths(Node node, Path baseDir) {
+    private List<List<ComponentSpec>> truths(Node node, Path baseDir, StudyProblems problems) {
         if (!node.isList()) {
-            return List.of(truth(node, baseDir));
+            return List.of(truth(node, baseDir, problems));
         }
         if (node.items().isEmpty()) {
             throw StudyException.at(node, "an empty list gives no truth (give a map such as {graph: …, model: …},"
@@ -98,15 +119,15 @@ public final class StudyReader {
         }
         List<List<ComponentSpec>> out = new ArrayList<>();
         for (Node item : node.items()) {
-            out.add(truth(item, baseDir));
+            out.add(problems.attempt(() -> truth(item, baseDir, problems), List.of()));
         }
         return out;
     }
 
-    private List<ComponentSpec> truth(Node node, Path baseDir) {
+    private List<ComponentSpec> truth(Node node, Path baseDir, StudyProblems problems) {
         requireMap(node);
         List<String> sectionNames = truth.sections().stream().map(TruthCatalog.Section::name).toList();
-        checkKeys(node, sectionNames);
+        checkKeys(node, sectionNames, problems);
         Set<String> replaced = new HashSet<>();
         for (TruthCatalog.Section section : truth.sections()) {
             Node s = node.get(section.name());
@@ -136,7 +157,10 @@ public final class StudyReader {
                 out.add(new ComponentSpec(section.name(), section.kindField(), section.defaultKind(), Map.of()));
                 continue;
             }
-            out.add(component(section, s, baseDir));
+            ComponentSpec c = problems.attempt(() -> component(section, s, baseDir, problems), null);
+            if (c != null) {
+                out.add(c);
+            }
         }
         return out;
     }
@@ -152,7 +176,7 @@ public final class StudyReader {
         return by.isEmpty() ? "" : ", or give " + String.join(" or ", by) + " instead";
     }
 
-    private ComponentSpec component(TruthCatalog.Section section, Node node, Path baseDir) {
+    private ComponentSpec component(TruthCatalog.Section section, Node node, Path baseDir, StudyProblems problems) {
         if (!node.isMap()) {
             if (section.bareValueIsKind()) {
                 return new ComponentSpec(section.name(), section.kindField(), kinds(section, node), Map.of());
@@ -183,8 +207,19 @@ public final class StudyReader {
         flatten(node, "", flat, keyPlaces, section.kindField());
         Map<String, List<Object>> axes = new LinkedHashMap<>();
         for (Map.Entry<String, Node> e : flat.entrySet()) {
-            List<Object> values = null;
-            for (String kindName : kindNames) {
+            List<Object> values = problems.attempt(() -> parameter(section, kindNames, e, keyPlaces, baseDir), null);
+            if (values != null) {
+                axes.put(e.getKey(), values);
+            }
+        }
+        return new ComponentSpec(section.name(), section.kindField(), kindNames, axes);
+    }
+
+    /** One truth parameter's values, checked against every kind the section lists. */
+    private List<Object> parameter(TruthCatalog.Section section, List<String> kindNames, Map.Entry<String, Node> e,
+                                   Map<String, Node.Place> keyPlaces, Path baseDir) {
+        List<Object> values = null;
+        for (String kindName : kindNames) {
                 TruthCatalog.Kind kind = section.kind(kindName);
                 ParameterSpec spec = kind.parameter(e.getKey());
                 if (spec == null) {
@@ -198,10 +233,8 @@ public final class StudyReader {
                 if (values == null) {
                     values = v;
                 }
-            }
-            axes.put(e.getKey(), values);
         }
-        return new ComponentSpec(section.name(), section.kindField(), kindNames, axes);
+        return values;
     }
 
     /** The kind names a node gives (one word or a list), each checked against the section. */
@@ -286,7 +319,7 @@ public final class StudyReader {
 
     // ---- samples
 
-    private static List<SampleSize> samples(Node node) {
+    private static List<SampleSize> samples(Node node, StudyProblems problems) {
         List<Node> items = node.isList() ? node.items() : List.of(node);
         if (items.isEmpty()) {
             throw StudyException.at(node, "needs at least one sample size (whole numbers of at least "
@@ -294,11 +327,12 @@ public final class StudyReader {
         }
         List<SampleSize> out = new ArrayList<>();
         for (Node item : items) {
-            SampleSize s = sample(item);
-            if (out.contains(s)) {
-                throw StudyException.at(item, "the sample size " + s.word() + " is listed twice");
+            SampleSize s = problems.attempt(() -> sample(item), null);
+            if (s != null && out.contains(s)) {
+                problems.add(StudyException.at(item, "the sample size " + s.word() + " is listed twice"));
+            } else if (s != null) {
+                out.add(s);
             }
-            out.add(s);
         }
         return out;
     }
@@ -318,7 +352,7 @@ public final class StudyReader {
 
     // ---- learners
 
-    private List<LearnerEntry> learners(Node node) {
+    private List<LearnerEntry> learners(Node node, StudyProblems problems) {
         if (!node.isList()) {
             throw StudyException.at(node, "expected a list of learner entries, found " + node.describe());
         }
@@ -328,7 +362,10 @@ public final class StudyReader {
         List<LearnerEntry> out = new ArrayList<>();
         Map<String, Node> ids = new LinkedHashMap<>();
         for (Node item : node.items()) {
-            LearnerEntry e = entry(item);
+            LearnerEntry e = problems.attempt(() -> entry(item, problems), null);
+            if (e == null) {
+                continue;
+            }
             if (ids.containsKey(e.id())) {
                 throw StudyException.at(item, "the learner id '" + e.id() + "' is already used at line "
                         + ids.get(e.id()).place().line() + "; give each entry its own id");
@@ -339,7 +376,7 @@ public final class StudyReader {
         return out;
     }
 
-    private LearnerEntry entry(Node item) {
+    private LearnerEntry entry(Node item, StudyProblems problems) {
         if (item.isScalar() && item.value() instanceof String) {
             String use = (String) item.value();
             LearnerCatalog.Entry found = findLearner(item, use);
@@ -350,22 +387,23 @@ public final class StudyReader {
                     + item.describe());
         }
         if (item.get(StudyFields.ENTRY_STEPS) != null) {
-            return composedEntry(item);
+            return composedEntry(item, problems);
         }
         checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH,
-                StudyFields.ENTRY_KNOWLEDGE, StudyFields.ENTRY_STEPS));
+                StudyFields.ENTRY_KNOWLEDGE, StudyFields.ENTRY_STEPS), problems);
         Node useNode = required(item, StudyFields.ENTRY_USE);
         LearnerCatalog.Entry found = findLearner(useNode, text(useNode));
         Node idNode = item.get(StudyFields.ENTRY_ID);
         String id = idNode == null ? found.id() : checkId(idNode, text(idNode));
         LearnerDescription d = found.learner().description();
-        return new LearnerEntry(id, found.id(), axes(item, d), knowledge(item.get(StudyFields.ENTRY_KNOWLEDGE), d),
+        return new LearnerEntry(id, found.id(), axes(item, d, problems), knowledge(item.get(StudyFields.ENTRY_KNOWLEDGE), d),
                 item.place());
     }
 
     /** The parameter axes of an entry or step's {@code with}, checked against the learner's declared parameters. */
-    private Map<String, List<Object>> axes(Node item, LearnerDescription d) {
+    private Map<String, List<Object>> axes(Node item, LearnerDescription d, StudyProblems problems) {
         Map<String, List<Object>> axes = new LinkedHashMap<>();
+        Set<String> given = new HashSet<>();
         Node with = item.get(StudyFields.ENTRY_WITH);
         if (with != null && !with.isNull()) {
             requireMap(with);
@@ -373,18 +411,23 @@ public final class StudyReader {
                 ParameterSpec spec = d.parameter(p.getKey());
                 if (spec == null) {
                     List<String> allowed = d.parameters().stream().map(ParameterSpec::name).toList();
-                    throw new StudyException(with.keyPlace(p.getKey()), p.getValue().path(), "unknown parameter '"
+                    problems.add(new StudyException(with.keyPlace(p.getKey()), p.getValue().path(), "unknown parameter '"
                             + p.getKey() + "' of learner " + d.id() + " (allowed: "
                             + (allowed.isEmpty() ? "none, it has no parameters" : String.join(", ", allowed)) + ")"
-                            + FormerNames.hint(p.getKey(), allowed));
+                            + FormerNames.hint(p.getKey(), allowed)));
+                    continue;
                 }
-                axes.put(spec.name(), axis(p.getValue(), spec));
+                given.add(spec.name());
+                List<Object> values = problems.attempt(() -> axis(p.getValue(), spec), null);
+                if (values != null) {
+                    axes.put(spec.name(), values);
+                }
             }
         }
         for (ParameterSpec spec : d.parameters()) {
-            if (spec.defaultValue() == null && !axes.containsKey(spec.name())) {
-                throw new StudyException(item.place(), item.path() + "." + StudyFields.ENTRY_WITH + "." + spec.name(),
-                        "learner " + d.id() + " needs this parameter (allowed: " + spec.allowed() + ")");
+            if (spec.defaultValue() == null && !given.contains(spec.name())) {
+                problems.add(new StudyException(item.place(), item.path() + "." + StudyFields.ENTRY_WITH + "." + spec.name(),
+                        "learner " + d.id() + " needs this parameter (allowed: " + spec.allowed() + ")"));
             }
         }
         return axes;
@@ -395,8 +438,8 @@ public final class StudyReader {
      * Each step is checked like a learner entry, and each hand-on against what the receiving
      * learner honours, at the step's own line.
      */
-    private LearnerEntry composedEntry(Node item) {
-        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_STEPS, StudyFields.ENTRY_KNOWLEDGE));
+    private LearnerEntry composedEntry(Node item, StudyProblems problems) {
+        checkKeys(item, List.of(StudyFields.ENTRY_ID, StudyFields.ENTRY_STEPS, StudyFields.ENTRY_KNOWLEDGE), problems);
         Node stepsNode = item.get(StudyFields.ENTRY_STEPS);
         if (!stepsNode.isList() || stepsNode.items().size() < 2) {
             throw StudyException.at(stepsNode, "expected a list of at least two steps ({use: …, with: {…}, given: …}),"
@@ -406,11 +449,11 @@ public final class StudyReader {
         List<ComposedStep> composed = new ArrayList<>();
         for (Node stepNode : stepsNode.items()) {
             requireMap(stepNode);
-            checkKeys(stepNode, List.of(StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH, StudyFields.STEP_GIVEN));
+            checkKeys(stepNode, List.of(StudyFields.ENTRY_USE, StudyFields.ENTRY_WITH, StudyFields.STEP_GIVEN), problems);
             Node useNode = required(stepNode, StudyFields.ENTRY_USE);
             LearnerCatalog.Entry found = findLearner(useNode, text(useNode));
             Handoff given = given(stepNode, composed, found.learner().description());
-            steps.add(new LearnerEntry.Step(found.id(), axes(stepNode, found.learner().description()), given));
+            steps.add(new LearnerEntry.Step(found.id(), axes(stepNode, found.learner().description(), problems), given));
             composed.add(new ComposedStep(found.learner(), given));
         }
         ComposedLearner learner;
@@ -492,7 +535,7 @@ public final class StudyReader {
 
     // ---- metrics, limits, compare_to
 
-    private List<String> metrics(Node node) {
+    private List<String> metrics(Node node, StudyProblems problems) {
         if (node == null || node.isNull()) {
             return metrics.defaults();
         }
@@ -503,25 +546,28 @@ public final class StudyReader {
         }
         List<String> out = new ArrayList<>();
         for (Node item : items) {
-            String m = text(item);
+            String m = problems.attempt(() -> text(item), null);
+            if (m == null) {
+                continue;
+            }
             if (!metrics.contains(m)) {
-                throw StudyException.at(item, "unknown metric '" + m + "' (allowed: "
-                        + String.join(", ", metrics.names()) + ")");
+                problems.add(StudyException.at(item, "unknown metric '" + m + "' (allowed: "
+                        + String.join(", ", metrics.names()) + ")"));
+            } else if (out.contains(m)) {
+                problems.add(StudyException.at(item, "the metric " + m + " is listed twice"));
+            } else {
+                out.add(m);
             }
-            if (out.contains(m)) {
-                throw StudyException.at(item, "the metric " + m + " is listed twice");
-            }
-            out.add(m);
         }
         return out;
     }
 
-    private static Limits limits(Node node) {
+    private static Limits limits(Node node, StudyProblems problems) {
         if (node == null || node.isNull()) {
             return Limits.defaults();
         }
         requireMap(node);
-        checkKeys(node, List.of(StudyFields.LIMIT_SECONDS, StudyFields.LIMIT_MAX_RUNS));
+        checkKeys(node, List.of(StudyFields.LIMIT_SECONDS, StudyFields.LIMIT_MAX_RUNS), problems);
         Duration perRun = null;
         Node s = node.get(StudyFields.LIMIT_SECONDS);
         if (s != null && !s.isNull()) {
@@ -557,23 +603,25 @@ public final class StudyReader {
                 + String.join(", ", entries.stream().map(LearnerEntry::id).toList()) + ")");
     }
 
-    private static List<GraphClass> scoreAgainst(Node node) {
+    private static List<GraphClass> scoreAgainst(Node node, StudyProblems problems) {
         if (node == null || node.isNull()) {
             return List.of();
         }
         List<String> allowed = List.of("dag", "cpdag", "mag", "pag");
         List<GraphClass> out = new ArrayList<>();
         for (Node item : node.isList() ? node.items() : List.of(node)) {
-            String word = text(item);
-            if (!allowed.contains(word)) {
-                throw StudyException.at(item, "unknown graph class '" + word + "' (allowed: "
-                        + String.join(", ", allowed) + ")");
-            }
-            GraphClass c = GraphClass.parse(word);
-            if (out.contains(c)) {
-                throw StudyException.at(item, "the class " + word + " is listed twice");
-            }
-            out.add(c);
+            problems.attempt(() -> {
+                String word = text(item);
+                if (!allowed.contains(word)) {
+                    throw StudyException.at(item, "unknown graph class '" + word + "' (allowed: "
+                            + String.join(", ", allowed) + ")");
+                }
+                GraphClass c = GraphClass.parse(word);
+                if (out.contains(c)) {
+                    throw StudyException.at(item, "the class " + word + " is listed twice");
+                }
+                out.add(c);
+            });
         }
         return out;
     }
@@ -609,14 +657,15 @@ public final class StudyReader {
         return n;
     }
 
-    private static void checkKeys(Node map, List<String> allowed) {
+    /** Records every key of the map that is not allowed; the others are read as usual. */
+    private static void checkKeys(Node map, List<String> allowed, StudyProblems problems) {
         requireMap(map);
         for (String key : map.entries().keySet()) {
             if (!allowed.contains(key)) {
                 String hint = closest(key, allowed);
-                throw new StudyException(map.keyPlace(key), path(map, key), "unknown field"
+                problems.add(new StudyException(map.keyPlace(key), path(map, key), "unknown field"
                         + (hint == null ? "" : " (did you mean '" + hint + "'?)") + "; allowed here: "
-                        + String.join(", ", allowed));
+                        + String.join(", ", allowed)));
             }
         }
     }

@@ -69,7 +69,7 @@ class CliTest {
     }
 
     @Test
-    @DisplayName("a bad study gives exit 2 and one line 'error: FILE:LINE:COLUMN: field: …'")
+    @DisplayName("a bad study gives exit 2 and one line 'error: FILE:LINE:COLUMN: field: …' per problem")
     void badStudy() throws IOException {
         Path f = tmp.resolve("bad.yaml");
         Files.writeString(f, "name: b\nseed: 1\ntruth:\n  graph: {family: erdos-renyi, nodes: 0}\n"
@@ -78,7 +78,9 @@ class CliTest {
         assertEquals(2, r.status());
         assertTrue(r.err().startsWith("error: bad.yaml:4:"), r.err());
         assertTrue(r.err().contains("truth.graph.nodes: parameter 'nodes': 0 is outside the allowed range"), r.err());
-        assertEquals(1, r.err().lines().count(), r.err());
+        assertTrue(r.err().contains("\nerror: bad.yaml:7:"), r.err());
+        assertTrue(r.err().contains("learners[0]: unknown learner 'nobody'"), r.err());
+        assertEquals(2, r.err().lines().count(), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
     }
 

@@ -1,0 +1,161 @@
+package dev.touchstone.harness.execution;
+
+import dev.touchstone.harness.study.Plan;
+import dev.touchstone.harness.testing.TestWorld;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.stream.Stream;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The finished marker ({@link FinishedIndex}): a resume with nothing to do trusts it only while
+ * the folder is exactly as the finishing session left it; any other folder is read as before,
+ * with the journal's checks.
+ */
+class FinishedIndexTest {
+
+    @TempDir
+    Path tmp;
+
+    private static StudyRunner.Outcome run(Plan plan, Path out, StringWriter said) {
+        return TestWorld.runner().run(plan, new StudyRunner.Options(out, 2, Progress.quiet(), new PrintWriter(said)));
+    }
+
+    private static StudyRunner.Outcome run(Plan plan, Path out) {
+        return run(plan, out, new StringWriter());
+    }
+
+    /** Every file of the folder with its bytes and modification time, to show that nothing was written. */
+    private static Map<String, String> snapshot(Path out) throws IOException {
+        Map<String, String> m = new TreeMap<>();
+        try (Stream<Path> s = Files.walk(out)) {
+            for (Path p : s.filter(Files::isRegularFile).toList()) {
+                m.put(out.relativize(p).toString(), FinishedIndex.fingerprint(p) + "@"
+                        + Files.getLastModifiedTime(p).toMillis());
+            }
+        }
+        return m;
+    }
+
+    /** Sets every file's modification time into the past, so a rewrite would show even within one clock tick. */
+    private static void age(Path out) throws IOException {
+        try (Stream<Path> s = Files.walk(out)) {
+            for (Path p : s.filter(Files::isRegularFile).toList()) {
+                Files.setLastModifiedTime(p, FileTime.fromMillis(1_000_000_000_000L));
+            }
+        }
+    }
+
+    @Test
+    @DisplayName("a finished study is recognised by its marker: same outcome, nothing read beyond it, nothing written")
+    void finishedIsRecognised() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("r");
+        StudyRunner.Outcome first = run(plan, out);
+        assertFalse(first.alreadyFinished());
+        FinishedIndex index = FinishedIndex.read(out);
+        assertNotNull(index);
+        assertEquals(plan.runs().size(), index.total());
+        assertEquals(first.byStatus(), index.byStatus());
+        age(out);
+        Map<String, String> before = snapshot(out);
+        StringWriter said = new StringWriter();
+        StudyRunner.Outcome again = run(plan, out, said);
+        assertTrue(again.alreadyFinished());
+        assertEquals(plan.runs().size(), again.reused());
+        assertEquals(0, again.performed());
+        assertEquals(first.byStatus(), again.byStatus());
+        assertEquals(before, snapshot(out), "a resume of a finished study writes nothing");
+        assertTrue(said.toString().contains("0 to do"), said.toString());
+    }
+
+    @Test
+    @DisplayName("a journal line damaged after the study finished: the marker is not believed and the resume is"
+            + " refused with the line number, before anything is written")
+    void damagedAfterFinishing() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("bad");
+        run(plan, out);
+        List<String> lines = new ArrayList<>(Files.readAllLines(out.resolve(Journal.FILE_NAME)));
+        lines.set(5, "{\"key\": 12");
+        Files.write(out.resolve(Journal.FILE_NAME), lines);
+        age(out);
+        Map<String, String> before = snapshot(out);
+        Journal.JournalException e = assertThrows(Journal.JournalException.class, () -> run(plan, out));
+        assertTrue(e.getMessage().contains("journal.jsonl:6:"), e.getMessage());
+        assertEquals(before, snapshot(out), "nothing is written, provenance and marker included");
+    }
+
+    @Test
+    @DisplayName("a journal cut back after finishing (as by a crash of an older session): the missing runs are redone"
+            + " and a new marker is written")
+    void cutJournalIsRedone() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("cut");
+        run(plan, out);
+        String runs = StudyRunnerTest.withoutTimings(out.resolve(StudyRunner.RUNS_FILE));
+        List<String> lines = Files.readAllLines(out.resolve(Journal.FILE_NAME));
+        Files.write(out.resolve(Journal.FILE_NAME), lines.subList(0, 30));
+        StudyRunner.Outcome again = run(plan, out);
+        assertFalse(again.alreadyFinished());
+        assertEquals(30, again.reused());
+        assertEquals(plan.runs().size() - 30, again.performed());
+        assertEquals(runs, StudyRunnerTest.withoutTimings(out.resolve(StudyRunner.RUNS_FILE)));
+        assertTrue(run(plan, out).alreadyFinished(), "the session that finished wrote a marker again");
+    }
+
+    @Test
+    @DisplayName("an output table removed after finishing is rebuilt: the marker vouches for every output")
+    void missingTableIsRebuilt() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("gone");
+        run(plan, out);
+        String summary = Files.readString(out.resolve(StudyRunner.SUMMARY_FILE));
+        Files.delete(out.resolve(StudyRunner.SUMMARY_FILE));
+        StudyRunner.Outcome again = run(plan, out);
+        assertFalse(again.alreadyFinished());
+        assertEquals(0, again.performed());
+        assertEquals(summary, Files.readString(out.resolve(StudyRunner.SUMMARY_FILE)));
+    }
+
+    @Test
+    @DisplayName("another plan in the same folder (a changed study) does not believe the marker")
+    void changedStudyIsNotFinished() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("changed");
+        run(plan, out);
+        Plan more = TestWorld.plan(StudyRunnerTest.STUDY.replace("replicates: 3", "replicates: 4"));
+        StudyRunner.Outcome again = run(more, out);
+        assertFalse(again.alreadyFinished());
+        assertEquals(plan.runs().size(), again.reused());
+        assertEquals(more.runs().size() - plan.runs().size(), again.performed());
+    }
+
+    @Test
+    @DisplayName("an unreadable marker is not believed: the journal is read as before")
+    void unreadableMarker() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("garbled");
+        run(plan, out);
+        Files.writeString(out.resolve(FinishedIndex.FILE_NAME), "{\"plan\": ");
+        assertFalse(run(plan, out).alreadyFinished());
+        assertTrue(run(plan, out).alreadyFinished());
+    }
+}
