@@ -54,20 +54,52 @@ public final class PilotEstimate {
     }
 
     /**
-     * What the pilot measured and what it predicts.
+     * What the pilot itself did.
      *
-     * @param pilotRuns        pairs performed (one run each)
-     * @param capSeconds       the time limit each pilot run had
-     * @param capped           pilot runs stopped by the pilot's limit
-     * @param pilotSeconds     the pilot's own wall time
-     * @param drawSeconds      core-seconds the study will spend drawing data
-     * @param runSeconds       core-seconds the study will spend learning and scoring (and bookkeeping)
-     * @param workers          workers running at once in the estimate
-     * @param estimatedSeconds the study's estimated wall time
-     * @param lowerBound       whether some pair was capped, so the study may take longer
+     * @param runs       pairs performed (one run each)
+     * @param capSeconds the time limit each pilot run had
+     * @param capped     pilot runs stopped by the pilot's limit
+     * @param seconds    the pilot's own wall time
      */
-    public record Figures(int pilotRuns, double capSeconds, int capped, double pilotSeconds, double drawSeconds,
-                          double runSeconds, int workers, double estimatedSeconds, boolean lowerBound) {
+    public record Pilot(int runs, double capSeconds, int capped, double seconds) {
+    }
+
+    /**
+     * What the pilot measured and what it predicts; the estimate and whether it is only a lower
+     * bound follow from the parts, so they are computed, not stored.
+     *
+     * @param pilot       what the pilot did
+     * @param drawSeconds core-seconds the study will spend drawing data
+     * @param runSeconds  core-seconds the study will spend learning and scoring (and bookkeeping)
+     * @param workers     workers running at once in the estimate
+     */
+    public record Figures(Pilot pilot, double drawSeconds, double runSeconds, int workers) {
+
+        /** The study's estimated wall time. */
+        public double estimatedSeconds() {
+            return (drawSeconds + runSeconds) / workers + FIXED_SECONDS;
+        }
+
+        /** Whether some pilot run was stopped by the pilot's limit, so the study may take longer. */
+        public boolean lowerBound() {
+            return pilot.capped() > 0;
+        }
+
+        public int pilotRuns() {
+            return pilot.runs();
+        }
+
+        public double capSeconds() {
+            return pilot.capSeconds();
+        }
+
+        public int capped() {
+            return pilot.capped();
+        }
+
+        public double pilotSeconds() {
+            return pilot.seconds();
+        }
     }
 
     /**
@@ -120,8 +152,8 @@ public final class PilotEstimate {
         runs += plan.runs().size() * BOOKKEEPING_MS / 1000;
         int workers = Math.max(1, Math.min(Math.min(threads, Runtime.getRuntime().availableProcessors()),
                 plan.runs().size()));
-        return new Figures(pairs, seconds(cap.toNanos()), capped, seconds(System.nanoTime() - started), draws, runs,
-                workers, (draws + runs) / workers + FIXED_SECONDS, capped > 0);
+        Pilot pilot = new Pilot(pairs, seconds(cap.toNanos()), capped, seconds(System.nanoTime() - started));
+        return new Figures(pilot, draws, runs, workers);
     }
 
     /** Replicate 0's run of every (truth setting, sample size, configuration), by {@link #pairKey}. */
