@@ -22,19 +22,27 @@ final class AdditiveRegression {
     private AdditiveRegression() {
     }
 
-    /** The fit of {@code y} on the predictors of {@code terms} (none: the constant alone). */
-    static Fit fit(double[] y, List<PSplineSmoother> terms) {
-        int n = y.length;
-        double[] residual = new double[n];
+    /** {@code y} minus its mean: the start of every additive fit, whose constant is the mean. */
+    static double[] centred(double[] y) {
         double mean = 0;
         for (double v : y) {
             mean += v;
         }
-        mean /= n;
+        mean /= y.length;
+        double[] out = new double[y.length];
+        for (int i = 0; i < y.length; i++) {
+            out[i] = y[i] - mean;
+        }
+        return out;
+    }
+
+    /** The fit of {@code y} on the predictors of {@code terms} (none: the constant alone). */
+    static Fit fit(double[] y, List<PSplineSmoother> terms) {
+        int n = y.length;
+        double[] residual = centred(y);
         double total = 0;
-        for (int i = 0; i < n; i++) {
-            residual[i] = y[i] - mean;
-            total += residual[i] * residual[i];
+        for (double r : residual) {
+            total += r * r;
         }
         int k = terms.size();
         double[] termEdf = new double[k];

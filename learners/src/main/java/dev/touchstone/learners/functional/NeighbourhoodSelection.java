@@ -67,15 +67,7 @@ final class NeighbourhoodSelection {
     private static double[] importance(double[] y, List<PSplineSmoother> smoothers, List<Integer> allowed,
             RunContext context) {
         int n = y.length;
-        double[] residual = new double[n];
-        double mean = 0;
-        for (double v : y) {
-            mean += v;
-        }
-        mean /= n;
-        for (int i = 0; i < n; i++) {
-            residual[i] = y[i] - mean;
-        }
+        double[] residual = AdditiveRegression.centred(y);
         double[] importance = new double[smoothers.size()];
         double[] fit = new double[n];
         double[] bestFit = new double[n];
