@@ -12,7 +12,7 @@ import java.time.Instant;
 import java.util.Map;
 
 /**
- * Where results came from (Tribuo's habit, style.md): tool version and commit, Java, OS and
+ * Where results came from: tool version and commit, Java, OS and
  * CPU, when the study started and ended, the study's name and hashes, the threads used and
  * how the runs ended, and the version of the CSV tables' layout ({@code tables_schema},
  * {@link ResultTables#SCHEMA}). Written as {@code provenance.json} at the start and again at the end.
