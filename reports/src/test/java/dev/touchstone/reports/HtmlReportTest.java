@@ -53,9 +53,8 @@ class HtmlReportTest {
         ReportData base = ReportFixtures.study(true, false).build();
         List<RunResult> runs = new ArrayList<>();
         for (RunResult r : base.runs()) {
-            runs.add(!r.configurationId().equals("beta") ? r : new RunResult(r.key(), r.setting(), r.replicate(),
-                    r.configurationId(), r.learnerId(), r.parameters(), r.seed(), r.status(), r.message(), GraphClass.DAG,
-                    GraphClass.DAG, r.metrics(), r.timings()));
+            runs.add(!r.configurationId().equals("beta") ? r : r.toBuilder().estimateClass(GraphClass.DAG)
+                    .scoredAgainst(GraphClass.DAG).build());
         }
         Document d = render(ReportFixtures.study(true, false).runs(runs).build());
         String classes = "Scored against the true CPDAG (alpha); the true DAG (beta).";
