@@ -10,9 +10,6 @@ import java.util.Locale;
 /** The tables of the calibration report, shared by its HTML and Markdown forms. */
 final class CalibrationTables {
 
-    /** An edge not in the fitted truth has nothing to recover: its simulated cells are undefined. */
-    private static final CalibrationView.Frequencies NOT_IN_TRUTH = new CalibrationView.Frequencies(null, null);
-
     private CalibrationTables() {
     }
 
@@ -62,7 +59,8 @@ final class CalibrationTables {
         Table.Builder t = Table.builder(List.of("learner", "edge", "in fitted truth", "adjacent (simulated)",
                 "oriented so (simulated)", "adjacent (bootstrap)", "oriented so (bootstrap)"));
         for (CalibrationView.EdgeRow e : v.edges()) {
-            CalibrationView.Frequencies simulated = e.inTruth() ? e.simulated() : NOT_IN_TRUTH;
+            // an edge not in the fitted truth has nothing to recover: its simulated cells are undefined
+            CalibrationView.Frequencies simulated = e.inTruth() ? e.simulated() : CalibrationView.Frequencies.UNDEFINED;
             t.row(e.learner(), e.from() + " → " + e.to(), e.inTruth() ? "yes" : "no",
                     Numbers.format(simulated.adjacent()), Numbers.format(simulated.oriented()),
                     Numbers.format(e.bootstrap().adjacent()), Numbers.format(e.bootstrap().oriented()));

@@ -311,6 +311,9 @@ public final class CalibrationView {
      * @param oriented fraction where it is directed from → to
      */
     public record Frequencies(Double adjacent, Double oriented) {
+
+        /** No estimates to count: both fractions undefined. */
+        public static final Frequencies UNDEFINED = new Frequencies(null, null);
     }
 
     /**
