@@ -153,8 +153,10 @@ public final class RunPerformer {
         Setting setting = layout.setting(run);
         Map<String, String> params = new LinkedHashMap<>();
         run.config().values().asMap().forEach((k, v) -> params.put(k, Canonical.value(v)));
-        return new RunResult(run.key(), setting, run.replicate(), run.config().label(), run.config().use(), params,
-                run.learnerSeed(), status, message, estimateClass, scoredAgainst, metrics, timings);
+        return RunResult.builder().key(run.key()).setting(setting).replicate(run.replicate())
+                .configurationId(run.config().label()).learnerId(run.config().use()).parameters(params)
+                .seed(run.learnerSeed()).status(status).message(message).estimateClass(estimateClass)
+                .scoredAgainst(scoredAgainst).metrics(metrics).timings(timings).build();
     }
 
     private static Timings timings(long t0, long cpu0, long alloc0, long threadId, RunContext context) {

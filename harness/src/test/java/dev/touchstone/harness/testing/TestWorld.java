@@ -205,9 +205,11 @@ public final class TestWorld {
                         }
                     }
                     Summary s = count == 0 ? Summary.EMPTY
-                            : new Summary(count, sum / count, null, null, null, null, null, null);
-                    out.add(new AggregateRow(g.get(0).setting(), g.get(0).configurationId(), g.get(0).learnerId(), m,
-                            ok, failed, skipped, s));
+                            : new Summary(count, sum / count, null, Summary.Interval.UNDEFINED,
+                                    Summary.Quartiles.UNDEFINED);
+                    out.add(AggregateRow.builder().setting(g.get(0).setting())
+                            .configurationId(g.get(0).configurationId()).learnerId(g.get(0).learnerId()).metric(m)
+                            .okRuns(ok).failedRuns(failed).skippedRuns(skipped).summary(s).build());
                 }
             }
             return out;
