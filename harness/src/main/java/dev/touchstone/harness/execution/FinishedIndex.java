@@ -4,18 +4,15 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.io.Sha256;
 import dev.touchstone.metrics.results.RunStatus;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -241,21 +238,13 @@ public record FinishedIndex(String plan, String study, String versions, boolean 
 
     /** {@code BYTES:SHA256} of a file. */
     static String digest(Path p) {
-        try (InputStream in = Files.newInputStream(p)) {
-            MessageDigest md = MessageDigest.getInstance("SHA-256");
-            byte[] buf = new byte[1 << 16];
-            long size = 0;
-            for (int r; (r = in.read(buf)) > 0; ) {
-                md.update(buf, 0, r);
-                size += r;
-            }
-            return size + ":" + HexFormat.of().formatHex(md.digest());
+        try {
+            Sha256 d = Sha256.start().addFile(p);
+            return d.size() + ":" + d.hex();
         } catch (NoSuchFileException e) {
             throw new UncheckedIOException(e);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + p + ": " + e.getMessage(), e);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is part of every Java platform", e);
         }
     }
 

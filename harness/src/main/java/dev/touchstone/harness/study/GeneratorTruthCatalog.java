@@ -19,15 +19,13 @@ import dev.touchstone.harness.io.FileFormatException;
 import dev.touchstone.harness.io.ModelFile;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.harness.io.GraphFiles;
+import dev.touchstone.harness.io.Sha256;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -279,12 +277,7 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
     }
 
     private static String digest(byte[] bytes) {
-        try {
-            byte[] d = MessageDigest.getInstance("SHA-256").digest(bytes);
-            return HexFormat.of().formatHex(d, 0, 8);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is missing from this Java", e);
-        }
+        return Sha256.hex(bytes, 8);
     }
 
     /** The generators' recipe for a truth setting. */
