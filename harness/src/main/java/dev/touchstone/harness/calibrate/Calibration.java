@@ -42,8 +42,8 @@ import java.util.Map;
  *
  * <p>All of it goes through the study harness's execution step ({@link RunBatch} on a
  * {@link LocalExecutor}): one list of runs, worker threads, per-run deadlines, progress; the
- * results, with the estimates the learners returned, are kept in memory, as no study or journal is involved. Seeds: variant k from
- * {@code Seeds.derive(seed, "variant", k)}; replicates and resamples from the runs'
+ * results, with the estimates the learners returned, are kept in memory, as no study or
+ * journal is involved. Seeds: variant k from {@code Seeds.derive(seed, "variant", k)}; replicates and resamples from the runs'
  * {@link ReplicateSeeds}; learners from the runs' coordinates. So results are the same for
  * any number of threads. Cost: (replicates × sizes + bootstrap) × learners runs, plus one
  * re-fit per variant.

@@ -171,7 +171,8 @@ public final class CalibrationSettings {
         /**
          * The settings.
          *
-         * @throws IllegalArgumentException when a count is out of range, or a learner or size is missing or listed twice
+         * @throws IllegalArgumentException when a count is out of range, or a learner or size is missing or
+         *     listed twice
          */
         public CalibrationSettings build() {
             return new CalibrationSettings(this);
