@@ -153,8 +153,8 @@ final class CalibrateCommand implements Callable<Integer> {
             }
         }
         once("--samples", sizes);
-        CalibrationSettings settings = new CalibrationSettings(choices, sizes, replicates, variants, bootstrap, seed.value(),
-                n, limit);
+        CalibrationSettings settings = CalibrationSettings.builder(choices, sizes).replicates(replicates)
+                .variants(variants).bootstrap(bootstrap).seed(seed.value()).threads(n).limit(limit).build();
         err.print(read.describeKinds());
         Graph truth;
         List<String> truthLines = new ArrayList<>();

@@ -42,11 +42,15 @@ public final class RunPerformer {
     private static final ThreadMXBean THREADS = ManagementFactory.getThreadMXBean();
 
     private final Scorer scorer;
-    private final SettingLayout layout;
+    private final RunCoordinates coordinates;
 
-    public RunPerformer(Scorer scorer, SettingLayout layout) {
+    /**
+     * @param scorer      scores estimates against the truth
+     * @param coordinates the setting each result is written with
+     */
+    public RunPerformer(Scorer scorer, RunCoordinates coordinates) {
         this.scorer = scorer;
-        this.layout = layout;
+        this.coordinates = coordinates;
     }
 
     /** A run whose replicate could not be drawn: failed, with the reason. */
@@ -150,7 +154,7 @@ public final class RunPerformer {
 
     private RunResult result(RunDefinition run, RunStatus status, String message, GraphClass estimateClass,
                              GraphClass scoredAgainst, Map<String, Double> metrics, Timings timings) {
-        Setting setting = layout.setting(run);
+        Setting setting = coordinates.setting(run);
         Map<String, String> params = new LinkedHashMap<>();
         run.config().values().asMap().forEach((k, v) -> params.put(k, Canonical.value(v)));
         return RunResult.builder().key(run.key()).setting(setting).replicate(run.replicate())
