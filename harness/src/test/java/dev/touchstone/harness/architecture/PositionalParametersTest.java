@@ -49,18 +49,6 @@ class PositionalParametersTest {
      * to leave the list), so the list can only shrink.
      */
     static final Set<String> NOT_YET_FIXED = Set.of(
-            "dev.touchstone.harness.study.Study",
-            "dev.touchstone.harness.study.RunDefinition",
-            "dev.touchstone.harness.execution.Provenance",
-            "dev.touchstone.harness.calibrate.CalibrationSettings",
-            "dev.touchstone.harness.study.LearnerConfig",
-            "dev.touchstone.harness.outside.CommandSpec",
-            "dev.touchstone.harness.calibrate.CalibrationOutcome",
-            "dev.touchstone.harness.calibrate.CalibrationOutcome$Run",
-            "dev.touchstone.harness.execution.FinishedIndex",
-            "dev.touchstone.harness.study.TruthCatalog$Section",
-            "dev.touchstone.harness.study.TruthSetting$Choice",
-            "dev.touchstone.harness.execution.StudyRunner$Outcome",
             "dev.touchstone.generators.fit.FittedNode$Gaussian",
             "dev.touchstone.generators.fit.FittedNode$Categorical",
             "dev.touchstone.generators.models.MixedMechanisms$Discrete",
