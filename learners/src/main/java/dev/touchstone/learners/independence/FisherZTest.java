@@ -176,13 +176,12 @@ public final class FisherZTest implements IndependenceTest {
             }
         }
         Kept[] found = new Kept[tiles];
-        ThreadLocal<double[][]> scratch = ThreadLocal.withInitial(() -> new double[][] {
-            new double[TILE_ROWS * TILE_COLUMNS], new double[TILE_ROWS * TILE_COLUMNS]});
-        ThreadLocal<double[][]> panels = ThreadLocal.withInitial(() -> new double[256][TILE_COLUMNS]);
+        ThreadLocal<double[]> scratch = ThreadLocal.withInitial(() -> new double[TILE_ROWS * TILE_COLUMNS]);
+        ThreadLocal<CentredColumns.TileWorker> workers = ThreadLocal.withInitial(
+                () -> screened == null ? null : screened.columns().tileWorker());
         java.util.function.IntConsumer tile = k -> {
             deadline.run();
-            double[][] s = scratch.get();
-            found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, panels.get(), s[0], s[1]);
+            found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, workers.get(), scratch.get());
         };
         if (threads <= 1) {
             for (int k = 0; k < tiles; k++) {
@@ -208,12 +207,12 @@ public final class FisherZTest implements IndependenceTest {
     }
 
     /** The pairs i < j of one tile that test dependent given ∅, with their correlations. */
-    private Kept screenTile(int i0, int j0, double[][] panel, double[] sums, double[] r) {
+    private Kept screenTile(int i0, int j0, CentredColumns.TileWorker worker, double[] r) {
         int j1 = Math.min(p, j0 + TILE_COLUMNS);
         int i1 = Math.min(j1, i0 + TILE_ROWS);
         int width = j1 - j0;
-        if (screened != null) {
-            screened.columns().correlationTile(i0, i1, j0, j1, panel, sums, r);
+        if (worker != null) {
+            worker.correlations(i0, i1, j0, j1, r);
         } else {
             for (int i = i0; i < i1; i++) {
                 System.arraycopy(correlation, i * p + j0, r, (i - i0) * width, width);
