@@ -1,6 +1,8 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
+
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -968,7 +970,6 @@ final class GesSearch {
     private void parallel(int count, IntConsumer body) {
         PoolLoop.run(pool, count, body);
     }
-
 
     /** A rated operator: Insert(x, y, T) in the forward phase, Delete(x, y, H) in the backward one. */
     static final class Candidate {
