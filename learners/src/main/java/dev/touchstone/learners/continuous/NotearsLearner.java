@@ -5,18 +5,19 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.KnowledgeUse;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.List;
 import java.util.Map;
@@ -39,7 +40,7 @@ import java.util.Map;
  * O(d³ log‖W∘W‖) for the matrix exponential and products, times the (problem-dependent)
  * number of L-BFGS iterations, typically hundreds to a few thousand in all.
  */
-public final class NotearsLearner implements Learner {
+public final class NotearsLearner extends DeclaredLearner {
 
     public static final String ID = "notears-linear";
 
@@ -85,29 +86,26 @@ public final class NotearsLearner implements Learner {
             .parameter(RHO_MAX)
             .build();
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public NotearsLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
+    protected Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        LearnerInput input = run.input();
         CovarianceMatrix cov = input.isOracle() ? input.oracle().populationCovariance() : input.data().covariance();
-        List<String> names = input.variableNames();
+        List<String> names = run.names();
         int d = names.size();
+        KnowledgeIndex knowledge = KnowledgeIndex.of(run.knowledge(), names);
         boolean[] forbidden = new boolean[d * d];
         for (int i = 0; i < d; i++) {
-            forbidden[i * d + i] = true;
             for (int j = 0; j < d; j++) {
-                if (i != j && knowledge.isForbidden(names.get(i), names.get(j))) {
-                    forbidden[i * d + j] = true;
-                }
+                forbidden[i * d + j] = i == j || knowledge.isForbidden(i, j);
             }
         }
-        Fit fit = fit(cov.toArray(), d, forbidden, Settings.of(parameters), context);
-        double threshold = parameters.get(WEIGHT_THRESHOLD);
+        Fit fit = fit(cov.toArray(), d, forbidden, Settings.of(run.parameters()), context);
+        double threshold = run.get(WEIGHT_THRESHOLD);
         double[] w = fit.weights().clone();
         for (int k = 0; k < w.length; k++) {
             if (Math.abs(w[k]) < threshold) {
