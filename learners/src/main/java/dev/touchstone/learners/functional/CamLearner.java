@@ -1,6 +1,5 @@
 package dev.touchstone.learners.functional;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
@@ -9,9 +8,7 @@ import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerRun;
-import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.Parameter;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
@@ -55,19 +52,15 @@ public final class CamLearner extends DeclaredLearner {
     /** Fewer rows than this leave GCV no residual degrees of freedom with the default basis. */
     private static final int MIN_ROWS = 10;
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder(ID)
-            .summary("keeps a few candidate parents per variable, greedily adds the edge that most raises the Gaussian"
-                    + " likelihood of additive spline fits, then drops parents whose smooth term fails an F-test")
-            .publication("Bühlmann, Peters and Ernest (2014), CAM: Causal additive models, high-dimensional order search"
-                    + " and penalized regression, Annals of Statistics 42; P-splines of Eilers and Marx (1996)")
-            .family(LearnerFamily.FUNCTIONAL)
-            .accepts(DataKind.CONTINUOUS)
-            .returns(GraphClass.DAG)
-            .missingValues(MissingValues.REJECTS)
+    private static final LearnerDescription DESCRIPTION = FunctionalLearners.describe(ID,
+                    "keeps a few candidate parents per variable, greedily adds the edge that most raises the Gaussian"
+                            + " likelihood of additive spline fits, then drops parents whose smooth term fails an F-test",
+                    "Bühlmann, Peters and Ernest (2014), CAM: Causal additive models, high-dimensional order search"
+                            + " and penalized regression, Annals of Statistics 42; P-splines of Eilers and Marx (1996)")
             .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
             .assumption("additive model: each variable is a sum of smooth functions of single parents plus noise")
             .assumption("Gaussian noise (the likelihood); nonlinear functions make the DAG identifiable")
-            .assumption("acyclicity and no hidden confounding")
+            .assumption(FunctionalLearners.ACYCLIC)
             .parameter(CANDIDATES)
             .parameter(PRUNING_LEVEL)
             .parameter(SEGMENTS)

@@ -1,7 +1,6 @@
 package dev.touchstone.learners.functional;
 
 import dev.touchstone.core.data.CovarianceMatrix;
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
@@ -9,9 +8,7 @@ import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerRun;
-import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.Worded;
@@ -69,18 +66,14 @@ public final class DirectLingamLearner extends DeclaredLearner {
             "with pruning = weight-threshold: keep an edge when its least-squares coefficient exceeds this in"
                     + " absolute value");
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder(ID)
-            .summary("finds a causal order by the pairwise likelihood-ratio measure of non-Gaussianity, then prunes"
-                    + " each variable's regression on its predecessors")
-            .publication("Shimizu et al. (2011), DirectLiNGAM: a direct method for learning a linear non-Gaussian"
-                    + " structural equation model, JMLR 12; measure of Hyvärinen and Smith (2013), JMLR 14")
-            .family(LearnerFamily.FUNCTIONAL)
-            .accepts(DataKind.CONTINUOUS)
-            .returns(GraphClass.DAG)
-            .missingValues(MissingValues.REJECTS)
+    private static final LearnerDescription DESCRIPTION = FunctionalLearners.describe(ID,
+                    "finds a causal order by the pairwise likelihood-ratio measure of non-Gaussianity, then prunes"
+                            + " each variable's regression on its predecessors",
+                    "Shimizu et al. (2011), DirectLiNGAM: a direct method for learning a linear non-Gaussian"
+                            + " structural equation model, JMLR 12; measure of Hyvärinen and Smith (2013), JMLR 14")
             .assumption("linear structural equations")
             .assumption("independent non-Gaussian noise (at most one Gaussian noise term)")
-            .assumption("acyclicity and no hidden confounding")
+            .assumption(FunctionalLearners.ACYCLIC)
             .parameter(PRUNING)
             .parameter(WEIGHT_THRESHOLD)
             .build();

@@ -1,6 +1,5 @@
 package dev.touchstone.learners.functional;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
@@ -8,9 +7,7 @@ import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerRun;
-import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.Parameter;
 import dev.touchstone.learners.independence.Hsic;
@@ -55,18 +52,14 @@ public final class ResitLearner extends DeclaredLearner {
     static final Parameter<Integer> RANK = Parameter.integer("regression_rank", 100, 1, 10_000,
             "largest rank of the low-rank kernel of each kernel ridge regression");
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder(ID)
-            .summary("orders the variables by regressing each on the others and taking as sink the one whose residual"
-                    + " is most independent (HSIC), then prunes each variable's parents by HSIC tests")
-            .publication("Peters, Mooij, Janzing and Schölkopf (2014), Causal discovery with continuous additive noise"
-                    + " models, JMLR 15; HSIC with gamma null of Gretton et al. (2008), NIPS")
-            .family(LearnerFamily.FUNCTIONAL)
-            .accepts(DataKind.CONTINUOUS)
-            .returns(GraphClass.DAG)
-            .missingValues(MissingValues.REJECTS)
+    private static final LearnerDescription DESCRIPTION = FunctionalLearners.describe(ID,
+                    "orders the variables by regressing each on the others and taking as sink the one whose residual"
+                            + " is most independent (HSIC), then prunes each variable's parents by HSIC tests",
+                    "Peters, Mooij, Janzing and Schölkopf (2014), Causal discovery with continuous additive noise"
+                            + " models, JMLR 15; HSIC with gamma null of Gretton et al. (2008), NIPS")
             .assumption("additive noise: each variable is a (nonlinear) function of its parents plus independent noise")
             .assumption("the model is not one of the non-identifiable cases (e.g. linear with Gaussian noise)")
-            .assumption("acyclicity and no hidden confounding")
+            .assumption(FunctionalLearners.ACYCLIC)
             .parameter(ALPHA)
             .parameter(MAX_ROWS)
             .parameter(RANK)
