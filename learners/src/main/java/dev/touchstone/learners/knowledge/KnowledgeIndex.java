@@ -122,11 +122,12 @@ public final class KnowledgeIndex {
 
     /** Whether {@code from → to} is forbidden, explicitly or by tiers. */
     public boolean isForbidden(int from, int to) {
-        if (empty) {
-            return false;
-        }
+        // The dense table first: it is the score searches' innermost question.
         if (forbiddenTable != null) {
             return forbiddenTable[from * p + to];
+        }
+        if (empty) {
+            return false;
         }
         int tf = tier[from];
         int tt = tier[to];
@@ -138,10 +139,10 @@ public final class KnowledgeIndex {
 
     /** Whether {@code from → to} is required. */
     public boolean isRequired(int from, int to) {
-        if (empty || requiredEdges.isEmpty()) {
-            return false;
+        if (requiredTable != null) {
+            return requiredTable[from * p + to];
         }
-        return requiredTable != null ? requiredTable[from * p + to] : requiredPairs.contains(key(from, to));
+        return !empty && !requiredEdges.isEmpty() && requiredPairs.contains(key(from, to));
     }
 
     /** Whether a required edge joins a and b in either direction (their adjacency must stay). */
