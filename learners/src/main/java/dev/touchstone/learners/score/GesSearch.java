@@ -2,7 +2,6 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
-
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -970,6 +969,7 @@ final class GesSearch {
     private void parallel(int count, IntConsumer body) {
         PoolLoop.run(pool, count, body);
     }
+
 
     /** A rated operator: Insert(x, y, T) in the forward phase, Delete(x, y, H) in the backward one. */
     static final class Candidate {

@@ -1,7 +1,6 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.RunContext;
-
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.Arrays;
