@@ -1,14 +1,9 @@
 package dev.touchstone.core.data;
 
-import java.util.Locale;
+import dev.touchstone.core.param.Worded;
 
 /** Whether a variable's values are real numbers or category codes. */
-public enum VariableKind {
+public enum VariableKind implements Worded {
     CONTINUOUS,
     DISCRETE;
-
-    /** The lower-case word used in files. */
-    public String word() {
-        return name().toLowerCase(Locale.ROOT);
-    }
 }

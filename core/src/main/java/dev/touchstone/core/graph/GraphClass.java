@@ -1,7 +1,7 @@
 package dev.touchstone.core.graph;
 
+import dev.touchstone.core.param.Worded;
 import java.util.EnumSet;
-import java.util.Locale;
 import java.util.Set;
 
 /**
@@ -21,7 +21,7 @@ import java.util.Set;
  * properties (acyclicity, ancestrality, maximality, completeness) are checked by the
  * graph algorithms.
  */
-public enum GraphClass {
+public enum GraphClass implements Worded {
     DAG(EnumSet.of(Mark.TAIL, Mark.ARROW), false, false),
     CPDAG(EnumSet.of(Mark.TAIL, Mark.ARROW), true, false),
     MAG(EnumSet.of(Mark.TAIL, Mark.ARROW), true, true),
@@ -35,11 +35,6 @@ public enum GraphClass {
         this.marks = marks;
         this.undirectedAllowed = undirectedAllowed;
         this.bidirectedAllowed = bidirectedAllowed;
-    }
-
-    /** The lower-case word used in files and on the command line. */
-    public String word() {
-        return name().toLowerCase(Locale.ROOT);
     }
 
     /** Whether an edge with these marks may appear in a graph of this class. */
@@ -62,13 +57,6 @@ public enum GraphClass {
      * @throws IllegalArgumentException naming the word and the allowed words
      */
     public static GraphClass parse(String word) {
-        if (word != null) {
-            for (GraphClass c : values()) {
-                if (c.word().equals(word.trim().toLowerCase(Locale.ROOT))) {
-                    return c;
-                }
-            }
-        }
-        throw new IllegalArgumentException("unknown graph class '" + word + "' (allowed: dag, cpdag, mag, pag)");
+        return Worded.parse(GraphClass.class, word, "graph class");
     }
 }

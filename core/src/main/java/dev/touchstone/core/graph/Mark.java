@@ -1,6 +1,6 @@
 package dev.touchstone.core.graph;
 
-import java.util.Locale;
+import dev.touchstone.core.param.Worded;
 
 /**
  * The mark an edge carries at one of its two ends.
@@ -11,7 +11,7 @@ import java.util.Locale;
  * completeness of orientation rules for causal discovery in the presence of latent
  * confounders and selection bias", Artificial Intelligence 172).
  */
-public enum Mark {
+public enum Mark implements Worded {
     /** No arrowhead: the variable at this end is an ancestor (or, undirected, tied) of the other. */
     TAIL,
     /** An arrowhead: the variable at this end is not an ancestor of the other. */
@@ -19,25 +19,12 @@ public enum Mark {
     /** Undetermined: tail in some members of the equivalence class, arrow in others. */
     CIRCLE;
 
-    /** The lower-case word used in graph files: {@code tail}, {@code arrow} or {@code circle}. */
-    public String word() {
-        return name().toLowerCase(Locale.ROOT);
-    }
-
     /**
      * Parses a mark word as written in graph files.
      *
      * @throws IllegalArgumentException naming the word and the allowed words
      */
     public static Mark parse(String word) {
-        if (word != null) {
-            switch (word.trim().toLowerCase(Locale.ROOT)) {
-                case "tail": return TAIL;
-                case "arrow": return ARROW;
-                case "circle": return CIRCLE;
-                default: break;
-            }
-        }
-        throw new IllegalArgumentException("unknown mark '" + word + "' (allowed: tail, arrow, circle)");
+        return Worded.parse(Mark.class, word, "mark");
     }
 }

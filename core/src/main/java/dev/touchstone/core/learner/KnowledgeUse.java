@@ -1,14 +1,10 @@
 package dev.touchstone.core.learner;
 
-import java.util.Locale;
+import dev.touchstone.core.param.Worded;
 
 /** A kind of background knowledge a learner can honour. */
-public enum KnowledgeUse {
+public enum KnowledgeUse implements Worded {
     REQUIRED_EDGES,
     FORBIDDEN_EDGES,
-    TIERS;
-
-    public String word() {
-        return name().toLowerCase(Locale.ROOT).replace('_', '-');
-    }
+    TIERS
 }

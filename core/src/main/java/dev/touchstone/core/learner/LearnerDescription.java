@@ -2,6 +2,7 @@ package dev.touchstone.core.learner;
 
 import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.GraphClass;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterSpec;
 
 import java.util.ArrayList;
@@ -212,6 +213,11 @@ public final class LearnerDescription {
         public Builder assumption(String a) {
             this.assumptions.add(a);
             return this;
+        }
+
+        /** Declares a typed parameter (its {@link Parameter#spec() spec}). */
+        public Builder parameter(Parameter<?> p) {
+            return parameter(p.spec());
         }
 
         public Builder parameter(ParameterSpec p) {

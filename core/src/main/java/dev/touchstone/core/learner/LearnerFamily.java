@@ -1,9 +1,9 @@
 package dev.touchstone.core.learner;
 
-import java.util.Locale;
+import dev.touchstone.core.param.Worded;
 
 /** The family a learner belongs to, for grouping in listings and reports. */
-public enum LearnerFamily {
+public enum LearnerFamily implements Worded {
     BASELINE,
     CONSTRAINT,
     SCORE,
@@ -11,8 +11,4 @@ public enum LearnerFamily {
     FUNCTIONAL,
     CONTINUOUS,
     EXTERNAL;
-
-    public String word() {
-        return name().toLowerCase(Locale.ROOT);
-    }
 }

@@ -1,9 +1,9 @@
 package dev.touchstone.core.learner;
 
-import java.util.Locale;
+import dev.touchstone.core.param.Worded;
 
 /** How a learner treats missing cells. */
-public enum MissingValues {
+public enum MissingValues implements Worded {
     /** Refuses data with missing cells. */
     REJECTS,
     /** Drops every row with a missing cell before learning (list-wise deletion). */
@@ -14,8 +14,4 @@ public enum MissingValues {
     CONFIGURABLE,
     /** Handles them by a method of its own, described in its summary. */
     OWN_METHOD;
-
-    public String word() {
-        return name().toLowerCase(Locale.ROOT).replace('_', '-');
-    }
 }

@@ -7,76 +7,129 @@ import java.util.Objects;
 /**
  * The declaration of one parameter of a learner or generator: name, type, default,
  * allowed range or choices, and a one-line meaning. Study files, the command line and
- * the {@code learners} listing all read these, so they cannot disagree.
+ * the {@code learners} listing all read these, so they cannot disagree. Learners and
+ * generators usually declare a typed {@link Parameter}, which wraps one of these.
  *
- * @param name     the parameter's name as written in files and on the command line
- * @param type     its type
+ * @param name         the parameter's name as written in files and on the command line
+ * @param domain       its type with the allowed range or choices
  * @param defaultValue the value used when none is given (Integer, Double, Boolean or String), or null when required
- * @param min      the smallest allowed value (numbers only), or null
- * @param max      the largest allowed value (numbers only), or null
- * @param choices  the allowed words ({@link ParameterType#CHOICE} only)
- * @param meaning  one line saying what it does
+ * @param meaning      one line saying what it does
  */
-public record ParameterSpec(String name, ParameterType type, Object defaultValue, Double min, Double max,
-                            List<String> choices, String meaning) {
+public record ParameterSpec(String name, Domain domain, Object defaultValue, String meaning) {
 
     static final String UNKNOWN_CHOICE = "parameter '%s': '%s' is not allowed (allowed: %s)";
     static final String OUT_OF_RANGE = "parameter '%s': %s is outside the allowed range %s";
     static final String NOT_A = "parameter '%s': '%s' is not %s";
 
+    /**
+     * What values a parameter takes.
+     *
+     * @param type    its type
+     * @param min     the smallest allowed value (numbers only), or null
+     * @param max     the largest allowed value (numbers only), or null
+     * @param choices the allowed words ({@link ParameterType#CHOICE} only)
+     */
+    public record Domain(ParameterType type, Double min, Double max, List<String> choices) {
+        public Domain {
+            Objects.requireNonNull(type, "type");
+            choices = choices == null ? List.of() : List.copyOf(choices);
+            if (type == ParameterType.CHOICE && choices.isEmpty()) {
+                throw new IllegalArgumentException("a choice parameter needs choices");
+            }
+            if (min != null && max != null && min > max) {
+                throw new IllegalArgumentException("min " + min + " > max " + max);
+            }
+        }
+
+        /** A type without range or choices (boolean, text). */
+        public static Domain of(ParameterType type) {
+            return new Domain(type, null, null, List.of());
+        }
+
+        /** A number type within [min, max]. */
+        public static Domain range(ParameterType type, double min, double max) {
+            return new Domain(type, min, max, List.of());
+        }
+
+        /** One of these words. */
+        public static Domain choices(List<String> choices) {
+            return new Domain(ParameterType.CHOICE, null, null, choices);
+        }
+    }
+
     public ParameterSpec {
         Objects.requireNonNull(name, "name");
-        Objects.requireNonNull(type, "type");
+        Objects.requireNonNull(domain, "domain");
         Objects.requireNonNull(meaning, "meaning");
-        choices = choices == null ? List.of() : List.copyOf(choices);
-        if (type == ParameterType.CHOICE && choices.isEmpty()) {
-            throw new IllegalArgumentException("choice parameter '" + name + "' needs choices");
-        }
-        if (min != null && max != null && min > max) {
-            throw new IllegalArgumentException("parameter '" + name + "': min " + min + " > max " + max);
-        }
     }
 
     /** An integer parameter in [min, max]. */
     public static ParameterSpec integer(String name, int defaultValue, int min, int max, String meaning) {
-        ParameterSpec s = new ParameterSpec(name, ParameterType.INTEGER, defaultValue, (double) min, (double) max,
-                List.of(), meaning);
-        s.parse(defaultValue);
-        return s;
+        return checked(new ParameterSpec(name, Domain.range(ParameterType.INTEGER, min, max), defaultValue, meaning));
     }
 
     /** A real parameter in [min, max]; pass infinities for an open side. */
     public static ParameterSpec real(String name, double defaultValue, double min, double max, String meaning) {
-        ParameterSpec s = new ParameterSpec(name, ParameterType.REAL, defaultValue, min, max, List.of(), meaning);
-        s.parse(defaultValue);
-        return s;
+        return checked(new ParameterSpec(name, Domain.range(ParameterType.REAL, min, max), defaultValue, meaning));
     }
 
     public static ParameterSpec bool(String name, boolean defaultValue, String meaning) {
-        return new ParameterSpec(name, ParameterType.BOOLEAN, defaultValue, null, null, List.of(), meaning);
+        return new ParameterSpec(name, Domain.of(ParameterType.BOOLEAN), defaultValue, meaning);
     }
 
     public static ParameterSpec choice(String name, String defaultValue, List<String> choices, String meaning) {
-        ParameterSpec s = new ParameterSpec(name, ParameterType.CHOICE, defaultValue, null, null, choices, meaning);
-        s.parse(defaultValue);
-        return s;
+        return checked(new ParameterSpec(name, Domain.choices(choices), defaultValue, meaning));
     }
 
     public static ParameterSpec text(String name, String defaultValue, String meaning) {
-        return new ParameterSpec(name, ParameterType.TEXT, defaultValue, null, null, List.of(), meaning);
+        return new ParameterSpec(name, Domain.of(ParameterType.TEXT), defaultValue, meaning);
+    }
+
+    private static ParameterSpec checked(ParameterSpec s) {
+        s.parse(s.defaultValue());
+        return s;
+    }
+
+    /** The same declaration under another name with another meaning (e.g. prefixed by a step's name). */
+    public ParameterSpec renamed(String newName, String newMeaning) {
+        return new ParameterSpec(newName, domain, defaultValue, newMeaning);
+    }
+
+    /** The same declaration without a default: a value must be given. */
+    public ParameterSpec required() {
+        return new ParameterSpec(name, domain, null, meaning);
+    }
+
+    public ParameterType type() {
+        return domain.type();
+    }
+
+    /** The smallest allowed value (numbers only), or null. */
+    public Double min() {
+        return domain.min();
+    }
+
+    /** The largest allowed value (numbers only), or null. */
+    public Double max() {
+        return domain.max();
+    }
+
+    /** The allowed words ({@link ParameterType#CHOICE} only). */
+    public List<String> choices() {
+        return domain.choices();
     }
 
     /** The allowed values in words, e.g. {@code [0, 1]}, {@code fisher-z, g-square} or {@code true, false}. */
     public String allowed() {
-        switch (type) {
+        switch (type()) {
             case CHOICE:
-                return String.join(", ", choices);
+                return String.join(", ", choices());
             case BOOLEAN:
                 return "true, false";
             case TEXT:
                 return "any text";
             default:
-                return "[" + bound(min, "-inf") + ", " + bound(max, "inf") + "]";
+                return "[" + bound(min(), "-inf") + ", " + bound(max(), "inf") + "]";
         }
     }
 
@@ -84,7 +137,7 @@ public record ParameterSpec(String name, ParameterType type, Object defaultValue
         if (b == null || b.isInfinite()) {
             return open;
         }
-        if (type == ParameterType.INTEGER) {
+        if (type() == ParameterType.INTEGER) {
             return Long.toString(b.longValue());
         }
         return Double.toString(b);
@@ -100,7 +153,7 @@ public record ParameterSpec(String name, ParameterType type, Object defaultValue
         if (raw == null) {
             throw new ParameterException(name, "parameter '" + name + "' needs a value (allowed: " + allowed() + ")");
         }
-        switch (type) {
+        switch (type()) {
             case INTEGER:
                 return checkRange(toLong(raw));
             case REAL:
@@ -109,13 +162,13 @@ public record ParameterSpec(String name, ParameterType type, Object defaultValue
                 return toBoolean(raw);
             case CHOICE: {
                 String s = raw.toString().trim();
-                for (String c : choices) {
+                for (String c : choices()) {
                     if (c.equalsIgnoreCase(s)) {
                         return c;
                     }
                 }
                 throw new ParameterException(name, String.format(Locale.ROOT, UNKNOWN_CHOICE, name, s, allowed())
-                        + FormerNames.hint(s, choices));
+                        + FormerNames.hint(s, choices()));
             }
             default:
                 return raw.toString();
@@ -124,7 +177,7 @@ public record ParameterSpec(String name, ParameterType type, Object defaultValue
 
     private Object checkRange(Number v) {
         double d = v.doubleValue();
-        if ((min != null && d < min) || (max != null && d > max)) {
+        if ((min() != null && d < min()) || (max() != null && d > max())) {
             throw new ParameterException(name, String.format(Locale.ROOT, OUT_OF_RANGE, name, v, allowed()));
         }
         return v instanceof Long ? (Object) Math.toIntExact((Long) v) : v;

@@ -1,9 +1,7 @@
 package dev.touchstone.core.param;
 
-import java.util.Locale;
-
 /** The type of a declared parameter. */
-public enum ParameterType {
+public enum ParameterType implements Worded {
     /** A whole number, within an optional range. */
     INTEGER,
     /** A real number, within an optional range; NaN and infinities are refused. */
@@ -14,8 +12,4 @@ public enum ParameterType {
     CHOICE,
     /** Free text. */
     TEXT;
-
-    public String word() {
-        return name().toLowerCase(Locale.ROOT);
-    }
 }

@@ -69,6 +69,15 @@ public final class ParameterValues {
         return v;
     }
 
+    /**
+     * The typed value of a declared parameter.
+     *
+     * @throws IllegalArgumentException when {@code parameter} is not among the declarations these values were resolved from
+     */
+    public <T> T get(Parameter<T> parameter) {
+        return parameter.convert(get(parameter.name()));
+    }
+
     public int getInt(String name) {
         return ((Number) get(name)).intValue();
     }

@@ -39,6 +39,33 @@ class BrokenLearnerTest {
         }
     }
 
+    /** Declares forbidden edges but always joins its first two variables. */
+    static final class KnowledgeIgnorer implements Learner {
+        @Override
+        public LearnerDescription description() {
+            return LearnerDescription.builder("test-ignorer").summary("ignores knowledge").publication("none")
+                    .family(LearnerFamily.BASELINE).accepts(DataKind.CONTINUOUS).returns(GraphClass.DAG)
+                    .missingValues(MissingValues.OWN_METHOD).knowledge(KnowledgeUse.FORBIDDEN_EDGES).build();
+        }
+
+        @Override
+        public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
+            return Estimate.of(Graph.builder(input.variableNames()).addDirected(0, 1).freeze(), GraphClass.DAG);
+        }
+    }
+
+    static final class KnowledgeIgnorerContract extends LearnerContractTest {
+        @Override
+        protected Learner learner() {
+            return new KnowledgeIgnorer();
+        }
+    }
+
+    @Test
+    void contractCatchesIgnoredKnowledge() {
+        assertThrows(AssertionFailedError.class, () -> new KnowledgeIgnorerContract().honoursTheKnowledgeItDeclares());
+    }
+
     @Test
     void contractCatchesAWrongClassAndOrder() {
         assertThrows(AssertionFailedError.class, () -> new LiarContract().returnsItsDeclaredClassOverTheInputVariables());

@@ -195,6 +195,34 @@ public abstract class LearnerContractTest {
         return b.build();
     }
 
+    /**
+     * Knowledge between the first two variables of an accepted input: forbidden both ways, the
+     * pair stays apart; required one way, the estimate has that edge, tail first (Meek 1995 and
+     * Zhang 2008 for how knowledge constrains CPDAGs and PAGs; common practice). A learner that
+     * declares no kind of knowledge must still run when some is given and return its class.
+     */
+    @Test
+    void honoursTheKnowledgeItDeclares() {
+        LearnerInput input = acceptedInput();
+        String a = input.variableNames().get(0);
+        String b = input.variableNames().get(1);
+        Set<KnowledgeUse> uses = description().knowledge();
+        Estimate apart = learner().learn(input, Knowledge.builder().forbid(a, b).forbid(b, a).build(),
+                parameterValues(), RunContext.unlimited(3));
+        assertEquals(description().returns(), apart.graphClass(), "declared graph class with knowledge");
+        assertEquals(input.variableNames(), apart.graph().names(), "variables of the estimate with knowledge");
+        if (uses.contains(KnowledgeUse.FORBIDDEN_EDGES)) {
+            assertFalse(apart.graph().adjacent(0, 1), "declares forbidden edges, yet joined " + a + " and " + b
+                    + " when both directions were forbidden: " + apart.graph().edge(0, 1));
+        }
+        if (uses.contains(KnowledgeUse.REQUIRED_EDGES)) {
+            Estimate joined = learner().learn(input, Knowledge.builder().require(a, b).build(), parameterValues(),
+                    RunContext.unlimited(3));
+            assertTrue(joined.graph().hasDirected(0, 1), "declares required edges, yet has no " + a + " -> " + b
+                    + " when it was required: " + joined.graph().edge(0, 1));
+        }
+    }
+
     @Test
     void usesTheOracleExactlyWhenItSaysSo() {
         Graph dag = truth();

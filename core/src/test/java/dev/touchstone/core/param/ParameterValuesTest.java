@@ -73,8 +73,8 @@ class ParameterValuesTest {
 
     @Test
     void missingRequiredNamesOwnerAndAllowedValues() {
-        List<ParameterSpec> specs = List.of(new ParameterSpec("alpha", ParameterType.REAL, null, 0.0, 1.0, null,
-                "significance level"));
+        List<ParameterSpec> specs = List.of(ParameterSpec.real("alpha", 0.5, 0.0, 1.0,
+                "significance level").required());
         ParameterException e = assertThrows(ParameterException.class,
                 () -> ParameterValues.resolve("learner pc", specs, new HashMap<>()));
         assertEquals("parameter 'alpha' of learner pc is required (allowed: [0.0, 1.0])", e.getMessage());
@@ -84,9 +84,10 @@ class ParameterValuesTest {
     void declarationsAreChecked() {
         assertThrows(IllegalArgumentException.class, () -> ParameterSpec.integer("k", 20, 0, 10, "bad default"));
         assertThrows(IllegalArgumentException.class,
-                () -> new ParameterSpec("k", ParameterType.CHOICE, "a", null, null, List.of(), "no choices"));
+                () -> new ParameterSpec("k", new ParameterSpec.Domain(ParameterType.CHOICE, null, null, List.of()), "a",
+                        "no choices"));
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> new ParameterSpec("k", ParameterType.REAL, 1.0, 2.0, 1.0, null, "min above max"));
+                () -> new ParameterSpec("k", ParameterSpec.Domain.range(ParameterType.REAL, 2.0, 1.0), 1.0, "min above max"));
         assertTrue(e.getMessage().contains("min 2.0 > max 1.0"), e.getMessage());
         assertEquals("[-inf, inf]", ParameterSpec.real("w", 0, Double.NEGATIVE_INFINITY,
                 Double.POSITIVE_INFINITY, "open").allowed());

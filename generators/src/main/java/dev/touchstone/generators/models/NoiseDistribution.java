@@ -1,11 +1,11 @@
 package dev.touchstone.generators.models;
 
+import dev.touchstone.core.param.Worded;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ContinuousSampler;
 import org.apache.commons.rng.sampling.distribution.TSampler;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
@@ -17,19 +17,19 @@ import java.util.Locale;
  * identifiable (Shimizu et al. 2006, "A linear non-Gaussian acyclic model for causal
  * discovery", JMLR 7). Cost O(1) per draw.
  */
-public enum NoiseDistribution {
+public enum NoiseDistribution implements Worded {
     /** Standard normal, by the ziggurat method of Marsaglia and Tsang (2000), Commons RNG. */
-    GAUSSIAN("gaussian"),
+    GAUSSIAN,
     /** Uniform on (−√3, √3). */
-    UNIFORM("uniform"),
+    UNIFORM,
     /** Exponential with rate 1, minus 1 (right-skewed). */
-    EXPONENTIAL("exponential"),
+    EXPONENTIAL,
     /** Laplace with location 0 and scale 1/√2 (heavy tails, symmetric). */
-    LAPLACE("laplace"),
+    LAPLACE,
     /** Gumbel (maximum) with scale β = √6/π and location −γβ (γ the Euler–Mascheroni constant). */
-    GUMBEL("gumbel"),
+    GUMBEL,
     /** Student t with ν degrees of freedom (ν &gt; 2) times √((ν − 2)/ν). */
-    STUDENT_T("student-t");
+    STUDENT_T;
 
     private static final double SQRT3 = Math.sqrt(3.0);
     private static final double EULER_GAMMA = 0.5772156649015329;
@@ -40,34 +40,14 @@ public enum NoiseDistribution {
     /** The Laplace scale b with variance 2b² = 1. */
     public static final double LAPLACE_SCALE = Math.sqrt(0.5);
 
-    private final String word;
-
-    NoiseDistribution(String word) {
-        this.word = word;
-    }
-
-    /** The word used in study files. */
-    public String word() {
-        return word;
-    }
-
     /** All words, in declaration order. */
     public static List<String> words() {
-        List<String> out = new ArrayList<>();
-        for (NoiseDistribution d : values()) {
-            out.add(d.word);
-        }
-        return out;
+        return Worded.words(NoiseDistribution.class);
     }
 
     /** The distribution for a word. */
     public static NoiseDistribution parse(String word) {
-        for (NoiseDistribution d : values()) {
-            if (d.word.equalsIgnoreCase(word.trim())) {
-                return d;
-            }
-        }
-        throw new IllegalArgumentException("unknown noise '" + word + "' (allowed: " + String.join(", ", words()) + ")");
+        return Worded.parse(NoiseDistribution.class, word, "noise");
     }
 
     /**

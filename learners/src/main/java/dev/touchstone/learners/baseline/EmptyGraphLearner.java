@@ -2,13 +2,10 @@ package dev.touchstone.learners.baseline;
 
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.learner.LearnerRun;
 
 /**
  * Returns the graph with no edges (common practice as the floor of any comparison). The
@@ -17,21 +14,18 @@ import dev.touchstone.core.param.ParameterValues;
  * note that on sparse truths its SHD can look respectable while its SID is large
  * (Peters and Bühlmann 2015). Cost: O(p).
  */
-public final class EmptyGraphLearner implements Learner {
+public final class EmptyGraphLearner extends DeclaredLearner {
 
     private static final LearnerDescription DESCRIPTION = DataFreeBaseline.describe("empty",
             "returns the graph with no edges: the floor any learner must beat", "common practice", GraphClass.CPDAG)
             .build();
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public EmptyGraphLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        return Estimate.of(Graph.empty(input.variableNames()), GraphClass.CPDAG);
+    protected Estimate run(LearnerRun run) {
+        return Estimate.of(Graph.empty(run.names()), GraphClass.CPDAG);
     }
 }

@@ -1,6 +1,7 @@
 package dev.touchstone.learners.baseline;
 
 import dev.touchstone.core.data.CovarianceMatrix;
+
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.LUDecomposition;
 import org.apache.commons.math3.linear.RealMatrix;

@@ -3,14 +3,12 @@ package dev.touchstone.learners.baseline;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.learner.LearnerRun;
+import dev.touchstone.core.param.Parameter;
+
 import org.apache.commons.rng.UniformRandomProvider;
 
 /**
@@ -19,28 +17,27 @@ import org.apache.commons.rng.UniformRandomProvider;
  * chance level of a comparison). Set {@code mean_degree} to the truth's so the baseline
  * matches its density. Seeded from the run, so it is reproducible. Cost: O(p²).
  */
-public final class RandomDagLearner implements Learner {
+public final class RandomDagLearner extends DeclaredLearner {
+
+    static final Parameter<Double> MEAN_DEGREE = Parameter.real("mean_degree", 2.0, 0.0, 1000.0,
+            "expected number of edges at each variable; set it to the truth's to match its density");
 
     private static final LearnerDescription DESCRIPTION = DataFreeBaseline.describe("random-dag",
                     "returns a random DAG of a given expected density: the chance level of a comparison",
                     "common practice (Erdős and Rényi 1959 random graphs, oriented along a random order)",
                     GraphClass.DAG)
-            .parameter(ParameterSpec.real("mean_degree", 2.0, 0.0, 1000.0,
-                    "expected number of edges at each variable; set it to the truth's to match its density"))
+            .parameter(MEAN_DEGREE)
             .build();
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public RandomDagLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        int p = input.variableNames().size();
-        double prob = p > 1 ? Math.min(1.0, parameters.getDouble("mean_degree") / (p - 1)) : 0;
-        UniformRandomProvider rng = context.random("random-dag");
+    protected Estimate run(LearnerRun run) {
+        int p = run.names().size();
+        double prob = p > 1 ? Math.min(1.0, run.get(MEAN_DEGREE) / (p - 1)) : 0;
+        UniformRandomProvider rng = run.context().random("random-dag");
         int[] order = new int[p];
         for (int i = 0; i < p; i++) {
             order[i] = i;
@@ -51,7 +48,7 @@ public final class RandomDagLearner implements Learner {
             order[i] = order[j];
             order[j] = t;
         }
-        MutableGraph g = Graph.builder(input.variableNames());
+        MutableGraph g = Graph.builder(run.names());
         for (int i = 0; i < p; i++) {
             for (int j = i + 1; j < p; j++) {
                 if (rng.nextDouble() < prob) {

@@ -5,15 +5,14 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.regression.AdaptiveLasso;
 
 /**
  * The sort-and-regress baselines of Reisach, Seiler and Weichwald (2021, "Beware of the
@@ -27,37 +26,28 @@ import dev.touchstone.core.param.ParameterValues;
  * candidates, O(p⁴) in the worst case, fine for the tens to hundreds of variables of
  * typical studies.
  */
-abstract class SortAndRegress implements Learner {
-
-    private final LearnerDescription description;
+abstract class SortAndRegress extends DeclaredLearner {
 
     SortAndRegress(String id, String summary, String publication, String sortAssumption) {
-        this.description = LearnerDescription.builder(id).summary(summary).publication(publication)
+        super(LearnerDescription.builder(id).summary(summary).publication(publication)
                 .family(LearnerFamily.BASELINE).accepts(DataKind.CONTINUOUS).returns(GraphClass.DAG)
                 .missingValues(MissingValues.LIST_WISE)
                 .assumption(sortAssumption)
                 .assumption("linear relations (the regression step is a linear sparse regression)")
-                .build();
-    }
-
-    @Override
-    public final LearnerDescription description() {
-        return description;
+                .build());
     }
 
     /** The variables in the order the baseline believes causal (first = root). */
     abstract int[] order(CovarianceMatrix cov);
 
     @Override
-    public final Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters,
-                                RunContext context) {
-        description.checkAccepts(input);
-        context.checkDeadline();
-        CovarianceMatrix cov = input.data().covariance();
+    protected final Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        CovarianceMatrix cov = run.input().data().covariance();
         int p = cov.dimension();
         double[] s = cov.toArray();
         int[] order = order(cov);
-        MutableGraph g = Graph.builder(input.variableNames());
+        MutableGraph g = Graph.builder(run.names());
         for (int k = 1; k < p; k++) {
             context.checkDeadline();
             int target = order[k];

@@ -1,15 +1,15 @@
 package dev.touchstone.learners.composed;
 
 import dev.touchstone.core.data.DataKind;
-import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.KnowledgeUse;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
@@ -41,22 +41,17 @@ import java.util.Set;
  * score evaluations counted and the time spent are the sums over the steps, and the time limit
  * covers them all. Stateless and thread-safe when its steps are.
  */
-public final class ComposedLearner implements Learner {
+public final class ComposedLearner extends DeclaredLearner {
 
     private static final String JOIN = "-then-";
 
     private final List<ComposedStep> steps;
     private final List<String> names;
-    private final LearnerDescription description;
 
-    private ComposedLearner(List<ComposedStep> steps) {
-        this.steps = List.copyOf(steps);
-        List<String> ids = new ArrayList<>();
-        for (ComposedStep s : steps) {
-            ids.add(s.learner().description().id());
-        }
-        this.names = stepNames(ids);
-        this.description = describe();
+    private ComposedLearner(List<ComposedStep> steps, List<String> names) {
+        super(describe(steps, names));
+        this.steps = steps;
+        this.names = names;
     }
 
     /**
@@ -85,7 +80,11 @@ public final class ComposedLearner implements Learner {
                 throw new IllegalArgumentException("step " + (i + 1) + ": " + refusal);
             }
         }
-        return new ComposedLearner(steps);
+        List<String> ids = new ArrayList<>();
+        for (ComposedStep s : steps) {
+            ids.add(s.learner().description().id());
+        }
+        return new ComposedLearner(List.copyOf(steps), stepNames(ids));
     }
 
     /** The id of a composed learner of steps using these learner ids, e.g. {@code pc-then-hill-climbing}. */
@@ -127,13 +126,10 @@ public final class ComposedLearner implements Learner {
     }
 
     @Override
-    public LearnerDescription description() {
-        return description;
-    }
-
-    @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        description.checkAccepts(input);
+    protected Estimate run(LearnerRun run) {
+        LearnerInput input = run.input();
+        Knowledge knowledge = run.knowledge();
+        RunContext context = run.context();
         Map<String, Double> extras = new LinkedHashMap<>();
         Estimate previous = null;
         for (int i = 0; i < steps.size(); i++) {
@@ -145,7 +141,7 @@ public final class ComposedLearner implements Learner {
                 stepInput = step.given().input(input, previous.graph());
                 stepKnowledge = handedOn(i, knowledge, previous);
             }
-            previous = step.learner().learn(stepInput, stepKnowledge, valuesOf(i, parameters), context);
+            previous = step.learner().learn(stepInput, stepKnowledge, valuesOf(i, run.parameters()), context);
             String name = names.get(i);
             previous.extras().forEach((k, v) -> extras.put(name + "." + k, v));
         }
@@ -178,7 +174,7 @@ public final class ComposedLearner implements Learner {
         }
     }
 
-    private LearnerDescription describe() {
+    private static LearnerDescription describe(List<ComposedStep> steps, List<String> names) {
         LearnerDescription last = steps.get(steps.size() - 1).learner().description();
         Set<DataKind> kinds = EnumSet.allOf(DataKind.class);
         Set<KnowledgeUse> knowledge = EnumSet.allOf(KnowledgeUse.class);
@@ -206,17 +202,16 @@ public final class ComposedLearner implements Learner {
                 .family(LearnerFamily.HYBRID)
                 .accepts(ordered.get(0), ordered.subList(1, ordered.size()).toArray(new DataKind[0]))
                 .returns(last.returns())
-                .missingValues(missingValues())
+                .missingValues(missingValues(steps))
                 .knowledge(knowledge.toArray(new KnowledgeUse[0]))
-                .oracle(oracle());
+                .oracle(oracle(steps));
         for (int i = 0; i < steps.size(); i++) {
             LearnerDescription d = steps.get(i).learner().description();
             for (String a : d.assumptions()) {
                 b.assumption(names.get(i) + ": " + a);
             }
             for (ParameterSpec p : d.parameters()) {
-                b.parameter(new ParameterSpec(parameterName(names.get(i), p.name()), p.type(), p.defaultValue(),
-                        p.min(), p.max(), p.choices(), names.get(i) + ": " + p.meaning()));
+                b.parameter(p.renamed(parameterName(names.get(i), p.name()), names.get(i) + ": " + p.meaning()));
             }
         }
         return b.build();
@@ -226,7 +221,7 @@ public final class ComposedLearner implements Learner {
      * Refuses missing values if any step does; otherwise the steps' common handling, or
      * {@link MissingValues#OWN_METHOD} when they differ (each step then applies its own).
      */
-    private MissingValues missingValues() {
+    private static MissingValues missingValues(List<ComposedStep> steps) {
         MissingValues common = null;
         for (ComposedStep s : steps) {
             MissingValues m = s.learner().description().missingValues();
@@ -243,7 +238,7 @@ public final class ComposedLearner implements Learner {
      * {@link OracleUse#COVARIANCE} if one needs the population covariance, otherwise
      * {@link OracleUse#INDEPENDENCE}.
      */
-    private OracleUse oracle() {
+    private static OracleUse oracle(List<ComposedStep> steps) {
         OracleUse out = OracleUse.INDEPENDENCE;
         for (ComposedStep s : steps) {
             OracleUse o = s.learner().description().oracle();

@@ -7,10 +7,9 @@ import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.param.Worded;
 
-import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
 
 /**
  * How a step of a {@link ComposedLearner} receives the estimate of the step before it.
@@ -21,7 +20,7 @@ import java.util.Locale;
  * edges and a starting graph are the other two ways background knowledge and search
  * initialisation can carry one estimate into another search (common practice).
  */
-public enum Handoff {
+public enum Handoff implements Worded {
     /** The previous estimate's adjacencies are the only edges allowed: every other pair is forbidden both ways. */
     ALLOWED_EDGES("the adjacencies of"),
     /** The previous estimate's directed edges are required (the previous step must return a DAG). */
@@ -35,24 +34,14 @@ public enum Handoff {
         this.phrase = phrase;
     }
 
-    /** The word used in study files, e.g. {@code allowed-edges}. */
-    public String word() {
-        return name().toLowerCase(Locale.ROOT).replace('_', '-');
-    }
-
     /** The allowed words, for messages. */
     public static List<String> words() {
-        return Arrays.stream(values()).map(Handoff::word).toList();
+        return Worded.words(Handoff.class);
     }
 
     /** The hand-on named by a word, or null. */
     public static Handoff of(String word) {
-        for (Handoff h : values()) {
-            if (h.word().equals(word)) {
-                return h;
-            }
-        }
-        return null;
+        return Worded.find(Handoff.class, word).orElse(null);
     }
 
     /** How a summary says what a step receives, e.g. "the adjacencies of". */

@@ -3,6 +3,7 @@ package dev.touchstone.learners.constraint;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.independence.FisherZTest;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.Arrays;
 
@@ -109,7 +110,7 @@ final class AdjacencySearch {
                     int k = 0;
                     for (int y = x + 1; y < p; y++) {
                         context.checkDeadline();
-                        if (knowledge.adjacencyRequired(x, y)) {
+                        if (knowledge.isRequiredEitherWay(x, y)) {
                             continue;
                         }
                         tests[0]++;
@@ -159,7 +160,7 @@ final class AdjacencySearch {
     private long requiredPairCount() {
         java.util.Set<Long> pairs = new java.util.HashSet<>();
         int p = test.variables();
-        for (int[] r : knowledge.requiredPairs()) {
+        for (int[] r : knowledge.requiredEdges()) {
             pairs.add((long) Math.min(r[0], r[1]) * p + Math.max(r[0], r[1]));
         }
         return pairs.size();
@@ -168,7 +169,7 @@ final class AdjacencySearch {
     /** The lists with the required pairs added (they are never tested, so never removed). */
     private int[][] withRequired(int[][] kept) {
         int[][] out = kept.clone();
-        for (int[] r : knowledge.requiredPairs()) {
+        for (int[] r : knowledge.requiredEdges()) {
             out[r[0]] = insert(out[r[0]], r[1]);
             out[r[1]] = insert(out[r[1]], r[0]);
         }
@@ -198,7 +199,7 @@ final class AdjacencySearch {
                     int[] around = s.neighbours(x);
                     for (int y : around) {
                         context.checkDeadline();
-                        if (!s.adjacent(x, y) || knowledge.adjacencyRequired(x, y)) {
+                        if (!s.adjacent(x, y) || knowledge.isRequiredEitherWay(x, y)) {
                             continue;
                         }
                         int[] cand = without(s.neighbours(x), y);
@@ -231,7 +232,7 @@ final class AdjacencySearch {
             int pairs = 0;
             for (int x = 0; x < p; x++) {
                 for (int y : nb[x]) {
-                    if (x < y && !knowledge.adjacencyRequired(x, y)
+                    if (x < y && !knowledge.isRequiredEitherWay(x, y)
                             && (nb[x].length - 1 >= level || nb[y].length - 1 >= level)) {
                         pairs++;
                     }
@@ -245,7 +246,7 @@ final class AdjacencySearch {
             int k = 0;
             for (int x = 0; x < p; x++) {
                 for (int y : nb[x]) {
-                    if (x < y && !knowledge.adjacencyRequired(x, y)
+                    if (x < y && !knowledge.isRequiredEitherWay(x, y)
                             && (nb[x].length - 1 >= level || nb[y].length - 1 >= level)) {
                         xs[k] = x;
                         ys[k] = y;
@@ -330,7 +331,7 @@ final class AdjacencySearch {
         }
         for (int a = 0; a < s.size(); a++) {
             for (int b : s.neighbours(a)) {
-                if (a < b && knowledge.adjacencyForbidden(a, b)) {
+                if (a < b && knowledge.isForbiddenBothWays(a, b)) {
                     s.remove(a, b, null);
                 }
             }

@@ -5,6 +5,7 @@ import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -105,13 +106,13 @@ final class ColliderOrientation {
                 if (a > b) {
                     continue;
                 }
-                if (knowledge.required(a, b)) {
+                if (knowledge.isRequired(a, b)) {
                     g.orient(a, b);
-                } else if (knowledge.required(b, a)) {
+                } else if (knowledge.isRequired(b, a)) {
                     g.orient(b, a);
-                } else if (knowledge.forbidden(a, b) && !knowledge.forbidden(b, a)) {
+                } else if (knowledge.isForbidden(a, b) && !knowledge.isForbidden(b, a)) {
                     g.orient(b, a);
-                } else if (knowledge.forbidden(b, a) && !knowledge.forbidden(a, b)) {
+                } else if (knowledge.isForbidden(b, a) && !knowledge.isForbidden(a, b)) {
                     g.orient(a, b);
                 }
             }
@@ -213,7 +214,7 @@ final class ColliderOrientation {
     }
 
     private boolean canPointInto(MutableGraph g, int u, int z) {
-        return g.markAt(u, z) != Mark.ARROW && !knowledge.forbidden(u, z);
+        return g.markAt(u, z) != Mark.ARROW && !knowledge.isForbidden(u, z);
     }
 
     private int dropBoth(MutableGraph g, List<int[]> colliders) {

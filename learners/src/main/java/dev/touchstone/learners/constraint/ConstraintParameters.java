@@ -2,14 +2,13 @@ package dev.touchstone.learners.constraint;
 
 import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.learners.independence.IndependenceTest;
@@ -24,10 +23,10 @@ import java.util.List;
 public final class ConstraintParameters {
 
     /** The largest conditioning set tried. */
-    public static final ParameterSpec MAX_DEPTH = ParameterSpec.integer("max_depth", -1, -1, 1000,
+    public static final Parameter<Integer> MAX_DEPTH = Parameter.integer("max_depth", -1, -1, 1000,
             "largest conditioning set the adjacency search tries; -1 for no limit");
-    static final ParameterSpec SKELETON = ParameterSpec.choice("skeleton", SkeletonVariant.ORDER_INDEPENDENT.word(),
-            SkeletonVariant.words(), "adjacency search: order-independent (levels frozen, parallel; Colombo and "
+    static final Parameter<SkeletonVariant> SKELETON = Parameter.choice("skeleton", SkeletonVariant.ORDER_INDEPENDENT,
+            "adjacency search: order-independent (levels frozen, parallel; Colombo and "
                     + "Maathuis 2014) or sequential (pairs in variable order, an edge removed at once; Spirtes, Glymour and Scheines 2000)");
 
     private ConstraintParameters() {
@@ -36,7 +35,8 @@ public final class ConstraintParameters {
     /** The shared declarations: test, alpha, missing, max_depth, skeleton, degrees_of_freedom, then the kernel tests' settings. */
     static List<ParameterSpec> shared() {
         List<ParameterSpec> specs = new java.util.ArrayList<>(List.of(IndependenceTests.TEST, IndependenceTests.ALPHA,
-                IndependenceTests.MISSING, MAX_DEPTH, SKELETON, IndependenceTests.DEGREES_OF_FREEDOM));
+                IndependenceTests.MISSING, MAX_DEPTH, SKELETON, IndependenceTests.DEGREES_OF_FREEDOM).stream()
+                .map(Parameter::spec).toList());
         specs.addAll(IndependenceTests.kernelParameters());
         return List.copyOf(specs);
     }
@@ -47,7 +47,7 @@ public final class ConstraintParameters {
      */
     public static List<ParameterSpec> testParameters() {
         List<ParameterSpec> specs = new java.util.ArrayList<>(List.of(IndependenceTests.TEST, IndependenceTests.ALPHA,
-                IndependenceTests.MISSING, IndependenceTests.DEGREES_OF_FREEDOM));
+                IndependenceTests.MISSING, IndependenceTests.DEGREES_OF_FREEDOM).stream().map(Parameter::spec).toList());
         specs.addAll(IndependenceTests.kernelParameters());
         return List.copyOf(specs);
     }
@@ -67,11 +67,11 @@ public final class ConstraintParameters {
     }
 
     /** Adds the shared parameters, then the learner's {@code own}, and builds. */
-    static LearnerDescription build(LearnerDescription.Builder b, ParameterSpec... own) {
+    static LearnerDescription build(LearnerDescription.Builder b, Parameter<?>... own) {
         for (ParameterSpec s : shared()) {
             b.parameter(s);
         }
-        for (ParameterSpec s : own) {
+        for (Parameter<?> s : own) {
             b.parameter(s);
         }
         return b.build();
@@ -80,13 +80,5 @@ public final class ConstraintParameters {
     /** The test the values name; the kernel tests draw their randomness from {@code seed}. */
     static IndependenceTest test(LearnerInput input, ParameterValues values, long seed) {
         return IndependenceTests.forInput(input, values, seed);
-    }
-
-    static KnowledgeIndex knowledge(Knowledge knowledge, List<String> names) {
-        try {
-            return new KnowledgeIndex(knowledge, names);
-        } catch (IllegalArgumentException e) {
-            throw new LearnerException(e.getMessage(), e);
-        }
     }
 }

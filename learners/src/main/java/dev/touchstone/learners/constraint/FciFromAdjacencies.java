@@ -16,6 +16,7 @@ import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -60,10 +61,10 @@ public final class FciFromAdjacencies {
      */
     public static List<ParameterSpec> parameters() {
         List<ParameterSpec> specs = new ArrayList<>(ConstraintParameters.testParameters());
-        specs.add(ConstraintParameters.MAX_DEPTH);
-        specs.add(FciLearner.POSSIBLE_DSEP);
-        specs.add(FciLearner.POSSIBLE_DSEP_LENGTH);
-        specs.add(FciLearner.SELECTION_BIAS);
+        specs.add(ConstraintParameters.MAX_DEPTH.spec());
+        specs.add(FciLearner.POSSIBLE_DSEP.spec());
+        specs.add(FciLearner.POSSIBLE_DSEP_LENGTH.spec());
+        specs.add(FciLearner.SELECTION_BIAS.spec());
         return List.copyOf(specs);
     }
 
@@ -83,10 +84,10 @@ public final class FciFromAdjacencies {
         if (dag == null) {
             throw new LearnerException("the score search returned a graph with no DAG extension: " + cpdag);
         }
-        KnowledgeIndex ki = ConstraintParameters.knowledge(knowledge, names);
+        KnowledgeIndex ki = KnowledgeIndex.of(knowledge, names);
         IndependenceTest test = ConstraintParameters.test(input, values,
                 Seeds.derive(context.seed(), "independence-test"));
-        int maxDepth = values.getInt(ConstraintParameters.MAX_DEPTH.name());
+        int maxDepth = values.get(ConstraintParameters.MAX_DEPTH);
         SubsetSearch search = new SubsetSearch(test);
         Skeleton skeleton = new Skeleton(names.size());
         int removedByTests;
@@ -101,16 +102,15 @@ public final class FciFromAdjacencies {
                 }
             }
             removedByTests = prune(skeleton, ki, search, maxDepth < 0 ? Integer.MAX_VALUE : maxDepth, context);
-            PagRules rules = "possible".equals(values.getString(FciLearner.SELECTION_BIAS.name()))
-                    ? PagRules.complete() : PagRules.withoutSelectionBias();
+            PagRules rules = values.get(FciLearner.SELECTION_BIAS).rules();
             Colliders info = new Colliders(cpdag, dag, skeleton, search, maxDepth);
-            if (values.getBoolean(FciLearner.POSSIBLE_DSEP.name())) {
+            if (values.get(FciLearner.POSSIBLE_DSEP)) {
                 MutableGraph first = FciLearner.circles(names, skeleton);
                 PagKnowledge.apply(first, ki);
                 rules.orientColliders(first, info);
                 context.checkDeadline();
                 removedByPossibleDsep = new PossibleDsepSearch(test, ki, maxDepth,
-                        values.getInt(FciLearner.POSSIBLE_DSEP_LENGTH.name()), context).run(skeleton, first);
+                        values.get(FciLearner.POSSIBLE_DSEP_LENGTH), context).run(skeleton, first);
             }
             AdjacencySearch.removeForbidden(skeleton, ki);
             g = FciLearner.circles(names, skeleton);
@@ -137,7 +137,7 @@ public final class FciFromAdjacencies {
             for (int x = 0; x < s.size(); x++) {
                 for (int y : s.neighbours(x)) {
                     context.checkDeadline();
-                    if (y < x || !s.adjacent(x, y) || ki.adjacencyRequired(x, y)) {
+                    if (y < x || !s.adjacent(x, y) || ki.isRequiredEitherWay(x, y)) {
                         continue;
                     }
                     int[] fromX = without(s.neighbours(x), y);

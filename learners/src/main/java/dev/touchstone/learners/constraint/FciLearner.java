@@ -7,14 +7,14 @@ import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.graph.algorithms.PagRules;
 import dev.touchstone.core.graph.algorithms.SeparationInfo;
 import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -48,15 +48,15 @@ import java.util.Map;
  * size of Possible-D-Sep (bounded by {@code max_depth} and {@code possible_dsep_length}),
  * then the rules (see {@link PagRules}). Stateless and thread-safe.
  */
-public final class FciLearner implements Learner {
+public final class FciLearner extends DeclaredLearner {
 
-    static final ParameterSpec POSSIBLE_DSEP = ParameterSpec.bool("possible_dsep", true,
+    static final Parameter<Boolean> POSSIBLE_DSEP = Parameter.bool("possible_dsep", true,
             "run the Possible-D-Sep step that removes edges no subset of the neighbours separates "
                     + "(off: the PC skeleton is kept; faster, not complete)");
-    static final ParameterSpec POSSIBLE_DSEP_LENGTH = ParameterSpec.integer("possible_dsep_length", -1, -1, 1000,
+    static final Parameter<Integer> POSSIBLE_DSEP_LENGTH = Parameter.integer("possible_dsep_length", -1, -1, 1000,
             "longest path followed when building Possible-D-Sep; -1 for no limit");
-    static final ParameterSpec SELECTION_BIAS = ParameterSpec.choice("selection_bias", "absent",
-            List.of("absent", "possible"), "absent: rules R1-R4 and R8-R10 (complete without selection bias); "
+    static final Parameter<SelectionBias> SELECTION_BIAS = Parameter.choice("selection_bias", SelectionBias.ABSENT,
+            "absent: rules R1-R4 and R8-R10 (complete without selection bias); "
                     + "possible: all of R1-R10 (Zhang 2008)");
 
     private static final LearnerDescription DESCRIPTION = describe();
@@ -74,14 +74,14 @@ public final class FciLearner implements Learner {
         return ConstraintParameters.build(b, POSSIBLE_DSEP, POSSIBLE_DSEP_LENGTH, SELECTION_BIAS);
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public FciLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        SearchInputs in = SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context);
+    protected Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        SearchInputs in = SearchInputs.read(run);
         List<String> names = in.names();
         KnowledgeIndex ki = in.knowledge();
         IndependenceTest test = in.test();
@@ -89,19 +89,18 @@ public final class FciLearner implements Learner {
         // Pairs forbidden by knowledge are tested like any other and removed only after Possible-D-Sep, so
         // that their separating sets are known: guessing "non-collider" for them would let R1 put wrong tails.
         Skeleton skeleton = new AdjacencySearch(test, ki, in.variant(), maxDepth, context).searchKeepingForbidden();
-        PagRules rules = "possible".equals(parameters.getString(SELECTION_BIAS.name()))
-                ? PagRules.complete() : PagRules.withoutSelectionBias();
+        PagRules rules = run.get(SELECTION_BIAS).rules();
         // Knowledge-removed pairs have no separating set: their triples count as non-colliders.
         SeparationInfo info = SeparationInfo.fromSeparatingSets(
                 (x, y, v) -> skeleton.sepset(x, y) == null || skeleton.sepsetContains(x, y, v));
         int removed = 0;
-        if (parameters.getBoolean(POSSIBLE_DSEP.name())) {
+        if (run.get(POSSIBLE_DSEP)) {
             MutableGraph first = circles(names, skeleton);
             PagKnowledge.apply(first, ki);
             rules.orientColliders(first, info);
             context.checkDeadline();
             removed = new PossibleDsepSearch(test, ki, maxDepth,
-                    parameters.getInt(POSSIBLE_DSEP_LENGTH.name()), context).run(skeleton, first);
+                    run.get(POSSIBLE_DSEP_LENGTH), context).run(skeleton, first);
         }
         AdjacencySearch.removeForbidden(skeleton, ki);
         MutableGraph g = circles(names, skeleton);

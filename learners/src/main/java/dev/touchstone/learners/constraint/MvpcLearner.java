@@ -3,18 +3,16 @@ package dev.touchstone.learners.constraint;
 import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.KnowledgeUse;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.learners.independence.FisherZTest;
 import dev.touchstone.learners.independence.IndependenceTest;
 import dev.touchstone.learners.independence.IndependenceTests;
@@ -43,12 +41,12 @@ import java.util.Map;
  * <p>Cost: PC's tests, each corrected one O(n (|S| + 2)(|W| + 1)²), plus the indicator search.
  * Stateless and thread-safe.
  */
-public final class MvpcLearner implements Learner {
+public final class MvpcLearner extends DeclaredLearner {
 
     /** The learner id. */
     public static final String ID = "mvpc";
 
-    static final ParameterSpec INDICATOR_DEPTH = ParameterSpec.integer("indicator_depth", 2, 0, 10,
+    static final Parameter<Integer> INDICATOR_DEPTH = Parameter.integer("indicator_depth", 2, 0, 10,
             "largest conditioning set tried when finding the causes of each missingness indicator");
 
     private static final LearnerDescription DESCRIPTION = describe();
@@ -79,16 +77,14 @@ public final class MvpcLearner implements Learner {
                 .build();
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public MvpcLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        double alpha = parameters.getDouble(IndependenceTests.ALPHA.name());
+    protected Estimate run(LearnerRun run) {
+        LearnerInput input = run.input();
+        double alpha = run.get(IndependenceTests.ALPHA);
         IndependenceTest test;
         int[][] causes = null;
         if (input.isOracle()) {
@@ -97,14 +93,10 @@ public final class MvpcLearner implements Learner {
             test = FisherZTest.of(input.data(), alpha);
         } else {
             DataSet data = input.data();
-            causes = MissingnessCauses.find(data, alpha, parameters.getInt(INDICATOR_DEPTH.name()), context);
-            test = new PermutationCorrectedTest(data, alpha, causes, context.seed());
+            causes = MissingnessCauses.find(data, alpha, run.get(INDICATOR_DEPTH), run.context());
+            test = new PermutationCorrectedTest(data, alpha, causes, run.context().seed());
         }
-        SearchInputs in = new SearchInputs(input.variableNames(),
-                ConstraintParameters.knowledge(knowledge, input.variableNames()), test,
-                parameters.getInt(ConstraintParameters.MAX_DEPTH.name()),
-                SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name())));
-        Estimate e = PcLearner.searchAndOrient(in, knowledge, parameters, context);
+        Estimate e = PcLearner.searchAndOrient(SearchInputs.of(run, test), run);
         Map<String, Double> extras = new LinkedHashMap<>(e.extras());
         if (causes != null) {
             int withCauses = 0;

@@ -2,6 +2,7 @@ package dev.touchstone.learners.constraint;
 
 import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 /**
  * Background knowledge as marks of a partial ancestral graph, set before the orientation
@@ -34,14 +35,14 @@ final class PagKnowledge {
             return 0;
         }
         int changed = 0;
-        for (int[] r : knowledge.requiredPairs()) {
+        for (int[] r : knowledge.requiredEdges()) {
             if (g.adjacent(r[0], r[1])) {
                 changed += set(g, r[0], r[1], Mark.TAIL) + set(g, r[1], r[0], Mark.ARROW);
             }
         }
         for (int a = 0; a < g.size(); a++) {
             for (int b : g.neighbours(a)) {
-                if (knowledge.forbidden(a, b)) {
+                if (knowledge.isForbidden(a, b)) {
                     changed += set(g, a, b, Mark.ARROW);
                 }
             }

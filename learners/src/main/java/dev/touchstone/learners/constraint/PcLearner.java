@@ -5,16 +5,16 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.graph.algorithms.MeekRules;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import org.apache.commons.rng.sampling.PermutationSampler;
 
@@ -49,16 +49,16 @@ import java.util.Map;
  * (see {@link AdjacencySearch}); the conservative and majority rules add the tests of
  * {@link ColliderOrientation}. Stateless and thread-safe.
  */
-public final class PcLearner implements Learner {
+public final class PcLearner extends DeclaredLearner {
 
-    static final ParameterSpec COLLIDERS = ParameterSpec.choice("colliders", ColliderRule.SEPSET.word(),
-            ColliderRule.words(), "collider rule: sepset (z not in the recorded separating set), conservative "
+    static final Parameter<ColliderRule> COLLIDERS = Parameter.choice("colliders", ColliderRule.SEPSET,
+            "collider rule: sepset (z not in the recorded separating set), conservative "
                     + "(Ramsey, Zhang and Spirtes 2006) or majority (Colombo and Maathuis 2014)");
-    static final ParameterSpec CONFLICTS = ParameterSpec.choice("conflicts", ConflictRule.KEEP_FIRST.word(),
-            ConflictRule.words(), "colliders disagreeing about an edge: keep-first (in variable order) or "
+    static final Parameter<ConflictRule> CONFLICTS = Parameter.choice("conflicts", ConflictRule.KEEP_FIRST,
+            "colliders disagreeing about an edge: keep-first (in variable order) or "
                     + "drop-both (the edge stays undirected; order-independent)");
 
-    static final ParameterSpec ORDER_SEED = ParameterSpec.integer("order_seed", 0, 0, 1_000_000,
+    static final Parameter<Integer> ORDER_SEED = Parameter.integer("order_seed", 0, 0, 1_000_000,
             "0: search the variables in the order given; above 0: in a random order drawn from the run's seed and "
                     + "this number (to show order dependence; Colombo and Maathuis 2014)");
 
@@ -77,22 +77,22 @@ public final class PcLearner implements Learner {
         return ConstraintParameters.build(b, COLLIDERS, CONFLICTS, ORDER_SEED);
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public PcLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        int orderSeed = parameters.getInt(ORDER_SEED.name());
-        if (orderSeed == 0 || input.isOracle()) {
-            return learnInOrder(input, knowledge, parameters, context);
+    protected Estimate run(LearnerRun run) {
+        int orderSeed = run.get(ORDER_SEED);
+        if (orderSeed == 0 || run.input().isOracle()) {
+            return searchAndOrient(SearchInputs.read(run), run);
         }
-        int[] order = PermutationSampler.natural(input.variableNames().size());
-        PermutationSampler.shuffle(Seeds.random(Seeds.derive(context.seed(), "column-order", orderSeed)), order);
-        Estimate e = learnInOrder(LearnerInput.of(input.data().select(order)), knowledge, parameters, context);
-        return new Estimate(inOrder(e.graph(), input.variableNames()), e.graphClass(), e.extras());
+        int[] order = PermutationSampler.natural(run.names().size());
+        PermutationSampler.shuffle(Seeds.random(Seeds.derive(run.context().seed(), "column-order", orderSeed)), order);
+        LearnerRun shuffled = new LearnerRun(LearnerInput.of(run.input().data().select(order)), run.knowledge(),
+                run.parameters(), run.context());
+        Estimate e = searchAndOrient(SearchInputs.read(shuffled), shuffled);
+        return new Estimate(inOrder(e.graph(), run.names()), e.graphClass(), e.extras());
     }
 
     /** The same graph with its variables listed in {@code names}' order. */
@@ -104,29 +104,22 @@ public final class PcLearner implements Learner {
         return m.freeze();
     }
 
-    private Estimate learnInOrder(LearnerInput input, Knowledge knowledge, ParameterValues parameters,
-                                  RunContext context) {
-        return searchAndOrient(SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context), knowledge,
-                parameters, context);
-    }
-
     /**
      * PC's steps after its inputs are read: adjacency search with {@code in}'s test, colliders
      * by the {@code colliders} and {@code conflicts} parameters, Meek's rules. Shared with the
      * learners that are PC with another test.
      */
-    static Estimate searchAndOrient(SearchInputs in, Knowledge knowledge, ParameterValues parameters,
-                                    RunContext context) {
+    static Estimate searchAndOrient(SearchInputs in, LearnerRun run) {
+        RunContext context = run.context();
         KnowledgeIndex ki = in.knowledge();
         IndependenceTest test = in.test();
         int maxDepth = in.maxDepth();
         Skeleton skeleton = new AdjacencySearch(test, ki, in.variant(), maxDepth, context).run();
         ColliderOrientation colliders = new ColliderOrientation(skeleton, test, ki,
-                ColliderRule.parse(parameters.getString(COLLIDERS.name())),
-                ConflictRule.parse(parameters.getString(CONFLICTS.name())), maxDepth, context);
+                run.get(COLLIDERS), run.get(CONFLICTS), maxDepth, context);
         MutableGraph g = colliders.orient(in.names());
         context.checkDeadline();
-        MeekRules.Outcome meek = MeekRules.apply(g, knowledge);
+        MeekRules.Outcome meek = MeekRules.apply(g, run.knowledge());
         Map<String, Double> extras = new LinkedHashMap<>();
         extras.put("colliders", (double) colliders.counts().colliders());
         extras.put("ambiguous_triples", (double) colliders.counts().ambiguous());

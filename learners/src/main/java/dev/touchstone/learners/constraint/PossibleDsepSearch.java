@@ -4,6 +4,7 @@ import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.Arrays;
 import java.util.Queue;
@@ -85,7 +86,7 @@ final class PossibleDsepSearch {
         int pairs = 0;
         for (int x = 0; x < p; x++) {
             for (int y : nb[x]) {
-                if (x < y && !knowledge.adjacencyRequired(x, y)) {
+                if (x < y && !knowledge.isRequiredEitherWay(x, y)) {
                     pairs++;
                 }
             }
@@ -95,7 +96,7 @@ final class PossibleDsepSearch {
         int k = 0;
         for (int x = 0; x < p; x++) {
             for (int y : nb[x]) {
-                if (x < y && !knowledge.adjacencyRequired(x, y)) {
+                if (x < y && !knowledge.isRequiredEitherWay(x, y)) {
                     xs[k] = x;
                     ys[k] = y;
                     k++;

@@ -3,6 +3,7 @@ package dev.touchstone.learners.constraint;
 import dev.touchstone.core.graph.algorithms.SeparationInfo;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayDeque;
 import java.util.Arrays;
@@ -109,8 +110,8 @@ final class RfciChecks {
             if (s == null || skeleton.sepsetContains(i, k, j)) {
                 continue;
             }
-            boolean iSeparated = !knowledge.adjacencyRequired(i, j) && separated(i, j, s);
-            boolean kSeparated = !knowledge.adjacencyRequired(j, k) && separated(j, k, s);
+            boolean iSeparated = !knowledge.isRequiredEitherWay(i, j) && separated(i, j, s);
+            boolean kSeparated = !knowledge.isRequiredEitherWay(j, k) && separated(j, k, s);
             if (iSeparated) {
                 tripleRemovals++;
                 remove(i, j, minimal(i, j, s), queue);
@@ -196,7 +197,7 @@ final class RfciChecks {
                     context.checkDeadline();
                     int r = path[e];
                     int q = path[e + 1];
-                    if (knowledge.adjacencyRequired(r, q)) {
+                    if (knowledge.isRequiredEitherWay(r, q)) {
                         continue;
                     }
                     int[] given = without(s, r, q);

@@ -4,12 +4,12 @@ import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.graph.algorithms.PagRules;
 import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.Arrays;
 import java.util.LinkedHashMap;
@@ -41,7 +41,7 @@ import java.util.Map;
  * discriminating path, polynomial for sparse truths; each restart repeats the rules. Stateless
  * and thread-safe.
  */
-public final class RfciLearner implements Learner {
+public final class RfciLearner extends DeclaredLearner {
 
     private static final LearnerDescription DESCRIPTION = describe();
 
@@ -60,20 +60,19 @@ public final class RfciLearner implements Learner {
         return ConstraintParameters.build(b, FciLearner.SELECTION_BIAS);
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public RfciLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        SearchInputs in = SearchInputs.read(DESCRIPTION, input, knowledge, parameters, context);
+    protected Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        SearchInputs in = SearchInputs.read(run);
         KnowledgeIndex ki = in.knowledge();
         // Forbidden pairs stay until the triple check has run, so that their separating sets are known (as in FCI).
         Skeleton skeleton = new AdjacencySearch(in.test(), ki, in.variant(), in.maxDepth(), context)
                 .searchKeepingForbidden();
-        PagRules rules = "possible".equals(parameters.getString(FciLearner.SELECTION_BIAS.name()))
-                ? PagRules.complete() : PagRules.withoutSelectionBias();
+        PagRules rules = run.get(FciLearner.SELECTION_BIAS).rules();
         RfciChecks checks = new RfciChecks(in.test(), ki, skeleton, context);
         MutableGraph g;
         int restarts = 0;

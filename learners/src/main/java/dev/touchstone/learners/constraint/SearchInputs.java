@@ -1,11 +1,9 @@
 package dev.touchstone.learners.constraint;
 
-import dev.touchstone.core.knowledge.Knowledge;
-import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.learner.LearnerRun;
+import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.List;
 
@@ -16,16 +14,16 @@ import java.util.List;
 record SearchInputs(List<String> names, KnowledgeIndex knowledge, IndependenceTest test, int maxDepth,
                     SkeletonVariant variant) {
 
-    /** Checks the input against the learner's description, then reads the shared parameters. */
-    static SearchInputs read(LearnerDescription description, LearnerInput input, Knowledge knowledge,
-                             ParameterValues parameters, RunContext context) {
-        description.checkAccepts(input);
-        List<String> names = input.variableNames();
-        KnowledgeIndex ki = ConstraintParameters.knowledge(knowledge, names);
-        context.checkDeadline();
-        return new SearchInputs(names, ki, ConstraintParameters.test(input, parameters,
-                        dev.touchstone.core.random.Seeds.derive(context.seed(), "independence-test")),
-                parameters.getInt(ConstraintParameters.MAX_DEPTH.name()),
-                SkeletonVariant.parse(parameters.getString(ConstraintParameters.SKELETON.name())));
+    /** Reads the shared parameters of a run whose input the learner accepts. */
+    static SearchInputs read(LearnerRun run) {
+        return of(run, ConstraintParameters.test(run.input(), run.parameters(),
+                Seeds.derive(run.context().seed(), "independence-test")));
+    }
+
+    /** The same with a test of the learner's own. */
+    static SearchInputs of(LearnerRun run, IndependenceTest test) {
+        List<String> names = run.names();
+        return new SearchInputs(names, KnowledgeIndex.of(run.knowledge(), names), test,
+                run.get(ConstraintParameters.MAX_DEPTH), run.get(ConstraintParameters.SKELETON));
     }
 }

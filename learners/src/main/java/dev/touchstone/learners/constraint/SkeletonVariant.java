@@ -1,16 +1,16 @@
 package dev.touchstone.learners.constraint;
 
-import java.util.List;
+import dev.touchstone.core.param.Worded;
 
 /** How the adjacency search of PC and FCI visits pairs. */
-public enum SkeletonVariant {
+public enum SkeletonVariant implements Worded {
     /**
      * The sequential search, PC's adjacency step as first published (Spirtes, Glymour and
      * Scheines 2000, §5.4.2): pairs are visited in variable order and an edge removed is gone at once, so later tests of
      * the same level condition on the thinned neighbourhoods. The result can depend on the
      * order of the variables.
      */
-    SEQUENTIAL("sequential"),
+    SEQUENTIAL,
     /**
      * The order-independent ("stable") search of Colombo and Maathuis (2014,
      * "Order-independent constraint-based causal structure learning", JMLR 15): the
@@ -18,29 +18,5 @@ public enum SkeletonVariant {
      * depend on each other and run in parallel; the skeleton does not depend on the order of
      * the variables.
      */
-    ORDER_INDEPENDENT("order-independent");
-
-    private final String word;
-
-    SkeletonVariant(String word) {
-        this.word = word;
-    }
-
-    public String word() {
-        return word;
-    }
-
-    public static List<String> words() {
-        return List.of(SEQUENTIAL.word, ORDER_INDEPENDENT.word);
-    }
-
-    public static SkeletonVariant parse(String word) {
-        for (SkeletonVariant v : values()) {
-            if (v.word.equals(word)) {
-                return v;
-            }
-        }
-        throw new IllegalArgumentException("unknown skeleton variant '" + word + "' (allowed: "
-                + String.join(", ", words()) + ")");
-    }
+    ORDER_INDEPENDENT
 }

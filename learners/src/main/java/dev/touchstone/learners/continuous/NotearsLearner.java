@@ -5,18 +5,19 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
+import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerFamily;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.MissingValues;
-import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.List;
 import java.util.Map;
@@ -39,21 +40,21 @@ import java.util.Map;
  * O(d³ log‖W∘W‖) for the matrix exponential and products, times the (problem-dependent)
  * number of L-BFGS iterations, typically hundreds to a few thousand in all.
  */
-public final class NotearsLearner implements Learner {
+public final class NotearsLearner extends DeclaredLearner {
 
     public static final String ID = "notears-linear";
 
-    static final ParameterSpec L1_WEIGHT = ParameterSpec.real("l1_weight", 0.1, 0.0, Double.POSITIVE_INFINITY,
+    static final Parameter<Double> L1_WEIGHT = Parameter.real("l1_weight", 0.1, 0.0, Double.POSITIVE_INFINITY,
             "weight λ of the L1 penalty on W");
-    static final ParameterSpec WEIGHT_THRESHOLD = ParameterSpec.real("weight_threshold", 0.3, 0.0,
+    static final Parameter<Double> WEIGHT_THRESHOLD = Parameter.real("weight_threshold", 0.3, 0.0,
             Double.POSITIVE_INFINITY, "edges with |w| below this are dropped after optimisation (0.3 in the paper)");
-    static final ParameterSpec MAX_OUTER = ParameterSpec.integer("max_outer_iterations", 100, 1, 10_000,
+    static final Parameter<Integer> MAX_OUTER = Parameter.integer("max_outer_iterations", 100, 1, 10_000,
             "most dual (multiplier) updates of the augmented Lagrangian");
-    static final ParameterSpec MAX_INNER = ParameterSpec.integer("max_inner_iterations", 2_000, 1, 1_000_000,
+    static final Parameter<Integer> MAX_INNER = Parameter.integer("max_inner_iterations", 2_000, 1, 1_000_000,
             "most quasi-Newton iterations per subproblem");
-    static final ParameterSpec H_TOLERANCE = ParameterSpec.real("acyclicity_tolerance", 1e-8, 1e-16, 1.0,
+    static final Parameter<Double> H_TOLERANCE = Parameter.real("acyclicity_tolerance", 1e-8, 1e-16, 1.0,
             "stop once the acyclicity function h(W) is at most this");
-    static final ParameterSpec RHO_MAX = ParameterSpec.real("penalty_limit", 1e16, 1.0, 1e20,
+    static final Parameter<Double> RHO_MAX = Parameter.real("penalty_limit", 1e16, 1.0, 1e20,
             "stop once the augmented Lagrangian's penalty weight ρ reaches this");
 
     /** Stopping rule of each subproblem: projected gradient and relative decrease (L-BFGS-B defaults). */
@@ -85,29 +86,26 @@ public final class NotearsLearner implements Learner {
             .parameter(RHO_MAX)
             .build();
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public NotearsLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
+    protected Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        LearnerInput input = run.input();
         CovarianceMatrix cov = input.isOracle() ? input.oracle().populationCovariance() : input.data().covariance();
-        List<String> names = input.variableNames();
+        List<String> names = run.names();
         int d = names.size();
+        KnowledgeIndex knowledge = KnowledgeIndex.of(run.knowledge(), names);
         boolean[] forbidden = new boolean[d * d];
         for (int i = 0; i < d; i++) {
-            forbidden[i * d + i] = true;
             for (int j = 0; j < d; j++) {
-                if (i != j && knowledge.isForbidden(names.get(i), names.get(j))) {
-                    forbidden[i * d + j] = true;
-                }
+                forbidden[i * d + j] = i == j || knowledge.isForbidden(i, j);
             }
         }
-        Fit fit = fit(cov.toArray(), d, forbidden, Settings.of(parameters), context);
-        double threshold = parameters.getDouble(WEIGHT_THRESHOLD.name());
+        Fit fit = fit(cov.toArray(), d, forbidden, Settings.of(run.parameters()), context);
+        double threshold = run.get(WEIGHT_THRESHOLD);
         double[] w = fit.weights().clone();
         for (int k = 0; k < w.length; k++) {
             if (Math.abs(w[k]) < threshold) {
@@ -133,8 +131,8 @@ public final class NotearsLearner implements Learner {
     /** The optimiser's settings, read from declared parameters. */
     record Settings(double l1, int maxOuter, int maxInner, double hTolerance, double rhoMax) {
         static Settings of(ParameterValues v) {
-            return new Settings(v.getDouble(L1_WEIGHT.name()), v.getInt(MAX_OUTER.name()), v.getInt(MAX_INNER.name()),
-                    v.getDouble(H_TOLERANCE.name()), v.getDouble(RHO_MAX.name()));
+            return new Settings(v.get(L1_WEIGHT), v.get(MAX_OUTER), v.get(MAX_INNER),
+                    v.get(H_TOLERANCE), v.get(RHO_MAX));
         }
     }
 

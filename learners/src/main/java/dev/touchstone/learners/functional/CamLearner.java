@@ -1,22 +1,17 @@
 package dev.touchstone.learners.functional;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.KnowledgeUse;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerException;
-import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.param.Parameter;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -43,54 +38,45 @@ import java.util.List;
  * search; required edges are placed first and never pruned. Every additive fit is counted as
  * a score evaluation.
  */
-public final class CamLearner implements Learner {
+public final class CamLearner extends DeclaredLearner {
 
     public static final String ID = "cam";
 
-    static final ParameterSpec CANDIDATES = ParameterSpec.integer("candidate_parents", 10, 1, 10_000,
+    static final Parameter<Integer> CANDIDATES = Parameter.integer("candidate_parents", 10, 1, 10_000,
             "candidate parents kept per variable before the search: those with the largest univariate additive-fit gain");
-    static final ParameterSpec PRUNING_LEVEL = ParameterSpec.real("pruning_level", 0.001, 1e-12, 1.0,
+    static final Parameter<Double> PRUNING_LEVEL = Parameter.real("pruning_level", 0.001, 1e-12, 1.0,
             "a parent is kept when the F-test of its smooth term has a p-value below this level");
-    static final ParameterSpec SEGMENTS = ParameterSpec.integer("spline_segments", 10, 1, 200,
+    static final Parameter<Integer> SEGMENTS = Parameter.integer("spline_segments", 10, 1, 200,
             "equal knot intervals of each cubic P-spline (segments + 3 basis functions)");
 
     /** Fewer rows than this leave GCV no residual degrees of freedom with the default basis. */
     private static final int MIN_ROWS = 10;
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder(ID)
-            .summary("keeps a few candidate parents per variable, greedily adds the edge that most raises the Gaussian"
-                    + " likelihood of additive spline fits, then drops parents whose smooth term fails an F-test")
-            .publication("Bühlmann, Peters and Ernest (2014), CAM: Causal additive models, high-dimensional order search"
-                    + " and penalized regression, Annals of Statistics 42; P-splines of Eilers and Marx (1996)")
-            .family(LearnerFamily.FUNCTIONAL)
-            .accepts(DataKind.CONTINUOUS)
-            .returns(GraphClass.DAG)
-            .missingValues(MissingValues.REJECTS)
+    private static final LearnerDescription DESCRIPTION = FunctionalLearners.describe(ID,
+                    "keeps a few candidate parents per variable, greedily adds the edge that most raises the Gaussian"
+                            + " likelihood of additive spline fits, then drops parents whose smooth term fails an F-test",
+                    "Bühlmann, Peters and Ernest (2014), CAM: Causal additive models, high-dimensional order search"
+                            + " and penalized regression, Annals of Statistics 42; P-splines of Eilers and Marx (1996)")
             .knowledge(KnowledgeUse.REQUIRED_EDGES, KnowledgeUse.FORBIDDEN_EDGES, KnowledgeUse.TIERS)
             .assumption("additive model: each variable is a sum of smooth functions of single parents plus noise")
             .assumption("Gaussian noise (the likelihood); nonlinear functions make the DAG identifiable")
-            .assumption("acyclicity and no hidden confounding")
+            .assumption(FunctionalLearners.ACYCLIC)
             .parameter(CANDIDATES)
             .parameter(PRUNING_LEVEL)
             .parameter(SEGMENTS)
             .build();
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public CamLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        DataSet data = input.data();
-        if (data.rows() < MIN_ROWS) {
-            throw new LearnerException("learner " + ID + " needs at least " + MIN_ROWS + " rows, got " + data.rows());
-        }
-        List<String> names = input.variableNames();
+    protected Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        DataSet data = data(run, MIN_ROWS);
+        List<String> names = run.names();
         int p = data.columns();
-        int segments = parameters.getInt(SEGMENTS.name());
+        int segments = run.get(SEGMENTS);
         double[][] x = new double[p][];
         List<PSplineSmoother> smoothers = new ArrayList<>(p);
         for (int j = 0; j < p; j++) {
@@ -98,11 +84,11 @@ public final class CamLearner implements Learner {
             x[j] = data.continuous(j);
             smoothers.add(PSplineSmoother.of(x[j], segments));
         }
-        CamEdgeRules rules = CamEdgeRules.of(knowledge, names);
+        KnowledgeIndex rules = KnowledgeIndex.of(run.knowledge(), names);
         List<List<Integer>> parents = CamOrderSearch.search(x, smoothers, rules,
-                parameters.getInt(CANDIDATES.name()), context);
+                run.get(CANDIDATES), context);
         List<List<Integer>> pruned = CamPruning.prune(x, smoothers, parents, rules,
-                parameters.getDouble(PRUNING_LEVEL.name()), context);
+                run.get(PRUNING_LEVEL), context);
         MutableGraph g = Graph.builder(names);
         for (int k = 0; k < p; k++) {
             for (int j : pruned.get(k)) {

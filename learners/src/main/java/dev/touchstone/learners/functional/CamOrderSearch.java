@@ -2,6 +2,7 @@ package dev.touchstone.learners.functional;
 
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -48,12 +49,12 @@ final class CamOrderSearch {
      * @param candidates number of candidate parents kept per node
      * @throws LearnerException if the required edges form a cycle
      */
-    static List<List<Integer>> search(double[][] x, List<PSplineSmoother> smoothers, CamEdgeRules rules,
+    static List<List<Integer>> search(double[][] x, List<PSplineSmoother> smoothers, KnowledgeIndex rules,
             int candidates, RunContext context) {
         return new CamOrderSearch(x, smoothers, context).run(rules, candidates);
     }
 
-    private List<List<Integer>> run(CamEdgeRules rules, int candidates) {
+    private List<List<Integer>> run(KnowledgeIndex rules, int candidates) {
         double[] logVariance = new double[p];
         for (int k = 0; k < p; k++) {
             logVariance[k] = logResidualVariance(k, List.of());
@@ -67,7 +68,7 @@ final class CamOrderSearch {
         boolean[][] reach = new boolean[p][p];
         for (int j = 0; j < p; j++) {
             for (int k = 0; k < p; k++) {
-                if (rules.required(j, k)) {
+                if (rules.isRequired(j, k)) {
                     if (reach[k][j]) {
                         throw new LearnerException("learner " + CamLearner.ID + ": the required edges form a cycle through "
                                 + rules.name(j) + " -> " + rules.name(k));

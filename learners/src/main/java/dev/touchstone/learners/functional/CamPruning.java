@@ -1,6 +1,8 @@
 package dev.touchstone.learners.functional;
 
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
+
 import org.apache.commons.statistics.distribution.FDistribution;
 
 import java.util.ArrayList;
@@ -27,7 +29,7 @@ final class CamPruning {
 
     /** The parent lists with the non-significant parents removed; required edges are kept. */
     static List<List<Integer>> prune(double[][] x, List<PSplineSmoother> smoothers, List<List<Integer>> parents,
-            CamEdgeRules rules, double level, RunContext context) {
+            KnowledgeIndex rules, double level, RunContext context) {
         List<List<Integer>> kept = new ArrayList<>();
         for (int k = 0; k < parents.size(); k++) {
             context.checkDeadline();
@@ -37,7 +39,7 @@ final class CamPruning {
                 AdditiveRegression.Fit full = fit(x[k], smoothers, pa, -1, context);
                 for (int a = 0; a < pa.size(); a++) {
                     int j = pa.get(a);
-                    if (rules.required(j, k)) {
+                    if (rules.isRequired(j, k)) {
                         out.add(j);
                         continue;
                     }

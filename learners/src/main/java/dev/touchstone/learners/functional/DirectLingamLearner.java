@@ -1,23 +1,19 @@
 package dev.touchstone.learners.functional;
 
 import dev.touchstone.core.data.CovarianceMatrix;
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerException;
-import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
-import dev.touchstone.learners.baseline.AdaptiveLasso;
+import dev.touchstone.core.param.Parameter;
+import dev.touchstone.core.param.Worded;
+import dev.touchstone.learners.regression.AdaptiveLasso;
+
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.RealMatrix;
@@ -50,58 +46,53 @@ import java.util.List;
  * remaining variables at O(n) each) plus the pruning regressions, O(p⁴) at worst from the
  * covariance.
  */
-public final class DirectLingamLearner implements Learner {
+public final class DirectLingamLearner extends DeclaredLearner {
 
     public static final String ID = "direct-lingam";
 
-    static final String ADAPTIVE_LASSO = "adaptive-lasso-bic";
-    static final String THRESHOLD = "weight-threshold";
+    /** How weak edges are removed once the order is known. */
+    enum Pruning implements Worded {
+        /** The adaptive Lasso with its penalty chosen by BIC, on the predecessors. */
+        ADAPTIVE_LASSO_BIC,
+        /** Least squares on the predecessors, then a threshold on the coefficients. */
+        WEIGHT_THRESHOLD
+    }
 
-    static final ParameterSpec PRUNING = ParameterSpec.choice("pruning", ADAPTIVE_LASSO,
-            List.of(ADAPTIVE_LASSO, THRESHOLD),
+    static final Parameter<Pruning> PRUNING = Parameter.choice("pruning", Pruning.ADAPTIVE_LASSO_BIC,
             "how weak edges are removed once the order is known: adaptive Lasso with BIC on the predecessors,"
                     + " or least squares on the predecessors with a coefficient threshold");
-    static final ParameterSpec WEIGHT_THRESHOLD = ParameterSpec.real("weight_threshold", 0.1, 0.0,
+    static final Parameter<Double> WEIGHT_THRESHOLD = Parameter.real("weight_threshold", 0.1, 0.0,
             Double.POSITIVE_INFINITY,
             "with pruning = weight-threshold: keep an edge when its least-squares coefficient exceeds this in"
                     + " absolute value");
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder(ID)
-            .summary("finds a causal order by the pairwise likelihood-ratio measure of non-Gaussianity, then prunes"
-                    + " each variable's regression on its predecessors")
-            .publication("Shimizu et al. (2011), DirectLiNGAM: a direct method for learning a linear non-Gaussian"
-                    + " structural equation model, JMLR 12; measure of Hyvärinen and Smith (2013), JMLR 14")
-            .family(LearnerFamily.FUNCTIONAL)
-            .accepts(DataKind.CONTINUOUS)
-            .returns(GraphClass.DAG)
-            .missingValues(MissingValues.REJECTS)
+    private static final LearnerDescription DESCRIPTION = FunctionalLearners.describe(ID,
+                    "finds a causal order by the pairwise likelihood-ratio measure of non-Gaussianity, then prunes"
+                            + " each variable's regression on its predecessors",
+                    "Shimizu et al. (2011), DirectLiNGAM: a direct method for learning a linear non-Gaussian"
+                            + " structural equation model, JMLR 12; measure of Hyvärinen and Smith (2013), JMLR 14")
             .assumption("linear structural equations")
             .assumption("independent non-Gaussian noise (at most one Gaussian noise term)")
-            .assumption("acyclicity and no hidden confounding")
+            .assumption(FunctionalLearners.ACYCLIC)
             .parameter(PRUNING)
             .parameter(WEIGHT_THRESHOLD)
             .build();
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public DirectLingamLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        DataSet data = input.data();
-        if (data.rows() < 3) {
-            throw new LearnerException("learner " + ID + " needs at least 3 rows, got " + data.rows());
-        }
+    protected Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        DataSet data = data(run, 3);
         int[] order = causalOrder(data, context);
         CovarianceMatrix cov = data.covariance();
         int p = cov.dimension();
         double[] s = cov.toArray();
-        boolean lasso = parameters.getString(PRUNING.name()).equals(ADAPTIVE_LASSO);
-        double threshold = parameters.getDouble(WEIGHT_THRESHOLD.name());
-        MutableGraph g = Graph.builder(input.variableNames());
+        boolean lasso = run.get(PRUNING) == Pruning.ADAPTIVE_LASSO_BIC;
+        double threshold = run.get(WEIGHT_THRESHOLD);
+        MutableGraph g = Graph.builder(run.names());
         for (int k = 1; k < p; k++) {
             context.checkDeadline();
             int target = order[k];

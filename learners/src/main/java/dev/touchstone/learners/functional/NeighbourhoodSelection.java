@@ -1,6 +1,7 @@
 package dev.touchstone.learners.functional;
 
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -34,7 +35,7 @@ final class NeighbourhoodSelection {
     }
 
     /** eligible[j][k]: j is among the kept candidates of k, or j → k is required. */
-    static boolean[][] select(double[][] x, List<PSplineSmoother> smoothers, CamEdgeRules rules, int candidates,
+    static boolean[][] select(double[][] x, List<PSplineSmoother> smoothers, KnowledgeIndex rules, int candidates,
             RunContext context) {
         int p = x.length;
         boolean[][] eligible = new boolean[p][p];
@@ -42,7 +43,7 @@ final class NeighbourhoodSelection {
             context.checkDeadline();
             List<Integer> allowed = new ArrayList<>();
             for (int j = 0; j < p; j++) {
-                if (rules.allowed(j, k)) {
+                if (rules.isAllowed(j, k)) {
                     allowed.add(j);
                 }
             }
@@ -57,7 +58,7 @@ final class NeighbourhoodSelection {
                 eligible[j][k] = true;
             }
             for (int j = 0; j < p; j++) {
-                eligible[j][k] |= rules.required(j, k);
+                eligible[j][k] |= rules.isRequired(j, k);
             }
         }
         return eligible;

@@ -1,22 +1,17 @@
 package dev.touchstone.learners.functional;
 
-import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerException;
-import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.MissingValues;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.learners.independence.Hsic;
+
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -46,53 +41,44 @@ import java.util.List;
  * {@code max_rows} rows are used: a random subset drawn from the run's seed when there are more.
  * Cost: O(p²) regressions and HSIC tests for the order, O(p²) for the pruning.
  */
-public final class ResitLearner implements Learner {
+public final class ResitLearner extends DeclaredLearner {
 
     public static final String ID = "resit";
 
-    static final ParameterSpec ALPHA = ParameterSpec.real("alpha", 0.05, 1e-12, 0.999,
+    static final Parameter<Double> ALPHA = Parameter.real("alpha", 0.05, 1e-12, 0.999,
             "significance level of the HSIC tests that prune the parents once the order is known");
-    static final ParameterSpec MAX_ROWS = ParameterSpec.integer("max_rows", 1000, 10, 100_000,
+    static final Parameter<Integer> MAX_ROWS = Parameter.integer("max_rows", 1000, 10, 100_000,
             "with more rows, a random subset of this many (drawn from the run's seed) is used: HSIC costs O(n²)");
-    static final ParameterSpec RANK = ParameterSpec.integer("regression_rank", 100, 1, 10_000,
+    static final Parameter<Integer> RANK = Parameter.integer("regression_rank", 100, 1, 10_000,
             "largest rank of the low-rank kernel of each kernel ridge regression");
 
-    private static final LearnerDescription DESCRIPTION = LearnerDescription.builder(ID)
-            .summary("orders the variables by regressing each on the others and taking as sink the one whose residual"
-                    + " is most independent (HSIC), then prunes each variable's parents by HSIC tests")
-            .publication("Peters, Mooij, Janzing and Schölkopf (2014), Causal discovery with continuous additive noise"
-                    + " models, JMLR 15; HSIC with gamma null of Gretton et al. (2008), NIPS")
-            .family(LearnerFamily.FUNCTIONAL)
-            .accepts(DataKind.CONTINUOUS)
-            .returns(GraphClass.DAG)
-            .missingValues(MissingValues.REJECTS)
+    private static final LearnerDescription DESCRIPTION = FunctionalLearners.describe(ID,
+                    "orders the variables by regressing each on the others and taking as sink the one whose residual"
+                            + " is most independent (HSIC), then prunes each variable's parents by HSIC tests",
+                    "Peters, Mooij, Janzing and Schölkopf (2014), Causal discovery with continuous additive noise"
+                            + " models, JMLR 15; HSIC with gamma null of Gretton et al. (2008), NIPS")
             .assumption("additive noise: each variable is a (nonlinear) function of its parents plus independent noise")
             .assumption("the model is not one of the non-identifiable cases (e.g. linear with Gaussian noise)")
-            .assumption("acyclicity and no hidden confounding")
+            .assumption(FunctionalLearners.ACYCLIC)
             .parameter(ALPHA)
             .parameter(MAX_ROWS)
             .parameter(RANK)
             .build();
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public ResitLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        DataSet data = input.data();
-        if (data.rows() < 6) {
-            throw new LearnerException("learner " + ID + " needs at least 6 rows, got " + data.rows());
-        }
-        double alpha = parameters.getDouble(ALPHA.name());
-        int rank = parameters.getInt(RANK.name());
-        double[][] x = columns(data, parameters.getInt(MAX_ROWS.name()), context);
+    protected Estimate run(LearnerRun run) {
+        RunContext context = run.context();
+        DataSet data = data(run, 6);
+        double alpha = run.get(ALPHA);
+        int rank = run.get(RANK);
+        double[][] x = columns(data, run.get(MAX_ROWS), context);
         int[] order = causalOrder(x, rank, context);
         int p = x.length;
-        MutableGraph g = Graph.builder(input.variableNames());
+        MutableGraph g = Graph.builder(run.names());
         for (int k = 1; k < p; k++) {
             int target = order[k];
             // Every pruning test of this target is against the same predecessors: their

@@ -3,18 +3,15 @@ package dev.touchstone.learners.hybrid;
 import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.KnowledgeUse;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
-import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.learners.constraint.FciFromAdjacencies;
 import dev.touchstone.learners.score.GesLearner;
 
@@ -38,7 +35,7 @@ import java.util.Map;
  * <p>Cost: GES's (see {@code GesSearch}), then tests only on GES's adjacencies, then FCI's later
  * steps. Stateless and thread-safe.
  */
-public final class GfciLearner implements Learner {
+public final class GfciLearner extends DeclaredLearner {
 
     /** The learner id. */
     public static final String ID = "gfci";
@@ -72,20 +69,17 @@ public final class GfciLearner implements Learner {
         return b.build();
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public GfciLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        Estimate ges = GES.learn(input, knowledge, DelegateParameters.part("learner " + ID, parameters,
-                GES.description()), context);
+    protected Estimate run(LearnerRun run) {
+        Estimate ges = GES.learn(run.input(), run.knowledge(), DelegateParameters.part("learner " + ID,
+                run.parameters(), GES.description()), run.context());
         Graph cpdag = ges.graph();
-        Estimate pag = FciFromAdjacencies.run(cpdag, input, knowledge,
-                DelegateParameters.part("learner " + ID, parameters, FciFromAdjacencies.parameters()), context);
+        Estimate pag = FciFromAdjacencies.run(cpdag, run.input(), run.knowledge(), DelegateParameters.part(
+                "learner " + ID, run.parameters(), FciFromAdjacencies.parameters()), run.context());
         Map<String, Double> extras = new LinkedHashMap<>(pag.extras());
         for (Map.Entry<String, Double> e : ges.extras().entrySet()) {
             extras.put("ges_" + e.getKey().replace('-', '_'), e.getValue());

@@ -3,18 +3,18 @@ package dev.touchstone.learners.hybrid;
 import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.KnowledgeUse;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.param.Worded;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.constraint.ConstraintParameters;
 import dev.touchstone.learners.independence.IndependenceTest;
@@ -39,12 +39,20 @@ import java.util.Map;
  * forbidden directions and tiers are the climb's. Cost: MMPC's tests (see {@link Mmpc}), then
  * the climb, whose moves are limited to the skeleton's pairs. Stateless and thread-safe.
  */
-public final class MmhcLearner implements Learner {
+public final class MmhcLearner extends DeclaredLearner {
 
     /** The learner id. */
     public static final String ID = "mmhc";
 
-    static final ParameterSpec SKELETON_RULE = ParameterSpec.choice("skeleton_rule", "and", List.of("and", "or"),
+    /** Which candidate sets must name a pair for it to join the skeleton. */
+    enum SkeletonRule implements Worded {
+        /** Each variable is in the other's candidate set (the paper's symmetry correction). */
+        AND,
+        /** Either is in the other's set. */
+        OR
+    }
+
+    static final Parameter<SkeletonRule> SKELETON_RULE = Parameter.choice("skeleton_rule", SkeletonRule.AND,
             "symmetry correction of the candidate sets: and keeps x - y when each is in the other's set (the"
                     + " paper), or when either is");
 
@@ -54,8 +62,8 @@ public final class MmhcLearner implements Learner {
 
     private static List<ParameterSpec> testSpecs() {
         List<ParameterSpec> specs = new ArrayList<>(ConstraintParameters.testParameters());
-        specs.add(ConstraintParameters.MAX_DEPTH);
-        specs.add(SKELETON_RULE);
+        specs.add(ConstraintParameters.MAX_DEPTH.spec());
+        specs.add(SKELETON_RULE.spec());
         return List.copyOf(specs);
     }
 
@@ -83,31 +91,25 @@ public final class MmhcLearner implements Learner {
         return b.build();
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public MmhcLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        List<String> names = input.variableNames();
-        try {
-            knowledge.checkVariables(names);
-        } catch (IllegalArgumentException e) {
-            throw new LearnerException(e.getMessage(), e);
-        }
-        Mmpc mmpc = new Mmpc(IndependenceTests.forInput(input, parameters,
+    protected Estimate run(LearnerRun run) {
+        List<String> names = run.names();
+        Knowledge knowledge = run.knowledge();
+        RunContext context = run.context();
+        Mmpc mmpc = new Mmpc(IndependenceTests.forInput(run.input(), run.parameters(),
                 Seeds.derive(context.seed(), "independence-test")),
-                parameters.getInt(ConstraintParameters.MAX_DEPTH.name()), context);
+                run.get(ConstraintParameters.MAX_DEPTH), context);
         List<int[]> pc;
         try {
             pc = mmpc.all();
         } finally {
             context.countTests(mmpc.tests());
         }
-        boolean both = "and".equals(parameters.getString(SKELETON_RULE.name()));
+        boolean both = run.get(SKELETON_RULE) == SkeletonRule.AND;
         Knowledge.Builder restricted = copy(knowledge);
         int edges = 0;
         int oneSided = 0;
@@ -126,8 +128,8 @@ public final class MmhcLearner implements Learner {
                 }
             }
         }
-        Estimate climb = CLIMB.learn(input, restricted.build(),
-                DelegateParameters.part("learner " + ID, parameters, CLIMB.description()), context);
+        Estimate climb = CLIMB.learn(run.input(), restricted.build(),
+                DelegateParameters.part("learner " + ID, run.parameters(), CLIMB.description()), context);
         Map<String, Double> extras = new LinkedHashMap<>();
         extras.put("skeleton_edges", (double) edges);
         extras.put("one_sided_pairs", (double) oneSided);

@@ -1,6 +1,8 @@
 package dev.touchstone.learners.independence;
 
 import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.param.Worded;
+
 import org.apache.commons.math3.special.Gamma;
 
 import java.util.Arrays;
@@ -33,55 +35,19 @@ import java.util.Arrays;
 public final class ContingencyTest implements IndependenceTest {
 
     /** The statistic of a contingency test. */
-    public enum Statistic {
+    public enum Statistic implements Worded {
         /** The likelihood-ratio statistic G² = 2 Σ O ln(O / E). */
-        G_SQUARE("g-square"),
+        G_SQUARE,
         /** Pearson's statistic χ² = Σ (O − E)² / E. */
-        CHI_SQUARE("chi-square");
-
-        private final String word;
-
-        Statistic(String word) {
-            this.word = word;
-        }
-
-        public String word() {
-            return word;
-        }
+        CHI_SQUARE
     }
 
     /** How the degrees of freedom are counted (see the class comment). */
-    public enum DegreesOfFreedom {
+    public enum DegreesOfFreedom implements Worded {
         /** Σ over strata with data of (non-empty rows − 1)(non-empty columns − 1). */
-        REDUCED("reduced"),
+        REDUCED,
         /** (|X| − 1)(|Y| − 1) times the number of configurations of the conditioning set. */
-        TEXTBOOK("textbook");
-
-        private final String word;
-
-        DegreesOfFreedom(String word) {
-            this.word = word;
-        }
-
-        public String word() {
-            return word;
-        }
-
-        /** The words of every rule, in declaration order. */
-        public static java.util.List<String> words() {
-            return java.util.Arrays.stream(values()).map(DegreesOfFreedom::word).toList();
-        }
-
-        /** The rule named by {@code word}. */
-        public static DegreesOfFreedom parse(String word) {
-            for (DegreesOfFreedom d : values()) {
-                if (d.word.equals(word)) {
-                    return d;
-                }
-            }
-            throw new IllegalArgumentException("unknown degrees-of-freedom rule '" + word + "' (allowed: "
-                    + String.join(", ", words()) + ")");
-        }
+        TEXTBOOK
     }
 
     /** A statistic with its degrees of freedom and the number of rows used. */

@@ -4,6 +4,7 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 
@@ -29,45 +30,46 @@ public final class IndependenceTests {
     public static final String RCIT = "rcit";
 
     /** The {@code test} parameter. */
-    public static final ParameterSpec TEST = ParameterSpec.choice("test", AUTO,
+    public static final Parameter<String> TEST = Parameter.oneOf("test", AUTO,
             List.of(AUTO, FISHER_Z, G_SQUARE, CHI_SQUARE, CONDITIONAL_GAUSSIAN, KCI, RCIT),
             "independence test: auto picks fisher-z (continuous), g-square (discrete) or conditional-gaussian (mixed; Andrews, Ramsey and Cooper 2018); "
                     + "kci (Zhang et al. 2011) and rcit (Strobl et al. 2019) are kernel tests for nonlinear continuous data; "
                     + "ignored with the oracle");
     /** The {@code alpha} parameter. */
-    public static final ParameterSpec ALPHA = ParameterSpec.real("alpha", 0.01, 1e-12, 0.999,
+    public static final Parameter<Double> ALPHA = Parameter.real("alpha", 0.01, 1e-12, 0.999,
             "significance level of each independence test");
     /** The {@code missing} parameter. */
-    public static final ParameterSpec MISSING = ParameterSpec.choice("missing", MissingPolicy.TEST_WISE.word(),
-            MissingPolicy.words(), "rows with missing cells: test-wise uses the rows complete for each test's "
+    public static final Parameter<MissingPolicy> MISSING = Parameter.choice("missing", MissingPolicy.TEST_WISE,
+            "rows with missing cells: test-wise uses the rows complete for each test's "
                     + "variables, list-wise drops every incomplete row first");
 
     /** The {@code degrees_of_freedom} parameter of the G² and χ² tests. */
-    public static final ParameterSpec DEGREES_OF_FREEDOM = ParameterSpec.choice("degrees_of_freedom",
-            ContingencyTest.DegreesOfFreedom.REDUCED.word(), ContingencyTest.DegreesOfFreedom.words(),
+    public static final Parameter<ContingencyTest.DegreesOfFreedom> DEGREES_OF_FREEDOM = Parameter.choice(
+            "degrees_of_freedom", ContingencyTest.DegreesOfFreedom.REDUCED,
             "degrees of freedom of g-square and chi-square: reduced counts only the non-empty rows and columns of each "
                     + "stratum with data (common practice); textbook is (|X|-1)(|Y|-1) times the number of configurations "
                     + "of the conditioning set (Agresti 2002)");
 
     /** The {@code kci_rank} parameter. */
-    public static final ParameterSpec KCI_RANK = ParameterSpec.integer("kci_rank", 100, 1, 100_000,
+    public static final Parameter<Integer> KCI_RANK = Parameter.integer("kci_rank", 100, 1, 100_000,
             "with test = kci: largest rank of the incomplete Cholesky factor of each kernel matrix (bounds the cost)");
     /** The {@code kci_ridge} parameter. */
-    public static final ParameterSpec KCI_RIDGE = ParameterSpec.real("kci_ridge", 1e-3, 1e-12, 1e6,
+    public static final Parameter<Double> KCI_RIDGE = Parameter.real("kci_ridge", 1e-3, 1e-12, 1e6,
             "with test = kci: ridge ε of the kernel regression on the conditioning set, R = ε(K + εI)⁻¹");
     /** The {@code kci_max_rows} parameter. */
-    public static final ParameterSpec KCI_MAX_ROWS = ParameterSpec.integer("kci_max_rows", 2000, 6, Integer.MAX_VALUE,
+    public static final Parameter<Integer> KCI_MAX_ROWS = Parameter.integer("kci_max_rows", 2000, 6, Integer.MAX_VALUE,
             "with test = kci: with more usable rows, each test uses a seeded random subset of this many");
     /** The {@code rcit_features} parameter. */
-    public static final ParameterSpec RCIT_FEATURES = ParameterSpec.integer("rcit_features", 5, 1, 100,
+    public static final Parameter<Integer> RCIT_FEATURES = Parameter.integer("rcit_features", 5, 1, 100,
             "with test = rcit: random Fourier features for each of the two tested variables");
     /** The {@code rcit_conditioning_features} parameter. */
-    public static final ParameterSpec RCIT_CONDITIONING_FEATURES = ParameterSpec.integer("rcit_conditioning_features",
+    public static final Parameter<Integer> RCIT_CONDITIONING_FEATURES = Parameter.integer("rcit_conditioning_features",
             100, 1, 5000, "with test = rcit: random Fourier features for the conditioning set");
 
     /** The parameters of the kernel tests, which every learner with a {@code test} parameter declares too. */
     public static java.util.List<ParameterSpec> kernelParameters() {
-        return List.of(KCI_RANK, KCI_RIDGE, KCI_MAX_ROWS, RCIT_FEATURES, RCIT_CONDITIONING_FEATURES);
+        return List.of(KCI_RANK.spec(), KCI_RIDGE.spec(), KCI_MAX_ROWS.spec(), RCIT_FEATURES.spec(),
+                RCIT_CONDITIONING_FEATURES.spec());
     }
 
     private IndependenceTests() {
@@ -90,13 +92,13 @@ public final class IndependenceTests {
      * values and their randomness (KCI's row subset, RCIT's features) drawn from {@code seed}.
      */
     public static IndependenceTest forInput(LearnerInput input, ParameterValues values, long seed) {
-        KciTest.Settings kci = new KciTest.Settings(values.getInt(KCI_RANK.name()), values.getDouble(KCI_RIDGE.name()),
-                values.getInt(KCI_MAX_ROWS.name()), seed);
-        RcitTest.Settings rcit = new RcitTest.Settings(values.getInt(RCIT_FEATURES.name()),
-                values.getInt(RCIT_CONDITIONING_FEATURES.name()), seed);
-        return forInput(input, values.getString(TEST.name()), values.getDouble(ALPHA.name()),
-                MissingPolicy.parse(values.getString(MISSING.name())),
-                ContingencyTest.DegreesOfFreedom.parse(values.getString(DEGREES_OF_FREEDOM.name())), kci, rcit);
+        KciTest.Settings kci = new KciTest.Settings(values.get(KCI_RANK), values.get(KCI_RIDGE),
+                values.get(KCI_MAX_ROWS), seed);
+        RcitTest.Settings rcit = new RcitTest.Settings(values.get(RCIT_FEATURES),
+                values.get(RCIT_CONDITIONING_FEATURES), seed);
+        return forInput(input, values.get(TEST), values.get(ALPHA),
+                values.get(MISSING),
+                values.get(DEGREES_OF_FREEDOM), kci, rcit);
     }
 
     /**
@@ -148,7 +150,7 @@ public final class IndependenceTests {
                 return chosen.equals(KCI) ? KciTest.of(data, alpha, kci) : RcitTest.of(data, alpha, rcit);
             default:
                 throw new LearnerException("unknown independence test '" + test + "' (allowed: "
-                        + String.join(", ", TEST.choices()) + ")");
+                        + String.join(", ", TEST.spec().choices()) + ")");
         }
     }
 

@@ -2,14 +2,12 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.learner.LearnerRun;
+import dev.touchstone.core.param.Parameter;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.List;
 import java.util.Map;
@@ -23,13 +21,16 @@ import java.util.Map;
  * I-map of the distribution the deletions reach the true class in the large-sample limit).
  * Stateless and thread-safe.
  */
-public final class BossLearner implements Learner {
+public final class BossLearner extends DeclaredLearner {
 
     /** The learner id. */
     public static final String ID = "boss";
 
-    static final String STARTS = "starts";
-    static final String BACKWARD_PHASE = "backward_phase";
+    static final Parameter<Integer> STARTS = Parameter.integer("starts", 1, 1, 1000,
+            "number of searches from seeded random orders; the best-scoring result is kept");
+    static final Parameter<Boolean> BACKWARD_PHASE = Parameter.bool("backward_phase", true,
+            "after the order search, apply the backward (deletion) phase of greedy equivalence"
+                    + " search to the CPDAG of the best order's DAG");
 
     private static final LearnerDescription DESCRIPTION = describe();
 
@@ -43,34 +44,28 @@ public final class BossLearner implements Learner {
                                 + " trees, Advances in Neural Information Processing Systems 36",
                         GraphClass.CPDAG)
                 .assumption("a consistent score and faithfulness for the large-sample guarantee")
-                .parameter(ParameterSpec.integer(STARTS, 1, 1, 1000,
-                        "number of searches from seeded random orders; the best-scoring result is kept"))
-                .parameter(ParameterSpec.bool(BACKWARD_PHASE, true,
-                        "after the order search, apply the backward (deletion) phase of greedy equivalence"
-                                + " search to the CPDAG of the best order's DAG"))
+                .parameter(STARTS)
+                .parameter(BACKWARD_PHASE)
                 .build();
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public BossLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        List<String> names = input.variableNames();
-        KnowledgeIndex index = HillClimbLearner.indexKnowledge(knowledge, names);
-        LocalScore score = ScoreCache.of(ScoreSettings.build(ID, input, parameters), context);
-        int maxParents = ScoreSettings.maxParents(parameters);
+    protected Estimate run(LearnerRun run) {
+        List<String> names = run.names();
+        KnowledgeIndex index = KnowledgeIndex.of(run.knowledge(), names);
+        LocalScore score = ScoreCache.of(ScoreSettings.build(ID, run.input(), run.parameters()), run.context());
+        int maxParents = run.get(ScoreSettings.PARENT_LIMIT);
         OrderScorer scorer = new OrderScorer(score, index, maxParents);
-        BossSearch search = new BossSearch(scorer, parameters.getInt(STARTS), context);
+        BossSearch search = new BossSearch(scorer, run.get(STARTS), run.context());
         int[] order = search.run();
         Pdag dag = scorer.dag(order);
-        CpdagCompletion completion = new CpdagCompletion(names, knowledge);
-        Pdag result = parameters.getBoolean(BACKWARD_PHASE)
-                ? new GesSearch(score, index, completion, maxParents, context).backwardFrom(dag)
+        CpdagCompletion completion = new CpdagCompletion(names, run.knowledge());
+        Pdag result = run.get(BACKWARD_PHASE)
+                ? new GesSearch(score, index, completion, maxParents, run.context()).backwardFrom(dag)
                 : completion.complete(dag);
         Graph cpdag = result.toGraph(names);
         return new Estimate(cpdag, GraphClass.CPDAG, Map.of(

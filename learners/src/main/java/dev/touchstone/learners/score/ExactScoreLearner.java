@@ -4,13 +4,12 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerException;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.learner.LearnerRun;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -26,7 +25,7 @@ import java.util.Set;
  * gets wrong at a sample size from what a greedy search fails to reach. Stateless and
  * thread-safe.
  */
-public final class ExactScoreLearner implements Learner {
+public final class ExactScoreLearner extends DeclaredLearner {
 
     /** The learner id. */
     public static final String ID = "exact-score";
@@ -59,21 +58,18 @@ public final class ExactScoreLearner implements Learner {
                 .build();
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public ExactScoreLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        List<String> names = input.variableNames();
-        int limit = ScoreSettings.maxParents(parameters);
+    protected Estimate run(LearnerRun run) {
+        List<String> names = run.names();
+        int limit = run.get(ScoreSettings.PARENT_LIMIT);
         checkSize(names.size(), limit);
-        KnowledgeIndex index = HillClimbLearner.indexKnowledge(knowledge, names);
-        LocalScore score = ScoreSettings.build(ID, input, parameters);
-        ExactSearch search = new ExactSearch(score, index, limit, context);
+        KnowledgeIndex index = KnowledgeIndex.of(run.knowledge(), names);
+        LocalScore score = ScoreSettings.build(ID, run.input(), run.parameters());
+        ExactSearch search = new ExactSearch(score, index, limit, run.context());
         int[] parents;
         try {
             parents = search.run();
@@ -84,9 +80,9 @@ public final class ExactScoreLearner implements Learner {
         ExactSearch.TieWalk walk = search.optimalDags(TIE_TOLERANCE * Math.max(1.0, Math.abs(optimum)), TIE_STATE_BUDGET);
         Set<Graph> classes = new LinkedHashSet<>();
         for (int[] dag : walk.dags()) {
-            classes.add(classOf(dag, names, knowledge));
+            classes.add(classOf(dag, names, run.knowledge()));
         }
-        Graph cpdag = classOf(parents, names, knowledge);
+        Graph cpdag = classOf(parents, names, run.knowledge());
         return new Estimate(cpdag, GraphClass.CPDAG, Map.of(
                 "score", optimum,
                 "optimal-classes-found", (double) Math.max(1, classes.size()),

@@ -1,6 +1,7 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
 import java.util.Arrays;

@@ -1,17 +1,14 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.learner.LearnerRun;
+import dev.touchstone.core.param.Parameter;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 
 /**
@@ -20,14 +17,18 @@ import java.util.Map;
  * over tucks of a variable order ({@link GraspSearch}), the orders scored through the same
  * grow-shrink trees as BOSS ({@link OrderScorer}). Stateless and thread-safe.
  */
-public final class GraspLearner implements Learner {
+public final class GraspLearner extends DeclaredLearner {
 
     /** The learner id. */
     public static final String ID = "grasp";
 
-    static final String STARTS = "starts";
-    static final String DEPTH = "depth";
-    static final String TUCKS = "tucks";
+    static final Parameter<Integer> STARTS = Parameter.integer("starts", 1, 1, 1000,
+            "number of searches from seeded random orders; the best-scoring result is kept");
+    static final Parameter<Integer> DEPTH = Parameter.integer("depth", 4, 1, 20,
+            "longest chain of score-keeping tucks explored in search of an improvement");
+    static final Parameter<GraspSearch.Tucks> TUCKS = Parameter.choice("tucks", GraspSearch.Tucks.ALL,
+            "tucks tried: covered edges only (GRaSP0), also uncovered ones that move a single"
+                    + " variable (GRaSP1), or all (GRaSP2)");
 
     private static final LearnerDescription DESCRIPTION = describe();
 
@@ -40,33 +41,25 @@ public final class GraspLearner implements Learner {
                                 + " Proceedings of the 38th Conference on Uncertainty in Artificial Intelligence",
                         GraphClass.CPDAG)
                 .assumption("a consistent score and faithfulness for the large-sample guarantee")
-                .parameter(ParameterSpec.integer(STARTS, 1, 1, 1000,
-                        "number of searches from seeded random orders; the best-scoring result is kept"))
-                .parameter(ParameterSpec.integer(DEPTH, 4, 1, 20,
-                        "longest chain of score-keeping tucks explored in search of an improvement"))
-                .parameter(ParameterSpec.choice(TUCKS, "all", List.of("covered", "singular", "all"),
-                        "tucks tried: covered edges only (GRaSP0), also uncovered ones that move a single"
-                                + " variable (GRaSP1), or all (GRaSP2)"))
+                .parameter(STARTS)
+                .parameter(DEPTH)
+                .parameter(TUCKS)
                 .build();
     }
 
-    @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
+    public GraspLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        List<String> names = input.variableNames();
-        KnowledgeIndex index = HillClimbLearner.indexKnowledge(knowledge, names);
-        LocalScore score = ScoreCache.of(ScoreSettings.build(ID, input, parameters), context);
-        OrderScorer scorer = new OrderScorer(score, index, ScoreSettings.maxParents(parameters));
-        GraspSearch.Tucks tucks = GraspSearch.Tucks.valueOf(parameters.getString(TUCKS).toUpperCase(Locale.ROOT));
-        GraspSearch search = new GraspSearch(scorer, tucks, parameters.getInt(DEPTH), context);
-        int[] order = search.run(parameters.getInt(STARTS));
-        Pdag cpdag = new CpdagCompletion(names, knowledge).complete(scorer.dag(order));
+    protected Estimate run(LearnerRun run) {
+        List<String> names = run.names();
+        KnowledgeIndex index = KnowledgeIndex.of(run.knowledge(), names);
+        LocalScore score = ScoreCache.of(ScoreSettings.build(ID, run.input(), run.parameters()), run.context());
+        OrderScorer scorer = new OrderScorer(score, index, run.get(ScoreSettings.PARENT_LIMIT));
+        GraspSearch search = new GraspSearch(scorer, run.get(TUCKS), run.get(DEPTH), run.context());
+        int[] order = search.run(run.get(STARTS));
+        Pdag cpdag = new CpdagCompletion(names, run.knowledge()).complete(scorer.dag(order));
         return new Estimate(cpdag.toGraph(names), GraphClass.CPDAG, Map.of(
                 "tucks-tried", (double) search.tucksTried(),
                 "improvements", (double) search.improvements(),

@@ -40,7 +40,7 @@ import java.util.Arrays;
 final class GraspSearch {
 
     /** The tucks the search may use: the tiers GRaSP0, GRaSP1 and GRaSP2 of the paper. */
-    enum Tucks {
+    enum Tucks implements dev.touchstone.core.param.Worded {
         /** Covered tucks only (GRaSP0). */
         COVERED,
         /** Covered and singular tucks (GRaSP1). */

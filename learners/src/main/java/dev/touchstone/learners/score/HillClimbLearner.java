@@ -2,15 +2,12 @@ package dev.touchstone.learners.score;
 
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.GraphClass;
-import dev.touchstone.core.knowledge.Knowledge;
+import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
-import dev.touchstone.core.learner.Learner;
 import dev.touchstone.core.learner.LearnerDescription;
-import dev.touchstone.core.learner.LearnerException;
-import dev.touchstone.core.learner.LearnerInput;
-import dev.touchstone.core.learner.RunContext;
-import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.learner.LearnerRun;
+import dev.touchstone.core.param.Parameter;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.List;
 import java.util.Map;
@@ -21,15 +18,19 @@ import java.util.Map;
  * The first climb starts from the input's start graph when there is one (see {@link StartDag}),
  * otherwise from the empty graph. Stateless and thread-safe.
  */
-public final class HillClimbLearner implements Learner {
+public final class HillClimbLearner extends DeclaredLearner {
 
     /** The learner id. */
     public static final String ID = "hill-climbing";
 
-    static final String RECENT_MOVES_BARRED = "recent_moves_barred";
-    static final String PATIENCE = "patience";
-    static final String PERTURBED_STARTS = "perturbed_starts";
-    static final String RANDOM_MOVES_PER_START = "random_moves_per_start";
+    static final Parameter<Integer> RECENT_MOVES_BARRED = Parameter.integer("recent_moves_barred", 10, 0, 10000,
+            "number of recent moves whose inverse may not be taken (a tabu list, Glover 1989; 0: none)");
+    static final Parameter<Integer> PATIENCE = Parameter.integer("patience", 10, 0, 100000,
+            "steps without a new best score before a climb ends (0: stop at the first local maximum)");
+    static final Parameter<Integer> PERTURBED_STARTS = Parameter.integer("perturbed_starts", 3, 0, 1000,
+            "number of further climbs, each from the best DAG so far after random moves");
+    static final Parameter<Integer> RANDOM_MOVES_PER_START = Parameter.integer("random_moves_per_start", 5, 1, 10000,
+            "random moves applied to the best DAG before each further climb");
 
     private static final LearnerDescription DESCRIPTION = describe();
 
@@ -43,41 +44,23 @@ public final class HillClimbLearner implements Learner {
                 .assumption("the DAG returned is one member of its equivalence class; its orientations within"
                         + " the class are not identified by the data")
                 .takesStartGraph();
-        b.parameter(ParameterSpec.integer(RECENT_MOVES_BARRED, 10, 0, 10000,
-                "number of recent moves whose inverse may not be taken (a tabu list, Glover 1989; 0: none)"));
-        b.parameter(ParameterSpec.integer(PATIENCE, 10, 0, 100000,
-                "steps without a new best score before a climb ends (0: stop at the first local maximum)"));
-        b.parameter(ParameterSpec.integer(PERTURBED_STARTS, 3, 0, 1000,
-                "number of further climbs, each from the best DAG so far after random moves"));
-        b.parameter(ParameterSpec.integer(RANDOM_MOVES_PER_START, 5, 1, 10000,
-                "random moves applied to the best DAG before each further climb"));
-        return b.build();
+        return b.parameter(RECENT_MOVES_BARRED).parameter(PATIENCE).parameter(PERTURBED_STARTS)
+                .parameter(RANDOM_MOVES_PER_START).build();
+    }
+
+    public HillClimbLearner() {
+        super(DESCRIPTION);
     }
 
     @Override
-    public LearnerDescription description() {
-        return DESCRIPTION;
-    }
-
-    @Override
-    public Estimate learn(LearnerInput input, Knowledge knowledge, ParameterValues parameters, RunContext context) {
-        DESCRIPTION.checkAccepts(input);
-        context.checkDeadline();
-        List<String> names = input.variableNames();
-        KnowledgeIndex index = indexKnowledge(knowledge, names);
-        LocalScore score = ScoreCache.of(ScoreSettings.build(ID, input, parameters), context);
-        HillClimbSearch search = new HillClimbSearch(score, index, ScoreSettings.maxParents(parameters),
-                parameters.getInt(RECENT_MOVES_BARRED), parameters.getInt(PATIENCE), parameters.getInt(PERTURBED_STARTS),
-                parameters.getInt(RANDOM_MOVES_PER_START), context);
-        Graph dag = search.run(StartDag.of(input.startGraph(), names, knowledge)).toGraph(names);
+    protected Estimate run(LearnerRun run) {
+        List<String> names = run.names();
+        KnowledgeIndex index = KnowledgeIndex.of(run.knowledge(), names);
+        LocalScore score = ScoreCache.of(ScoreSettings.build(ID, run.input(), run.parameters()), run.context());
+        HillClimbSearch search = new HillClimbSearch(score, index, run.get(ScoreSettings.PARENT_LIMIT),
+                run.get(RECENT_MOVES_BARRED), run.get(PATIENCE), run.get(PERTURBED_STARTS),
+                run.get(RANDOM_MOVES_PER_START), run.context());
+        Graph dag = search.run(StartDag.of(run.input().startGraph(), names, run.knowledge())).toGraph(names);
         return new Estimate(dag, GraphClass.DAG, Map.of("steps", (double) search.steps()));
-    }
-
-    static KnowledgeIndex indexKnowledge(Knowledge knowledge, List<String> names) {
-        try {
-            return KnowledgeIndex.of(knowledge, names);
-        } catch (IllegalArgumentException e) {
-            throw new LearnerException(e.getMessage(), e);
-        }
     }
 }

@@ -1,6 +1,8 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
+
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayDeque;

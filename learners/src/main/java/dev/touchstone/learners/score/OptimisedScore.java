@@ -11,6 +11,7 @@ import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.HashSet;
 import java.util.List;
@@ -119,7 +120,7 @@ public final class OptimisedScore {
         if (!optimumWithinReach()) {
             return Optional.empty();
         }
-        KnowledgeIndex index = HillClimbLearner.indexKnowledge(knowledge, names);
+        KnowledgeIndex index = KnowledgeIndex.of(knowledge, names);
         ExactSearch search = new ExactSearch(score, index, parentLimit, context);
         try {
             int[] parents = search.run();

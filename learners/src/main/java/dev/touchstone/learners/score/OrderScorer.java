@@ -1,6 +1,7 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.LearnerException;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;

@@ -5,11 +5,12 @@ import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.LearnerDescription;
+import dev.touchstone.core.learner.LearnerException;
 import dev.touchstone.core.learner.LearnerFamily;
+import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
-import dev.touchstone.core.learner.LearnerException;
-import dev.touchstone.core.learner.LearnerInput;
+import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 
@@ -23,17 +24,23 @@ import java.util.List;
  */
 final class ScoreSettings {
 
-    static final String SCORE = "score";
-    static final String PENALTY = "penalty";
-    static final String GAMMA = "gamma";
-    static final String EQUIVALENT_SAMPLE_SIZE = "equivalent_sample_size";
-    static final String PARENT_LIMIT = "parent_limit";
-
     static final String AUTO = "auto";
     static final String BIC = "bic";
     static final String EBIC = "ebic";
     static final String BDEU = "bdeu";
     static final String CONDITIONAL_GAUSSIAN_BIC = "conditional-gaussian-bic";
+
+    static final Parameter<String> SCORE = Parameter.oneOf("score", AUTO,
+            List.of(AUTO, BIC, EBIC, BDEU, CONDITIONAL_GAUSSIAN_BIC),
+            "local score: bic or ebic (continuous), bdeu (discrete), conditional-gaussian-bic (mixed; Andrews, Ramsey and Cooper 2018); auto picks by data kind");
+    static final Parameter<Double> PENALTY = Parameter.real("penalty", 1.0, 0.01, 100.0,
+            "multiplier of the BIC penalty (bic, ebic and conditional-gaussian-bic; 1 is the classical BIC)");
+    static final Parameter<Double> GAMMA = Parameter.real("gamma", 0.5, 0.0, 1.0,
+            "extended BIC's edge-prior weight: each parent costs 2·gamma·ln(p−1) more (ebic; 0 is the BIC)");
+    static final Parameter<Double> EQUIVALENT_SAMPLE_SIZE = Parameter.real("equivalent_sample_size", 1.0, 0.001,
+            10000.0, "equivalent sample size of the BDeu prior (bdeu)");
+    static final Parameter<Integer> PARENT_LIMIT = Parameter.integer("parent_limit", -1, -1, 1000,
+            "largest parent set a move may create; -1 for no limit");
 
     private ScoreSettings() {
     }
@@ -62,16 +69,7 @@ final class ScoreSettings {
     }
 
     static List<ParameterSpec> specs() {
-        return List.of(
-                ParameterSpec.choice(SCORE, AUTO, List.of(AUTO, BIC, EBIC, BDEU, CONDITIONAL_GAUSSIAN_BIC),
-                        "local score: bic or ebic (continuous), bdeu (discrete), conditional-gaussian-bic (mixed; Andrews, Ramsey and Cooper 2018); auto picks by data kind"),
-                ParameterSpec.real(PENALTY, 1.0, 0.01, 100.0,
-                        "multiplier of the BIC penalty (bic, ebic and conditional-gaussian-bic; 1 is the classical BIC)"),
-                ParameterSpec.real(GAMMA, 0.5, 0.0, 1.0,
-                        "extended BIC's edge-prior weight: each parent costs 2·gamma·ln(p−1) more (ebic; 0 is the BIC)"),
-                ParameterSpec.real(EQUIVALENT_SAMPLE_SIZE, 1.0, 0.001, 10000.0, "equivalent sample size of the BDeu prior (bdeu)"),
-                ParameterSpec.integer(PARENT_LIMIT, -1, -1, 1000,
-                        "largest parent set a move may create; -1 for no limit"));
+        return List.of(SCORE.spec(), PENALTY.spec(), GAMMA.spec(), EQUIVALENT_SAMPLE_SIZE.spec(), PARENT_LIMIT.spec());
     }
 
     /**
@@ -80,8 +78,8 @@ final class ScoreSettings {
      * @throws LearnerException when the score does not fit the data kind or the oracle, or the data cannot be scored
      */
     static LocalScore build(String learnerId, LearnerInput input, ParameterValues values) {
-        String name = values.getString(SCORE);
-        double penalty = values.getDouble(PENALTY);
+        String name = values.get(SCORE);
+        double penalty = values.get(PENALTY);
         try {
             if (input.isOracle()) {
                 if (!name.equals(AUTO) && !name.equals(BIC) && !name.equals(EBIC)) {
@@ -104,7 +102,7 @@ final class ScoreSettings {
                     return gaussian(name, BicScore.of(data.covariance(), penalty), values);
                 case BDEU:
                     requireKind(learnerId, name, kind, DataKind.DISCRETE);
-                    return BdeuScore.of(data, values.getDouble(EQUIVALENT_SAMPLE_SIZE));
+                    return BdeuScore.of(data, values.get(EQUIVALENT_SAMPLE_SIZE));
                 default:
                     return ConditionalGaussianScore.of(data, penalty);
             }
@@ -115,12 +113,12 @@ final class ScoreSettings {
 
     /** The BIC, or the extended BIC over it when the parameters ask for ebic. */
     private static LocalScore gaussian(String name, BicScore bic, ParameterValues values) {
-        return name.equals(EBIC) ? EbicScore.of(bic, values.getDouble(GAMMA)) : bic;
+        return name.equals(EBIC) ? EbicScore.of(bic, values.get(GAMMA)) : bic;
     }
 
     /** The parent-set bound, −1 for none. */
     static int maxParents(ParameterValues values) {
-        return values.getInt(PARENT_LIMIT);
+        return values.get(PARENT_LIMIT);
     }
 
     private static void requireKind(String learnerId, String score, DataKind got, DataKind needed) {

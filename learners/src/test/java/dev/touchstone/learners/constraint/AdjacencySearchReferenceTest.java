@@ -8,6 +8,7 @@ import dev.touchstone.core.testing.RandomDags;
 import dev.touchstone.core.testing.SmallData;
 import dev.touchstone.learners.independence.FisherZTest;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -42,7 +43,7 @@ class AdjacencySearchReferenceTest {
             DataSet data = SmallData.linearGaussian(dag, 120 + 40 * (rep % 12), 330 + rep);
             FisherZTest test = FisherZTest.of(data, 0.05);
             int maxDepth = rep % 3 == 2 ? 1 : -1;
-            Skeleton fast = new AdjacencySearch(test, new KnowledgeIndex(Knowledge.none(), data.names()),
+            Skeleton fast = new AdjacencySearch(test, KnowledgeIndex.of(Knowledge.none(), data.names()),
                     stable ? SkeletonVariant.ORDER_INDEPENDENT : SkeletonVariant.SEQUENTIAL, maxDepth,
                     RunContext.of(1, null, 1 + rep % 2)).run();
             List<Integer>[][] reference = reference(test, maxDepth, stable);
@@ -70,7 +71,7 @@ class AdjacencySearchReferenceTest {
             Graph dag = RandomDags.erdosRenyi(25, 3.0, 360 + rep);
             DataSet data = SmallData.linearGaussian(dag, 100 + 30 * rep, 370 + rep);
             FisherZTest test = FisherZTest.of(data, 0.05);
-            KnowledgeIndex none = new KnowledgeIndex(Knowledge.none(), data.names());
+            KnowledgeIndex none = KnowledgeIndex.of(Knowledge.none(), data.names());
             Skeleton s = new AdjacencySearch(test, none, SkeletonVariant.ORDER_INDEPENDENT, -1,
                     RunContext.of(1, null, 1)).run();
             for (ColliderRule rule : List.of(ColliderRule.CONSERVATIVE, ColliderRule.MAJORITY)) {

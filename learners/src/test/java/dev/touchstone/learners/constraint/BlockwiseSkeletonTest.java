@@ -8,6 +8,7 @@ import dev.touchstone.core.random.Seeds;
 import dev.touchstone.core.testing.RandomDags;
 import dev.touchstone.core.testing.SmallData;
 import dev.touchstone.learners.independence.FisherZTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -46,7 +47,7 @@ class BlockwiseSkeletonTest {
                 data = withMissingCells(data, 550 + c);
             }
             Knowledge knowledge = c % 2 == 1 ? knowledge(data.names(), 570 + c) : Knowledge.none();
-            KnowledgeIndex ki = new KnowledgeIndex(knowledge, data.names());
+            KnowledgeIndex ki = KnowledgeIndex.of(knowledge, data.names());
             SkeletonVariant variant = c % 2 == 0 ? SkeletonVariant.ORDER_INDEPENDENT : SkeletonVariant.SEQUENTIAL;
             int depth = c % 5 == 4 ? 1 : -1;
             RunContext denseContext = RunContext.of(1, null, 1 + c % 2);

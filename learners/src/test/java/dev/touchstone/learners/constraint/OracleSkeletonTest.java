@@ -8,6 +8,7 @@ import dev.touchstone.core.learner.Oracle;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.testing.RandomDags;
 import dev.touchstone.learners.independence.OracleTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -37,7 +38,7 @@ class OracleSkeletonTest {
         for (int i = 0; i < 100; i++) {
             Graph dag = truth(i);
             OracleTest test = new OracleTest(new Oracle(dag, null));
-            KnowledgeIndex none = new KnowledgeIndex(Knowledge.none(), dag.names());
+            KnowledgeIndex none = KnowledgeIndex.of(Knowledge.none(), dag.names());
             for (SkeletonVariant v : SkeletonVariant.values()) {
                 Skeleton s = new AdjacencySearch(test, none, v, -1, RunContext.of(1, null, 2)).run();
                 for (int a = 0; a < dag.size(); a++) {

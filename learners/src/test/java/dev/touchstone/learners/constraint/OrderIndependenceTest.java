@@ -8,6 +8,7 @@ import dev.touchstone.core.random.Seeds;
 import dev.touchstone.core.testing.RandomDags;
 import dev.touchstone.core.testing.SmallData;
 import dev.touchstone.learners.independence.FisherZTest;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
@@ -24,7 +25,7 @@ class OrderIndependenceTest {
 
     static Set<String> adjacencies(DataSet data, SkeletonVariant variant, int threads) {
         FisherZTest test = FisherZTest.of(data, 0.05);
-        Skeleton s = new AdjacencySearch(test, new KnowledgeIndex(Knowledge.none(), data.names()), variant, -1,
+        Skeleton s = new AdjacencySearch(test, KnowledgeIndex.of(Knowledge.none(), data.names()), variant, -1,
                 RunContext.of(1, null, threads)).run();
         Set<String> out = new TreeSet<>();
         List<String> names = data.names();

@@ -12,6 +12,7 @@ import dev.touchstone.generators.Simulation;
 import dev.touchstone.generators.graphs.GraphFamilies;
 import dev.touchstone.generators.models.ModelKinds;
 import dev.touchstone.metrics.scoring.EdgeCounts;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.junit.jupiter.api.DisplayName;
@@ -110,7 +111,7 @@ class CamLearnerTest {
         }
         List<PSplineSmoother> sm = List.of(PSplineSmoother.of(x[0], 10), PSplineSmoother.of(x[1], 10), PSplineSmoother.of(x[2], 10));
         List<List<Integer>> parents = List.of(List.of(), List.of(), List.of(0, 1));
-        CamEdgeRules none = CamEdgeRules.of(Knowledge.none(), List.of("x0", "x1", "x2"));
+        KnowledgeIndex none = KnowledgeIndex.of(Knowledge.none(), List.of("x0", "x1", "x2"));
         List<List<Integer>> kept = CamPruning.prune(x, sm, parents, none, 0.001, RunContext.unlimited(1));
         assertTrue(kept.get(2).equals(List.of(0)), "kept " + kept.get(2));
     }

@@ -6,6 +6,7 @@ import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.core.testing.RandomDags;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;

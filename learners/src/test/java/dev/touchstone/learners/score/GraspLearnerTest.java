@@ -9,6 +9,7 @@ import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.Oracle;
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
@@ -64,7 +65,7 @@ class GraspLearnerTest {
         Graph truth = g.freeze();
         CovarianceMatrix sigma = PopulationCovariance.of(truth, 0.5, 2.0, 5);
         LocalScore score = BicScore.of(sigma, 1.0);
-        OrderScorer scorer = new OrderScorer(score, HillClimbLearner.indexKnowledge(Knowledge.none(), truth.names()), -1);
+        OrderScorer scorer = new OrderScorer(score, KnowledgeIndex.of(Knowledge.none(), truth.names()), -1);
         GraspSearch.State s = GraspSearch.State.of(scorer, new int[] {0, 1, 2, 3});
         assertArrayEquals(new int[] {0, 1}, s.parents[2]);
         // tuck of a → c: b is an ancestor of c between them, so it comes along: (b, c, a, d)

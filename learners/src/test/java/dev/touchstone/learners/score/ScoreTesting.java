@@ -5,6 +5,7 @@ import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.testing.RandomDags;
+import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import org.apache.commons.rng.UniformRandomProvider;
 

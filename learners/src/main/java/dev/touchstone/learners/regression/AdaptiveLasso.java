@@ -1,4 +1,4 @@
-package dev.touchstone.learners.baseline;
+package dev.touchstone.learners.regression;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
