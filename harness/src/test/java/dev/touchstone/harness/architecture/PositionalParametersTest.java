@@ -54,8 +54,7 @@ class PositionalParametersTest {
             "dev.touchstone.generators.models.MixedMechanisms$Discrete",
             "dev.touchstone.generators.models.MixedMechanisms$Continuous",
             "dev.touchstone.generators.missing.MissingnessDriver",
-            "dev.touchstone.generators.fit.FitDiagnostics$Check",
-            "dev.touchstone.core.param.ParameterSpec");
+            "dev.touchstone.generators.fit.FitDiagnostics$Check");
 
     /** One main class of each module, to find where the module's classes are. */
     private static final List<Class<?>> MODULES = List.of(Graph.class, GraphFamily.class, RunResult.class,
