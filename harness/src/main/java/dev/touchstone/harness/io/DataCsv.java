@@ -43,7 +43,10 @@ import java.util.regex.Pattern;
  * one-column file, where a blank line is a missing cell).
  *
  * <p>Numbers are parsed from the file's bytes ({@link CsvRecords}, {@link DecimalToDouble})
- * to exactly the double {@link Double#parseDouble} gives; Strings are made only for text.
+ * to exactly the double {@link Double#parseDouble} gives; Strings are made only for text. A
+ * file whose every data cell is a plain number or empty is parsed in parallel by byte ranges
+ * ({@link NumberColumns}), with the same result for any number of threads; any other file, or
+ * one with a bad row, is read by the general pass, which gives the kinds and messages.
  * Cost: one pass over the file, two when a column turns out to be discrete after it began
  * with numbers; memory O(rows × columns) for the values, columns sized from the file's length
  * after the first rows, plus a 1 MiB buffer.
@@ -121,7 +124,8 @@ public final class DataCsv {
      * @throws FileFormatException naming the file, line and column of the first problem
      */
     public static Result read(Path file, Map<String, VariableKind> declared) throws IOException {
-        List<String> names = readHeader(file);
+        Header header = readHeader(file);
+        List<String> names = header.names();
         Set<String> known = new HashSet<>(names);
         for (String d : declared.keySet()) {
             if (!known.contains(d)) {
@@ -134,6 +138,15 @@ public final class DataCsv {
         for (int j = 0; j < p; j++) {
             VariableKind k = declared.get(names.get(j));
             kinds[j] = k == null ? Kind.UNDECIDED : k == VariableKind.DISCRETE ? Kind.DISCRETE : Kind.CONTINUOUS;
+        }
+        if (!Arrays.asList(kinds).contains(Kind.DISCRETE)) {
+            // Every cell a plain number or empty: parsed in parallel; otherwise the general pass.
+            double[][] columns = NumberColumns.read(file, header.dataStart(), p,
+                    Runtime.getRuntime().availableProcessors());
+            if (columns != null) {
+                Pass numbers = new Pass(file, names, kinds, columns);
+                return numbers.result(declared);
+            }
         }
         Pass first = new Pass(file, names, kinds);
         first.run();
@@ -152,7 +165,11 @@ public final class DataCsv {
         return done.result(declared);
     }
 
-    private static List<String> readHeader(Path file) throws IOException {
+    /** The names in the header row, and the byte at which the first data row starts. */
+    private record Header(List<String> names, long dataStart) {
+    }
+
+    private static Header readHeader(Path file) throws IOException {
         try (CsvRecords in = new CsvRecords(file)) {
             if (!in.next()) {
                 throw new FileFormatException(file, null, "the file is empty (expected a header row of variable names)");
@@ -171,7 +188,7 @@ public final class DataCsv {
                 }
                 names.add(name);
             }
-            return names;
+            return new Header(names, in.consumed());
         }
     }
 
@@ -205,6 +222,21 @@ public final class DataCsv {
                 } else {
                     numbers[j] = new double[capacity];
                 }
+                labels.add(new LinkedHashMap<>());
+            }
+        }
+
+        /** A pass whose rows are already read, as these columns of numbers (no column discrete). */
+        Pass(Path file, List<String> names, Kind[] kinds, double[][] columns) {
+            this.file = file;
+            this.names = names;
+            this.kinds = kinds.clone();
+            int p = names.size();
+            this.firstNonNumber = new String[p];
+            this.numbers = columns;
+            this.codes = new int[p][];
+            this.rows = columns[0].length;
+            for (int j = 0; j < p; j++) {
                 labels.add(new LinkedHashMap<>());
             }
         }
