@@ -22,6 +22,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
+import java.util.stream.IntStream;
 
 /**
  * Reads and writes data sets as CSV: a header row of variable names, one row per sample,
@@ -440,7 +441,8 @@ public final class DataCsv {
      * Writes {@code data} as UTF-8 CSV: the header, then one row per sample; a missing cell is
      * empty, a discrete cell is its category label (quoted where RFC 4180 needs it), and a
      * number is the shortest decimal that reads back to the same double
-     * ({@link ShortestDecimal}). Rows are assembled as bytes, so no String is made per cell.
+     * ({@link ShortestDecimal}). Rows are assembled as bytes, so no String is made per cell, in
+     * blocks formatted in parallel and written in order.
      *
      * @throws IllegalArgumentException if a category label is empty (it would read back as missing)
      */
@@ -468,18 +470,66 @@ public final class DataCsv {
         printer.printRecord(data.names());
         printer.flush();
         out.write(header.toString().getBytes(StandardCharsets.UTF_8));
-        byte[] row = new byte[p * (Math.max(widest, ShortestDecimal.MAX_CHARS) + 1) + 2];
-        double[][] numbers = new double[p][];
-        int[][] codes = new int[p][];
-        for (int j = 0; j < p; j++) {
-            if (data.isDiscrete(j)) {
-                codes[j] = data.discrete(j);
-            } else {
-                numbers[j] = data.continuous(j);
+        int rowBytes = p * (Math.max(widest, ShortestDecimal.MAX_CHARS) + 1) + 2;
+        Rows rows = new Rows(data, labels);
+        // Blocks of rows of about 1 MiB are formatted in parallel, a few at a time, and
+        // written in order, so the file is the same for any number of threads.
+        int perBlock = Math.max(1, (1 << 20) / rowBytes);
+        int blocks = (data.rows() + perBlock - 1) / perBlock;
+        int threads = Runtime.getRuntime().availableProcessors();
+        int batch = Math.max(1, 2 * threads);
+        byte[][] buffers = new byte[batch][];
+        int[] used = new int[batch];
+        for (int first = 0; first < blocks; first += batch) {
+            int count = Math.min(batch, blocks - first);
+            int from = first;
+            IntStream ks = IntStream.range(0, count);
+            if (threads > 1 && count > 1) {
+                ks = ks.parallel();
+            }
+            ks.forEach(k -> {
+                int r0 = (from + k) * perBlock;
+                int r1 = Math.min(data.rows(), r0 + perBlock);
+                if (buffers[k] == null) {
+                    buffers[k] = new byte[perBlock * rowBytes];
+                }
+                int at = 0;
+                for (int r = r0; r < r1; r++) {
+                    at = rows.write(r, buffers[k], at);
+                }
+                used[k] = at;
+            });
+            for (int k = 0; k < count; k++) {
+                out.write(buffers[k], 0, used[k]);
             }
         }
-        for (int r = 0; r < data.rows(); r++) {
-            int at = 0;
+        out.flush();
+    }
+
+    /** Formats the rows of a data set as CSV bytes. */
+    private static final class Rows {
+        private final int p;
+        private final double[][] numbers;
+        private final int[][] codes;
+        private final byte[][][] labels;
+
+        Rows(DataSet data, byte[][][] labels) {
+            this.p = data.columns();
+            this.labels = labels;
+            this.numbers = new double[p][];
+            this.codes = new int[p][];
+            for (int j = 0; j < p; j++) {
+                if (data.isDiscrete(j)) {
+                    codes[j] = data.discrete(j);
+                } else {
+                    numbers[j] = data.continuous(j);
+                }
+            }
+        }
+
+        /** Writes row {@code r} with its line break into {@code row} from {@code at}; returns the position after it. */
+        int write(int r, byte[] row, int at) {
+            int start = at;
             for (int j = 0; j < p; j++) {
                 if (j > 0) {
                     row[at++] = ',';
@@ -495,15 +545,14 @@ public final class DataCsv {
                     at = ShortestDecimal.write(numbers[j][r], row, at);
                 }
             }
-            if (at == 0 && p == 1) {
+            if (at == start && p == 1) {
                 // A lone empty cell would be a blank line; quotes keep it a missing cell.
                 row[at++] = '"';
                 row[at++] = '"';
             }
             row[at++] = '\n';
-            out.write(row, 0, at);
+            return at;
         }
-        out.flush();
     }
 
     /**
