@@ -22,9 +22,10 @@
 #   5 read the 10,000 x 1,000 CSV (learn --learner empty)
 #   6 PC, p = 10,000, mean degree 2, n = 1,000, total with loading (the data of row 4)
 #   7 GES, p = 1,000, mean degree 2, n = 1,000
-#   8 resume a finished study (nothing to do), three times each: a 10,000-run study (the empty
-#     learner on 10,000 replicates of Erdős–Rényi p = 10, mean degree 2, n = 100) and the bundled
-#     demo; each is first run to the end with the same jar (not timed)
+#   8 resume a finished study (nothing to do), then re-render its report with `report`, three
+#     times each: a 10,000-run study (the empty learner on 10,000 replicates of Erdős–Rényi
+#     p = 10, mean degree 2, n = 100) and the bundled demo; each is first run to the end with the
+#     same jar (not timed)
 #   9 PC, p = 100,000, mean degree 2, n = 500, total with loading (only when ROWS names it:
 #     the simulation alone writes a CSV of about 1 GB)
 set -euo pipefail
@@ -159,6 +160,10 @@ YAML
     for i in 1 2 3; do
       measure "resume finished $study ($i of 3)" "$(wc -l <"$work/$study-out/journal.jsonl") runs" \
           "${tool[@]}" run "$work/$study.yaml" --out "$work/$study-out" --quiet
+    done
+    for i in 1 2 3; do
+      measure "report finished $study ($i of 3)" "$(wc -l <"$work/$study-out/journal.jsonl") runs" \
+          "${tool[@]}" report "$work/$study-out"
     done
   done
 fi

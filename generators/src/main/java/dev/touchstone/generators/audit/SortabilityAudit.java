@@ -67,17 +67,31 @@ public final class SortabilityAudit {
         for (int j = 0; j < q; j++) {
             continuous &= !data.isDiscrete(j);
         }
-        long pairs = countPaths(dag, node, null);
-        if (!continuous || pairs == 0) {
-            return new SortabilityAudit(Double.NaN, Double.NaN, pairs, false);
+        if (!continuous) {
+            return new SortabilityAudit(Double.NaN, Double.NaN, countPaths(dag, node, null), false);
         }
         double[] variance = new double[q];
+        boolean defined = true;
         for (int j = 0; j < q; j++) {
             variance[j] = variance(data.continuous(j));
+            defined &= !Double.isNaN(variance[j]);
+        }
+        long pairs;
+        double vs = Double.NaN;
+        if (defined) {
+            // One count of the paths gives both the number of pairs and the varsortability.
+            double[] st = scoreAndTotal(dag, node, variance);
+            pairs = (long) st[1];
+            vs = st[0] / st[1];
+        } else {
+            pairs = countPaths(dag, node, null);
+        }
+        if (pairs == 0) {
+            return new SortabilityAudit(Double.NaN, Double.NaN, pairs, false);
         }
         boolean skip = q > R2_MAX_VARIABLES;
         double r2 = skip ? Double.NaN : sortability(dag, node, rSquared(data.covariance()));
-        return new SortabilityAudit(sortability(dag, node, variance), r2, pairs, skip);
+        return new SortabilityAudit(vs, r2, pairs, skip);
     }
 
     /**
@@ -93,6 +107,12 @@ public final class SortabilityAudit {
                 return Double.NaN;
             }
         }
+        double[] st = scoreAndTotal(dag, node, criterion);
+        return st[1] == 0 ? Double.NaN : st[0] / st[1];
+    }
+
+    /** The score (increases count one, ties one half) and the number of (length, pair) combinations. */
+    private static double[] scoreAndTotal(Graph dag, int[] node, double[] criterion) {
         double[] score = new double[2];
         long total = countPaths(dag, node, (i, j) -> {
             double a = criterion[i];
@@ -104,7 +124,8 @@ public final class SortabilityAudit {
                 score[0] += 0.5;
             }
         });
-        return total == 0 ? Double.NaN : score[0] / total;
+        score[1] = total;
+        return score;
     }
 
     private interface PairVisitor {
@@ -130,8 +151,10 @@ public final class SortabilityAudit {
             }
         }
         BitSet[] reach = new BitSet[p];
+        BitSet[] spare = new BitSet[p];
         for (int v = 0; v < p; v++) {
             reach[v] = (BitSet) step[v].clone();
+            spare[v] = new BitSet();
         }
         long total = 0;
         for (int k = 1; k < p; k++) {
@@ -158,14 +181,17 @@ public final class SortabilityAudit {
             if (!any) {
                 break;
             }
-            BitSet[] next = new BitSet[p];
+            // The sets of the step before are cleared and reused: clearing touches only the
+            // words in use, where a new set per variable and step would zero p/64 words each.
             for (int v = 0; v < p; v++) {
-                next[v] = new BitSet(p);
+                spare[v].clear();
                 for (int w = reach[v].nextSetBit(0); w >= 0; w = reach[v].nextSetBit(w + 1)) {
-                    next[v].or(step[w]);
+                    spare[v].or(step[w]);
                 }
             }
-            reach = next;
+            BitSet[] swap = reach;
+            reach = spare;
+            spare = swap;
         }
         return total;
     }

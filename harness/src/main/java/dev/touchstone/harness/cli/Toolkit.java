@@ -71,6 +71,26 @@ final class Toolkit {
         }
     }
 
+    /**
+     * Whether the report in the finished study's own folder {@code out} is current, so that
+     * {@code report} has nothing to read or write: {@code finished.json} is there, was written
+     * for this plan, this study text and this session's versions, still matches every file it
+     * vouches for (the journal among them), and vouches for both report pages; the figures and
+     * tables folders beside them exist. This reads the index and the files' metadata, never the
+     * journal (see {@link dev.touchstone.harness.execution.FinishedIndex#matches}).
+     */
+    boolean reportIsCurrent(Plan plan, Path out) {
+        var index = dev.touchstone.harness.execution.FinishedIndex.read(out);
+        if (index == null || index.total() != plan.runs().size()
+                || !index.vouchesFor(dev.touchstone.harness.report.StudyReports.PAGES)
+                || !java.nio.file.Files.isDirectory(out.resolve("figures"))
+                || !java.nio.file.Files.isDirectory(out.resolve("tables"))) {
+            return false;
+        }
+        return index.matches(out, dev.touchstone.harness.execution.FinishedIndex.Hashes.of(plan,
+                dev.touchstone.harness.study.StudyWriter.yaml(plan.study()), versions()));
+    }
+
     /** Writes report.html and report.md for the study in {@code out} (finished or partial) into {@code to}. */
     Path report(Plan plan, Path out, Path to) {
         Path html = dev.touchstone.harness.report.StudyReports.write(to, reportData(plan, out));
