@@ -4,8 +4,10 @@ import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Shuffles;
 import org.apache.commons.rng.UniformRandomProvider;
 
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -80,17 +82,6 @@ public final class FixedInDegreeFamily implements GraphFamily {
             }
             return out;
         }
-        int[] all = new int[bound];
-        for (int i = 0; i < bound; i++) {
-            all[i] = i;
-        }
-        for (int i = 0; i < k; i++) {
-            int j = i + random.nextInt(bound - i);
-            int t = all[i];
-            all[i] = all[j];
-            all[j] = t;
-            out[i] = all[i];
-        }
-        return out;
+        return Arrays.copyOf(Shuffles.shuffleHead(random, Shuffles.identity(bound), k), k);
     }
 }

@@ -3,6 +3,7 @@ package dev.touchstone.generators.hidden;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Shuffles;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -77,14 +78,9 @@ public final class HiddenOptions {
                     eligible.add(v);
                 }
             }
-            // Partial Fisher–Yates shuffle: the first k of the list are a uniform choice.
+            // The first k of the list become a uniform choice.
             int take = Math.min(k, eligible.size());
-            for (int i = 0; i < take; i++) {
-                int j = i + random.nextInt(eligible.size() - i);
-                Integer t = eligible.get(i);
-                eligible.set(i, eligible.get(j));
-                eligible.set(j, t);
-            }
+            Shuffles.shuffleHead(random, eligible, take);
             Set<String> hidden = new LinkedHashSet<>();
             for (int i = 0; i < take; i++) {
                 hidden.add(dag.name(eligible.get(i)));

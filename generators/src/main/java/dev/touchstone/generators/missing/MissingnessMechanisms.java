@@ -5,6 +5,7 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Shuffles;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -111,7 +112,7 @@ public final class MissingnessMechanisms {
                             + "variables: one to lose values and one to drive it");
                 }
             }
-            shuffle(pool, random);
+            Shuffles.shuffle(random, pool);
             List<Integer> lose = new ArrayList<>(pool.subList(0, affected));
             List<Integer> complete = new ArrayList<>(pool.subList(affected, pool.size()));
             List<Integer> hidden = new ArrayList<>();
@@ -145,15 +146,6 @@ public final class MissingnessMechanisms {
                 out.add(calibrated(name, id, truth.name(driver), r, values.getDouble(STRENGTH.name()), pilot));
             }
             return new MissingnessPlan(out);
-        }
-
-        private static void shuffle(List<Integer> list, UniformRandomProvider random) {
-            for (int i = list.size() - 1; i > 0; i--) {
-                int j = random.nextInt(i + 1);
-                Integer t = list.get(i);
-                list.set(i, list.get(j));
-                list.set(j, t);
-            }
         }
     }
 

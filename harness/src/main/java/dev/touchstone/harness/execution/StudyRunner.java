@@ -192,7 +192,7 @@ public final class StudyRunner {
             say(options, journal, plan, reused, changed, todo.size());
             options.progress().start(plan.runs().size(), reused);
             if (options.shuffle() != null) {
-                java.util.Collections.shuffle(todo, new java.util.Random(options.shuffle()));
+                dev.touchstone.core.random.Shuffles.shuffle(dev.touchstone.core.random.Seeds.random(options.shuffle()), todo);
             }
             RunPerformer performer = new RunPerformer(scorer, layout);
             RunExecutor executor = engine.executor(options.threads(), simulator, performer);

@@ -11,6 +11,7 @@ import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Shuffles;
 import org.apache.commons.rng.UniformRandomProvider;
 
 /**
@@ -41,16 +42,7 @@ public final class RandomDagLearner implements Learner {
         int p = input.variableNames().size();
         double prob = p > 1 ? Math.min(1.0, parameters.getDouble("mean_degree") / (p - 1)) : 0;
         UniformRandomProvider rng = context.random("random-dag");
-        int[] order = new int[p];
-        for (int i = 0; i < p; i++) {
-            order[i] = i;
-        }
-        for (int i = p - 1; i > 0; i--) {
-            int j = rng.nextInt(i + 1);
-            int t = order[i];
-            order[i] = order[j];
-            order[j] = t;
-        }
+        int[] order = Shuffles.permutation(rng, p);
         MutableGraph g = Graph.builder(input.variableNames());
         for (int i = 0; i < p; i++) {
             for (int j = i + 1; j < p; j++) {

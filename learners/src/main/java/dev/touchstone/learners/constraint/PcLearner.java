@@ -16,7 +16,7 @@ import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
 
-import org.apache.commons.rng.sampling.PermutationSampler;
+import dev.touchstone.core.random.Shuffles;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -89,8 +89,8 @@ public final class PcLearner implements Learner {
         if (orderSeed == 0 || input.isOracle()) {
             return learnInOrder(input, knowledge, parameters, context);
         }
-        int[] order = PermutationSampler.natural(input.variableNames().size());
-        PermutationSampler.shuffle(Seeds.random(Seeds.derive(context.seed(), "column-order", orderSeed)), order);
+        int[] order = Shuffles.permutation(Seeds.random(Seeds.derive(context.seed(), "column-order", orderSeed)),
+                input.variableNames().size());
         Estimate e = learnInOrder(LearnerInput.of(input.data().select(order)), knowledge, parameters, context);
         return new Estimate(inOrder(e.graph(), input.variableNames()), e.graphClass(), e.extras());
     }
