@@ -7,9 +7,6 @@ import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.numbers.gamma.Erfc;
 
 import java.util.Arrays;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ForkJoinPool;
-import java.util.stream.IntStream;
 
 /**
  * Fisher's z test of zero partial correlation for (approximately) Gaussian data, on a
@@ -176,34 +173,15 @@ public final class FisherZTest implements IndependenceTest {
             }
         }
         Kept[] found = new Kept[tiles];
-        ThreadLocal<double[][]> scratch = ThreadLocal.withInitial(() -> new double[][] {
-            new double[TILE_ROWS * TILE_COLUMNS], new double[TILE_ROWS * TILE_COLUMNS]});
-        ThreadLocal<double[][]> panels = ThreadLocal.withInitial(() -> new double[256][TILE_COLUMNS]);
-        java.util.function.IntConsumer tile = k -> {
-            deadline.run();
-            double[][] s = scratch.get();
-            found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, panels.get(), s[0], s[1]);
-        };
-        if (threads <= 1) {
-            for (int k = 0; k < tiles; k++) {
-                tile.accept(k);
-            }
-        } else {
-            ForkJoinPool pool = new ForkJoinPool(threads);
-            try {
-                pool.submit(() -> IntStream.range(0, found.length).parallel().forEach(tile)).get();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted during level 0", e);
-            } catch (ExecutionException e) {
-                if (e.getCause() instanceof RuntimeException re) {
-                    throw re;
-                }
-                throw new IllegalStateException("level 0 failed", e.getCause());
-            } finally {
-                pool.shutdown();
-            }
-        }
+        dev.touchstone.core.learner.ParallelLoop.run(threads, tiles, 1, () -> {
+            double[] sums = new double[TILE_ROWS * TILE_COLUMNS];
+            double[] r = new double[TILE_ROWS * TILE_COLUMNS];
+            double[][] panel = new double[256][TILE_COLUMNS];
+            return k -> {
+                deadline.run();
+                found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, panel, sums, r);
+            };
+        });
         return collect(found);
     }
 
