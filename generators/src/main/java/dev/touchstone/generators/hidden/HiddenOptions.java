@@ -4,6 +4,7 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.random.Shuffles;
+import dev.touchstone.generators.Registry;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -47,16 +48,7 @@ public final class HiddenOptions {
      * @throws IllegalArgumentException naming the id and listing the known ones
      */
     public static HiddenOption byId(String id) {
-        for (HiddenOption o : ALL) {
-            if (o.id().equals(id)) {
-                return o;
-            }
-        }
-        List<String> known = new ArrayList<>();
-        for (HiddenOption o : ALL) {
-            known.add(o.id());
-        }
-        throw new IllegalArgumentException("unknown hidden option '" + id + "' (known: " + String.join(", ", known) + ")");
+        return Registry.byId(ALL, HiddenOption::id, "hidden option", id);
     }
 
     private record Option(String id, String summary, List<ParameterSpec> parameters, boolean hides,

@@ -321,8 +321,8 @@ public final class ModelFile {
                     }
                     missing.add(new MissingnessDriver(text(o, "variable", place), text(o, "mechanism", place),
                             driver.isNull() ? null : driver.asText(), number(o, "rate", place),
-                            number(o, "intercept", place), number(o, "slope", place),
-                            number(o, "driver_centre", place), number(o, "driver_scale", place)));
+                            new MissingnessDriver.Link(number(o, "intercept", place), number(o, "slope", place),
+                                    number(o, "driver_centre", place), number(o, "driver_scale", place))));
                 }
             }
             List<List<String>> tiers = new ArrayList<>();
