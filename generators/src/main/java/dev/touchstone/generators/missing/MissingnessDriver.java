@@ -41,26 +41,6 @@ public record MissingnessDriver(String variable, String mechanism, String driver
         return new MissingnessDriver(variable, MissingnessMechanisms.MCAR, null, rate, Link.NONE);
     }
 
-    /** The link's intercept. */
-    public double intercept() {
-        return link.intercept();
-    }
-
-    /** The link's slope per driver standard deviation. */
-    public double slope() {
-        return link.slope();
-    }
-
-    /** The driver's pilot mean. */
-    public double driverCentre() {
-        return link.driverCentre();
-    }
-
-    /** The driver's pilot standard deviation. */
-    public double driverScale() {
-        return link.driverScale();
-    }
-
     /** The probability that a cell goes missing when the driver has value {@code x} (ignored for MCAR). */
     public double probability(double x) {
         if (driver == null) {

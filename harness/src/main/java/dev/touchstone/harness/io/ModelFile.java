@@ -105,10 +105,10 @@ public final class ModelFile {
                     o.put("driver", d.driver());
                 }
                 o.put("rate", d.rate());
-                o.put("intercept", d.intercept());
-                o.put("slope", d.slope());
-                o.put("driver_centre", d.driverCentre());
-                o.put("driver_scale", d.driverScale());
+                o.put("intercept", d.link().intercept());
+                o.put("slope", d.link().slope());
+                o.put("driver_centre", d.link().driverCentre());
+                o.put("driver_scale", d.link().driverScale());
             }
         }
         if (!t.tiers().isEmpty()) {
