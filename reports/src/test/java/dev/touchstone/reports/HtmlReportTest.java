@@ -53,9 +53,8 @@ class HtmlReportTest {
         ReportData base = ReportFixtures.study(true, false).build();
         List<RunResult> runs = new ArrayList<>();
         for (RunResult r : base.runs()) {
-            runs.add(!r.configurationId().equals("beta") ? r : new RunResult(r.key(), r.setting(), r.replicate(),
-                    r.configurationId(), r.learnerId(), r.parameters(), r.seed(), r.status(), r.message(), GraphClass.DAG,
-                    GraphClass.DAG, r.metrics(), r.timings()));
+            runs.add(!r.configurationId().equals("beta") ? r : r.toBuilder().estimateClass(GraphClass.DAG)
+                    .scoredAgainst(GraphClass.DAG).build());
         }
         Document d = render(ReportFixtures.study(true, false).runs(runs).build());
         String classes = "Scored against the true CPDAG (alpha); the true DAG (beta).";
@@ -116,10 +115,12 @@ class HtmlReportTest {
         java.util.List<dev.touchstone.metrics.results.RunResult> runs = new java.util.ArrayList<>();
         for (var r : base.runs()) {
             boolean skip = r.configurationId().equals("broken") && r.setting().get("nodes").equals("20");
-            runs.add(!skip ? r : new dev.touchstone.metrics.results.RunResult(r.key(), r.setting(), r.replicate(),
-                    r.configurationId(), r.learnerId(), r.parameters(), r.seed(),
-                    dev.touchstone.metrics.results.RunStatus.SKIPPED, "does not accept discrete data", null, null,
-                    java.util.Map.of(), new dev.touchstone.metrics.results.Timings(null, null, null, null, null)));
+            runs.add(!skip ? r : dev.touchstone.metrics.results.RunResult.builder().key(r.key())
+                    .setting(r.setting()).replicate(r.replicate()).configurationId(r.configurationId())
+                    .learnerId(r.learnerId()).parameters(r.parameters()).seed(r.seed())
+                    .status(dev.touchstone.metrics.results.RunStatus.SKIPPED)
+                    .message("does not accept discrete data")
+                    .timings(new dev.touchstone.metrics.results.Timings(null, null, null, null, null)).build());
         }
         return ReportFixtures.study(false, false).runs(runs).groupBy(java.util.List.of("nodes")).build();
     }
@@ -179,11 +180,12 @@ class HtmlReportTest {
                                                                  Double shd) {
         boolean ok = shd != null;
         dev.touchstone.core.graph.GraphClass cpdag = dev.touchstone.core.graph.GraphClass.CPDAG;
-        return new dev.touchstone.metrics.results.RunResult(key,
-                dev.touchstone.metrics.results.Setting.of("data", setting), 0, config, config, java.util.Map.of(), 1,
-                ok ? dev.touchstone.metrics.results.RunStatus.OK : dev.touchstone.metrics.results.RunStatus.SKIPPED,
-                ok ? null : "does not accept discrete data", ok ? cpdag : null, ok ? cpdag : null,
-                ok ? java.util.Map.of("shd", shd) : java.util.Map.of(),
-                new dev.touchstone.metrics.results.Timings(null, null, null, null, null));
+        return dev.touchstone.metrics.results.RunResult.builder().key(key)
+                .setting(dev.touchstone.metrics.results.Setting.of("data", setting)).replicate(0)
+                .configurationId(config).learnerId(config).seed(1)
+                .status(ok ? dev.touchstone.metrics.results.RunStatus.OK : dev.touchstone.metrics.results.RunStatus.SKIPPED)
+                .message(ok ? null : "does not accept discrete data").estimateClass(ok ? cpdag : null)
+                .scoredAgainst(ok ? cpdag : null).metrics(ok ? java.util.Map.of("shd", shd) : java.util.Map.of())
+                .timings(new dev.touchstone.metrics.results.Timings(null, null, null, null, null)).build();
     }
 }

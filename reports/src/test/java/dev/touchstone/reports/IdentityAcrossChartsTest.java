@@ -63,10 +63,11 @@ class IdentityAcrossChartsTest {
         List<dev.touchstone.metrics.results.RunResult> runs = new ArrayList<>();
         for (var r : base.runs()) {
             boolean skip = r.configurationId().equals("alpha") && r.setting().get("nodes").equals("20");
-            runs.add(!skip ? r : new dev.touchstone.metrics.results.RunResult(r.key(), r.setting(), r.replicate(),
-                    r.configurationId(), r.learnerId(), r.parameters(), r.seed(),
-                    dev.touchstone.metrics.results.RunStatus.SKIPPED, "does not accept this data", null, null,
-                    Map.of(), null));
+            runs.add(!skip ? r : dev.touchstone.metrics.results.RunResult.builder().key(r.key())
+                    .setting(r.setting()).replicate(r.replicate()).configurationId(r.configurationId())
+                    .learnerId(r.learnerId()).parameters(r.parameters()).seed(r.seed())
+                    .status(dev.touchstone.metrics.results.RunStatus.SKIPPED).message("does not accept this data")
+                    .build());
         }
         List<dev.touchstone.metrics.results.AggregateRow> summary = base.summary().stream()
                 .filter(a -> !(a.configurationId().equals("alpha") && a.setting().get("nodes").equals("20"))).toList();

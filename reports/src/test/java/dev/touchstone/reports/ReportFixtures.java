@@ -30,7 +30,7 @@ final class ReportFixtures {
             return Summary.EMPTY;
         }
         double m = values.stream().mapToDouble(Double::doubleValue).average().getAsDouble();
-        return new Summary(values.size(), m, null, null, null, null, null, null);
+        return new Summary(values.size(), m, null, Summary.Interval.UNDEFINED, Summary.Quartiles.UNDEFINED);
     }
 
     /**
@@ -58,25 +58,37 @@ final class ReportFixtures {
                             m.put("adjacency_recall", 0.8 - 0.05 * base / 10);
                             shd.add(base);
                         }
-                        runs.add(new RunResult("k" + (k++), s, rep, c, c.equals("broken") ? "empty" : "learner-" + c,
-                                Map.of("alpha", "0.05"), 7, fail ? RunStatus.FAILED : RunStatus.OK,
-                                fail ? "boom: singular matrix" : null, fail ? null : GraphClass.CPDAG,
-                                fail ? null : GraphClass.CPDAG, m,
-                                new Timings(fail ? null : 0.01 * Integer.parseInt(nodes), null, null, 10L, 0L)));
+                        runs.add(RunResult.builder().key("k" + (k++)).setting(s).replicate(rep).configurationId(c)
+                                .learnerId(c.equals("broken") ? "empty" : "learner-" + c)
+                                .parameters(Map.of("alpha", "0.05")).seed(7)
+                                .status(fail ? RunStatus.FAILED : RunStatus.OK)
+                                .message(fail ? "boom: singular matrix" : null)
+                                .estimateClass(fail ? null : GraphClass.CPDAG)
+                                .scoredAgainst(fail ? null : GraphClass.CPDAG).metrics(m)
+                                .timings(new Timings(fail ? null : 0.01 * Integer.parseInt(nodes), null, null, 10L, 0L))
+                                .build());
                     }
                     int ok = shd.size();
-                    rows.add(new AggregateRow(s, c, c.equals("broken") ? "empty" : "learner-" + c, "shd", ok, 2 - ok, 0,
-                            meanOnly(shd)));
-                    rows.add(new AggregateRow(s, c, c.equals("broken") ? "empty" : "learner-" + c, "seconds", ok,
-                            2 - ok, 0, meanOnly(ok == 0 ? List.of() : List.of(0.01 * Integer.parseInt(nodes)))));
+                    rows.add(AggregateRow.builder().setting(s).configurationId(c)
+                            .learnerId(c.equals("broken") ? "empty" : "learner-" + c).metric("shd").okRuns(ok)
+                            .failedRuns(2 - ok).skippedRuns(0).summary(meanOnly(shd)).build());
+                    rows.add(AggregateRow.builder().setting(s).configurationId(c)
+                            .learnerId(c.equals("broken") ? "empty" : "learner-" + c).metric("seconds").okRuns(ok)
+                            .failedRuns(2 - ok).skippedRuns(0)
+                            .summary(meanOnly(ok == 0 ? List.of() : List.of(0.01 * Integer.parseInt(nodes))))
+                            .build());
                 }
             }
         }
         Setting s = Setting.of("nodes", "10", "samples", "100");
         List<ComparisonRow> comparisons = List.of(
-                new ComparisonRow(s, "shd", "beta", "alpha", 2, 2.0, 1.5, 2.5, 0.5, 0.5, 0, 0, 2));
-        List<RankingResult> rankings = List.of(new RankingResult("shd", List.of("alpha", "beta"), List.of(1.0, 2.0),
-                4, 0, 4.0, 1, 0.0455, 0.05, 0.98));
+                ComparisonRow.builder().setting(s).metric("shd").configurationId("beta").referenceId("alpha")
+                        .pairs(2).meanDifference(2.0).low(1.5).high(2.5).pValue(0.5).pHolm(0.5).wins(0).ties(0)
+                        .losses(2).build());
+        List<RankingResult> rankings = List.of(RankingResult.builder().metric("shd")
+                .configurations(List.of("alpha", "beta")).meanRanks(List.of(1.0, 2.0)).settingsUsed(4)
+                .settingsDropped(0).friedmanChiSquare(4.0).degreesOfFreedom(1).friedmanPValue(0.0455).alpha(0.05)
+                .criticalDifference(0.98).build());
         List<String> names = List.of("A", "B", "C");
         Graph truth = Graph.builder(names).addDirected(0, 1).addDirected(1, 2).freeze();
         Graph estimate = Graph.builder(names).addUndirected(0, 1).addDirected(0, 2).freeze();

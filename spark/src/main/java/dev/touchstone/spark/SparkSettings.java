@@ -1,6 +1,6 @@
 package dev.touchstone.spark;
 
-import dev.touchstone.harness.cli.Main;
+import dev.touchstone.harness.execution.EngineProvider;
 import org.apache.spark.SparkConf;
 
 import java.net.URISyntaxException;
@@ -89,12 +89,13 @@ final class SparkSettings {
 
     /**
      * The jar files holding Touchstone's code on the driver: the harness's (touchstone.jar,
-     * with its libraries) and this module's. Class folders (as in the build's own tests) are
+     * with its libraries), found from the engine seam this module implements rather than from
+     * the command line's classes, and this module's. Class folders (as in the build's own tests) are
      * left out: Spark ships jar files only.
      */
     static List<String> codeJars() {
         List<String> jars = new ArrayList<>();
-        for (Class<?> c : List.of(Main.class, SparkSettings.class)) {
+        for (Class<?> c : List.of(EngineProvider.class, SparkSettings.class)) {
             CodeSource source = c.getProtectionDomain().getCodeSource();
             if (source == null) {
                 continue;

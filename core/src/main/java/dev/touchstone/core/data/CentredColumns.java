@@ -18,15 +18,13 @@ package dev.touchstone.core.data;
  * can therefore take a decision from these values that is exactly the decision it would
  * take from the matrix.
  *
- * <p>{@link #correlationTile} packs the columns of the tile into rows (Goto and van de Geijn
- * 2008, "Anatomy of high-performance matrix multiplication", ACM TOMS 34(3)) and sweeps them
- * with the same loop shape as {@link CrossProduct}, which C2 vectorises. Immutable and
- * thread-safe; the tile method writes only into the caller's arrays.
+ * <p>Tiles of pairs go through a {@link TileWorker}: a register-blocked kernel on the Vector
+ * API when the JVM has its incubator module, a plain blocked loop otherwise (see
+ * {@link TileKernel}; Goto and van de Geijn 2008, "Anatomy of high-performance matrix
+ * multiplication", ACM TOMS 34(3)). Both keep the summation order above, so the choice never
+ * changes a value. Immutable and thread-safe; a worker holds scratch and serves one thread.
  */
 public final class CentredColumns {
-
-    /** Rows per panel in a tile: with 256 columns a panel of 512 kB stays in the level-2 cache. */
-    private static final int ROW_PANEL = CrossProduct.ROW_PANEL;
 
     private final double[][] columns;
     private final double[] sd;
@@ -80,74 +78,61 @@ public final class CentredColumns {
         return v / (sd[i] * sd[j]);
     }
 
+    /** A new worker for tiles of correlations, with its own scratch; use one per thread. */
+    public TileWorker tileWorker() {
+        return new TileWorker(TileKernel.create());
+    }
+
+    /** A worker on a given kernel, so that tests can check each kernel. */
+    TileWorker tileWorker(TileKernel kernel) {
+        return new TileWorker(kernel);
+    }
+
     /**
-     * The correlations of the columns {@code [i0, i1)} with the columns {@code [j0, j1)}:
-     * {@code out[(i − i0)·(j1 − j0) + (j − j0)]}, 1 where i = j. {@code panel} is scratch of at
-     * least {@code min(n, 256)} rows of {@code j1 − j0} entries, and {@code sums} of
-     * {@code (i1 − i0)·(j1 − j0)} entries (both reused between calls by one thread).
+     * Which tile kernel {@link #tileWorker()} uses in this JVM: {@code "vector-N"} (the Vector
+     * API with N-bit vectors, when the JVM runs with {@code --add-modules jdk.incubator.vector})
+     * or {@code "blocked-loop"}.
      */
-    public void correlationTile(int i0, int i1, int j0, int j1, double[][] panel, double[] sums, double[] out) {
-        int width = j1 - j0;
-        int cells = (i1 - i0) * width;
-        java.util.Arrays.fill(sums, 0, cells, 0.0);
-        for (int pc = 0; pc < rows; pc += ROW_PANEL) {
-            int pe = Math.min(rows, pc + ROW_PANEL);
-            for (int j = j0; j < j1; j++) {
-                double[] col = columns[j];
-                int jj = j - j0;
-                for (int r = pc; r < pe; r++) {
-                    panel[r - pc][jj] = col[r];
+    public static String tileKernel() {
+        return TileKernel.vectorAvailable() ? "vector-" + VectorTileKernel.vectorBits() : "blocked-loop";
+    }
+
+    /**
+     * Computes tiles of correlations of these columns with a {@link TileKernel} (the Vector API's
+     * register-blocked one when the JVM has its module, the plain blocked loop otherwise; both
+     * give bitwise the same values). Holds scratch, so one per thread.
+     */
+    public final class TileWorker {
+        private final TileKernel kernel;
+        private double[] sums = new double[0];
+
+        private TileWorker(TileKernel kernel) {
+            this.kernel = kernel;
+        }
+
+        /**
+         * The correlations of the columns {@code [i0, i1)} with the columns {@code [j0, j1)}:
+         * {@code out[(i − i0)·(j1 − j0) + (j − j0)]}, 1 where i = j.
+         */
+        public void correlations(int i0, int i1, int j0, int j1, double[] out) {
+            int width = j1 - j0;
+            int cells = (i1 - i0) * width;
+            if (sums.length < cells) {
+                sums = new double[cells];
+            }
+            kernel.crossProducts(columns, rows, i0, i1, j0, j1, sums);
+            for (int i = i0; i < i1; i++) {
+                int row = (i - i0) * width;
+                for (int j = j0; j < j1; j++) {
+                    double v = sums[row + j - j0] / divisor;
+                    out[row + j - j0] = i == j ? 1.0 : v / (sd[i] * sd[j]);
                 }
             }
-            for (int i = i0; i < i1; i++) {
-                accumulate(columns[i], panel, pc, pe, sums, (i - i0) * width, width);
-            }
-        }
-        for (int i = i0; i < i1; i++) {
-            int row = (i - i0) * width;
-            for (int j = j0; j < j1; j++) {
-                double v = sums[row + j - j0] / divisor;
-                out[row + j - j0] = i == j ? 1.0 : v / (sd[i] * sd[j]);
-            }
         }
     }
 
-    /**
-     * Adds rows [pc, pe) of column a times the packed panel into {@code c[offset … offset + width)},
-     * in {@link CrossProduct}'s order: four rows at once, their products summed left to right.
-     */
-    private static void accumulate(double[] a, double[][] panel, int pc, int pe, double[] c, int offset, int width) {
-        int r = pc;
-        for (; r + 4 <= pe; r += 4) {
-            double[] x0 = panel[r - pc];
-            double[] x1 = panel[r - pc + 1];
-            double[] x2 = panel[r - pc + 2];
-            double[] x3 = panel[r - pc + 3];
-            double a0 = a[r], a1 = a[r + 1], a2 = a[r + 2], a3 = a[r + 3];
-            for (int j = 0; j < width; j++) {
-                c[offset + j] += a0 * x0[j] + a1 * x1[j] + a2 * x2[j] + a3 * x3[j];
-            }
-        }
-        for (; r < pe; r++) {
-            double[] x0 = panel[r - pc];
-            double a0 = a[r];
-            for (int j = 0; j < width; j++) {
-                c[offset + j] += a0 * x0[j];
-            }
-        }
-    }
-
-    /** The sum of a[r]·b[r] in {@link CrossProduct}'s order (see {@link #accumulate}). */
+    /** The sum of a[r]·b[r] in {@link CrossProduct}'s order. */
     private static double crossProduct(double[] a, double[] b) {
-        int n = a.length;
-        double c = 0;
-        int r = 0;
-        for (; r + 4 <= n; r += 4) {
-            c += a[r] * b[r] + a[r + 1] * b[r + 1] + a[r + 2] * b[r + 2] + a[r + 3] * b[r + 3];
-        }
-        for (; r < n; r++) {
-            c += a[r] * b[r];
-        }
-        return c;
+        return TileKernel.crossProduct(a, b, 0, a.length, 0.0);
     }
 }

@@ -7,6 +7,7 @@ import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 /**
  * The pairwise and tiled correlations of {@link CentredColumns} against the matrix of
@@ -44,11 +45,51 @@ class CentredColumnsTest {
     }
 
     @Test
-    @DisplayName("pairwise and tiled correlations are bitwise those of the correlation matrix: n below, at and above a 256-row panel, n mod 4 = 0…3, missing cells, a discrete column")
-    void bitwiseEqualToTheMatrix() {
+    @DisplayName("plain blocked kernel: pairwise and tiled correlations are bitwise those of the correlation matrix: n below, at and above a 256-row panel, n mod 4 = 0…3, missing cells, a discrete column")
+    void blockedKernelBitwiseEqualToTheMatrix() {
+        bitwiseEqualToTheMatrix(new BlockedTileKernel());
+    }
+
+    @Test
+    @DisplayName("Vector API kernel: the same bitwise equality, tiles with full strips, partial strips and row counts not a multiple of 4")
+    void vectorKernelBitwiseEqualToTheMatrix() {
+        assumeTrue(TileKernel.vectorAvailable(), "vector kernel skipped: the JVM runs without --add-modules jdk.incubator.vector");
+        bitwiseEqualToTheMatrix(new VectorTileKernel());
+    }
+
+    @Test
+    @DisplayName("one worker of each kernel reused over tiles of different shapes in one block of 256 columns gives the matrix's bits (scratch reuse)")
+    void workersReusedOverTiles() {
+        DataSet d = data(530, 300, 41, true);
+        CovarianceMatrix corr = d.covariance().correlation();
+        CentredColumns c = CentredColumns.of(d);
+        java.util.List<TileKernel> kernels = new java.util.ArrayList<>(java.util.List.of(new BlockedTileKernel()));
+        if (TileKernel.vectorAvailable()) {
+            kernels.add(new VectorTileKernel());
+        }
+        int[][] tiles = {{0, 128, 0, 256}, {128, 256, 0, 256}, {5, 38, 256, 300}, {0, 3, 17, 18}, {250, 299, 40, 296}};
+        for (TileKernel kernel : kernels) {
+            CentredColumns.TileWorker w = c.tileWorker(kernel);
+            for (int[] t : tiles) {
+                double[] out = new double[(t[1] - t[0]) * (t[3] - t[2])];
+                w.correlations(t[0], t[1], t[2], t[3], out);
+                for (int i = t[0]; i < t[1]; i++) {
+                    for (int j = t[2]; j < t[3]; j++) {
+                        assertEquals(Double.doubleToRawLongBits(corr.get(i, j)),
+                                Double.doubleToRawLongBits(out[(i - t[0]) * (t[3] - t[2]) + j - t[2]]),
+                                kernel.getClass().getSimpleName() + " pair " + i + "," + j);
+                    }
+                }
+            }
+        }
+    }
+
+    private static void bitwiseEqualToTheMatrix(TileKernel kernel) {
         int[] sizes = {3, 7, 64, 255, 256, 257, 530, 1001};
         int checked = 0;
         for (int t = 0; t < sizes.length; t++) {
+            // p up to 54: with i0 = 1 and j0 = 2 the tiles have 4-row blocks and left-over rows, and
+            // (for 512- or 256-bit vectors) full strips of 16 or 8 columns and left-over columns.
             int p = 5 + 7 * t;
             DataSet d = data(sizes[t], p, 900 + t, t % 2 == 1);
             CovarianceMatrix corr = d.covariance().correlation();
@@ -58,17 +99,15 @@ class CentredColumnsTest {
             int i1 = p - 1;
             int j0 = 2;
             int j1 = p;
-            double[][] panel = new double[256][j1 - j0];
-            double[] sums = new double[(i1 - i0) * (j1 - j0)];
-            double[] tile = new double[sums.length];
-            c.correlationTile(i0, i1, j0, j1, panel, sums, tile);
+            double[] tile = new double[(i1 - i0) * (j1 - j0)];
+            c.tileWorker(kernel).correlations(i0, i1, j0, j1, tile);
             for (int i = 0; i < p; i++) {
                 for (int j = 0; j < p; j++) {
                     long expected = Double.doubleToRawLongBits(corr.get(i, j));
                     assertEquals(expected, Double.doubleToRawLongBits(c.correlation(i, j)), "n " + sizes[t] + " pair " + i + "," + j);
                     if (i >= i0 && i < i1 && j >= j0 && j < j1) {
                         assertEquals(expected, Double.doubleToRawLongBits(tile[(i - i0) * (j1 - j0) + j - j0]),
-                                "tile, n " + sizes[t] + " pair " + i + "," + j);
+                                kernel.getClass().getSimpleName() + " tile, n " + sizes[t] + " pair " + i + "," + j);
                         checked++;
                     }
                 }

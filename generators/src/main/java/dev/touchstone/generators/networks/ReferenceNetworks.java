@@ -14,7 +14,7 @@ import java.util.List;
  * <li>{@code chest-clinic}: the "Asia" network of Lauritzen and Spiegelhalter (1988,
  *     "Local computations with probabilities on graphical structures and their application
  *     to expert systems", JRSS B 50), 8 binary variables, with the published
- *     probabilities (as reproduced in checks.md, from memory). Categories are
+ *     probabilities (from memory). Categories are
  *     {@code no, yes}.</li>
  * <li>{@code sprinkler}: the structure of Pearl's sprinkler example (Pearl 2000,
  *     Causality, ch. 1). The conditional tables are our own and illustrative only: the

@@ -92,7 +92,7 @@ class StructureFitTest {
                 assertEquals((counts[c][j] + 1) / (total + 2), table[c][j], 1e-12);
             }
         }
-        // Published P(dysp = yes | either, bronc), categories no/yes, from checks.md (from memory).
+        // Published P(dysp = yes | either, bronc), categories no/yes, (from memory).
         double[][] published = {{0.1, 0.8}, {0.7, 0.9}};
         int either = parents.indexOf("either");
         for (int e = 0; e < 2; e++) {

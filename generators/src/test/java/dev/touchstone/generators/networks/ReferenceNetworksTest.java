@@ -16,7 +16,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class ReferenceNetworksTest {
 
     @Test
-    @DisplayName("chest clinic: marginals of 200,000 rows within 4 SE of the published ones (Lauritzen and Spiegelhalter 1988, via checks.md)")
+    @DisplayName("chest clinic: marginals of 200,000 rows within 4 SE of the published ones (Lauritzen and Spiegelhalter 1988, from memory)")
     void chestClinicMarginals() {
         ReferenceNetwork net = ReferenceNetworks.byId("chest-clinic");
         Map<String, Double> published = new LinkedHashMap<>();

@@ -11,28 +11,25 @@ import dev.touchstone.generators.fit.Perturbation;
 import dev.touchstone.generators.fit.StructureFit;
 import dev.touchstone.harness.execution.LocalExecutor;
 import dev.touchstone.harness.execution.MetricsScorer;
+import dev.touchstone.harness.execution.PerformedRun;
 import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.execution.Replicate;
+import dev.touchstone.harness.execution.RunBatch;
 import dev.touchstone.harness.execution.RunPerformer;
 import dev.touchstone.harness.execution.SettingLayout;
 import dev.touchstone.harness.execution.Simulator;
-import dev.touchstone.harness.study.ComponentSpec;
 import dev.touchstone.harness.study.LearnerConfig;
-import dev.touchstone.harness.study.Limits;
-import dev.touchstone.harness.study.Plan;
 import dev.touchstone.harness.study.ReplicateSeeds;
 import dev.touchstone.harness.study.RunDefinition;
 import dev.touchstone.harness.study.SampleSize;
-import dev.touchstone.harness.study.Study;
 import dev.touchstone.harness.study.TruthSetting;
-import dev.touchstone.metrics.results.RunResult;
+import dev.touchstone.metrics.results.Setting;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * Calibrates learners to one data set. The truth DAG (given, or learned by the caller) is
@@ -43,9 +40,10 @@ import java.util.concurrent.ConcurrentHashMap;
  * {@link RunPerformer} and {@link MetricsScorer}); and every learner runs on
  * {@code bootstrap} resamples (rows drawn with replacement, Efron 1979) of the real data.
  *
- * <p>All of it goes through the study harness's {@link LocalExecutor}: one plan of runs,
- * worker threads, per-run deadlines, progress. Seeds: variant k from
- * {@code Seeds.derive(seed, "variant", k)}; replicates and resamples from the runs'
+ * <p>All of it goes through the study harness's execution step ({@link RunBatch} on a
+ * {@link LocalExecutor}): one list of runs, worker threads, per-run deadlines, progress; the
+ * results, with the estimates the learners returned, are kept in memory, as no study or
+ * journal is involved. Seeds: variant k from {@code Seeds.derive(seed, "variant", k)}; replicates and resamples from the runs'
  * {@link ReplicateSeeds}; learners from the runs' coordinates. So results are the same for
  * any number of threads. Cost: (replicates × sizes + bootstrap) × learners runs, plus one
  * re-fit per variant.
@@ -56,6 +54,8 @@ public final class Calibration {
     public static final String FITTED = "fitted";
     /** The truth-setting name of bootstrap resamples. */
     public static final String BOOTSTRAP = "bootstrap";
+    /** The one coordinate of a calibration's truth settings: which truth, or the bootstrap. */
+    private static final String TRUTH = "truth";
 
     private Calibration() {
     }
@@ -78,21 +78,16 @@ public final class Calibration {
                     Seeds.derive(settings.seed(), "variant", k)));
         }
         List<TruthSetting> settingsList = new ArrayList<>();
-        List<String> kinds = new ArrayList<>();
         for (int t = 0; t < truths.size(); t++) {
             settingsList.add(setting(t, truths.get(t).name()));
-            kinds.add(truths.get(t).name());
         }
         TruthSetting boot = setting(truths.size(), BOOTSTRAP);
         settingsList.add(boot);
-        kinds.add(BOOTSTRAP);
 
-        Map<Long, Graph> estimates = new ConcurrentHashMap<>();
         List<LearnerConfig> configs = new ArrayList<>();
         for (int i = 0; i < settings.learners().size(); i++) {
             CalibrationSettings.Choice c = settings.learners().get(i);
-            configs.add(new LearnerConfig(i, c.id(), new RecordingLearner(c.learner(), estimates), c.values(),
-                    Map.of(), ""));
+            configs.add(new LearnerConfig(i, c.id(), c.learner(), c.values()));
         }
         List<RunDefinition> runs = new ArrayList<>();
         int largest = 0;
@@ -103,53 +98,53 @@ public final class Calibration {
             TruthSetting t = settingsList.get(r % truths.size());
             for (int n : settings.samples()) {
                 for (LearnerConfig c : configs) {
-                    runs.add(new RunDefinition(runs.size(), t, r, SampleSize.of(n), c, settings.seed(),
-                            CalibrationSettings.METRICS, settings.limit()));
+                    runs.add(run(runs.size(), t, r, SampleSize.of(n), c, settings).metrics(CalibrationSettings.METRICS)
+                            .build());
                 }
             }
         }
         for (int b = 0; b < settings.bootstrap(); b++) {
             for (LearnerConfig c : configs) {
-                runs.add(new RunDefinition(runs.size(), boot, b, SampleSize.of(data.rows()), c, settings.seed(),
-                        List.of(), settings.limit()));
+                runs.add(run(runs.size(), boot, b, SampleSize.of(data.rows()), c, settings).build());
             }
         }
-        List<SampleSize> sizes = new ArrayList<>();
-        for (int n : settings.samples()) {
-            sizes.add(SampleSize.of(n));
-        }
-        Study study = new Study("calibrate", "", settings.seed(), settings.replicates(),
-                List.of(List.of(new ComponentSpec("truth", "kind", kinds, Map.of()))), sizes, List.of(),
-                CalibrationSettings.METRICS, new Limits(settings.limit(), Limits.DEFAULT_MAX_RUNS), null, List.of(),
-                null);
-        Plan plan = new Plan(study, settingsList, configs, runs);
-        RunPerformer performer = new RunPerformer(new MetricsScorer(), new SettingLayout(plan));
+        RunPerformer performer = new RunPerformer(new MetricsScorer(), Calibration::coordinates);
         Simulator simulator = simulator(truths, fitted.dag(), data);
-        Map<String, Integer> indexByKey = new HashMap<>();
-        for (RunDefinition r : runs) {
-            indexByKey.put(r.key(), r.index());
-        }
-        RunResult[] results = new RunResult[runs.size()];
+        PerformedRun[] performed = new PerformedRun[runs.size()];
         progress.start(runs.size(), 0);
-        new LocalExecutor(settings.threads(), simulator, performer).execute(runs, Math.max(largest, data.rows()),
-                performed -> {
-                    var result = performed.result();
-                    results[indexByKey.get(result.key())] = result;
-                    progress.finished(result);
+        RunBatch.execute(new LocalExecutor(settings.threads(), simulator, performer), runs,
+                Math.max(largest, data.rows()), (run, done) -> {
+                    performed[run.index()] = done;
+                    progress.finished(done.result());
                 });
         progress.end();
         List<CalibrationOutcome.Run> done = new ArrayList<>();
         for (RunDefinition r : runs) {
             boolean isBoot = r.truth().index() == truths.size();
             done.add(new CalibrationOutcome.Run(isBoot ? null : truths.get(r.truth().index()), r.replicate(),
-                    r.sample().intRows(), r.config().entryId(), results[r.index()],
-                    estimates.get(r.learnerSeed())));
+                    r.sample().intRows(), r.config().entryId(), performed[r.index()]));
         }
-        return new CalibrationOutcome(data, fitted, truths, FitDiagnostics.of(fitted), settings, done);
+        return new CalibrationOutcome(data, new CalibrationOutcome.Fit(fitted, FitDiagnostics.of(fitted)), truths,
+                settings, done);
+    }
+
+    /** A run of the calibration but for its metrics (none by default). */
+    private static RunDefinition.Builder run(int index, TruthSetting truth, int replicate, SampleSize sample,
+                                             LearnerConfig config, CalibrationSettings settings) {
+        return RunDefinition.builder().index(index).truth(truth).replicate(replicate).sample(sample).config(config)
+                .studySeed(settings.seed()).limit(settings.limit());
+    }
+
+    /** A run's setting: the truth it was drawn from (its name, or {@value #BOOTSTRAP}) and its sample size. */
+    private static Setting coordinates(RunDefinition run) {
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put(TRUTH, run.truth().choices().get(0).kind());
+        m.put(SettingLayout.SAMPLES, run.sample().word());
+        return new Setting(m);
     }
 
     private static TruthSetting setting(int index, String name) {
-        return new TruthSetting(index, List.of(new TruthSetting.Choice("truth", name, ParameterValues.none(),
+        return new TruthSetting(index, List.of(new TruthSetting.Choice(TRUTH, name, ParameterValues.none(),
                 Map.of())));
     }
 

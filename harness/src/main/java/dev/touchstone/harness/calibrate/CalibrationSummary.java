@@ -72,8 +72,9 @@ public final class CalibrationSummary {
                 double[] all = values(o, learner, metric, at, false);
                 double[] fitted = values(o, learner, metric, at, true);
                 int notOk = count(o, learner, at, false);
-                expectations.add(new CalibrationView.Expectation(learner, metric, mean(all), spread(all),
-                        mean(fitted), count(o, learner, at, true), notOk));
+                expectations.add(new CalibrationView.Expectation(learner, metric,
+                        new CalibrationView.Means(mean(all), mean(fitted)), spread(all),
+                        new CalibrationView.Replicates(count(o, learner, at, true), notOk)));
                 for (int n : sorted(o.settings().samples())) {
                     double[] v = values(o, learner, metric, n, false);
                     curve.add(new CalibrationView.SizePoint(learner, metric, n, mean(v), spread(v)));
@@ -96,9 +97,10 @@ public final class CalibrationSummary {
         for (FittedTruth t : o.truths()) {
             truths.add(t.name() + ": " + t.dag().edgeCount() + " edges; " + t.description());
         }
-        return new CalibrationView(title, dataLines, truths, assumptions(o), warnings, o.data().rows(), at, learners,
-                expectations,
-                curve, TARGET, edges(o, learners, at), checks(o.diagnostics()), settingsLines(o));
+        return CalibrationView.builder().title(title).dataLines(dataLines).truthLines(truths)
+                .assumptions(assumptions(o)).warnings(warnings).analystRows(o.data().rows()).expectedAt(at)
+                .learners(learners).expectations(expectations).curve(curve).target(TARGET)
+                .edges(edges(o, learners, at)).checks(checks(o.diagnostics())).settings(settingsLines(o)).build();
     }
 
     private static List<String> assumptions(CalibrationOutcome o) {
@@ -151,7 +153,8 @@ public final class CalibrationSummary {
         List<CalibrationView.Check> out = new ArrayList<>();
         for (FitDiagnostics.Check c : checks) {
             out.add(new CalibrationView.Check(c.name(), c.continuous() ? "continuous" : "discrete", c.rows(),
-                    c.missingRate(), c.skewness(), c.excessKurtosis(), c.normalityP(), c.nonlinearityP()));
+                    c.missingRate(), new CalibrationView.Residuals(c.skewness(), c.excessKurtosis(), c.normalityP(),
+                    c.nonlinearityP())));
         }
         return out;
     }
@@ -194,9 +197,8 @@ public final class CalibrationSummary {
             for (Edge e : truth.edges()) {
                 int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
                 int to = e.other(from);
-                out.add(new CalibrationView.EdgeRow(learner, truth.name(from), truth.name(to), true,
-                        adjacent(simulated, from, to), directed(simulated, from, to), adjacent(boot, from, to),
-                        directed(boot, from, to)));
+                out.add(new CalibrationView.EdgeRow(learner, truth.name(from), truth.name(to),
+                        frequencies(simulated, from, to), frequencies(boot, from, to)));
             }
             for (int a = 0; a < p; a++) {
                 for (int b = a + 1; b < p; b++) {
@@ -210,12 +212,16 @@ public final class CalibrationSummary {
                         int from = ba != null && ab != null && ba > ab ? b : a;
                         int to = from == a ? b : a;
                         out.add(new CalibrationView.EdgeRow(learner, data.variable(from).name(),
-                                data.variable(to).name(), false, null, null, f, directed(boot, from, to)));
+                                data.variable(to).name(), null, frequencies(boot, from, to)));
                     }
                 }
             }
         }
         return out;
+    }
+
+    private static CalibrationView.Frequencies frequencies(List<Graph> graphs, int from, int to) {
+        return new CalibrationView.Frequencies(adjacent(graphs, from, to), directed(graphs, from, to));
     }
 
     private static Double adjacent(List<Graph> graphs, int a, int b) {

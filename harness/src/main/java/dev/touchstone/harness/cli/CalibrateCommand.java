@@ -153,8 +153,8 @@ final class CalibrateCommand implements Callable<Integer> {
             }
         }
         once("--samples", sizes);
-        CalibrationSettings settings = new CalibrationSettings(choices, sizes, replicates, variants, bootstrap, seed.value(),
-                n, limit);
+        CalibrationSettings settings = CalibrationSettings.builder(choices, sizes).replicates(replicates)
+                .variants(variants).bootstrap(bootstrap).seed(seed.value()).threads(n).limit(limit).build();
         err.print(read.describeKinds());
         Graph truth;
         List<String> truthLines = new ArrayList<>();
@@ -212,7 +212,7 @@ final class CalibrateCommand implements Callable<Integer> {
                         e.learner(), view.expectedAt(), view.expectedAt() == view.analystRows() ? " (your size)"
                                 : String.format(Locale.ROOT, " (nearest to your %,d)", view.analystRows()),
                         e.metric(), Numbers.format(e.spread().median()), Numbers.format(e.spread().p10()),
-                        Numbers.format(e.spread().p90()), Numbers.format(e.mean()));
+                        Numbers.format(e.spread().p90()), Numbers.format(e.means().allTruths()));
             }
         }
         for (String answer : CalibrationReport.answers(view)) {

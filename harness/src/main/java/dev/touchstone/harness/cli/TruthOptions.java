@@ -97,8 +97,7 @@ final class TruthOptions {
                 throw new UsageException("--set: " + ex.getMessage(), ex);
             }
             // the same choice a study's expansion makes (fingerprint and locations), so seeds agree with a study's
-            choices.add(new TruthSetting.Choice(s.name(), k.name(), values, written,
-                    catalog.fingerprint(s.name(), k.name(), values), catalog.locations(s.name(), k.name())));
+            choices.add(catalog.choice(s.name(), k.name(), values, written));
         }
         TruthSetting t = new TruthSetting(0, choices);
         try {

@@ -4,18 +4,15 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import dev.touchstone.harness.io.AtomicFiles;
+import dev.touchstone.harness.io.Sha256;
 import dev.touchstone.metrics.results.RunStatus;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -43,17 +40,15 @@ import java.util.TreeMap;
  * a digest pass over the touched files (at most about 12 MB for a 10,000-run study), against
  * decoding every journal line into result records.
  *
- * @param plan           {@code Plan.hash()}: a hash of every run key, in order
- * @param study          hash of the normalised study text ({@code study.yaml})
- * @param versions       hash of the versions the finishing session recorded
+ * @param hashes         what the finishing session ran: plan, study text and versions
  * @param versionChanges whether kept runs were made with other versions than those (a resume
  *                       with the same versions must then still be refused unless accepted)
  * @param counts         runs by status word, and {@code total}
  * @param files          file name (relative to the folder) → {@code BYTES:SHA256@MILLIS} (size,
  *                       digest, modification time in milliseconds)
  */
-public record FinishedIndex(String plan, String study, String versions, boolean versionChanges,
-                            Map<String, Integer> counts, Map<String, String> files) {
+public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, Integer> counts,
+                            Map<String, String> files) {
 
     /** The marker's file name in a study's output folder. */
     public static final String FILE_NAME = "finished.json";
@@ -65,19 +60,31 @@ public record FinishedIndex(String plan, String study, String versions, boolean 
         files = java.util.Collections.unmodifiableMap(new TreeMap<>(files));
     }
 
-    /** A hash of a session's versions: the tool's and every learner's, in id order. */
-    public static String versionsHash(RunVersions v) {
-        return dev.touchstone.harness.study.Canonical.hash(v.tool() + "\n" + new TreeMap<>(v.learners()));
+    /**
+     * What a session runs, as the marker names it.
+     *
+     * @param plan     {@code Plan.hash()}: a hash of every run key, in order
+     * @param study    hash of the normalised study text ({@code study.yaml})
+     * @param versions hash of the versions the session records: the tool's and every learner's, in id order
+     */
+    public record Hashes(String plan, String study, String versions) {
+
+        /** The hashes of a plan, its normalised study text and the session's versions. */
+        public static Hashes of(dev.touchstone.harness.study.Plan plan, String studyText, RunVersions versions) {
+            return new Hashes(plan.hash(), dev.touchstone.harness.study.Canonical.hash(studyText),
+                    dev.touchstone.harness.study.Canonical.hash(versions.tool() + "\n"
+                            + new TreeMap<>(versions.learners())));
+        }
     }
 
     /** The marker describing {@code names} in {@code out} as they are now. */
-    static FinishedIndex of(Path out, String plan, String study, String versions, boolean versionChanges,
-                            Map<String, Integer> counts, List<String> names) {
+    static FinishedIndex of(Path out, Hashes hashes, boolean versionChanges, Map<String, Integer> counts,
+                            List<String> names) {
         Map<String, String> files = new TreeMap<>();
         for (String n : names) {
             files.put(n, fingerprint(out.resolve(n)));
         }
-        return new FinishedIndex(plan, study, versions, versionChanges, counts, files);
+        return new FinishedIndex(hashes, versionChanges, counts, files);
     }
 
     /** The runs by status, as the finishing session counted them. */
@@ -108,8 +115,8 @@ public record FinishedIndex(String plan, String study, String versions, boolean 
      * seen). The "strictly older than the marker" rule is the usual guard against a coarse clock:
      * a file rewritten in the same clock tick as the marker keeps its time, so it is digested.
      */
-    public boolean matches(Path out, String planHash, String studyHash, String versionsHash) {
-        if (!plan.equals(planHash) || !study.equals(studyHash) || !versions.equals(versionsHash)) {
+    public boolean matches(Path out, Hashes session) {
+        if (!hashes.equals(session)) {
             return false;
         }
         long markerTime;
@@ -149,7 +156,7 @@ public record FinishedIndex(String plan, String study, String versions, boolean 
         for (String n : names) {
             more.put(n, fingerprint(out.resolve(n)));
         }
-        return new FinishedIndex(plan, study, versions, versionChanges, counts, more);
+        return new FinishedIndex(hashes, versionChanges, counts, more);
     }
 
     /** The marker kept in {@code out}, or null when there is none or it cannot be read (then it is not believed). */
@@ -175,8 +182,8 @@ public record FinishedIndex(String plan, String study, String versions, boolean 
                     || !changes.isBoolean() || files.isEmpty()) {
                 return null;
             }
-            return new FinishedIndex(root.path("plan").asText(), root.path("study").asText(),
-                    root.path("versions").asText(), changes.asBoolean(), counts, files);
+            return new FinishedIndex(new Hashes(root.path("plan").asText(), root.path("study").asText(),
+                    root.path("versions").asText()), changes.asBoolean(), counts, files);
         } catch (IOException e) {
             return null;
         }
@@ -185,9 +192,9 @@ public record FinishedIndex(String plan, String study, String versions, boolean 
     /** Writes the marker into {@code out}, whole or not at all. */
     void write(Path out) {
         ObjectNode root = JSON.createObjectNode();
-        root.put("plan", plan);
-        root.put("study", study);
-        root.put("versions", versions);
+        root.put("plan", hashes.plan());
+        root.put("study", hashes.study());
+        root.put("versions", hashes.versions());
         root.put("version_changes", versionChanges);
         ObjectNode c = root.putObject("counts");
         counts.forEach(c::put);
@@ -241,21 +248,13 @@ public record FinishedIndex(String plan, String study, String versions, boolean 
 
     /** {@code BYTES:SHA256} of a file. */
     static String digest(Path p) {
-        try (InputStream in = Files.newInputStream(p)) {
-            MessageDigest md = MessageDigest.getInstance("SHA-256");
-            byte[] buf = new byte[1 << 16];
-            long size = 0;
-            for (int r; (r = in.read(buf)) > 0; ) {
-                md.update(buf, 0, r);
-                size += r;
-            }
-            return size + ":" + HexFormat.of().formatHex(md.digest());
+        try {
+            Sha256 d = Sha256.start().addFile(p);
+            return d.size() + ":" + d.hex();
         } catch (NoSuchFileException e) {
             throw new UncheckedIOException(e);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + p + ": " + e.getMessage(), e);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is part of every Java platform", e);
         }
     }
 

@@ -144,11 +144,13 @@ public final class JournalCodec {
         Timings timings = new Timings(number(field(t, "seconds"), "seconds"), number(field(t, "cpu_seconds"),
                 "cpu_seconds"), number(field(t, "allocated_mb"), "allocated_mb"),
                 tests == null ? null : tests.longValue(), scores == null ? null : scores.longValue());
-        RunResult r = new RunResult(text(o, "key"), new Setting(setting), field(o, "replicate").asInt(),
-                text(o, "configuration"), text(o, "learner"), params, field(o, "seed").asLong(),
-                RunStatus.parse(text(o, "status")), nullableText(o, "message"),
-                graphClass(nullableText(o, "estimate_class")), graphClass(nullableText(o, "scored_against")),
-                metrics, timings);
+        RunResult r = RunResult.builder().key(text(o, "key")).setting(new Setting(setting))
+                .replicate(field(o, "replicate").asInt()).configurationId(text(o, "configuration"))
+                .learnerId(text(o, "learner")).parameters(params).seed(field(o, "seed").asLong())
+                .status(RunStatus.parse(text(o, "status"))).message(nullableText(o, "message"))
+                .estimateClass(graphClass(nullableText(o, "estimate_class")))
+                .scoredAgainst(graphClass(nullableText(o, "scored_against"))).metrics(metrics).timings(timings)
+                .build();
         RunVersions.Stamp stamp = null;
         if (o.has("tool_version") || o.has("learner_version")) {
             stamp = new RunVersions.Stamp(text(o, "tool_version"), text(o, "learner_version"));

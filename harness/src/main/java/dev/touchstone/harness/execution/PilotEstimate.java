@@ -137,7 +137,8 @@ public final class PilotEstimate {
                     RunDefinition r = firsts.get(pairKey(t, n, c));
                     boolean pilotLimit = studyLimit == null || cap.compareTo(studyLimit) < 0;
                     Duration limit = pilotLimit ? cap : studyLimit;
-                    RunDefinition pilot = new RunDefinition(r.index(), t, 0, n, c, r.studySeed(), r.metrics(), limit);
+                    RunDefinition pilot = r.toBuilder().truth(t).replicate(0).sample(n).config(c).limit(limit)
+                            .build();
                     long r0 = System.nanoTime();
                     RunStatus status = performer.perform(pilot, replicate).status();
                     double took = seconds(System.nanoTime() - r0);

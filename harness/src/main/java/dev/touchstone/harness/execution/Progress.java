@@ -7,7 +7,7 @@ import java.util.Locale;
 
 /**
  * Receives a study's progress: the total, each run as it becomes durable, the end. Live
- * progress and final files are different listeners (style.md); this one only informs
+ * progress and final files are different listeners; this one only informs
  * people. Implementations must be thread-safe ({@link #finished} is called from the
  * journal's writer thread).
  */

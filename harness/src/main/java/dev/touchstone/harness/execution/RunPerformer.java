@@ -42,11 +42,15 @@ public final class RunPerformer {
     private static final ThreadMXBean THREADS = ManagementFactory.getThreadMXBean();
 
     private final Scorer scorer;
-    private final SettingLayout layout;
+    private final RunCoordinates coordinates;
 
-    public RunPerformer(Scorer scorer, SettingLayout layout) {
+    /**
+     * @param scorer      scores estimates against the truth
+     * @param coordinates the setting each result is written with
+     */
+    public RunPerformer(Scorer scorer, RunCoordinates coordinates) {
         this.scorer = scorer;
-        this.layout = layout;
+        this.coordinates = coordinates;
     }
 
     /** A run whose replicate could not be drawn: failed, with the reason. */
@@ -150,11 +154,13 @@ public final class RunPerformer {
 
     private RunResult result(RunDefinition run, RunStatus status, String message, GraphClass estimateClass,
                              GraphClass scoredAgainst, Map<String, Double> metrics, Timings timings) {
-        Setting setting = layout.setting(run);
+        Setting setting = coordinates.setting(run);
         Map<String, String> params = new LinkedHashMap<>();
         run.config().values().asMap().forEach((k, v) -> params.put(k, Canonical.value(v)));
-        return new RunResult(run.key(), setting, run.replicate(), run.config().label(), run.config().use(), params,
-                run.learnerSeed(), status, message, estimateClass, scoredAgainst, metrics, timings);
+        return RunResult.builder().key(run.key()).setting(setting).replicate(run.replicate())
+                .configurationId(run.config().label()).learnerId(run.config().use()).parameters(params)
+                .seed(run.learnerSeed()).status(status).message(message).estimateClass(estimateClass)
+                .scoredAgainst(scoredAgainst).metrics(metrics).timings(timings).build();
     }
 
     private static Timings timings(long t0, long cpu0, long alloc0, long threadId, RunContext context) {

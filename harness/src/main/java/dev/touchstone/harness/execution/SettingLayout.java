@@ -24,7 +24,7 @@ import java.util.Set;
  * its plain name unless another section uses the same one, in which case both are
  * prefixed with their section ({@code model_scale}, {@code missing_scale}).
  */
-public final class SettingLayout {
+public final class SettingLayout implements RunCoordinates {
 
     /** The column of the sample size. */
     public static final String SAMPLES = "samples";
@@ -66,6 +66,7 @@ public final class SettingLayout {
     }
 
     /** The setting of a run. */
+    @Override
     public Setting setting(RunDefinition run) {
         Map<String, String> m = new LinkedHashMap<>();
         TruthSetting t = run.truth();

@@ -1,28 +1,14 @@
 package dev.touchstone.harness.execution;
 
-import dev.touchstone.harness.study.Canonical;
 import dev.touchstone.harness.study.Plan;
-import dev.touchstone.harness.study.RunDefinition;
 import dev.touchstone.harness.study.SampleSize;
 import dev.touchstone.harness.study.StudyWriter;
-import dev.touchstone.metrics.results.RunResult;
 import dev.touchstone.metrics.results.RunStatus;
 
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
-import java.util.AbstractMap;
-import java.util.ArrayList;
-import java.util.HashSet;
-import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
-import java.util.Set;
-import java.util.concurrent.ConcurrentHashMap;
-import java.util.stream.Stream;
 
 /**
  * Runs or resumes an expanded study in an output folder and writes its files:
@@ -117,14 +103,36 @@ public final class StudyRunner {
     }
 
     /**
-     * What a session did: runs in the study, already done, redone because changed, done now, runs by
-     * status, and whether the study was found finished by its {@link FinishedIndex} (then nothing was
-     * read beyond it, nor written).
+     * What a session did: the runs counted ({@link Tally}), runs by status, and whether the study
+     * was found finished by its {@link FinishedIndex} (then nothing was read beyond it, nor written).
      */
-    public record Outcome(int total, int reused, int changed, int performed, Map<RunStatus, Integer> byStatus,
-                          Path out, boolean alreadyFinished) {
-        public Outcome(int total, int reused, int changed, int performed, Map<RunStatus, Integer> byStatus, Path out) {
-            this(total, reused, changed, performed, byStatus, out, false);
+    public record Outcome(Tally runs, Map<RunStatus, Integer> byStatus, Path out, boolean alreadyFinished) {
+
+        /**
+         * The runs of a session.
+         *
+         * @param total     runs in the study
+         * @param reused    runs already done, kept from the journal
+         * @param changed   runs redone because their definition changed
+         * @param performed runs done in this session
+         */
+        public record Tally(int total, int reused, int changed, int performed) {
+        }
+
+        public int total() {
+            return runs.total();
+        }
+
+        public int reused() {
+            return runs.reused();
+        }
+
+        public int changed() {
+            return runs.changed();
+        }
+
+        public int performed() {
+            return runs.performed();
         }
 
         public int count(RunStatus s) {
@@ -132,15 +140,18 @@ public final class StudyRunner {
         }
     }
 
+    /**
+     * Runs or resumes the plan: plan the session against the journal ({@link SessionPlan}), perform
+     * the runs to do ({@link RunBatch}) recording each in the journal ({@link JournalRecorder}), then
+     * write the tables, provenance and the finished marker ({@link StudyOutputs}).
+     */
     public Outcome run(Plan plan, Options options) {
         Path out = options.out();
-        prepareFolder(out, plan.study().name());
+        OutputFolder.prepare(out, plan.study().name());
         Instant started = Instant.now();
         String studyText = StudyWriter.yaml(plan.study());
-        String studyHash = Canonical.hash(studyText);
-        String versionsHash = FinishedIndex.versionsHash(versions);
-        String planHash = plan.hash();
-        Outcome finished = alreadyFinished(plan, out, planHash, studyHash, versionsHash);
+        FinishedIndex.Hashes hashes = FinishedIndex.Hashes.of(plan, studyText, versions);
+        Outcome finished = alreadyFinished(plan, out, hashes);
         if (finished != null) {
             if (options.messages() != null) {
                 options.messages().printf(java.util.Locale.ROOT, "resuming in %s: %,d of %,d runs already done; 0 to do"
@@ -153,12 +164,10 @@ public final class StudyRunner {
             return finished;
         }
 
-        SettingLayout layout = new SettingLayout(plan);
-        Map<Integer, RunResult> results = new ConcurrentHashMap<>();
-        int reused = 0;
-        int changed = 0;
-        List<RunDefinition> todo = new ArrayList<>();
+        SessionPlan session;
         VersionLedger ledger;
+        Provenance running;
+        JournalRecorder recorder;
         try (Journal journal = Journal.open(out.resolve(Journal.FILE_NAME))) {
             Map<String, JournalCodec.Line> existing = journal.existing();
             ledger = VersionLedger.of(plan, existing, versions);
@@ -170,119 +179,38 @@ public final class StudyRunner {
             // files this session is about to change.
             FinishedIndex.remove(out);
             OutputFiles.write(out.resolve(STUDY_FILE), studyText);
-            keepLearnersFile(out);
-            Provenance running = provenance(plan, studyText, options.threads(), started, null, Map.of(), ledger);
+            OutputFolder.keepLearnersFile(out, recipe);
+            running = new Provenance(Provenance.Build.current(),
+                    new Provenance.Study(plan.study().name(), hashes.plan(), hashes.study()),
+                    new Provenance.Session(options.threads(), started, null, Map.of()),
+                    new Provenance.Versions(versions, ledger));
             OutputFiles.write(out.resolve(PROVENANCE_FILE), running.json());
-            Set<String> oldCoordinates = new HashSet<>();
-            for (JournalCodec.Line l : existing.values()) {
-                oldCoordinates.add(l.coordinates());
-            }
-            for (RunDefinition r : plan.runs()) {
-                JournalCodec.Line done = existing.get(r.key());
-                if (done != null) {
-                    results.put(r.index(), done.result());
-                    reused++;
-                } else {
-                    if (oldCoordinates.contains(r.coordinates())) {
-                        changed++;
-                    }
-                    todo.add(r);
-                }
-            }
-            say(options, journal, plan, reused, changed, todo.size());
-            options.progress().start(plan.runs().size(), reused);
-            if (options.shuffle() != null) {
-                dev.touchstone.core.random.Shuffles.shuffle(dev.touchstone.core.random.Seeds.random(options.shuffle()), todo);
-            }
-            RunPerformer performer = new RunPerformer(scorer, layout);
-            RunExecutor executor = engine.executor(options.threads(), simulator, performer);
-            Map<String, Integer> indexByKey = new LinkedHashMap<>();
-            for (RunDefinition r : todo) {
-                indexByKey.put(r.key(), r.index());
-            }
-            executor.execute(todo, largestRows(plan), performed -> {
-                RunResult result = performed.result();
-                int index = indexByKey.get(result.key());
-                RunDefinition def = plan.runs().get(index);
-                RunVersions.Stamp stamp = versions.stamp(def.config().learner().description().id());
-                journal.append(new JournalCodec.Line(index, def.coordinates(), result, stamp), performed.estimate(),
-                        line -> {
-                    results.put(line.run(), line.result());
-                    options.progress().finished(line.result());
-                });
-            });
+            session = SessionPlan.of(plan, existing, options.shuffle());
+            say(options, journal, plan, session);
+            options.progress().start(plan.runs().size(), session.reused());
+            recorder = new JournalRecorder(journal, versions, options.progress(), session.kept());
+            RunExecutor executor = engine.executor(options.threads(), simulator,
+                    new RunPerformer(scorer, new SettingLayout(plan)));
+            RunBatch.execute(executor, session.todo(), largestRows(plan), recorder);
         }
         options.progress().end();
-        if (results.size() != plan.runs().size()) {
-            throw new IllegalStateException("only " + results.size() + " of " + plan.runs().size()
-                    + " runs have results; the journal may be damaged");
-        }
-        List<Map.Entry<Integer, RunResult>> ordered = new ArrayList<>();
-        List<RunResult> list = new ArrayList<>();
-        Map<RunStatus, Integer> byStatus = new LinkedHashMap<>();
-        for (RunDefinition r : plan.runs()) {
-            RunResult res = results.get(r.index());
-            ordered.add(new AbstractMap.SimpleEntry<>(r.index(), res));
-            list.add(res);
-            byStatus.merge(res.status(), 1, Integer::sum);
-        }
-        List<String> structural = new ArrayList<>();
-        for (String m : plan.study().allMetrics()) {
-            if (!Scorer.MEASURED.contains(m)) {
-                structural.add(m);
-            }
-        }
-        SettingCells columns = SettingCells.of(plan, layout);
-        OutputFiles.write(out.resolve(RUNS_FILE), ResultTables.runs(columns, structural, ordered));
-        long statsSeed = dev.touchstone.core.random.Seeds.derive(plan.study().seed(), "statistics");
-        OutputFiles.write(out.resolve(SUMMARY_FILE), ResultTables.summary(columns,
-                aggregator.summarise(list, plan.study().allMetrics(), statsSeed)));
-        var reference = plan.reference();
-        OutputFiles.write(out.resolve(COMPARISONS_FILE), ResultTables.comparisons(columns, reference == null
-                ? List.of() : aggregator.compare(list, plan.study().allMetrics(), reference.label(), statsSeed)));
-        Map<String, Integer> counts = new LinkedHashMap<>();
-        counts.put("total", plan.runs().size());
-        for (RunStatus s : RunStatus.values()) {
-            counts.put(s.word(), byStatus.getOrDefault(s, 0));
-        }
-        counts.put("done_this_session", todo.size());
-        OutputFiles.write(out.resolve(PROVENANCE_FILE), provenance(plan, studyText, options.threads(), started,
-                Instant.now(), counts, ledger).json());
-        List<String> vouched = new ArrayList<>(List.of(Journal.FILE_NAME, Journal.ESTIMATES_FILE, STUDY_FILE,
-                PROVENANCE_FILE, RUNS_FILE, SUMMARY_FILE, COMPARISONS_FILE));
-        vouched.addAll(FinishedIndex.present(out, List.of(LEARNERS_COPY + ".yaml", LEARNERS_COPY + ".json")));
-        FinishedIndex.of(out, planHash, studyHash, versionsHash, !ledger.changes().isEmpty(), counts, vouched)
-                .write(out);
-        return new Outcome(plan.runs().size(), reused, changed, todo.size(), byStatus, out);
+        Map<RunStatus, Integer> byStatus = new StudyOutputs(aggregator).write(out, plan, recorder.inPlanOrder(plan),
+                session, running, new StudyOutputs.Marker(hashes, !ledger.changes().isEmpty()));
+        return new Outcome(new Outcome.Tally(plan.runs().size(), session.reused(), session.changed(),
+                session.todo().size()), byStatus, out, false);
     }
 
     /**
      * The outcome of a session with nothing to do, when the folder's {@link FinishedIndex} matches
      * this plan, study text, versions and learners file; null when the journal must be read.
      */
-    private Outcome alreadyFinished(Plan plan, Path out, String planHash, String studyHash, String versionsHash) {
+    private Outcome alreadyFinished(Plan plan, Path out, FinishedIndex.Hashes hashes) {
         FinishedIndex index = FinishedIndex.read(out);
         if (index == null || index.total() != plan.runs().size() || index.versionChanges() && !acceptVersionChange
-                || !index.matches(out, planHash, studyHash, versionsHash) || !sameLearnersCopy(out)) {
+                || !index.matches(out, hashes) || !OutputFolder.sameLearnersCopy(out, recipe)) {
             return null;
         }
-        return new Outcome(index.total(), index.total(), 0, 0, index.byStatus(), out, true);
-    }
-
-    /**
-     * Whether this session would keep no other learners file than the one kept already. Without
-     * one it keeps none, and the kept copy stays (the run keys already cover every command the plan uses).
-     */
-    private boolean sameLearnersCopy(Path out) {
-        if (recipe == null || recipe.learnersText() == null) {
-            return true;
-        }
-        Path kept = keptLearnersFile(out);
-        try {
-            return kept != null && Files.readString(kept).equals(recipe.learnersText());
-        } catch (IOException e) {
-            return false;
-        }
+        return new Outcome(new Outcome.Tally(index.total(), index.total(), 0, 0), index.byStatus(), out, true);
     }
 
     /** The number of rows each replicate's draw needs: the largest finite sample size, 0 for oracle-only studies. */
@@ -296,7 +224,7 @@ public final class StudyRunner {
         return rows;
     }
 
-    private static void say(Options o, Journal journal, Plan plan, int reused, int changed, int todo) {
+    private static void say(Options o, Journal journal, Plan plan, SessionPlan session) {
         PrintWriter w = o.messages();
         if (w == null) {
             return;
@@ -306,83 +234,20 @@ public final class StudyRunner {
                     + " it was ignored and its run will be redone");
         }
         if (!journal.existing().isEmpty()) {
-            w.printf(java.util.Locale.ROOT, "resuming in %s: %,d of %,d runs already done", o.out(), reused,
+            w.printf(java.util.Locale.ROOT, "resuming in %s: %,d of %,d runs already done", o.out(), session.reused(),
                     plan.runs().size());
-            if (changed > 0) {
-                w.printf(java.util.Locale.ROOT, "; %,d runs whose definition changed will be recomputed", changed);
+            if (session.changed() > 0) {
+                w.printf(java.util.Locale.ROOT, "; %,d runs whose definition changed will be recomputed",
+                        session.changed());
             }
-            w.printf(java.util.Locale.ROOT, "; %,d to do%n", todo);
+            w.printf(java.util.Locale.ROOT, "; %,d to do%n", session.todo().size());
         }
         w.flush();
     }
 
-    private void keepLearnersFile(Path out) {
-        if (recipe == null || recipe.learnersText() == null) {
-            return;
-        }
-        boolean json = recipe.learnersSource().toLowerCase(java.util.Locale.ROOT).endsWith(".json");
-        OutputFiles.write(out.resolve(LEARNERS_COPY + (json ? ".json" : ".yaml")), recipe.learnersText());
-    }
-
     /** The copy of the learners file kept in a study's output folder, or null when there is none. */
     public static Path keptLearnersFile(Path out) {
-        for (String ext : List.of(".yaml", ".json")) {
-            Path p = out.resolve(LEARNERS_COPY + ext);
-            if (Files.isRegularFile(p)) {
-                return p;
-            }
-        }
-        return null;
-    }
-
-    private static void prepareFolder(Path out, String studyName) {
-        try {
-            if (Files.exists(out) && !Files.isDirectory(out)) {
-                throw new OutputFolderException("the output " + out + " exists and is not a folder");
-            }
-            String other = recordedStudyName(out);
-            if (other != null && !other.equals(studyName)) {
-                throw new OutputFolderException("the folder " + out + " holds the journal of another study ('" + other
-                        + "', not '" + studyName + "'); choose another --out");
-            }
-            if (Files.isDirectory(out) && !Files.exists(out.resolve(Journal.FILE_NAME))) {
-                try (Stream<Path> s = Files.list(out)) {
-                    if (s.findAny().isPresent()) {
-                        throw new OutputFolderException("the folder " + out + " is not empty and holds no "
-                                + Journal.FILE_NAME + ", so it is not a study's output; choose another --out");
-                    }
-                }
-            }
-            Files.createDirectories(out);
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot prepare the output folder " + out + ": " + e.getMessage(), e);
-        }
-    }
-
-    /**
-     * The name of the study whose journal a folder holds, from its provenance, or null when
-     * it holds none (or no readable provenance).
-     */
-    static String recordedStudyName(Path out) {
-        Path prov = out.resolve(PROVENANCE_FILE);
-        if (!Files.exists(out.resolve(Journal.FILE_NAME)) || !Files.isRegularFile(prov)) {
-            return null;
-        }
-        try {
-            var node = new com.fasterxml.jackson.databind.ObjectMapper().readTree(prov.toFile()).path("study")
-                    .path("name");
-            return node.isTextual() ? node.asText() : null;
-        } catch (IOException e) {
-            return null;
-        }
-    }
-
-    private Provenance provenance(Plan plan, String studyText, int threads, Instant started, Instant finished,
-                                  Map<String, Integer> counts, VersionLedger ledger) {
-        var v = dev.touchstone.harness.version.VersionInfo.current();
-        return new Provenance(v.version(), v.commit() + (v.dirty() ? "-dirty" : ""), plan.study().name(),
-                plan.hash(), Canonical.hash(studyText), threads, started, finished, counts,
-                new Provenance.Versions(versions, ledger));
+        return OutputFolder.keptLearnersFile(out);
     }
 
     /** Kept runs were made with other versions than this session's, and the change was not accepted. */

@@ -13,32 +13,65 @@ import java.util.List;
  * @param description what the learner declares (id, returns, accepts, parameters, …)
  * @param command     the argument list; no shell is involved
  * @param output      the graph format the command writes
- * @param dir         the folder the learners file is in
- * @param source      the learners file, for messages
- * @param onWorkers   whether the learners file says the command is installed on the workers of
- *                    a cluster engine too (field {@code installed_on_workers}); not part of the
- *                    fingerprint, since it does not change what the command computes
- * @param version     the version the learners file declares (field {@code version}), or null;
- *                    recorded with every run, not part of the fingerprint (a new version of
- *                    the same method keeps its runs' keys, and a resume says what changed)
+ * @param origin      the learners file that declares it
+ * @param installation where the command is installed and which version it is
  */
-public record CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Path dir,
-                          String source, boolean onWorkers, String version) {
+public record CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Origin origin,
+                          Installation installation) {
 
     public CommandSpec {
         command = List.copyOf(command);
+        installation = installation == null ? Installation.LOCAL : installation;
     }
 
-    /** A command with no declared version. */
-    public CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Path dir,
-                       String source, boolean onWorkers) {
-        this(description, command, output, dir, source, onWorkers, null);
+    /** A command installed on this machine only, with no declared version. */
+    public CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Origin origin) {
+        this(description, command, output, origin, Installation.LOCAL);
     }
 
-    /** A command installed on this machine only. */
-    public CommandSpec(LearnerDescription description, List<String> command, OutputFormat output, Path dir,
-                       String source) {
-        this(description, command, output, dir, source, false);
+    /**
+     * The learners file a command is declared in.
+     *
+     * @param dir    the folder the learners file is in ({@code {dir}})
+     * @param source the learners file, for messages
+     */
+    public record Origin(Path dir, String source) {
+    }
+
+    /**
+     * Where a command is installed and which version it is; neither is part of the fingerprint.
+     *
+     * @param onWorkers whether the learners file says the command is installed on the workers of
+     *                  a cluster engine too (field {@code installed_on_workers}); it does not change
+     *                  what the command computes
+     * @param version   the version the learners file declares (field {@code version}), or null;
+     *                  recorded with every run (a new version of the same method keeps its runs'
+     *                  keys, and a resume says what changed)
+     */
+    public record Installation(boolean onWorkers, String version) {
+
+        /** Installed on this machine only, no declared version. */
+        public static final Installation LOCAL = new Installation(false, null);
+    }
+
+    /** The folder the learners file is in. */
+    public Path dir() {
+        return origin.dir();
+    }
+
+    /** The learners file, for messages. */
+    public String source() {
+        return origin.source();
+    }
+
+    /** Whether the command is installed on a cluster engine's workers too. */
+    public boolean onWorkers() {
+        return installation.onWorkers();
+    }
+
+    /** The declared version, or null. */
+    public String version() {
+        return installation.version();
     }
 
     /** The graph formats a command may write (those of docs/formats.md). */

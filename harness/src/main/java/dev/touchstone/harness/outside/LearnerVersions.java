@@ -1,17 +1,13 @@
 package dev.touchstone.harness.outside;
 
 import dev.touchstone.harness.catalog.LearnerCatalog;
+import dev.touchstone.harness.io.Sha256;
 
 import java.io.IOException;
-import java.io.InputStream;
 import java.net.URISyntaxException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.CodeSource;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
@@ -66,9 +62,7 @@ public final class LearnerVersions {
             if (!Files.isRegularFile(jar)) {
                 return "unknown";
             }
-            MessageDigest d = sha256();
-            update(d, jar);
-            return digest(d);
+            return digest(Sha256.start().addFile(jar));
         } catch (URISyntaxException | IllegalArgumentException | IOException e) {
             return "unknown";
         }
@@ -79,16 +73,15 @@ public final class LearnerVersions {
         if (spec.version() != null) {
             return spec.version();
         }
-        MessageDigest d = sha256();
+        Sha256 d = Sha256.start();
         for (String arg : spec.command()) {
-            d.update(arg.getBytes(StandardCharsets.UTF_8));
-            d.update((byte) 0);
+            d.add(arg).add((byte) 0);
             Path file = namedFile(arg, spec.dir());
             if (file != null) {
                 try {
-                    update(d, file);
+                    d.addFile(file);
                 } catch (IOException e) {
-                    d.update("unreadable".getBytes(StandardCharsets.UTF_8));
+                    d.add("unreadable");
                 }
             }
         }
@@ -115,24 +108,7 @@ public final class LearnerVersions {
         }
     }
 
-    private static void update(MessageDigest d, Path file) throws IOException {
-        byte[] buf = new byte[8192];
-        try (InputStream in = Files.newInputStream(file)) {
-            for (int n = in.read(buf); n >= 0; n = in.read(buf)) {
-                d.update(buf, 0, n);
-            }
-        }
-    }
-
-    private static String digest(MessageDigest d) {
-        return "sha256:" + HexFormat.of().formatHex(d.digest()).substring(0, 16);
-    }
-
-    private static MessageDigest sha256() {
-        try {
-            return MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is missing from this Java", e);
-        }
+    private static String digest(Sha256 d) {
+        return "sha256:" + d.hex(8);
     }
 }

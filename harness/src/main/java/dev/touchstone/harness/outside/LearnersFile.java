@@ -213,7 +213,8 @@ public final class LearnersFile {
             }
             version = text(vn).trim();
         }
-        return new CommandSpec(b.build(), command, format, dir, source, onWorkers, version);
+        return new CommandSpec(b.build(), command, format, new CommandSpec.Origin(dir, source),
+                new CommandSpec.Installation(onWorkers, version));
     }
 
     private static ParameterSpec parameter(Node p) {

@@ -51,8 +51,9 @@ public final class Expansion {
             for (int rep = 0; rep < study.replicates(); rep++) {
                 for (SampleSize n : study.samples()) {
                     for (LearnerConfig c : configs) {
-                        runs.add(new RunDefinition(runs.size(), t, rep, n, c, study.seed(), study.allMetrics(),
-                                study.limits().perRun()));
+                        runs.add(RunDefinition.builder().index(runs.size()).truth(t).replicate(rep).sample(n)
+                                .config(c).studySeed(study.seed()).metrics(study.allMetrics())
+                                .limit(study.limits().perRun()).build());
                     }
                 }
             }
@@ -94,8 +95,7 @@ public final class Expansion {
                     throw new StudyException(placeOf(study, "truth", c.section()), where + c.section() + "."
                             + e.parameter(), e.getMessage());
                 }
-                choices.add(new TruthSetting.Choice(c.section(), kindName, values, given,
-                        catalog.fingerprint(c.section(), kindName, values), catalog.locations(c.section(), kindName)));
+                choices.add(catalog.choice(c.section(), kindName, values, given));
             }
         }
         return choices;
@@ -135,8 +135,8 @@ public final class Expansion {
                         varied.put(k, given.get(k));
                     }
                 });
-                LearnerConfig c = new LearnerConfig(out.size(), e.id(), learner, values, varied,
-                        fingerprint(e, learner), e.knowledge());
+                LearnerConfig c = new LearnerConfig(out.size(), e.id(), learner, values,
+                        new LearnerConfig.Details(varied, fingerprint(e, learner), e.knowledge()));
                 LearnerConfig same = byCanonical.putIfAbsent(c.canonical(), c);
                 if (same != null) {
                     problems.add(new StudyException(e.place(), "learners." + e.id(), "the configuration " + c.label()

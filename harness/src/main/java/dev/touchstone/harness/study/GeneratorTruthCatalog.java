@@ -19,15 +19,13 @@ import dev.touchstone.harness.io.FileFormatException;
 import dev.touchstone.harness.io.ModelFile;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.harness.io.GraphFiles;
+import dev.touchstone.harness.io.Sha256;
 
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -98,23 +96,26 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
                 + " new data from it; a relative path is read from the study file's folder",
                 List.of(ParameterSpec.text(GIVEN_FILE, "", "the model file")));
         sections = List.of(
-                new Section(MODEL_FILE, "format", null, MODEL_FILE_FORMAT, GIVEN_FILE,
-                        "A truth read from a model file, used instead of `graph`, `model`, `hidden` and `missing`"
-                                + " (a bare path is enough: `model_file: truths/model.json`).",
-                        List.of(modelFile), List.of(GRAPH, MODEL, HIDDEN, MISSING)),
-                new Section(NETWORK, "name", null, null, "name",
-                        "A built-in reference network with its own graph and parameters, used instead of `graph` and"
-                                + " `model` (a bare name or list of names is enough: `network: sprinkler`).",
-                        networks, List.of(GRAPH, MODEL)),
-                new Section(GRAPH, "family", null, null, null,
-                        "The random graph family the true DAG is drawn from, with its parameters.", families),
-                new Section(MODEL, "kind", null, null, null,
-                        "The structural-equation model that generates data on the graph, with its parameters.", models),
-                new Section(HIDDEN, "kind", HiddenOptions.NONE, HiddenOptions.RANDOM, "count",
-                        "Which variables are hidden from the learners (a bare number means that many chosen at random).",
-                        hidden),
-                new Section(MISSING, "mechanism", MissingnessMechanisms.NONE, null, null,
-                        "How cells of the observed data go missing.", missing));
+                Section.builder(MODEL_FILE, "format").shorthand(MODEL_FILE_FORMAT, GIVEN_FILE)
+                        .meaning("A truth read from a model file, used instead of `graph`, `model`, `hidden` and"
+                                + " `missing` (a bare path is enough: `model_file: truths/model.json`).")
+                        .kinds(List.of(modelFile)).replaces(List.of(GRAPH, MODEL, HIDDEN, MISSING)).build(),
+                Section.builder(NETWORK, "name").shorthand(null, "name")
+                        .meaning("A built-in reference network with its own graph and parameters, used instead of"
+                                + " `graph` and `model` (a bare name or list of names is enough: `network: sprinkler`).")
+                        .kinds(networks).replaces(List.of(GRAPH, MODEL)).build(),
+                Section.builder(GRAPH, "family")
+                        .meaning("The random graph family the true DAG is drawn from, with its parameters.")
+                        .kinds(families).build(),
+                Section.builder(MODEL, "kind")
+                        .meaning("The structural-equation model that generates data on the graph, with its parameters.")
+                        .kinds(models).build(),
+                Section.builder(HIDDEN, "kind").defaultKind(HiddenOptions.NONE).shorthand(HiddenOptions.RANDOM, "count")
+                        .meaning("Which variables are hidden from the learners (a bare number means that many chosen"
+                                + " at random).")
+                        .kinds(hidden).build(),
+                Section.builder(MISSING, "mechanism").defaultKind(MissingnessMechanisms.NONE)
+                        .meaning("How cells of the observed data go missing.").kinds(missing).build());
     }
 
     @Override
@@ -279,12 +280,7 @@ public final class GeneratorTruthCatalog implements TruthCatalog {
     }
 
     private static String digest(byte[] bytes) {
-        try {
-            byte[] d = MessageDigest.getInstance("SHA-256").digest(bytes);
-            return HexFormat.of().formatHex(d, 0, 8);
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is missing from this Java", e);
-        }
+        return Sha256.hex(bytes, 8);
     }
 
     /** The generators' recipe for a truth setting. */

@@ -13,22 +13,51 @@ import java.util.Map;
  * @param entryId the study entry's id
  * @param learner the catalogue learner
  * @param values  all parameter values
- * @param varied  the values of parameters the entry gave several values for (they name the configuration)
- * @param fingerprint what defines the learner beyond its id and parameters (e.g. an external command line); may be empty
- * @param knowledge   the background knowledge its runs receive
+ * @param details what else names or defines the configuration (none for a plain entry)
  */
-public record LearnerConfig(int index, String entryId, Learner learner, ParameterValues values,
-                            Map<String, Object> varied, String fingerprint, KnowledgeSource knowledge) {
+public record LearnerConfig(int index, String entryId, Learner learner, ParameterValues values, Details details) {
 
     public LearnerConfig {
-        varied = Map.copyOf(varied);
-        knowledge = knowledge == null ? KnowledgeSource.NONE : knowledge;
+        details = details == null ? Details.NONE : details;
     }
 
-    /** A configuration whose runs get no background knowledge. */
-    public LearnerConfig(int index, String entryId, Learner learner, ParameterValues values,
-                         Map<String, Object> varied, String fingerprint) {
-        this(index, entryId, learner, values, varied, fingerprint, KnowledgeSource.NONE);
+    /** A configuration with nothing varied, no fingerprint and no background knowledge. */
+    public LearnerConfig(int index, String entryId, Learner learner, ParameterValues values) {
+        this(index, entryId, learner, values, Details.NONE);
+    }
+
+    /**
+     * What else names or defines a configuration.
+     *
+     * @param varied      the values of parameters the entry gave several values for (they name the configuration)
+     * @param fingerprint what defines the learner beyond its id and parameters (e.g. an external command line);
+     *                    may be empty
+     * @param knowledge   the background knowledge its runs receive
+     */
+    public record Details(Map<String, Object> varied, String fingerprint, KnowledgeSource knowledge) {
+
+        /** Nothing varied, no fingerprint, no knowledge. */
+        public static final Details NONE = new Details(Map.of(), "", KnowledgeSource.NONE);
+
+        public Details {
+            varied = Map.copyOf(varied);
+            knowledge = knowledge == null ? KnowledgeSource.NONE : knowledge;
+        }
+    }
+
+    /** The values of parameters the entry gave several values for. */
+    public Map<String, Object> varied() {
+        return details.varied();
+    }
+
+    /** What defines the learner beyond its id and parameters; may be empty. */
+    public String fingerprint() {
+        return details.fingerprint();
+    }
+
+    /** The background knowledge its runs receive. */
+    public KnowledgeSource knowledge() {
+        return details.knowledge();
     }
 
     public String use() {
@@ -37,6 +66,7 @@ public record LearnerConfig(int index, String entryId, Learner learner, Paramete
 
     /** The configuration's name in results: the entry id, with the varied values in brackets when there are any. */
     public String label() {
+        Map<String, Object> varied = varied();
         if (varied.isEmpty()) {
             return entryId;
         }
@@ -72,6 +102,8 @@ public record LearnerConfig(int index, String entryId, Learner learner, Paramete
      * they had before knowledge could be given.
      */
     public String canonical() {
+        String fingerprint = fingerprint();
+        KnowledgeSource knowledge = knowledge();
         return use() + "{" + parametersText() + "}" + (fingerprint.isEmpty() ? "" : "#" + fingerprint)
                 + (knowledge == KnowledgeSource.NONE ? "" : "+knowledge=" + knowledge.word());
     }

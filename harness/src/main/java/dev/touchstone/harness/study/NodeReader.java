@@ -23,7 +23,7 @@ import java.util.Map;
  *
  * <p>Built on Jackson's streaming parser rather than data binding, because binding to
  * records reports unknown properties at the end of the object and silently fills missing
- * fields with 0 or null (see libraries.md); with a located tree every check can name the
+ * fields with 0 or null (Jackson's documented behaviour for records); with a located tree every check can name the
  * exact key. Duplicate keys and a second document are refused. Cost: linear in the file.
  */
 public final class NodeReader {

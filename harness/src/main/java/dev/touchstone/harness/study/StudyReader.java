@@ -91,8 +91,9 @@ public final class StudyReader {
         List<GraphClass> scoreAgainst = problems.attempt(() -> scoreAgainst(root.get(StudyFields.SCORE_AGAINST),
                 problems), null);
         problems.throwIfAny();
-        Study study = new Study(name, description, seed, replicates, truthSpecs, samples, entries, metricNames,
-                limits, compareTo, scoreAgainst, root);
+        Study study = Study.builder(name).description(description).seed(seed).replicates(replicates)
+                .truths(truthSpecs).samples(samples).learners(entries).metrics(metricNames).limits(limits)
+                .compareTo(compareTo).scoreAgainst(scoreAgainst).source(root).build();
         checkSize(root, study);
         return study;
     }

@@ -51,6 +51,19 @@ public interface TruthCatalog {
         return java.util.Set.of();
     }
 
+    /**
+     * The choice of a kind with these values, with its {@link #fingerprint} and {@link #locations}:
+     * how a study's expansion and the command line's truth options alike make a choice, so their
+     * seeds agree.
+     *
+     * @param given the values that were written (for output columns)
+     */
+    default TruthSetting.Choice choice(String section, String kind, dev.touchstone.core.param.ParameterValues values,
+                                       java.util.Map<String, Object> given) {
+        return new TruthSetting.Choice(section, kind, values, given,
+                new TruthSetting.External(fingerprint(section, kind, values), locations(section, kind)));
+    }
+
     /** The section with this name, or null. */
     default Section section(String name) {
         for (Section s : sections()) {
@@ -62,33 +75,125 @@ public interface TruthCatalog {
     }
 
     /**
-     * One sub-section of {@code truth}.
+     * One sub-section of {@code truth}; made with {@link #builder}. Immutable.
      *
-     * @param name        its key, e.g. {@code graph}
-     * @param kindField   the key naming the kind inside it, e.g. {@code family}
-     * @param defaultKind the kind used when the section is left out, or null when it is required
-     * @param shorthandKind the kind meant when the section is given as a bare value or list, or null
-     * @param shorthand   the parameter of {@code shorthandKind} such a bare value sets
-     *                    ({@code hidden: 2} meaning {@code hidden: {kind: random, count: 2}}), or null
-     *                    ({@code hidden: 2} meaning {@code hidden: {kind: random, count: 2}}); equal to
-     *                    {@code kindField} when a bare value names the kind itself
-     *                    ({@code network: sprinkler})
-     * @param meaning     one line for the reference page
-     * @param kinds       the allowed kinds
-     * @param replaces    sections this one stands in for: when it is given they must be left out
-     *                    and are not required; when it is left out it is absent (it has no default)
+     * <p>Its parts: {@code name}, its key ({@code graph}); {@code kindField}, the key naming the kind
+     * inside it ({@code family}); {@code defaultKind}, the kind used when the section is left out,
+     * or null when it is required; {@code shorthandKind}, the kind meant when the section is given
+     * as a bare value or list, or null, and {@code shorthand}, the parameter of that kind such a bare
+     * value sets ({@code hidden: 2} meaning {@code hidden: {kind: random, count: 2}}), or null; equal
+     * to {@code kindField} when a bare value names the kind itself ({@code network: sprinkler});
+     * {@code meaning}, one line for the reference page; {@code kinds}, the allowed kinds; and
+     * {@code replaces}, the sections this one stands in for: when it is given they must be left out
+     * and are not required; when it is left out it is absent (it has no default).
      */
-    record Section(String name, String kindField, String defaultKind, String shorthandKind, String shorthand,
-                   String meaning,
-                   List<Kind> kinds, List<String> replaces) {
-        public Section {
-            kinds = List.copyOf(kinds);
-            replaces = List.copyOf(replaces);
+    final class Section {
+        private final String name;
+        private final String kindField;
+        private final String defaultKind;
+        private final String shorthandKind;
+        private final String shorthand;
+        private final String meaning;
+        private final List<Kind> kinds;
+        private final List<String> replaces;
+
+        private Section(Builder b) {
+            this.name = java.util.Objects.requireNonNull(b.name, "name");
+            this.kindField = java.util.Objects.requireNonNull(b.kindField, "kindField");
+            this.defaultKind = b.defaultKind;
+            this.shorthandKind = b.shorthandKind;
+            this.shorthand = b.shorthand;
+            this.meaning = b.meaning;
+            this.kinds = List.copyOf(b.kinds);
+            this.replaces = List.copyOf(b.replaces);
         }
 
-        public Section(String name, String kindField, String defaultKind, String shorthandKind, String shorthand,
-                       String meaning, List<Kind> kinds) {
-            this(name, kindField, defaultKind, shorthandKind, shorthand, meaning, kinds, List.of());
+        /** A section with this key whose kind is named by {@code kindField}; required, no shorthand, no kinds yet. */
+        public static Builder builder(String name, String kindField) {
+            return new Builder(name, kindField);
+        }
+
+        public String name() {
+            return name;
+        }
+
+        public String kindField() {
+            return kindField;
+        }
+
+        public String defaultKind() {
+            return defaultKind;
+        }
+
+        public String shorthandKind() {
+            return shorthandKind;
+        }
+
+        public String shorthand() {
+            return shorthand;
+        }
+
+        public String meaning() {
+            return meaning;
+        }
+
+        public List<Kind> kinds() {
+            return kinds;
+        }
+
+        public List<String> replaces() {
+            return replaces;
+        }
+
+        /** Collects the parts of a section. */
+        public static final class Builder {
+            private final String name;
+            private final String kindField;
+            private String defaultKind;
+            private String shorthandKind;
+            private String shorthand;
+            private String meaning = "";
+            private List<Kind> kinds = List.of();
+            private List<String> replaces = List.of();
+
+            private Builder(String name, String kindField) {
+                this.name = name;
+                this.kindField = kindField;
+            }
+
+            /** The kind used when the section is left out. */
+            public Builder defaultKind(String kind) {
+                this.defaultKind = kind;
+                return this;
+            }
+
+            /** A bare value means {@code kind} (null when it names the kind) with {@code parameter} set to it. */
+            public Builder shorthand(String kind, String parameter) {
+                this.shorthandKind = kind;
+                this.shorthand = parameter;
+                return this;
+            }
+
+            /** One line for the reference page. */
+            public Builder meaning(String line) {
+                this.meaning = line;
+                return this;
+            }
+
+            public Builder kinds(List<Kind> allowed) {
+                this.kinds = allowed;
+                return this;
+            }
+
+            /** The sections this one stands in for. */
+            public Builder replaces(List<String> sections) {
+                this.replaces = sections;
+                return this;
+            }
+
+            public Section build() {
+                return new Section(this);
+            }
         }
 
         /** Whether a bare value names the kind ({@code network: sprinkler}). */

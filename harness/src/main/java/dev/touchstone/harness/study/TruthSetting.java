@@ -21,25 +21,29 @@ public record TruthSetting(int index, List<Choice> choices) {
 
     /**
      * A section's kind and values. {@code given} holds only the values the study wrote (for
-     * output columns); {@code fingerprint} is what else defines the choice (e.g. a digest of
-     * a graph file), "" for nothing; {@code locations} names the parameters that only say where
-     * the fingerprinted content lives (a file path). They are left out of the canonical text, so
-     * that moving a study with its graph file to another folder keeps its run keys and seeds.
+     * output columns); {@code external} is what defines content the choice names outside the
+     * study file (a graph file), {@link External#NONE} for nothing.
      */
     public record Choice(String section, String kind, ParameterValues values, Map<String, Object> given,
-                         String fingerprint, java.util.Set<String> locations) {
+                         External external) {
         public Choice {
             given = Map.copyOf(given);
-            locations = java.util.Set.copyOf(locations);
+            external = external == null ? External.NONE : external;
         }
 
-        public Choice(String section, String kind, ParameterValues values, Map<String, Object> given,
-                      String fingerprint) {
-            this(section, kind, values, given, fingerprint, java.util.Set.of());
-        }
-
+        /** A choice naming nothing outside the study file. */
         public Choice(String section, String kind, ParameterValues values, Map<String, Object> given) {
-            this(section, kind, values, given, "");
+            this(section, kind, values, given, External.NONE);
+        }
+
+        /** What else defines the choice (e.g. a digest of a graph file), "" for nothing. */
+        public String fingerprint() {
+            return external.fingerprint();
+        }
+
+        /** The parameters that only say where the fingerprinted content lives. */
+        public java.util.Set<String> locations() {
+            return external.locations();
         }
 
         /** E.g. {@code graph=erdos-renyi{nodes=20,mean_degree=2.0}}. */
@@ -47,7 +51,7 @@ public record TruthSetting(int index, List<Choice> choices) {
             StringBuilder sb = new StringBuilder(section).append('=').append(kind).append('{');
             boolean first = true;
             for (Map.Entry<String, Object> e : values.asMap().entrySet()) {
-                if (locations.contains(e.getKey())) {
+                if (locations().contains(e.getKey())) {
                     continue;
                 }
                 if (!first) {
@@ -57,7 +61,23 @@ public record TruthSetting(int index, List<Choice> choices) {
                 sb.append(e.getKey()).append('=').append(Canonical.value(e.getValue()));
             }
             sb.append('}');
-            return fingerprint.isEmpty() ? sb.toString() : sb.append('#').append(fingerprint).toString();
+            return fingerprint().isEmpty() ? sb.toString() : sb.append('#').append(fingerprint()).toString();
+        }
+    }
+
+    /**
+     * Content a choice names outside the study file: {@code fingerprint} is its digest, "" for
+     * nothing; {@code locations} names the parameters that only say where it lives (a file path).
+     * Those are left out of the canonical text, so that moving a study with its graph file to
+     * another folder keeps its run keys and seeds.
+     */
+    public record External(String fingerprint, java.util.Set<String> locations) {
+
+        /** Nothing outside the study file. */
+        public static final External NONE = new External("", java.util.Set.of());
+
+        public External {
+            locations = java.util.Set.copyOf(locations);
         }
     }
 

@@ -69,8 +69,8 @@ class CalibrationTest {
             SimulatedTruth t = truth(seed, 10);
             DataSet data = t.sample(300).data();
             Graph learned = TruthGraphs.learned(choice("ges"), data, seed, null);
-            CalibrationSettings s = new CalibrationSettings(List.of(pc), List.of(300), 20, 3, 0, seed, 2,
-                    Duration.ofSeconds(60));
+            CalibrationSettings s = CalibrationSettings.builder(List.of(pc), List.of(300)).replicates(20).variants(3)
+                    .seed(seed).threads(2).limit(Duration.ofSeconds(60)).build();
             CalibrationOutcome o = Calibration.run(data, learned, s, Progress.quiet());
             for (int m = 0; m < metrics.size(); m++) {
                 double actual = actual(pc.learner(), data, t.dag(), metrics.get(m));
@@ -94,10 +94,10 @@ class CalibrationTest {
         SimulatedTruth t = truth(9, 7);
         DataSet data = t.sample(250).data();
         List<CalibrationSettings.Choice> learners = List.of(choice("pc"), choice("ges"));
-        CalibrationOutcome one = Calibration.run(data, t.dag(), new CalibrationSettings(learners, List.of(125, 250),
-                4, 1, 30, 5, 1, null), Progress.quiet());
-        CalibrationOutcome two = Calibration.run(data, t.dag(), new CalibrationSettings(learners, List.of(125, 250),
-                4, 1, 30, 5, 2, null), Progress.quiet());
+        CalibrationOutcome one = Calibration.run(data, t.dag(), CalibrationSettings.builder(learners, List.of(125, 250))
+                .replicates(4).variants(1).bootstrap(30).seed(5).threads(1).build(), Progress.quiet());
+        CalibrationOutcome two = Calibration.run(data, t.dag(), CalibrationSettings.builder(learners, List.of(125, 250))
+                .replicates(4).variants(1).bootstrap(30).seed(5).threads(2).build(), Progress.quiet());
         assertEquals(one.runs().size(), two.runs().size());
         for (int i = 0; i < one.runs().size(); i++) {
             assertEquals(one.runs().get(i).result().metrics(), two.runs().get(i).result().metrics());
@@ -106,8 +106,8 @@ class CalibrationTest {
         CalibrationView a = CalibrationSummary.view(one, "t", List.of(), List.of(), null);
         CalibrationView b = CalibrationSummary.view(two, "t", List.of(), List.of(), null);
         assertEquals(a.edges(), b.edges());
-        CalibrationOutcome other = Calibration.run(data, t.dag(), new CalibrationSettings(learners, List.of(125, 250),
-                4, 1, 30, 6, 2, null), Progress.quiet());
+        CalibrationOutcome other = Calibration.run(data, t.dag(), CalibrationSettings.builder(learners, List.of(125, 250))
+                .replicates(4).variants(1).bootstrap(30).seed(6).threads(2).build(), Progress.quiet());
         CalibrationView c = CalibrationSummary.view(other, "t", List.of(), List.of(), null);
         int compared = 0;
         for (CalibrationView.EdgeRow e : a.edges()) {

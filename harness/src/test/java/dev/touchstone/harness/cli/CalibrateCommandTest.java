@@ -25,8 +25,8 @@ class CalibrateCommandTest {
     Path tmp;
 
     /**
-     * The chest-clinic network's data (Lauritzen and Spiegelhalter 1988; tables as in
-     * checks.md): no open data set with suitable variables ships with a Maven or Debian
+     * The chest-clinic network's data (Lauritzen and Spiegelhalter 1988; published tables, from
+     * memory): no open data set with suitable variables ships with a Maven or Debian
      * package we use, so the issue's fallback applies.
      */
     @Test

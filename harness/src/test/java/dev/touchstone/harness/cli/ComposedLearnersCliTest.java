@@ -1,5 +1,6 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.testing.Python3;
 import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.knowledge.Knowledge;
@@ -30,7 +31,6 @@ import java.util.Map;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 /** Studies with composed learners through {@code touchstone run}: scored and listed in runs.csv like any learner. */
 class ComposedLearnersCliTest {
@@ -100,7 +100,7 @@ class ComposedLearnersCliTest {
     @Test
     @DisplayName("an outside command's graph as the allowed edges of GES and of hill climbing: runs ok, and never leaves its skeleton")
     void outsideCommandFirst() throws IOException {
-        assumeTrue(python3(), "python3 not found: skipping the outside-command composition (it runs in CI)");
+        Python3.require("the outside-command composition");
         Path study = tmp.resolve("s.yaml");
         Files.writeString(study, HEAD + "  - id: corr-ges\n    steps:\n      - {use: corr-skeleton-py, with: {threshold: 0.2}}\n"
                 + "      - {use: ges, given: allowed-edges}\n  - id: corr-hc\n    steps:\n"
@@ -141,14 +141,5 @@ class ComposedLearnersCliTest {
                 }
             }
         }
-    }
-
-    private static boolean python3() {
-        for (String dir : System.getenv().getOrDefault("PATH", "").split(java.io.File.pathSeparator)) {
-            if (Files.isExecutable(Path.of(dir, "python3"))) {
-                return true;
-            }
-        }
-        return false;
     }
 }

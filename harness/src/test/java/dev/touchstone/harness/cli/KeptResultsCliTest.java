@@ -1,5 +1,6 @@
 package dev.touchstone.harness.cli;
 
+import dev.touchstone.harness.testing.Python3;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.harness.execution.EstimateCodec;
@@ -27,7 +28,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 /** Kept estimates through the command line: export with {@code show}, reports without learners, versions. */
 class KeptResultsCliTest {
@@ -110,22 +110,13 @@ class KeptResultsCliTest {
         assertEquals(1, r.err().lines().count(), r.err());
     }
 
-    private static String python() {
-        for (String dir : System.getenv().getOrDefault("PATH", "").split(java.io.File.pathSeparator)) {
-            if (Files.isExecutable(Path.of(dir, "python3"))) {
-                return Path.of(dir, "python3").toString();
-            }
-        }
-        return null;
-    }
-
     /** A copy of the example Python adapter and a learners file naming it, in {@code dir}. */
     private static Path adapter(Path dir, String version) throws IOException {
         Files.createDirectories(dir);
         Files.copy(CliTest.ROOT.resolve("examples/adapters/correlation_skeleton.py"),
                 dir.resolve("correlation_skeleton.py"));
         Path f = dir.resolve("learners.yaml");
-        Files.writeString(f, "learners:\n  - id: corr-py\n    command: [" + python() + ", \"{dir}/correlation_skeleton.py\","
+        Files.writeString(f, "learners:\n  - id: corr-py\n    command: [" + Python3.find() + ", \"{dir}/correlation_skeleton.py\","
                 + " --data, \"{data}\", --output, \"{output}\", --seed, \"{seed}\", --threshold, \"0.3\"]\n"
                 + "    output: json\n    returns: cpdag\n" + (version == null ? "" : "    version: \"" + version + "\"\n"));
         return f;
@@ -146,7 +137,7 @@ class KeptResultsCliTest {
     @Test
     @DisplayName("report re-renders with the learners file and the script deleted, picturing the kept estimates")
     void reportWithoutLearners() throws IOException {
-        assumeTrue(python() != null, "python3 not found: the outside-learner tests need it (CI installs it)");
+        Python3.require("the outside-learner tests");
         Path dir = tmp.resolve("adapter");
         Path learners = adapter(dir, null);
         Path out = runStudy(COMMAND_STUDY, "--learners", learners.toString());
@@ -164,7 +155,7 @@ class KeptResultsCliTest {
     @Test
     @DisplayName("versions per run; a resume after the outside script changed refuses in one line, unless accepted")
     void versionChange() throws IOException {
-        assumeTrue(python() != null, "python3 not found: the outside-learner tests need it (CI installs it)");
+        Python3.require("the outside-learner tests");
         Path dir = tmp.resolve("adapter");
         Path learners = adapter(dir, null);
         Path out = runStudy(COMMAND_STUDY, "--learners", learners.toString());

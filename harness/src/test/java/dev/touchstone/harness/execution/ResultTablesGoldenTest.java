@@ -43,17 +43,20 @@ class ResultTablesGoldenTest {
         m.put("shd", 3.0);
         m.put("adjacency_f1", 0.75);
         m.put("orientation_f1", null);
-        RunResult ok = new RunResult("0123456789abcdef", SETTING, 0, "pc[alpha=0.01]", "pc",
-                Map.of("alpha", "0.01"), -42L, RunStatus.OK, null, GraphClass.CPDAG, GraphClass.CPDAG, m,
-                new Timings(0.5, 0.25, 1.5, 120L, 0L));
+        RunResult ok = RunResult.builder().key("0123456789abcdef").setting(SETTING).replicate(0)
+                .configurationId("pc[alpha=0.01]").learnerId("pc").parameters(Map.of("alpha", "0.01")).seed(-42L)
+                .status(RunStatus.OK).estimateClass(GraphClass.CPDAG).scoredAgainst(GraphClass.CPDAG).metrics(m)
+                .timings(new Timings(0.5, 0.25, 1.5, 120L, 0L)).build();
         Map<String, Double> none = new LinkedHashMap<>();
         none.put("shd", null);
         none.put("adjacency_f1", null);
         none.put("orientation_f1", null);
         // 2^53 + 1: the first integer a double cannot hold, so seed_high and seed_low are needed to keep it.
-        RunResult failed = new RunResult("fedcba9876543210", ORACLE, 1, "mine", "my-method", Map.of("depth", "3"),
-                9_007_199_254_740_993L,
-                RunStatus.FAILED, "exited with status 3; it said: \"bad, very bad\"", null, null, none, Timings.NONE);
+        RunResult failed = RunResult.builder().key("fedcba9876543210").setting(ORACLE).replicate(1)
+                .configurationId("mine").learnerId("my-method").parameters(Map.of("depth", "3"))
+                .seed(9_007_199_254_740_993L).status(RunStatus.FAILED)
+                .message("exited with status 3; it said: \"bad, very bad\"").metrics(none).timings(Timings.NONE)
+                .build();
         String csv = ResultTables.runs(COLUMNS, List.of("shd", "adjacency_f1", "orientation_f1"),
                 List.of(new AbstractMap.SimpleEntry<>(0, ok), new AbstractMap.SimpleEntry<>(1, failed)));
         assertEquals(golden("runs.csv"), csv);
@@ -62,14 +65,18 @@ class ResultTablesGoldenTest {
     @Test
     @DisplayName("summary.csv and comparisons.csv: columns and cells")
     void summaryAndComparisons() throws IOException {
-        AggregateRow a = new AggregateRow(SETTING, "pc[alpha=0.01]", "pc", "shd", 9, 1, 0,
-                new Summary(9, 3.5, 1.25, 2.75, 4.25, 3.0, 2.0, 5.0));
-        AggregateRow b = new AggregateRow(ORACLE, "mine", "my-method", "shd", 0, 10, 0, Summary.EMPTY);
+        AggregateRow a = AggregateRow.builder().setting(SETTING).configurationId("pc[alpha=0.01]").learnerId("pc")
+                .metric("shd").okRuns(9).failedRuns(1).skippedRuns(0)
+                .summary(new Summary(9, 3.5, 1.25, new Summary.Interval(2.75, 4.25),
+                        new Summary.Quartiles(2.0, 3.0, 5.0))).build();
+        AggregateRow b = AggregateRow.builder().setting(ORACLE).configurationId("mine").learnerId("my-method")
+                .metric("shd").okRuns(0).failedRuns(10).skippedRuns(0).summary(Summary.EMPTY).build();
         assertEquals(golden("summary.csv"), ResultTables.summary(COLUMNS, List.of(a, b)));
-        ComparisonRow c = new ComparisonRow(SETTING, "shd", "pc[alpha=0.01]", "mine", 8, -1.5, -2.5, -0.5, 0.0234,
-                0.0468, 6, 1, 1);
-        ComparisonRow d = new ComparisonRow(SETTING, "edges", "pc[alpha=0.01]", "mine", 0, null, null, null, null,
-                null, null, null, null);
+        ComparisonRow c = ComparisonRow.builder().setting(SETTING).metric("shd").configurationId("pc[alpha=0.01]")
+                .referenceId("mine").pairs(8).meanDifference(-1.5).low(-2.5).high(-0.5).pValue(0.0234)
+                .pHolm(0.0468).wins(6).ties(1).losses(1).build();
+        ComparisonRow d = ComparisonRow.builder().setting(SETTING).metric("edges")
+                .configurationId("pc[alpha=0.01]").referenceId("mine").pairs(0).build();
         assertEquals(golden("comparisons.csv"), ResultTables.comparisons(COLUMNS, List.of(c, d)));
     }
 
@@ -80,9 +87,10 @@ class ResultTablesGoldenTest {
         m.put("shd", 3.0);
         m.put("sid", null);
         m.put("f1", 0.1 + 0.2);
-        RunResult r = new RunResult("0123456789abcdef", SETTING, 4, "pc", "pc", Map.of("alpha", "0.05"),
-                Long.MIN_VALUE, RunStatus.OK, null, GraphClass.PAG, GraphClass.PAG, m,
-                new Timings(1e-7, null, 3.0, 5L, null));
+        RunResult r = RunResult.builder().key("0123456789abcdef").setting(SETTING).replicate(4)
+                .configurationId("pc").learnerId("pc").parameters(Map.of("alpha", "0.05")).seed(Long.MIN_VALUE)
+                .status(RunStatus.OK).estimateClass(GraphClass.PAG).scoredAgainst(GraphClass.PAG).metrics(m)
+                .timings(new Timings(1e-7, null, 3.0, 5L, null)).build();
         JournalCodec.Line line = new JournalCodec.Line(12, "coordinates", r);
         assertEquals(line, JournalCodec.read(JournalCodec.write(line)));
     }

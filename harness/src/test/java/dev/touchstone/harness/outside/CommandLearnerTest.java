@@ -1,5 +1,6 @@
 package dev.touchstone.harness.outside;
 
+import dev.touchstone.harness.testing.Python3;
 import dev.touchstone.harness.catalog.LearnerCatalog;
 import dev.touchstone.harness.execution.Progress;
 import dev.touchstone.harness.execution.StudyRunner;
@@ -28,7 +29,6 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 /** External command learners, with small Python scripts as the commands (the machine has python3). */
 class CommandLearnerTest {
@@ -43,19 +43,11 @@ class CommandLearnerTest {
     static void locate() throws URISyntaxException {
         scripts = Path.of(CommandLearnerTest.class.getResource("/outside/hang.py").toURI()).getParent();
         examples = Path.of("..", "examples", "adapters").toAbsolutePath().normalize();
-        if (python() == null && "true".equals(System.getenv("CI"))) {
-            fail("python3 is not installed; .ci/run should have installed Debian's python3 package");
-        }
-        assumeTrue(python() != null, "python3 not found: skipping the command-learner tests (they run in CI)");
+        Python3.require("the command-learner tests");
     }
 
     static String python() {
-        for (String dir : System.getenv().getOrDefault("PATH", "").split(java.io.File.pathSeparator)) {
-            if (Files.isExecutable(Path.of(dir, "python3"))) {
-                return Path.of(dir, "python3").toString();
-            }
-        }
-        return null;
+        return Python3.find();
     }
 
     private static String learnersFile(String id, String script, String extraArgs, String output) {

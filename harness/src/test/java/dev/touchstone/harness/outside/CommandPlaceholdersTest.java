@@ -1,5 +1,6 @@
 package dev.touchstone.harness.outside;
 
+import dev.touchstone.harness.testing.Python3;
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.data.Variable;
 import dev.touchstone.core.knowledge.Knowledge;
@@ -17,7 +18,6 @@ import java.nio.file.Path;
 import java.util.List;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 /** {@code {kinds}} and {@code {knowledge}} hand an outside command the column kinds and the run's knowledge. */
 class CommandPlaceholdersTest {
@@ -27,8 +27,7 @@ class CommandPlaceholdersTest {
 
     @Test
     void theCommandGetsKindsAndKnowledgeFiles() throws IOException {
-        String python = CommandLearnerTest.python();
-        assumeTrue(python != null, "python3 is needed for this test");
+        String python = Python3.require("the placeholder test");
         Path keep = tmp.resolve("seen");
         Files.createDirectories(keep);
         String script = "import shutil,sys,json,csv; shutil.copy(sys.argv[1], sys.argv[5] + '/kinds.csv');"

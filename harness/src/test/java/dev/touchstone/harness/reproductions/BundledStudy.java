@@ -128,9 +128,8 @@ final class BundledStudy {
             }
             Map<String, String> coordinates = new LinkedHashMap<>(r.setting().coordinates());
             String value = coordinates.remove(axis);
-            out.add(new RunResult(r.key(), new Setting(coordinates), r.replicate(), label(configuration, axis, value),
-                    r.learnerId(), r.parameters(), r.seed(), r.status(), r.message(), r.estimateClass(),
-                    r.scoredAgainst(), r.metrics(), r.timings()));
+            out.add(r.toBuilder().setting(new Setting(coordinates))
+                    .configurationId(label(configuration, axis, value)).build());
         }
         return out;
     }
@@ -146,9 +145,7 @@ final class BundledStudy {
         for (RunResult r : runs) {
             Map<String, String> coordinates = new LinkedHashMap<>(r.setting().coordinates());
             int k = values.indexOf(coordinates.remove(axis));
-            out.add(new RunResult(r.key(), new Setting(coordinates), r.replicate() * 1000 + k, r.configurationId(),
-                    r.learnerId(), r.parameters(), r.seed(), r.status(), r.message(), r.estimateClass(),
-                    r.scoredAgainst(), r.metrics(), r.timings()));
+            out.add(r.toBuilder().setting(new Setting(coordinates)).replicate(r.replicate() * 1000 + k).build());
         }
         return out;
     }

@@ -57,22 +57,22 @@ public final class TestWorld {
         @Override
         public List<Section> sections() {
             return List.of(
-                    new Section("graph", "family", null, null, null, "the graph",
+                    Section.builder("graph", "family").meaning("the graph").kinds(
                             List.of(new Kind("chain", "X1 -> X2 -> ... -> Xp", List.of(
                                     ParameterSpec.integer("nodes", 5, 2, 1000, "number of variables"))),
                                     new Kind("star", "X1 -> every other", List.of(
-                                            ParameterSpec.integer("nodes", 5, 2, 1000, "number of variables"))))),
-                    new Section("model", "kind", null, null, null, "the model",
+                                            ParameterSpec.integer("nodes", 5, 2, 1000, "number of variables"))))).build(),
+                    Section.builder("model", "kind").meaning("the model").kinds(
                             List.of(new Kind("linear-gaussian", "linear with Gaussian noise", List.of(
                                     ParameterSpec.real("edge_weight_low", 0.5, 0.0, 10.0, "smallest weight"),
                                     ParameterSpec.real("edge_weight_high", 1.5, 0.0, 10.0, "largest weight"),
-                                    ParameterSpec.bool("standardize", false, "scale columns"))))),
-                    new Section("hidden", "kind", "none", "random", "count", "hidden variables",
-                            List.of(new Kind("none", "nothing hidden", List.of()),
+                                    ParameterSpec.bool("standardize", false, "scale columns"))))).build(),
+                    Section.builder("hidden", "kind").defaultKind("none").shorthand("random", "count")
+                            .meaning("hidden variables").kinds(List.of(new Kind("none", "nothing hidden", List.of()),
                                     new Kind("random", "hide some", List.of(
-                                            ParameterSpec.integer("count", 0, 0, 100, "how many"))))),
-                    new Section("missing", "mechanism", "none", null, null, "missing cells",
-                            List.of(new Kind("none", "complete data", List.of()))));
+                                            ParameterSpec.integer("count", 0, 0, 100, "how many"))))).build(),
+                    Section.builder("missing", "mechanism").defaultKind("none").meaning("missing cells").kinds(
+                            List.of(new Kind("none", "complete data", List.of()))).build());
         }
 
         @Override
@@ -205,9 +205,11 @@ public final class TestWorld {
                         }
                     }
                     Summary s = count == 0 ? Summary.EMPTY
-                            : new Summary(count, sum / count, null, null, null, null, null, null);
-                    out.add(new AggregateRow(g.get(0).setting(), g.get(0).configurationId(), g.get(0).learnerId(), m,
-                            ok, failed, skipped, s));
+                            : new Summary(count, sum / count, null, Summary.Interval.UNDEFINED,
+                                    Summary.Quartiles.UNDEFINED);
+                    out.add(AggregateRow.builder().setting(g.get(0).setting())
+                            .configurationId(g.get(0).configurationId()).learnerId(g.get(0).learnerId()).metric(m)
+                            .okRuns(ok).failedRuns(failed).skippedRuns(skipped).summary(s).build());
                 }
             }
             return out;

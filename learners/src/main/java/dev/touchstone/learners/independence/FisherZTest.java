@@ -174,24 +174,23 @@ public final class FisherZTest implements IndependenceTest {
         }
         Kept[] found = new Kept[tiles];
         dev.touchstone.core.learner.ParallelLoop.run(threads, tiles, 1, () -> {
-            double[] sums = new double[TILE_ROWS * TILE_COLUMNS];
-            double[] r = new double[TILE_ROWS * TILE_COLUMNS];
-            double[][] panel = new double[256][TILE_COLUMNS];
+            double[] scratch = new double[TILE_ROWS * TILE_COLUMNS];
+            CentredColumns.TileWorker worker = screened == null ? null : screened.columns().tileWorker();
             return k -> {
                 deadline.run();
-                found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, panel, sums, r);
+                found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, worker, scratch);
             };
         });
         return collect(found);
     }
 
     /** The pairs i < j of one tile that test dependent given ∅, with their correlations. */
-    private Kept screenTile(int i0, int j0, double[][] panel, double[] sums, double[] r) {
+    private Kept screenTile(int i0, int j0, CentredColumns.TileWorker worker, double[] r) {
         int j1 = Math.min(p, j0 + TILE_COLUMNS);
         int i1 = Math.min(j1, i0 + TILE_ROWS);
         int width = j1 - j0;
-        if (screened != null) {
-            screened.columns().correlationTile(i0, i1, j0, j1, panel, sums, r);
+        if (worker != null) {
+            worker.correlations(i0, i1, j0, j1, r);
         } else {
             for (int i = i0; i < i1; i++) {
                 System.arraycopy(correlation, i * p + j0, r, (i - i0) * width, width);

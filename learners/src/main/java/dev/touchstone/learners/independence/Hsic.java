@@ -31,9 +31,19 @@ public final class Hsic {
 
     /**
      * The statistic n·HSIC_b, its gamma moments, the p-value, and the two kernel widths used.
+     *
+     * @param widths the Gaussian kernel widths of the two samples (median heuristic)
      */
-    public record Result(double statistic, double nullMean, double nullVariance, double pValue,
-                         double widthU, double widthV) {
+    public record Result(double statistic, double nullMean, double nullVariance, double pValue, Widths widths) {
+    }
+
+    /**
+     * The kernel widths the test used.
+     *
+     * @param u the width for the first sample
+     * @param v the width for the second sample
+     */
+    public record Widths(double u, double v) {
     }
 
     /**
@@ -106,7 +116,7 @@ public final class Hsic {
         }
         double statistic = trace / n; // n · tr(KHLH)/n², as tr(KHLH) = Σ (HKH)∘(HLH) for symmetric K, L
         if (n < 6) {
-            return new Result(statistic, Double.NaN, Double.NaN, 1.0, u.width, v.width);
+            return new Result(statistic, Double.NaN, Double.NaN, 1.0, new Widths(u.width, v.width));
         }
         double muK = u.offDiagonalMean;
         double muL = v.offDiagonalMean;
@@ -115,7 +125,7 @@ public final class Hsic {
         double variance = 2 * (dn - 4) * (dn - 5) / (dn * (dn - 1) * (dn - 2) * (dn - 3)) * b / (dn * (dn - 1));
         // The gamma for n·HSIC_b: mean n·E, variance n²·var, i.e. shape E²/var and scale n·var/E.
         double p = KernelAlgebra.gammaSurvival(statistic, dn * mean, dn * dn * variance);
-        return new Result(statistic, mean, variance, p, u.width, v.width);
+        return new Result(statistic, mean, variance, p, new Widths(u.width, v.width));
     }
 
     private static double offDiagonalMean(double[] k, int n) {

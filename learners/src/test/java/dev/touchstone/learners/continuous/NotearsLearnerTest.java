@@ -30,8 +30,7 @@ class NotearsLearnerTest {
     }
 
     private static long shd(Graph truth, Graph est) {
-        EdgeCounts c = EdgeCounts.of(truth, est);
-        return c.trueEdges() + c.estimatedEdges() - c.commonEdges() - c.identicalEdges();
+        return EdgeCounts.of(truth, est).differingPairs();
     }
 
     private static Simulation equalVariance(int nodes) {

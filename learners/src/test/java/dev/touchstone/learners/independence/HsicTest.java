@@ -106,8 +106,8 @@ class HsicTest {
         RealMatrix l = gram(sy, wy);
         double expected = k.multiply(h).multiply(l).multiply(h).getTrace() / 5; // n · tr(KHLH)/n²
         Hsic.Result r = Hsic.test(new double[][] {x}, new double[][] {y});
-        assertEquals(wx, r.widthU(), 1e-12);
-        assertEquals(wy, r.widthV(), 1e-12);
+        assertEquals(wx, r.widths().u(), 1e-12);
+        assertEquals(wy, r.widths().v(), 1e-12);
         assertEquals(expected, r.statistic(), 1e-12);
         assertTrue(expected > 0.05, "the hand sample is dependent enough for a non-trivial statistic: " + expected);
         // Symmetric in its arguments (HSIC is; tr(KHLH) = tr(LHKH)).

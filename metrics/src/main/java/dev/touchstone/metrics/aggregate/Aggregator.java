@@ -70,8 +70,9 @@ public final class Aggregator {
                 double[] values = members.stream().map(r -> r.value(metric)).filter(Objects::nonNull)
                         .mapToDouble(Double::doubleValue).toArray();
                 long rowSeed = Seeds.derive(seed, "summary", g.setting.label(), g.configurationId, metric);
-                out.add(new AggregateRow(g.setting, g.configurationId, learnerId, metric, ok, failed, skipped,
-                        Summaries.of(values, Seeds.random(rowSeed))));
+                out.add(AggregateRow.builder().setting(g.setting).configurationId(g.configurationId)
+                        .learnerId(learnerId).metric(metric).okRuns(ok).failedRuns(failed).skippedRuns(skipped)
+                        .summary(Summaries.of(values, Seeds.random(rowSeed))).build());
             }
         }
         return out;

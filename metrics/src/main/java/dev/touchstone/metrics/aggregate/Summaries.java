@@ -36,8 +36,7 @@ public final class Summaries {
         Arrays.sort(sorted);
         double mean = mean(values);
         Double sd = null;
-        Double low = null;
-        Double high = null;
+        Summary.Interval interval = Summary.Interval.UNDEFINED;
         if (n >= 2) {
             double ss = 0;
             for (double v : values) {
@@ -45,11 +44,10 @@ public final class Summaries {
             }
             sd = Math.sqrt(ss / (n - 1));
             double[] ci = Bootstrap.meanInterval(values, LEVEL, Bootstrap.DEFAULT_RESAMPLES, rng);
-            low = ci[0];
-            high = ci[1];
+            interval = new Summary.Interval(ci[0], ci[1]);
         }
-        return new Summary(n, mean, sd, low, high, Quantiles.ofSorted(sorted, 0.5),
-                Quantiles.ofSorted(sorted, 0.25), Quantiles.ofSorted(sorted, 0.75));
+        return new Summary(n, mean, sd, interval, new Summary.Quartiles(Quantiles.ofSorted(sorted, 0.25),
+                Quantiles.ofSorted(sorted, 0.5), Quantiles.ofSorted(sorted, 0.75)));
     }
 
     /** The arithmetic mean, summed in a second pass of corrections for accuracy (common practice). */

@@ -99,10 +99,11 @@ public final class PairedComparison {
             }
         }
         int n = pairs.size();
+        boolean directed = metric.direction() != Direction.NONE;
+        ComparisonRow.Builder row = ComparisonRow.builder().setting(setting).metric(name).configurationId(config)
+                .referenceId(referenceId).pairs(n);
         if (n == 0) {
-            return new ComparisonRow(setting, name, config, referenceId, 0, null, null, null, null, null,
-                    metric.direction() == Direction.NONE ? null : 0, metric.direction() == Direction.NONE ? null : 0,
-                    metric.direction() == Direction.NONE ? null : 0);
+            return row.wins(directed ? 0 : null).ties(directed ? 0 : null).losses(directed ? 0 : null).build();
         }
         double[] d = new double[n];
         int wins = 0;
@@ -128,9 +129,9 @@ public final class PairedComparison {
             low = ci[0];
             high = ci[1];
         }
-        boolean directed = metric.direction() != Direction.NONE;
-        return new ComparisonRow(setting, name, config, referenceId, n, mean, low, high, wilcoxon(d), null,
-                directed ? wins : null, directed ? n - wins - losses : null, directed ? losses : null);
+        return row.meanDifference(mean).low(low).high(high).pValue(wilcoxon(d))
+                .wins(directed ? wins : null).ties(directed ? n - wins - losses : null).losses(directed ? losses : null)
+                .build();
     }
 
     /** The two-sided signed-rank p-value, or null when every difference is zero. */

@@ -95,6 +95,8 @@ public final class Ranking {
             }
         }
         Double cd = n >= 1 ? Nemenyi.criticalDifference(k, n, alpha) : null;
-        return new RankingResult(metric, configs, meanRanks, n, dropped, chi, Math.max(k - 1, 0), p, alpha, cd);
+        return RankingResult.builder().metric(metric).configurations(configs).meanRanks(meanRanks)
+                .settingsUsed(n).settingsDropped(dropped).friedmanChiSquare(chi).degreesOfFreedom(Math.max(k - 1, 0))
+                .friedmanPValue(p).alpha(alpha).criticalDifference(cd).build();
     }
 }

@@ -18,6 +18,6 @@ public final class AdjacencyF1 extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return f1(n.commonEdges(), n.estimatedEdges(), n.trueEdges());
+        return f1(n.edges().common(), n.edges().inEstimate(), n.edges().inTruth());
     }
 }

@@ -24,6 +24,6 @@ public final class AdjacencyFalsePositiveRate extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.extraEdges(), n.pairs() - n.trueEdges());
+        return EdgeCounts.ratio(n.extraEdges(), n.pairs() - n.edges().inTruth());
     }
 }

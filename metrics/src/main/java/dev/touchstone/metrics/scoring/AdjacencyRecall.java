@@ -18,6 +18,6 @@ public final class AdjacencyRecall extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.commonEdges(), n.trueEdges());
+        return EdgeCounts.ratio(n.edges().common(), n.edges().inTruth());
     }
 }

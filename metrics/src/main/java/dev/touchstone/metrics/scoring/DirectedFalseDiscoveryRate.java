@@ -18,6 +18,6 @@ public final class DirectedFalseDiscoveryRate extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.directedReversed() + n.extraEdges(), n.estimatedEdges());
+        return EdgeCounts.ratio(n.directed().reversed() + n.extraEdges(), n.edges().inEstimate());
     }
 }

@@ -22,6 +22,6 @@ public final class DirectedFalsePositiveRate extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.directedReversed() + n.extraEdges(), n.pairs() - n.trueEdges());
+        return EdgeCounts.ratio(n.directed().reversed() + n.extraEdges(), n.pairs() - n.edges().inTruth());
     }
 }

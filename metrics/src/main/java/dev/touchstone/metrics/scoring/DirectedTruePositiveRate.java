@@ -18,6 +18,6 @@ public final class DirectedTruePositiveRate extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.directedHits(), n.trueEdges());
+        return EdgeCounts.ratio(n.directed().hits(), n.edges().inTruth());
     }
 }

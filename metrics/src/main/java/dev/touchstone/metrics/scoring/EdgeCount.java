@@ -18,6 +18,6 @@ public final class EdgeCount extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return (double) n.estimatedEdges();
+        return (double) n.edges().inEstimate();
     }
 }

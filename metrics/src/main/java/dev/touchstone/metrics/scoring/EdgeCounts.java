@@ -8,30 +8,49 @@ import dev.touchstone.core.graph.Mark;
  * edges of a truth and an estimate over the same variables in the same order.
  *
  * <p>Cost: O(p + E_truth + E_estimate) time, merging the two sorted adjacency rows of each
- * variable; no allocation beyond this record.
+ * variable; no allocation beyond these records.
  *
- * @param variables        p, the number of variables
- * @param trueEdges        pairs adjacent in the truth
- * @param estimatedEdges   pairs adjacent in the estimate
- * @param commonEdges      pairs adjacent in both
- * @param identicalEdges   pairs adjacent in both with the same mark at each end
- * @param trueArrows       arrowhead endpoints in the truth
- * @param estimatedArrows  arrowhead endpoints in the estimate
- * @param correctArrows    estimated arrowheads at x on {x, y} where the truth has an edge on
- *                         {x, y} with an arrowhead at x
- * @param trueTails        tail endpoints in the truth
- * @param estimatedTails   tail endpoints in the estimate
- * @param correctTails     estimated tails matched by a true tail at the same end of the same pair
- * @param directedHits     estimated edges on true-adjacent pairs counted as true positives by the
- *                         rule of Zheng et al. (2018): a directed edge x → y whose truth has no
- *                         arrowhead at x, or an undirected edge (treated favourably)
- * @param directedReversed estimated directed edges x → y on true-adjacent pairs whose truth has an
- *                         arrowhead at x (reversed, or bidirected in a MAG truth)
+ * @param variables p, the number of variables
+ * @param edges     pairs adjacent in the truth, in the estimate, in both, and in both with the same marks
+ * @param arrows    arrowhead endpoints: an estimated arrowhead at x on {x, y} is correct where the
+ *                  truth has an edge on {x, y} with an arrowhead at x
+ * @param tails     tail endpoints: an estimated tail is correct where the truth has a tail at the
+ *                  same end of the same pair
+ * @param directed  the calls on estimated edges by the rule of Zheng et al. (2018)
  */
-public record EdgeCounts(int variables, long trueEdges, long estimatedEdges, long commonEdges, long identicalEdges,
-                         long trueArrows, long estimatedArrows, long correctArrows,
-                         long trueTails, long estimatedTails, long correctTails,
-                         long directedHits, long directedReversed) {
+public record EdgeCounts(int variables, Adjacencies edges, Endpoints arrows, Endpoints tails, DirectedCalls directed) {
+
+    /**
+     * Counts of adjacent pairs.
+     *
+     * @param inTruth    pairs adjacent in the truth
+     * @param inEstimate pairs adjacent in the estimate
+     * @param common     pairs adjacent in both
+     * @param identical  pairs adjacent in both with the same mark at each end
+     */
+    public record Adjacencies(long inTruth, long inEstimate, long common, long identical) {
+    }
+
+    /**
+     * Counts of the endpoints that carry one mark.
+     *
+     * @param inTruth    endpoints with the mark in the truth
+     * @param inEstimate endpoints with the mark in the estimate
+     * @param correct    estimated ones matched by the truth at the same end of the same pair
+     */
+    public record Endpoints(long inTruth, long inEstimate, long correct) {
+    }
+
+    /**
+     * Estimated edges on true-adjacent pairs, called as Zheng et al. (2018) call them.
+     *
+     * @param hits     true positives: a directed edge x → y whose truth has no arrowhead at x, or an
+     *                 undirected edge (treated favourably)
+     * @param reversed directed edges x → y whose truth has an arrowhead at x (reversed, or
+     *                 bidirected in a MAG truth)
+     */
+    public record DirectedCalls(long hits, long reversed) {
+    }
 
     /** Counts for a truth and an estimate over the same variables in the same index order. */
     public static EdgeCounts of(Graph truth, Graph estimate) {
@@ -108,8 +127,9 @@ public record EdgeCounts(int variables, long trueEdges, long estimatedEdges, lon
                 }
             }
         }
-        return new EdgeCounts(p, truth.edgeCount(), estimate.edgeCount(), common, identical,
-                trueArrows, estArrows, correctArrows, trueTails, estTails, correctTails, hits, reversed);
+        return new EdgeCounts(p, new Adjacencies(truth.edgeCount(), estimate.edgeCount(), common, identical),
+                new Endpoints(trueArrows, estArrows, correctArrows), new Endpoints(trueTails, estTails, correctTails),
+                new DirectedCalls(hits, reversed));
     }
 
     /** Number of unordered pairs of variables, p(p − 1)/2. */
@@ -119,12 +139,12 @@ public record EdgeCounts(int variables, long trueEdges, long estimatedEdges, lon
 
     /** Pairs adjacent in exactly one of the two graphs, or in both with some mark different. */
     public long differingPairs() {
-        return trueEdges + estimatedEdges - commonEdges - identicalEdges;
+        return edges.inTruth() + edges.inEstimate() - edges.common() - edges.identical();
     }
 
     /** Estimated edges on pairs the truth does not join. */
     public long extraEdges() {
-        return estimatedEdges - commonEdges;
+        return edges.inEstimate() - edges.common();
     }
 
     /** {@code numerator / denominator}, or null (undefined) when the denominator is 0. */

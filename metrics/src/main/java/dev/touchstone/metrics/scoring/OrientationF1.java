@@ -18,6 +18,6 @@ public final class OrientationF1 extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return f1(n.correctArrows(), n.estimatedArrows(), n.trueArrows());
+        return f1(n.arrows().correct(), n.arrows().inEstimate(), n.arrows().inTruth());
     }
 }

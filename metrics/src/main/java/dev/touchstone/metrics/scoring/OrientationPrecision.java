@@ -18,6 +18,6 @@ public final class OrientationPrecision extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.correctArrows(), n.estimatedArrows());
+        return EdgeCounts.ratio(n.arrows().correct(), n.arrows().inEstimate());
     }
 }

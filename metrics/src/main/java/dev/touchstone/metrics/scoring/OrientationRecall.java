@@ -18,6 +18,6 @@ public final class OrientationRecall extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.correctArrows(), n.trueArrows());
+        return EdgeCounts.ratio(n.arrows().correct(), n.arrows().inTruth());
     }
 }

@@ -18,6 +18,6 @@ public final class TailRecall extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return EdgeCounts.ratio(n.correctTails(), n.trueTails());
+        return EdgeCounts.ratio(n.tails().correct(), n.tails().inTruth());
     }
 }

@@ -25,6 +25,6 @@ public final class WrongArrowheads extends BaseMetric {
     @Override
     public Double value(GraphComparison c) {
         EdgeCounts n = c.counts();
-        return (double) (n.estimatedArrows() - n.correctArrows());
+        return (double) (n.arrows().inEstimate() - n.arrows().correct());
     }
 }

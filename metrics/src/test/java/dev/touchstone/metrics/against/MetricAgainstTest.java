@@ -48,8 +48,8 @@ class MetricAgainstTest {
     }
 
     private static RunResult ok(Setting s, String config, int rep, String metric, double v) {
-        return new RunResult(config + rep, s, rep, config, config, Map.of(), rep, RunStatus.OK, null, null, null,
-                Map.of(metric, v), null);
+        return RunResult.builder().key(config + rep).setting(s).replicate(rep).configurationId(config)
+                .learnerId(config).seed(rep).status(RunStatus.OK).metrics(Map.of(metric, v)).build();
     }
 
     @Test

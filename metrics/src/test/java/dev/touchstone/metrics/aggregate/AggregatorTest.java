@@ -88,12 +88,16 @@ class AggregatorTest {
             Map<String, Double> m = new HashMap<>();
             m.put("shd", (double) rep);
             m.put("adjacency_precision", rep == 0 ? null : 0.5);
-            runs.add(new RunResult("a" + rep, a, rep, "pc-fz", "pc", Map.of("alpha", "0.05"), rep, RunStatus.OK, null,
-                    null, null, m, new Timings(0.5 * rep, null, null, 10L * rep, null)));
+            runs.add(RunResult.builder().key("a" + rep).setting(a).replicate(rep).configurationId("pc-fz")
+                    .learnerId("pc").parameters(Map.of("alpha", "0.05")).seed(rep).status(RunStatus.OK).metrics(m)
+                    .timings(new Timings(0.5 * rep, null, null, 10L * rep, null)).build());
         }
-        runs.add(new RunResult("a6", a, 6, "pc-fz", "pc", Map.of(), 6, RunStatus.TIMEOUT, "over 120 s", null, null, Map.of(), null));
-        runs.add(new RunResult("a7", a, 7, "pc-fz", "pc", Map.of(), 7, RunStatus.SKIPPED, "discrete data", null, null, Map.of(), null));
-        runs.add(new RunResult("b0", b, 0, "pc-fz", "pc", Map.of(), 0, RunStatus.FAILED, "singular matrix", null, null, Map.of(), null));
+        runs.add(RunResult.builder().key("a6").setting(a).replicate(6).configurationId("pc-fz").learnerId("pc")
+                .seed(6).status(RunStatus.TIMEOUT).message("over 120 s").build());
+        runs.add(RunResult.builder().key("a7").setting(a).replicate(7).configurationId("pc-fz").learnerId("pc")
+                .seed(7).status(RunStatus.SKIPPED).message("discrete data").build());
+        runs.add(RunResult.builder().key("b0").setting(b).replicate(0).configurationId("pc-fz").learnerId("pc")
+                .seed(0).status(RunStatus.FAILED).message("singular matrix").build());
         List<String> metrics = List.of("shd", "adjacency_precision", "seconds", "tests");
         List<AggregateRow> rows = Aggregator.aggregate(runs, metrics, 42);
         assertEquals(8, rows.size());

@@ -19,8 +19,8 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 class PairedComparisonTest {
 
     private static RunResult ok(Setting s, String config, int rep, String metric, double v) {
-        return new RunResult(config + rep + s.label(), s, rep, config, config, Map.of(), rep, RunStatus.OK, null, null,
-                null, Map.of(metric, v), null);
+        return RunResult.builder().key(config + rep + s.label()).setting(s).replicate(rep).configurationId(config)
+                .learnerId(config).seed(rep).status(RunStatus.OK).metrics(Map.of(metric, v)).build();
     }
 
     @Test
@@ -88,8 +88,8 @@ class PairedComparisonTest {
             if (r != 3) {
                 runs.add(ok(s, "empty", r, "shd", other[r]));
             } else {
-                runs.add(new RunResult("e3", s, r, "empty", "empty", Map.of(), r, RunStatus.FAILED, "boom", null, null,
-                        Map.of(), null));
+                runs.add(RunResult.builder().key("e3").setting(s).replicate(r).configurationId("empty")
+                        .learnerId("empty").seed(r).status(RunStatus.FAILED).message("boom").build());
             }
         }
         List<ComparisonRow> rows = PairedComparison.compare(runs, "ges", List.of("shd"), 9);

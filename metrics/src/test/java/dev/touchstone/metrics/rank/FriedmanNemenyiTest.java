@@ -111,8 +111,8 @@ class FriedmanNemenyiTest {
         }
         Setting partial = Setting.of("nodes", "70");
         runs.add(run(partial, "good", 0.9));
-        runs.add(new RunResult("k-x", partial, 0, "poor", "poor", Map.of(), 1, RunStatus.FAILED, "boom",
-                null, null, Map.of(), null));
+        runs.add(RunResult.builder().key("k-x").setting(partial).replicate(0).configurationId("poor")
+                .learnerId("poor").seed(1).status(RunStatus.FAILED).message("boom").build());
         RankingResult r = Ranking.over(runs, "adjacency_f1", 0.05);
         assertEquals(List.of("good", "mid", "poor"), r.configurations());
         // ranks per setting: (1, 2, 3) five times, then (1.5, 1.5, 3)
@@ -150,7 +150,7 @@ class FriedmanNemenyiTest {
     }
 
     private static RunResult run(Setting s, String config, double f1) {
-        return new RunResult("k-" + s.label() + config, s, 0, config, config, Map.of(), 1, RunStatus.OK, null,
-                null, null, Map.of("adjacency_f1", f1), null);
+        return RunResult.builder().key("k-" + s.label() + config).setting(s).replicate(0).configurationId(config)
+                .learnerId(config).seed(1).status(RunStatus.OK).metrics(Map.of("adjacency_f1", f1)).build();
     }
 }

@@ -21,8 +21,9 @@ class ResultRecordsTest {
         Map<String, Double> metrics = new LinkedHashMap<>();
         metrics.put("shd", 3.0);
         metrics.put("adjacency_precision", null);
-        RunResult r = new RunResult("k1", Setting.of("nodes", "20", "samples", "oracle"), 0, "pc-fz", "pc",
-                Map.of("alpha", "0.01"), 42, RunStatus.OK, null, null, null, metrics, new Timings(1.5, 1.2, 30.0, 100L, null));
+        RunResult r = RunResult.builder().key("k1").setting(Setting.of("nodes", "20", "samples", "oracle"))
+                .replicate(0).configurationId("pc-fz").learnerId("pc").parameters(Map.of("alpha", "0.01")).seed(42)
+                .status(RunStatus.OK).metrics(metrics).timings(new Timings(1.5, 1.2, 30.0, 100L, null)).build();
         assertEquals(List.of("nodes", "samples"), List.copyOf(r.setting().coordinates().keySet()));
         assertEquals("nodes=20, samples=oracle", r.setting().label());
         assertEquals(List.of("shd", "adjacency_precision"), List.copyOf(r.metrics().keySet()));
@@ -31,20 +32,24 @@ class ResultRecordsTest {
         assertEquals(100.0, r.value("tests"));
         assertNull(r.value("scores"));
         metrics.put("shd", Double.NaN);
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new RunResult("k1",
-                Setting.of("nodes", "20"), 0, "pc-fz", "pc", Map.of(), 1, RunStatus.OK, null, null, null, metrics, null));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> RunResult.builder()
+                .key("k1").setting(Setting.of("nodes", "20")).replicate(0).configurationId("pc-fz").learnerId("pc")
+                .seed(1).status(RunStatus.OK).metrics(metrics).build());
         assertTrue(e.getMessage().contains("metric 'shd'"), e.getMessage());
     }
 
     @Test
     @DisplayName("a failed run needs a message and carries no metric values; its values read as undefined")
     void failedRun() {
-        assertThrows(IllegalArgumentException.class, () -> new RunResult("k", Setting.of(), 0, "c", "l", Map.of(), 1,
-                RunStatus.FAILED, " ", null, null, Map.of(), null));
-        assertThrows(IllegalArgumentException.class, () -> new RunResult("k", Setting.of(), 0, "c", "l", Map.of(), 1,
-                RunStatus.TIMEOUT, "limit", null, null, Map.of("shd", 1.0), null));
-        RunResult f = new RunResult("k", Setting.of(), 0, "c", "l", Map.of(), 1, RunStatus.TIMEOUT, "over 60 s",
-                null, null, Map.of(), new Timings(60.0, null, null, null, null));
+        assertThrows(IllegalArgumentException.class, () -> RunResult.builder().key("k").setting(Setting.of())
+                .replicate(0).configurationId("c").learnerId("l").seed(1).status(RunStatus.FAILED).message(" ")
+                .build());
+        assertThrows(IllegalArgumentException.class, () -> RunResult.builder().key("k").setting(Setting.of())
+                .replicate(0).configurationId("c").learnerId("l").seed(1).status(RunStatus.TIMEOUT)
+                .message("limit").metrics(Map.of("shd", 1.0)).build());
+        RunResult f = RunResult.builder().key("k").setting(Setting.of()).replicate(0).configurationId("c")
+                .learnerId("l").seed(1).status(RunStatus.TIMEOUT).message("over 60 s")
+                .timings(new Timings(60.0, null, null, null, null)).build();
         assertNull(f.value("seconds"));
         assertTrue(f.status().isFailure());
     }
@@ -62,9 +67,11 @@ class ResultRecordsTest {
     @Test
     @DisplayName("comparison rows check wins + ties + losses = pairs")
     void comparisonRow() {
-        assertThrows(IllegalArgumentException.class, () -> new ComparisonRow(Setting.of(), "shd", "a", "b", 5, 0.0,
-                null, null, null, null, 1, 1, 1));
-        ComparisonRow ok = new ComparisonRow(Setting.of(), "edges", "a", "b", 5, 0.0, null, null, null, null, null, null, null);
+        assertThrows(IllegalArgumentException.class, () -> ComparisonRow.builder().setting(Setting.of())
+                .metric("shd").configurationId("a").referenceId("b").pairs(5).meanDifference(0.0).wins(1).ties(1)
+                .losses(1).build());
+        ComparisonRow ok = ComparisonRow.builder().setting(Setting.of()).metric("edges").configurationId("a")
+                .referenceId("b").pairs(5).meanDifference(0.0).build();
         assertEquals(0.5, ok.withHolm(0.5).pHolm());
     }
 }

@@ -76,15 +76,15 @@ class GraphComparisonTest {
                 }
             }
             assertEquals(shd, c.differingPairs(), "seed " + seed);
-            assertEquals(common, c.commonEdges());
-            assertEquals(trueArrows, c.trueArrows());
-            assertEquals(estArrows, c.estimatedArrows());
-            assertEquals(correctArrows, c.correctArrows());
-            assertEquals(correctTails, c.correctTails());
-            assertEquals(trueTails, c.trueTails());
-            assertEquals(estTails, c.estimatedTails());
-            assertEquals(t.edgeCount(), c.trueEdges());
-            assertEquals(e.edgeCount(), c.estimatedEdges());
+            assertEquals(common, c.edges().common());
+            assertEquals(trueArrows, c.arrows().inTruth());
+            assertEquals(estArrows, c.arrows().inEstimate());
+            assertEquals(correctArrows, c.arrows().correct());
+            assertEquals(correctTails, c.tails().correct());
+            assertEquals(trueTails, c.tails().inTruth());
+            assertEquals(estTails, c.tails().inEstimate());
+            assertEquals(t.edgeCount(), c.edges().inTruth());
+            assertEquals(e.edgeCount(), c.edges().inEstimate());
         }
     }
 

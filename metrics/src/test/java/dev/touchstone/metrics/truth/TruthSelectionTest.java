@@ -41,7 +41,7 @@ class TruthSelectionTest {
     @Test
     @DisplayName("a CPDAG learner that returns the sprinkler CPDAG (Pearl 2000, ch. 1) is exact against its own class, not charged for unknowable orientations")
     void cpdagLearnerScoredAgainstCpdag() {
-        // CPDAG from checks.md: season—sprinkler, season—rain undirected; sprinkler → wet ← rain; wet → slippery
+        // CPDAG of Pearl's sprinkler network (Pearl 2000, ch. 1): season—sprinkler, season—rain undirected; sprinkler → wet ← rain; wet → slippery
         Graph cpdag = Graph.builder(NAMES).addUndirected(0, 1).addUndirected(0, 2).addDirected(1, 3).addDirected(2, 3)
                 .addDirected(3, 4).freeze();
         Truth t = TruthSelection.forEstimate(sprinkler(), GraphClass.CPDAG);

@@ -18,8 +18,8 @@ final class CalibrationTables {
                 "mean", "mean, fitted truth only", "replicates ok", "not ok"));
         for (CalibrationView.Expectation e : v.expectations()) {
             t.row(e.learner(), e.metric(), Numbers.format(e.spread().median()), range(e.spread()),
-                    Numbers.format(e.mean()), Numbers.format(e.fittedMean()), Integer.toString(e.ok()),
-                    Integer.toString(e.notOk()));
+                    Numbers.format(e.means().allTruths()), Numbers.format(e.means().fittedTruth()),
+                    Integer.toString(e.replicates().ok()), Integer.toString(e.replicates().notOk()));
         }
         return t.build();
     }
@@ -59,9 +59,11 @@ final class CalibrationTables {
         Table.Builder t = Table.builder(List.of("learner", "edge", "in fitted truth", "adjacent (simulated)",
                 "oriented so (simulated)", "adjacent (bootstrap)", "oriented so (bootstrap)"));
         for (CalibrationView.EdgeRow e : v.edges()) {
-            t.row(e.learner(), e.from() + " → " + e.to(), e.inTruth() ? "yes" : "no", Numbers.format(e.recovered()),
-                    Numbers.format(e.oriented()), Numbers.format(e.bootstrapAdjacent()),
-                    Numbers.format(e.bootstrapDirected()));
+            // an edge not in the fitted truth has nothing to recover: its simulated cells are undefined
+            CalibrationView.Frequencies simulated = e.inTruth() ? e.simulated() : CalibrationView.Frequencies.UNDEFINED;
+            t.row(e.learner(), e.from() + " → " + e.to(), e.inTruth() ? "yes" : "no",
+                    Numbers.format(simulated.adjacent()), Numbers.format(simulated.oriented()),
+                    Numbers.format(e.bootstrap().adjacent()), Numbers.format(e.bootstrap().oriented()));
         }
         return t.build();
     }
@@ -70,10 +72,11 @@ final class CalibrationTables {
         Table.Builder t = Table.builder(List.of("variable", "kind", "rows fitted", "missing", "residual skewness",
                 "residual excess kurtosis", "normality p (Jarque–Bera)", "nonlinearity p (RESET)"));
         for (CalibrationView.Check c : v.checks()) {
+            CalibrationView.Residuals r = c.residuals();
             t.row(c.variable(), c.kind(), Integer.toString(c.rows()),
-                    String.format(Locale.ROOT, "%.1f%%", 100 * c.missingRate()), Numbers.format(c.skewness()),
-                    Numbers.format(c.excessKurtosis()), Numbers.format(c.normalityP()),
-                    Numbers.format(c.nonlinearityP()));
+                    String.format(Locale.ROOT, "%.1f%%", 100 * c.missingRate()), Numbers.format(r.skewness()),
+                    Numbers.format(r.excessKurtosis()), Numbers.format(r.normalityP()),
+                    Numbers.format(r.nonlinearityP()));
         }
         return t.build();
     }

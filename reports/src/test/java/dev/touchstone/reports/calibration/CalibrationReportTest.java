@@ -52,15 +52,20 @@ class CalibrationReportTest {
     @Test
     @DisplayName("the report opens with the cautions and states warnings before any figure")
     void cautionsFirst() {
-        CalibrationView v = new CalibrationView("Calibration", List.of("data.csv: 400 rows"), List.of("truth given"),
-                List.of("MCAR"), List.of("x is missing in 30% of rows."), 400, 400, List.of("pc"),
-                List.of(new CalibrationView.Expectation("pc", "orientation_precision", 0.7,
-                        new CalibrationView.Spread(0.5, 0.75, 0.9), 0.72, 10, 0)),
-                List.of(p(200, 0.6), p(400, 0.7), p(1600, 0.9)),
-                new CalibrationView.Target("orientation_precision", 0.8),
-                List.of(new CalibrationView.EdgeRow("pc", "a", "b", true, 0.9, 0.5, 0.8, 0.4)),
-                List.of(new CalibrationView.Check("a", "continuous", 400, 0.0, 0.1, 0.2, 0.5, null)),
-                List.of("seed 1"));
+        CalibrationView v = CalibrationView.builder().title("Calibration").dataLines(List.of("data.csv: 400 rows"))
+                .truthLines(List.of("truth given")).assumptions(List.of("MCAR"))
+                .warnings(List.of("x is missing in 30% of rows.")).analystRows(400).expectedAt(400)
+                .learners(List.of("pc"))
+                .expectations(List.of(new CalibrationView.Expectation("pc", "orientation_precision",
+                        new CalibrationView.Means(0.7, 0.72), new CalibrationView.Spread(0.5, 0.75, 0.9),
+                        new CalibrationView.Replicates(10, 0))))
+                .curve(List.of(p(200, 0.6), p(400, 0.7), p(1600, 0.9)))
+                .target(new CalibrationView.Target("orientation_precision", 0.8))
+                .edges(List.of(new CalibrationView.EdgeRow("pc", "a", "b", new CalibrationView.Frequencies(0.9, 0.5),
+                        new CalibrationView.Frequencies(0.8, 0.4))))
+                .checks(List.of(new CalibrationView.Check("a", "continuous", 400, 0.0,
+                        new CalibrationView.Residuals(0.1, 0.2, 0.5, null))))
+                .settings(List.of("seed 1")).build();
         String html = CalibrationReport.html(v);
         String md = CalibrationReport.markdown(v);
         for (String line : Cautions.LINES) {

@@ -41,7 +41,7 @@ class PagsTest {
     }
 
     @Test
-    @DisplayName("sprinkler network, nothing hidden: the CPDAG's skeleton with PAG marks (Pearl 2000, ch. 1; checks.md)")
+    @DisplayName("sprinkler network, nothing hidden: the CPDAG's skeleton with PAG marks (Pearl 2000, ch. 1)")
     void sprinkler() {
         Graph dag = graph("season sprinkler rain wet slippery",
                 "season --> sprinkler; season --> rain; sprinkler --> wet; rain --> wet; wet --> slippery");
