@@ -38,26 +38,6 @@ public final class FitDiagnostics {
      * @param residuals the tests of its residuals ({@link Residuals#NONE} when none applies)
      */
     public record Check(String name, boolean continuous, int rows, double missingRate, Residuals residuals) {
-
-        /** The residuals' sample skewness, or null. */
-        public Double skewness() {
-            return residuals.skewness();
-        }
-
-        /** The residuals' sample excess kurtosis, or null. */
-        public Double excessKurtosis() {
-            return residuals.excessKurtosis();
-        }
-
-        /** The Jarque–Bera p-value of the residuals, or null. */
-        public Double normalityP() {
-            return residuals.normalityP();
-        }
-
-        /** The RESET-type p-value, or null. */
-        public Double nonlinearityP() {
-            return residuals.nonlinearityP();
-        }
     }
 
     /**
