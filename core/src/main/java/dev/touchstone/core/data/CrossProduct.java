@@ -1,7 +1,6 @@
 package dev.touchstone.core.data;
 
-import java.util.concurrent.atomic.AtomicInteger;
-import java.util.concurrent.atomic.AtomicReference;
+import dev.touchstone.core.learner.ParallelLoop;
 
 /**
  * The upper triangle of X'X for a row-major n × p matrix X, by a cache-blocked loop that
@@ -49,42 +48,7 @@ final class CrossProduct {
         // Tasks: (column block, range of output rows); the larger blocks (more rows above
         // the diagonal) are listed first so that threads finish together.
         int[][] tasks = tasks(p, blocks);
-        if (threads <= 1 || tasks.length == 1) {
-            for (int[] t : tasks) {
-                run(x, out, n, p, t);
-            }
-            return out;
-        }
-        AtomicInteger next = new AtomicInteger();
-        AtomicReference<Throwable> failure = new AtomicReference<>();
-        Runnable worker = () -> {
-            try {
-                for (int k = next.getAndIncrement(); k < tasks.length; k = next.getAndIncrement()) {
-                    run(x, out, n, p, tasks[k]);
-                }
-            } catch (Throwable e) {
-                failure.compareAndSet(null, e);
-            }
-        };
-        int helpers = Math.min(threads, tasks.length) - 1;
-        Thread[] pool = new Thread[helpers];
-        for (int h = 0; h < helpers; h++) {
-            pool[h] = new Thread(worker, "touchstone-covariance-" + h);
-            pool[h].setDaemon(true);
-            pool[h].start();
-        }
-        worker.run();
-        for (Thread t : pool) {
-            try {
-                t.join();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while computing a covariance", e);
-            }
-        }
-        if (failure.get() != null) {
-            throw new IllegalStateException("covariance computation failed", failure.get());
-        }
+        ParallelLoop.run(threads, tasks.length, 1, () -> k -> run(x, out, n, p, tasks[k]));
         return out;
     }
 

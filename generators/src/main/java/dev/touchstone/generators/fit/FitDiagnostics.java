@@ -33,13 +33,23 @@ public final class FitDiagnostics {
     }
 
     /**
-     * The checks of one variable (null where a test does not apply).
+     * The checks of one variable.
      *
-     * @param normalityP    Jarque–Bera p-value of the residuals
+     * @param residuals the tests of its residuals ({@link Residuals#NONE} when none applies)
+     */
+    public record Check(String name, boolean continuous, int rows, double missingRate, Residuals residuals) {
+    }
+
+    /**
+     * The tests of a continuous variable's residuals (null where a test does not apply).
+     *
+     * @param normalityP    Jarque–Bera p-value
      * @param nonlinearityP RESET-type p-value
      */
-    public record Check(String name, boolean continuous, int rows, double missingRate, Double skewness,
-                        Double excessKurtosis, Double normalityP, Double nonlinearityP) {
+    public record Residuals(Double skewness, Double excessKurtosis, Double normalityP, Double nonlinearityP) {
+
+        /** No test applied. */
+        public static final Residuals NONE = new Residuals(null, null, null, null);
     }
 
     /** One check per variable, in graph order. */
@@ -49,8 +59,7 @@ public final class FitDiagnostics {
         for (int v = 0; v < model.nodes().size(); v++) {
             FittedNode n = model.nodes().get(v);
             if (!(n instanceof FittedNode.Gaussian g) || g.rows() < MIN_ROWS) {
-                out.add(new Check(n.name(), n instanceof FittedNode.Gaussian, n.rows(), rates[v], null, null, null,
-                        null));
+                out.add(new Check(n.name(), n instanceof FittedNode.Gaussian, n.rows(), rates[v], Residuals.NONE));
                 continue;
             }
             double[] e = g.residuals();
@@ -65,7 +74,7 @@ public final class FitDiagnostics {
                 normal = 1 - new ChiSquaredDistribution(null, 2).cumulativeProbability(jb);
             }
             Double nonlinear = g.continuousParents().isEmpty() || moments[1] == 0 ? null : reset(g);
-            out.add(new Check(n.name(), true, n.rows(), rates[v], skew, kurt, normal, nonlinear));
+            out.add(new Check(n.name(), true, n.rows(), rates[v], new Residuals(skew, kurt, normal, nonlinear)));
         }
         return out;
     }

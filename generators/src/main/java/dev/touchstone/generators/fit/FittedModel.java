@@ -4,7 +4,6 @@ import dev.touchstone.core.data.Variable;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.algorithms.Ancestry;
 import dev.touchstone.generators.missing.MissingnessDriver;
-import dev.touchstone.generators.missing.MissingnessMechanisms;
 import dev.touchstone.generators.missing.MissingnessPlan;
 import dev.touchstone.generators.models.ModelAssembly;
 import dev.touchstone.generators.models.StructuralModel;
@@ -88,8 +87,7 @@ public final class FittedModel {
         List<MissingnessDriver> drivers = new ArrayList<>();
         for (int v = 0; v < dag.size(); v++) {
             if (missingRates[v] > 0) {
-                drivers.add(new MissingnessDriver(dag.name(v), MissingnessMechanisms.MCAR, null, missingRates[v], 0, 0,
-                        0, 1));
+                drivers.add(MissingnessDriver.completelyAtRandom(dag.name(v), missingRates[v]));
             }
         }
         return new MissingnessPlan(drivers);

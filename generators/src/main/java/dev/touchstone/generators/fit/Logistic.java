@@ -87,7 +87,8 @@ final class Logistic {
             }
         }
         return new FittedNode.Categorical(data.variable(v).name(), m, data.variable(v).categories(),
-                StructureFit.names(data, dis), a, StructureFit.names(data, con), centre, scale, b);
+                new FittedNode.Categorical.Intercepts(StructureFit.names(data, dis), a),
+                new FittedNode.Categorical.Effects(StructureFit.names(data, con), centre, scale, b));
     }
 
     /** The penalised mean log-likelihood; fills the gradients when they are not null. */

@@ -178,8 +178,7 @@ public record Perturbation(double dropFraction, double densityLow, double densit
                     }
                 }
             }
-            return new FittedNode.Gaussian(g.name(), g.rows(), g.intercept(), g.continuousParents(), w,
-                    g.discreteParents(), s, g.noiseSd(), g.residuals(), g.fitted());
+            return new FittedNode.Gaussian(g.name(), g.rows(), g.mean().with(w, s), g.noiseSd(), g.onRows());
         }
         FittedNode.Categorical c = (FittedNode.Categorical) n;
         double[][] slopes = new double[c.slopes().length][];
@@ -212,8 +211,9 @@ public record Perturbation(double dropFraction, double densityLow, double densit
                 a2[r][j] = mean[j] + spread * (a[r][j] - mean[j]);
             }
         }
-        return new FittedNode.Categorical(c.name(), c.rows(), c.categories(), c.discreteParents(), a2,
-                c.continuousParents(), c.centre(), c.scale(), slopes);
+        return new FittedNode.Categorical(c.name(), c.rows(), c.categories(),
+                new FittedNode.Categorical.Intercepts(c.discreteParents(), a2),
+                new FittedNode.Categorical.Effects(c.continuousParents(), c.centre(), c.scale(), slopes));
     }
 
     /** The median over continuous children of |weight| · sd(parent) / sd(child), 0 when there is none. */

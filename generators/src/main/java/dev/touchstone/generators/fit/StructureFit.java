@@ -154,8 +154,9 @@ public final class StructureFit {
             shifts[k] = new double[data.variable(dis.get(k)).cardinality()];
             System.arraycopy(beta, offset[k], shifts[k], 1, shifts[k].length - 1);
         }
-        return new FittedNode.Gaussian(data.variable(v).name(), rows.length, beta[0], names(data, con), weights,
-                names(data, dis), shifts, sigma, residuals, fitted);
+        return new FittedNode.Gaussian(data.variable(v).name(), rows.length,
+                new FittedNode.Gaussian.Mean(beta[0], names(data, con), weights, names(data, dis), shifts), sigma,
+                new FittedNode.Gaussian.OnRows(residuals, fitted));
     }
 
     private static void design(DataSet data, List<Integer> con, List<Integer> dis, int[] offset, int r, double[] x) {
@@ -182,7 +183,8 @@ public final class StructureFit {
             counts[config(data, dis, strides, r)][y[r]]++;
         }
         return new FittedNode.Categorical(data.variable(v).name(), rows.length, data.variable(v).categories(),
-                names(data, dis), logSmoothed(counts), List.of(), new double[0], new double[0], new double[k][0]);
+                new FittedNode.Categorical.Intercepts(names(data, dis), logSmoothed(counts)),
+                FittedNode.Categorical.Effects.none(k));
     }
 
     /** The log of (count + α) / (total + α·K), row by row. */

@@ -4,8 +4,8 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.param.ParameterSpec;
+import dev.touchstone.core.random.Shuffles;
 import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.PermutationSampler;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -33,9 +33,7 @@ final class CausalOrder {
 
     /** A uniformly random order of the variables {@code X1 … Xp} (Fisher–Yates shuffle). */
     static CausalOrder random(int nodes, UniformRandomProvider random) {
-        int[] perm = PermutationSampler.natural(nodes);
-        PermutationSampler.shuffle(random, perm);
-        return new CausalOrder(defaultNames(nodes), perm);
+        return new CausalOrder(defaultNames(nodes), Shuffles.permutation(random, nodes));
     }
 
     /** The names {@code X1 … Xp}. */

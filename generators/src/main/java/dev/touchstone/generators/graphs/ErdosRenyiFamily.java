@@ -5,6 +5,7 @@ import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.List;
@@ -20,7 +21,7 @@ import java.util.Locale;
  * the gaps between edges: cost O(n + m) instead of the O(n²) of testing every pair
  * (JGraphT's G(n, p) generator took 0.75 s for 3,000 variables here).
  */
-public final class ErdosRenyiFamily implements GraphFamily {
+public final class ErdosRenyiFamily extends DeclaredGenerator implements GraphFamily {
 
     public static final String ID = "erdos-renyi";
 
@@ -28,26 +29,6 @@ public final class ErdosRenyiFamily implements GraphFamily {
             "expected number of edges at a variable; p = mean_degree / (nodes - 1)");
     static final ParameterSpec EDGE_PROBABILITY = ParameterSpec.real("edge_probability", 0.0, 0.0, 1.0,
             "probability of an edge between any two variables; when above 0 it is used instead of mean_degree");
-
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "independent edges with one probability, oriented along a random causal order";
-    }
-
-    @Override
-    public String publication() {
-        return "Erdős and Rényi (1959), On random graphs I; Gilbert (1959), Random graphs";
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        return List.of(CausalOrder.NODES, MEAN_DEGREE, EDGE_PROBABILITY);
-    }
 
     /** The edge probability the values ask for, checking mean_degree against nodes. */
     public static double edgeProbability(ParameterValues values) {
@@ -65,6 +46,12 @@ public final class ErdosRenyiFamily implements GraphFamily {
                     "parameter 'mean_degree': %s is more than nodes - 1 = %d allows", d, n - 1));
         }
         return d / (n - 1);
+    }
+
+    public ErdosRenyiFamily() {
+        super(ID, "independent edges with one probability, oriented along a random causal order",
+                "Erdős and Rényi (1959), On random graphs I; Gilbert (1959), Random graphs",
+                List.of(CausalOrder.NODES, MEAN_DEGREE, EDGE_PROBABILITY));
     }
 
     @Override

@@ -4,8 +4,11 @@ import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Shuffles;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -14,31 +17,17 @@ import java.util.List;
  * order have as many as there are before them). Common practice in simulation studies that
  * control the in-degree directly. Cost O(n k).
  */
-public final class FixedInDegreeFamily implements GraphFamily {
+public final class FixedInDegreeFamily extends DeclaredGenerator implements GraphFamily {
 
     public static final String ID = "fixed-in-degree";
 
     static final ParameterSpec IN_DEGREE = ParameterSpec.integer("in_degree", 2, 0, 1000,
             "number of parents of every variable (fewer for the first variables of the order)");
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "every variable has the same number of parents, drawn from earlier variables";
-    }
-
-    @Override
-    public String publication() {
-        return "common practice";
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        return List.of(CausalOrder.NODES, IN_DEGREE);
+    public FixedInDegreeFamily() {
+        super(ID, "every variable has the same number of parents, drawn from earlier variables",
+                "common practice",
+                List.of(CausalOrder.NODES, IN_DEGREE));
     }
 
     @Override
@@ -80,17 +69,6 @@ public final class FixedInDegreeFamily implements GraphFamily {
             }
             return out;
         }
-        int[] all = new int[bound];
-        for (int i = 0; i < bound; i++) {
-            all[i] = i;
-        }
-        for (int i = 0; i < k; i++) {
-            int j = i + random.nextInt(bound - i);
-            int t = all[i];
-            all[i] = all[j];
-            all[j] = t;
-            out[i] = all[i];
-        }
-        return out;
+        return Arrays.copyOf(Shuffles.shuffleHead(random, Shuffles.identity(bound), k), k);
     }
 }

@@ -6,6 +6,7 @@ import dev.touchstone.core.graph.algorithms.Ancestry;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -18,7 +19,7 @@ import java.util.Objects;
  * generators do no file I/O); {@link #of(Graph)} binds a graph. Hidden flags of the given
  * graph are kept (a hidden-variable option may change them). Cost O(1) per draw.
  */
-public final class GivenGraphFamily implements GraphFamily {
+public final class GivenGraphFamily extends DeclaredGenerator implements GraphFamily {
 
     public static final String ID = "given";
 
@@ -29,6 +30,9 @@ public final class GivenGraphFamily implements GraphFamily {
     private final List<String> order;
 
     private GivenGraphFamily(Graph dag) {
+        super(ID, "a fixed DAG given as a value, for example read from a graph file",
+                "none (the user's own graph)",
+                List.of(FILE));
         this.dag = dag;
         if (dag == null) {
             this.order = List.of();
@@ -70,26 +74,6 @@ public final class GivenGraphFamily implements GraphFamily {
     /** Whether a graph is bound (the listing entry has none). */
     public boolean isBound() {
         return dag != null;
-    }
-
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "a fixed DAG given as a value, for example read from a graph file";
-    }
-
-    @Override
-    public String publication() {
-        return "none (the user's own graph)";
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        return List.of(FILE);
     }
 
     /**

@@ -1,6 +1,7 @@
 package dev.touchstone.generators.graphs;
 
-import java.util.ArrayList;
+import dev.touchstone.generators.Registry;
+
 import java.util.List;
 
 /** The registry of built-in graph families, in listing order. */
@@ -23,15 +24,6 @@ public final class GraphFamilies {
      * @throws IllegalArgumentException naming the id and listing the known ones
      */
     public static GraphFamily byId(String id) {
-        for (GraphFamily f : ALL) {
-            if (f.id().equals(id)) {
-                return f;
-            }
-        }
-        List<String> known = new ArrayList<>();
-        for (GraphFamily f : ALL) {
-            known.add(f.id());
-        }
-        throw new IllegalArgumentException("unknown graph family '" + id + "' (known: " + String.join(", ", known) + ")");
+        return Registry.byId(ALL, GraphFamily::id, "graph family", id);
     }
 }

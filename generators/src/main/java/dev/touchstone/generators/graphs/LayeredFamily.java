@@ -5,6 +5,7 @@ import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -19,7 +20,7 @@ import java.util.List;
  * (Spirtes, Glymour and Scheines 2000, §5.8 for tiers; the layered construction is common
  * practice). Cost O(n²).
  */
-public final class LayeredFamily implements GraphFamily {
+public final class LayeredFamily extends DeclaredGenerator implements GraphFamily {
 
     public static final String ID = "layered";
 
@@ -31,24 +32,10 @@ public final class LayeredFamily implements GraphFamily {
             List.of("all-later-layers", "next-layer"),
             "whether edges may skip layers or only join neighbouring layers");
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "layers of variables, edges only from earlier to later layers; layers are also tier knowledge";
-    }
-
-    @Override
-    public String publication() {
-        return "common practice (tiers as in Spirtes, Glymour and Scheines 2000, §5.8)";
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        return List.of(CausalOrder.NODES, LAYERS, EDGE_PROBABILITY, LINKS);
+    public LayeredFamily() {
+        super(ID, "layers of variables, edges only from earlier to later layers; layers are also tier knowledge",
+                "common practice (tiers as in Spirtes, Glymour and Scheines 2000, §5.8)",
+                List.of(CausalOrder.NODES, LAYERS, EDGE_PROBABILITY, LINKS));
     }
 
     @Override

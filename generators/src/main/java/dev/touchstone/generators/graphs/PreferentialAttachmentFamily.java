@@ -5,6 +5,7 @@ import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.jgrapht.Graph;
 import org.jgrapht.generate.BarabasiAlbertGraphGenerator;
@@ -22,7 +23,7 @@ import java.util.List;
  * other way round. Arrival order is mapped to a random permutation of the names. Uses
  * JGraphT's {@link BarabasiAlbertGraphGenerator}. Cost O(n m) expected.
  */
-public final class PreferentialAttachmentFamily implements GraphFamily {
+public final class PreferentialAttachmentFamily extends DeclaredGenerator implements GraphFamily {
 
     public static final String ID = "scale-free";
 
@@ -31,24 +32,10 @@ public final class PreferentialAttachmentFamily implements GraphFamily {
     static final ParameterSpec HUBS = ParameterSpec.choice("hubs", "causes", List.of("causes", "effects"),
             "whether well-connected early variables are causes (edges point away) or effects (edges point in)");
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "preferential attachment (scale-free degrees), hubs as causes or as effects";
-    }
-
-    @Override
-    public String publication() {
-        return "Barabási and Albert (1999), Emergence of scaling in random networks, Science 286";
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        return List.of(CausalOrder.NODES, EDGES_PER_NODE, HUBS);
+    public PreferentialAttachmentFamily() {
+        super(ID, "preferential attachment (scale-free degrees), hubs as causes or as effects",
+                "Barabási and Albert (1999), Emergence of scaling in random networks, Science 286",
+                List.of(CausalOrder.NODES, EDGES_PER_NODE, HUBS));
     }
 
     @Override

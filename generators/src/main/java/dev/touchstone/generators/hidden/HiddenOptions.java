@@ -3,6 +3,8 @@ package dev.touchstone.generators.hidden;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Shuffles;
+import dev.touchstone.generators.Registry;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -46,16 +48,7 @@ public final class HiddenOptions {
      * @throws IllegalArgumentException naming the id and listing the known ones
      */
     public static HiddenOption byId(String id) {
-        for (HiddenOption o : ALL) {
-            if (o.id().equals(id)) {
-                return o;
-            }
-        }
-        List<String> known = new ArrayList<>();
-        for (HiddenOption o : ALL) {
-            known.add(o.id());
-        }
-        throw new IllegalArgumentException("unknown hidden option '" + id + "' (known: " + String.join(", ", known) + ")");
+        return Registry.byId(ALL, HiddenOption::id, "hidden option", id);
     }
 
     private record Option(String id, String summary, List<ParameterSpec> parameters, boolean hides,
@@ -77,14 +70,9 @@ public final class HiddenOptions {
                     eligible.add(v);
                 }
             }
-            // Partial Fisher–Yates shuffle: the first k of the list are a uniform choice.
+            // The first k of the list become a uniform choice.
             int take = Math.min(k, eligible.size());
-            for (int i = 0; i < take; i++) {
-                int j = i + random.nextInt(eligible.size() - i);
-                Integer t = eligible.get(i);
-                eligible.set(i, eligible.get(j));
-                eligible.set(j, t);
-            }
+            Shuffles.shuffleHead(random, eligible, take);
             Set<String> hidden = new LinkedHashSet<>();
             for (int i = 0; i < take; i++) {
                 hidden.add(dag.name(eligible.get(i)));

@@ -5,6 +5,8 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterException;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.core.random.Shuffles;
+import dev.touchstone.generators.Registry;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
@@ -68,17 +70,7 @@ public final class MissingnessMechanisms {
      * @throws IllegalArgumentException naming the id and listing the known ones
      */
     public static MissingnessMechanism byId(String id) {
-        for (MissingnessMechanism m : ALL) {
-            if (m.id().equals(id)) {
-                return m;
-            }
-        }
-        List<String> known = new ArrayList<>();
-        for (MissingnessMechanism m : ALL) {
-            known.add(m.id());
-        }
-        throw new IllegalArgumentException("unknown missingness mechanism '" + id + "' (known: "
-                + String.join(", ", known) + ")");
+        return Registry.byId(ALL, MissingnessMechanism::id, "missingness mechanism", id);
     }
 
     private record Mechanism(String id, String summary, List<ParameterSpec> parameters)
@@ -111,7 +103,7 @@ public final class MissingnessMechanisms {
                             + "variables: one to lose values and one to drive it");
                 }
             }
-            shuffle(pool, random);
+            Shuffles.shuffle(random, pool);
             List<Integer> lose = new ArrayList<>(pool.subList(0, affected));
             List<Integer> complete = new ArrayList<>(pool.subList(affected, pool.size()));
             List<Integer> hidden = new ArrayList<>();
@@ -131,7 +123,7 @@ public final class MissingnessMechanisms {
                 double r = Math.min(0.95, Math.max(0.0, rate + spread * (2 * random.nextDouble() - 1)));
                 String name = truth.name(v);
                 if (id.equals(MCAR)) {
-                    out.add(new MissingnessDriver(name, MCAR, null, r, 0, 0, 0, 1));
+                    out.add(MissingnessDriver.completelyAtRandom(name, r));
                     continue;
                 }
                 int driver;
@@ -145,15 +137,6 @@ public final class MissingnessMechanisms {
                 out.add(calibrated(name, id, truth.name(driver), r, values.getDouble(STRENGTH.name()), pilot));
             }
             return new MissingnessPlan(out);
-        }
-
-        private static void shuffle(List<Integer> list, UniformRandomProvider random) {
-            for (int i = list.size() - 1; i > 0; i--) {
-                int j = random.nextInt(i + 1);
-                Integer t = list.get(i);
-                list.set(i, list.get(j));
-                list.set(j, t);
-            }
         }
     }
 
@@ -178,8 +161,8 @@ public final class MissingnessMechanisms {
             scale = 1;
         }
         if (rate <= 0) {
-            return new MissingnessDriver(variable, mechanism, driver, rate, Double.NEGATIVE_INFINITY, slope, centre,
-                    scale);
+            return new MissingnessDriver(variable, mechanism, driver, rate,
+                    new MissingnessDriver.Link(Double.NEGATIVE_INFINITY, slope, centre, scale));
         }
         double lo = -60;
         double hi = 60;
@@ -196,6 +179,7 @@ public final class MissingnessMechanisms {
                 hi = mid;
             }
         }
-        return new MissingnessDriver(variable, mechanism, driver, rate, 0.5 * (lo + hi), slope, centre, scale);
+        return new MissingnessDriver(variable, mechanism, driver, rate,
+                new MissingnessDriver.Link(0.5 * (lo + hi), slope, centre, scale));
     }
 }

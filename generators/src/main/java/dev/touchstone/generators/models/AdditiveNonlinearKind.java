@@ -4,9 +4,9 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -24,7 +24,7 @@ import java.util.List;
  * explode along long paths. Noise is Gaussian. Cost per row: the functions' cost,
  * O(parents · units).
  */
-public final class AdditiveNonlinearKind implements ModelKind {
+public final class AdditiveNonlinearKind extends DeclaredGenerator implements ModelKind {
 
     public static final String ID = "additive-nonlinear";
 
@@ -38,32 +38,15 @@ public final class AdditiveNonlinearKind implements ModelKind {
     static final ParameterSpec LENGTH_SCALE = ParameterSpec.real("length_scale", 1.0, 1e-3, 1e3,
             "length scale of the RBF kernel the fourier functions imitate (on standardised parents)");
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "nonlinear functions of the parents plus Gaussian noise (additive noise model)";
-    }
-
-    @Override
-    public String publication() {
-        return "Hoyer et al. (2009), Nonlinear causal discovery with additive noise models, NeurIPS";
+    public AdditiveNonlinearKind() {
+        super(ID, "nonlinear functions of the parents plus Gaussian noise (additive noise model)",
+                "Hoyer et al. (2009), Nonlinear causal discovery with additive noise models, NeurIPS",
+                ModelOptions.continuousKind(FUNCTIONS, HIDDEN_UNITS, FEATURES, LENGTH_SCALE));
     }
 
     @Override
     public DataKind produces() {
         return DataKind.CONTINUOUS;
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        List<ParameterSpec> out = new ArrayList<>(List.of(FUNCTIONS, HIDDEN_UNITS, FEATURES, LENGTH_SCALE));
-        out.addAll(ModelOptions.weightsAndNoise());
-        out.addAll(ModelOptions.continuousOptions());
-        return List.copyOf(out);
     }
 
     @Override

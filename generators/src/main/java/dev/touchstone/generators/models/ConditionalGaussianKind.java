@@ -4,10 +4,8 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
-
-import java.util.ArrayList;
-import java.util.List;
 
 /**
  * Mixed data from a conditional Gaussian model (Lauritzen and Wermuth 1989, "Graphical
@@ -20,40 +18,23 @@ import java.util.List;
  * term in its continuous parents, which enter standardised by pilot moments. Cost per row:
  * O(parents · categories).
  */
-public final class ConditionalGaussianKind implements ModelKind {
+public final class ConditionalGaussianKind extends DeclaredGenerator implements ModelKind {
 
     public static final String ID = "conditional-gaussian";
 
     static final ParameterSpec DISCRETE_FRACTION = ParameterSpec.real("discrete_fraction", 0.5, 0.0, 1.0,
             "probability that a variable is discrete");
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "mixed discrete and continuous variables (conditional Gaussian, multinomial logistic link)";
-    }
-
-    @Override
-    public String publication() {
-        return "Lauritzen and Wermuth (1989), Graphical models for associations between variables, Ann. Statist. 17";
+    public ConditionalGaussianKind() {
+        super(ID, "mixed discrete and continuous variables (conditional Gaussian, multinomial logistic link)",
+                "Lauritzen and Wermuth (1989), Graphical models for associations between variables, Ann. Statist. 17",
+                ModelOptions.continuousKind(DISCRETE_FRACTION, DiscreteNetworkKind.CARDINALITY_LOW,
+                        DiscreteNetworkKind.CARDINALITY_HIGH, DiscreteNetworkKind.CONCENTRATION));
     }
 
     @Override
     public DataKind produces() {
         return DataKind.MIXED;
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        List<ParameterSpec> out = new ArrayList<>(List.of(DISCRETE_FRACTION, DiscreteNetworkKind.CARDINALITY_LOW,
-                DiscreteNetworkKind.CARDINALITY_HIGH, DiscreteNetworkKind.CONCENTRATION));
-        out.addAll(ModelOptions.weightsAndNoise());
-        out.addAll(ModelOptions.continuousOptions());
-        return List.copyOf(out);
     }
 
     @Override

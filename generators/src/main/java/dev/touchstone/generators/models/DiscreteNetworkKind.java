@@ -4,6 +4,7 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.List;
@@ -16,7 +17,7 @@ import java.util.List;
  * built with {@link DiscreteNetworkModel#builder}. Sampling costs one uniform draw and a
  * table search per variable per row.
  */
-public final class DiscreteNetworkKind implements ModelKind {
+public final class DiscreteNetworkKind extends DeclaredGenerator implements ModelKind {
 
     public static final String ID = "discrete";
 
@@ -27,29 +28,15 @@ public final class DiscreteNetworkKind implements ModelKind {
     static final ParameterSpec CONCENTRATION = ParameterSpec.real("concentration", 1.0, 1e-6, 1e6,
             "Dirichlet concentration of every cell of the conditional tables");
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "discrete Bayesian network with conditional tables drawn from a Dirichlet";
-    }
-
-    @Override
-    public String publication() {
-        return "common practice (Dirichlet-drawn conditional tables)";
+    public DiscreteNetworkKind() {
+        super(ID, "discrete Bayesian network with conditional tables drawn from a Dirichlet",
+                "common practice (Dirichlet-drawn conditional tables)",
+                List.of(CARDINALITY_LOW, CARDINALITY_HIGH, CONCENTRATION, ModelOptions.SHUFFLE_COLUMNS));
     }
 
     @Override
     public DataKind produces() {
         return DataKind.DISCRETE;
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        return List.of(CARDINALITY_LOW, CARDINALITY_HIGH, CONCENTRATION, ModelOptions.SHUFFLE_COLUMNS);
     }
 
     @Override

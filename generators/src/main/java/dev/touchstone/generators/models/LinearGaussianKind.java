@@ -2,12 +2,9 @@ package dev.touchstone.generators.models;
 
 import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
-import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
-
-import java.util.ArrayList;
-import java.util.List;
 
 /**
  * Linear Gaussian structural equations X_v = Σ w_vk X_k + σ_v ε_v, ε_v standard normal:
@@ -17,35 +14,19 @@ import java.util.List;
  * Weichwald 2021, "Beware of the simulated DAG!", NeurIPS). Sampling costs one normal draw
  * (Commons RNG ziggurat) and one multiply-add per edge per row.
  */
-public final class LinearGaussianKind implements ModelKind {
+public final class LinearGaussianKind extends DeclaredGenerator implements ModelKind {
 
     public static final String ID = "linear-gaussian";
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "linear equations with Gaussian noise";
-    }
-
-    @Override
-    public String publication() {
-        return "common practice; see Reisach, Seiler and Weichwald (2021), Beware of the simulated DAG!, NeurIPS";
+    public LinearGaussianKind() {
+        super(ID, "linear equations with Gaussian noise",
+                "common practice; see Reisach, Seiler and Weichwald (2021), Beware of the simulated DAG!, NeurIPS",
+                ModelOptions.continuousKind());
     }
 
     @Override
     public DataKind produces() {
         return DataKind.CONTINUOUS;
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        List<ParameterSpec> out = new ArrayList<>(ModelOptions.weightsAndNoise());
-        out.addAll(ModelOptions.continuousOptions());
-        return List.copyOf(out);
     }
 
     @Override

@@ -4,9 +4,9 @@ import dev.touchstone.core.data.DataKind;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
+import dev.touchstone.generators.DeclaredGenerator;
 import org.apache.commons.rng.UniformRandomProvider;
 
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -16,7 +16,7 @@ import java.util.List;
  * (Shimizu et al. 2006, "A linear non-Gaussian acyclic model for causal discovery", JMLR 7).
  * Cost as for {@link LinearGaussianKind}, with the noise sampler's cost per draw.
  */
-public final class LinearNonGaussianKind implements ModelKind {
+public final class LinearNonGaussianKind extends DeclaredGenerator implements ModelKind {
 
     public static final String ID = "linear-non-gaussian";
 
@@ -26,32 +26,15 @@ public final class LinearNonGaussianKind implements ModelKind {
     static final ParameterSpec DEGREES_OF_FREEDOM = ParameterSpec.real("degrees_of_freedom", 5.0, 2.5, 1e6,
             "degrees of freedom of student-t noise");
 
-    @Override
-    public String id() {
-        return ID;
-    }
-
-    @Override
-    public String summary() {
-        return "linear equations with non-Gaussian noise (LiNGAM setting)";
-    }
-
-    @Override
-    public String publication() {
-        return "Shimizu et al. (2006), A linear non-Gaussian acyclic model for causal discovery, JMLR 7";
+    public LinearNonGaussianKind() {
+        super(ID, "linear equations with non-Gaussian noise (LiNGAM setting)",
+                "Shimizu et al. (2006), A linear non-Gaussian acyclic model for causal discovery, JMLR 7",
+                ModelOptions.continuousKind(NOISE, DEGREES_OF_FREEDOM));
     }
 
     @Override
     public DataKind produces() {
         return DataKind.CONTINUOUS;
-    }
-
-    @Override
-    public List<ParameterSpec> parameters() {
-        List<ParameterSpec> out = new ArrayList<>(List.of(NOISE, DEGREES_OF_FREEDOM));
-        out.addAll(ModelOptions.weightsAndNoise());
-        out.addAll(ModelOptions.continuousOptions());
-        return List.copyOf(out);
     }
 
     @Override

@@ -10,18 +10,67 @@ final class MixedMechanisms {
     }
 
     /**
+     * Continuous parents with the moments that standardise them: z_k = (x_k − mean_k) / sd_k.
+     *
+     * @param parents the parents' indices
+     * @param mean    their centres
+     * @param sd      their scales
+     */
+    record Standardised(int[] parents, double[] mean, double[] sd) {
+
+        /** Parents taken as they are: centre 0, scale 1. */
+        static Standardised asIs(int[] parents) {
+            double[] one = new double[parents.length];
+            java.util.Arrays.fill(one, 1.0);
+            return new Standardised(parents, new double[parents.length], one);
+        }
+    }
+
+    /**
+     * The shifts of a continuous variable by category of its discrete parents.
+     *
+     * @param parents    the discrete parents' indices
+     * @param byCategory {@code byCategory[k][c]}: the shift when parent k has category c
+     */
+    record Shifts(int[] parents, double[][] byCategory) {
+    }
+
+    /**
+     * The base of a continuous variable: {@code intercept + scale · ε} with ε standard normal.
+     *
+     * @param intercept the constant
+     * @param scale     the noise's standard deviation
+     */
+    record Noise(double intercept, double scale) {
+    }
+
+    /**
+     * Log-intercepts of a discrete variable by configuration of its discrete parents.
+     *
+     * @param parents the discrete parents' indices
+     * @param strides the stride of each parent in the configuration number (last parent fastest)
+     * @param alpha   {@code alpha[config][c]}
+     */
+    record Intercepts(int[] parents, int[] strides, double[][] alpha) {
+    }
+
+    /**
      * Continuous: X = intercept + Σ w_k z_k + Σ shift_k[code_k] + σ ε, with z_k the continuous
      * parents centred and scaled by pilot moments (drawn models: intercept 0; models assembled
      * from fitted parameters: mean 0 and scale 1, so z_k is the parent itself); one normal draw
      * per row.
      */
-    record Continuous(int node, int[] continuousParents, double[] parentMean, double[] parentSd, double[] weights,
-                      int[] discreteParents, double[][] shifts, double noiseScale, double intercept)
+    record Continuous(int node, Standardised continuous, double[] weights, Shifts discrete, Noise noise)
             implements NodeMechanism {
 
         @Override
         public NodeParameters describe(dev.touchstone.core.graph.Graph graph,
                                        dev.touchstone.core.data.Variable[] variables) {
+            int[] continuousParents = continuous.parents();
+            double[] parentMean = continuous.mean();
+            double[] parentSd = continuous.sd();
+            int[] discreteParents = discrete.parents();
+            double[][] shifts = discrete.byCategory();
             java.util.List<NodeParameters.Slope> slopes = new java.util.ArrayList<>();
             for (int k = 0; k < continuousParents.length; k++) {
                 slopes.add(new NodeParameters.Slope(graph.name(continuousParents[k]),
@@ -31,11 +80,19 @@ final class MixedMechanisms {
             for (int k = 0; k < discreteParents.length; k++) {
                 shiftList.add(new NodeParameters.Shift(graph.name(discreteParents[k]), shifts[k].clone()));
             }
-            return new NodeParameters.ConditionalGaussian(graph.name(node), intercept, slopes, shiftList, noiseScale);
+            return new NodeParameters.ConditionalGaussian(graph.name(node), noise.intercept(), slopes, shiftList,
+                    noise.scale());
         }
 
         @Override
         public void fill(Object[] columns, int rows, UniformRandomProvider stream) {
+            int[] continuousParents = continuous.parents();
+            double[] parentMean = continuous.mean();
+            double[] parentSd = continuous.sd();
+            int[] discreteParents = discrete.parents();
+            double[][] shifts = discrete.byCategory();
+            double intercept = noise.intercept();
+            double noiseScale = noise.scale();
             ZigguratSampler.NormalizedGaussian eps = ZigguratSampler.NormalizedGaussian.of(stream);
             double[] out = new double[rows];
             for (int r = 0; r < rows; r++) {
@@ -64,13 +121,16 @@ final class MixedMechanisms {
      * Discrete, multinomial logistic: log-odds_c = α[config][c] + Σ_k β[c][k] z_k over the
      * continuous parents (β[0] = 0, the reference category); one uniform draw per row.
      */
-    record Discrete(int node, int categories, int[] discreteParents, int[] strides, double[][] alpha,
-                    int[] continuousParents, double[] parentMean, double[] parentSd, double[][] beta)
+    record Discrete(int node, int categories, Intercepts intercepts, Standardised continuous, double[][] beta)
             implements NodeMechanism {
 
         @Override
         public NodeParameters describe(dev.touchstone.core.graph.Graph graph,
                                        dev.touchstone.core.data.Variable[] variables) {
+            int[] continuousParents = continuous.parents();
+            double[] parentMean = continuous.mean();
+            double[] parentSd = continuous.sd();
+            double[][] alpha = intercepts.alpha();
             java.util.List<NodeParameters.Slope> slopes = new java.util.ArrayList<>();
             for (int k = 0; k < continuousParents.length; k++) {
                 double[] byCategory = new double[categories];
@@ -85,11 +145,17 @@ final class MixedMechanisms {
                 a[r] = alpha[r].clone();
             }
             return new NodeParameters.Logistic(graph.name(node), variables[node].categories(),
-                    NodeMechanism.names(graph, discreteParents), a, slopes);
+                    NodeMechanism.names(graph, intercepts.parents()), a, slopes);
         }
 
         @Override
         public void fill(Object[] columns, int rows, UniformRandomProvider stream) {
+            int[] discreteParents = intercepts.parents();
+            int[] strides = intercepts.strides();
+            double[][] alpha = intercepts.alpha();
+            int[] continuousParents = continuous.parents();
+            double[] parentMean = continuous.mean();
+            double[] parentSd = continuous.sd();
             int[] out = new int[rows];
             int[][] dis = new int[discreteParents.length][];
             for (int k = 0; k < dis.length; k++) {

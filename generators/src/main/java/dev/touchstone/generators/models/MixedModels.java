@@ -68,7 +68,8 @@ final class MixedModels {
                         shifts[k][c] = weights.draw(random);
                     }
                 }
-                m = new MixedMechanisms.Continuous(v, cp, pm, ps, w, dp, shifts, scales.draw(random), 0.0);
+                m = new MixedMechanisms.Continuous(v, new MixedMechanisms.Standardised(cp, pm, ps), w,
+                        new MixedMechanisms.Shifts(dp, shifts), new MixedMechanisms.Noise(0.0, scales.draw(random)));
             } else {
                 int[] pc = new int[dp.length];
                 for (int k = 0; k < dp.length; k++) {
@@ -96,7 +97,8 @@ final class MixedModels {
                         beta[c][k] = weights.draw(random);
                     }
                 }
-                m = new MixedMechanisms.Discrete(v, card[v], dp, strides, a, cp, pm, ps, beta);
+                m = new MixedMechanisms.Discrete(v, card[v], new MixedMechanisms.Intercepts(dp, strides, a),
+                        new MixedMechanisms.Standardised(cp, pm, ps), beta);
             }
             mech[v] = m;
             pilot.add(v, m);

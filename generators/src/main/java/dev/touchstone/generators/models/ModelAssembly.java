@@ -63,11 +63,10 @@ public final class ModelAssembly {
             for (int k = 0; k < s.length; k++) {
                 s[k] = shifts[k].clone();
             }
-            double[] zero = new double[continuousParents.size()];
-            double[] one = new double[continuousParents.size()];
-            Arrays.fill(one, 1.0);
-            mechanisms[v] = new MixedMechanisms.Continuous(v, indices(continuousParents), zero, one, weights.clone(),
-                    indices(discreteParents), s, noiseSd, intercept);
+            mechanisms[v] = new MixedMechanisms.Continuous(v,
+                    MixedMechanisms.Standardised.asIs(indices(continuousParents)), weights.clone(),
+                    new MixedMechanisms.Shifts(indices(discreteParents), s),
+                    new MixedMechanisms.Noise(intercept, noiseSd));
             return this;
         }
 
@@ -110,8 +109,9 @@ public final class ModelAssembly {
             for (int c = 0; c < b.length; c++) {
                 b[c] = slopes[c].clone();
             }
-            mechanisms[v] = new MixedMechanisms.Discrete(v, categories.size(), dp, strides, a,
-                    indices(continuousParents), centre.clone(), scale.clone(), b);
+            mechanisms[v] = new MixedMechanisms.Discrete(v, categories.size(),
+                    new MixedMechanisms.Intercepts(dp, strides, a),
+                    new MixedMechanisms.Standardised(indices(continuousParents), centre.clone(), scale.clone()), b);
             return this;
         }
 

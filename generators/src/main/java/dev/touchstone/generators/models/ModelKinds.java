@@ -1,6 +1,7 @@
 package dev.touchstone.generators.models;
 
-import java.util.ArrayList;
+import dev.touchstone.generators.Registry;
+
 import java.util.List;
 
 /** The registry of built-in model kinds, in listing order. */
@@ -22,15 +23,6 @@ public final class ModelKinds {
      * @throws IllegalArgumentException naming the id and listing the known ones
      */
     public static ModelKind byId(String id) {
-        for (ModelKind k : ALL) {
-            if (k.id().equals(id)) {
-                return k;
-            }
-        }
-        List<String> known = new ArrayList<>();
-        for (ModelKind k : ALL) {
-            known.add(k.id());
-        }
-        throw new IllegalArgumentException("unknown model kind '" + id + "' (known: " + String.join(", ", known) + ")");
+        return Registry.byId(ALL, ModelKind::id, "model kind", id);
     }
 }

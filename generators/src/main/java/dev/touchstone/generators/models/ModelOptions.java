@@ -52,6 +52,14 @@ public final class ModelOptions {
         return List.of(STANDARDIZE, SHUFFLE_COLUMNS);
     }
 
+    /** The parameters of a continuous model kind: its own, then weights and noise, then standardise and shuffle. */
+    static List<ParameterSpec> continuousKind(ParameterSpec... own) {
+        List<ParameterSpec> out = new java.util.ArrayList<>(List.of(own));
+        out.addAll(weightsAndNoise());
+        out.addAll(continuousOptions());
+        return List.copyOf(out);
+    }
+
     /** A weight drawn uniformly from the declared range, with a random sign if asked. */
     static WeightDraw weights(ParameterValues values) {
         double low = values.getDouble(WEIGHT_LOW.name());

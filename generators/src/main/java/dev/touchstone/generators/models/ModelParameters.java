@@ -203,7 +203,8 @@ public record ModelParameters(String kind, Graph dag, List<NodeParameters> nodes
             for (int k = 0; k < dp.length; k++) {
                 checkLength(name, "shifts of '" + dis.get(k) + "'", shifts[k].length, vars[dp[k]].cardinality());
             }
-            return new MixedMechanisms.Continuous(v, cp, mean, sd, w, dp, shifts, g.noiseScale(), g.intercept());
+            return new MixedMechanisms.Continuous(v, new MixedMechanisms.Standardised(cp, mean, sd), w,
+                    new MixedMechanisms.Shifts(dp, shifts), new MixedMechanisms.Noise(g.intercept(), g.noiseScale()));
         }
         NodeParameters.Logistic l = (NodeParameters.Logistic) n;
         int categories = l.categories().size();
@@ -234,6 +235,8 @@ public record ModelParameters(String kind, Graph dag, List<NodeParameters> nodes
         for (double[] row : l.logIntercepts()) {
             checkLength(name, "log-intercepts in a row", row.length, categories);
         }
-        return new MixedMechanisms.Discrete(v, categories, dp, strides, l.logIntercepts(), cp, mean, sd, beta);
+        return new MixedMechanisms.Discrete(v, categories,
+                new MixedMechanisms.Intercepts(dp, strides, l.logIntercepts()),
+                new MixedMechanisms.Standardised(cp, mean, sd), beta);
     }
 }

@@ -82,15 +82,7 @@ public sealed interface NodeFunction {
     record NeuralNet(double[][] input, double[] bias, double[] output) implements NodeFunction {
         @Override
         public double apply(double[] z) {
-            double s = 0;
-            for (int h = 0; h < output.length; h++) {
-                double a = bias[h];
-                for (int k = 0; k < z.length; k++) {
-                    a += input[h][k] * z[k];
-                }
-                s += output[h] / (1 + Math.exp(-a));
-            }
-            return s;
+            return ridgeSum(input, bias, output, z, false);
         }
 
         @Override
@@ -103,21 +95,32 @@ public sealed interface NodeFunction {
     record Fourier(double[][] frequency, double[] phase, double[] amplitude) implements NodeFunction {
         @Override
         public double apply(double[] z) {
-            double s = 0;
-            for (int f = 0; f < amplitude.length; f++) {
-                double a = phase[f];
-                for (int k = 0; k < z.length; k++) {
-                    a += frequency[f][k] * z[k];
-                }
-                s += amplitude[f] * Math.cos(a);
-            }
-            return s;
+            return ridgeSum(frequency, phase, amplitude, z, true);
         }
 
         @Override
         public String word() {
             return "fourier";
         }
+    }
+
+    /**
+     * Σ_h weight[h] · φ(offset[h] + Σ_k direction[h][k] · z_k), the sum of ridge functions that
+     * both the network (φ the logistic, written weight / (1 + e^−a)) and the Fourier features
+     * (φ = cos) are. The branch is per term, so one loop serves both at the cost of one
+     * well-predicted test.
+     */
+    private static double ridgeSum(double[][] direction, double[] offset, double[] weight, double[] z,
+                                   boolean cosine) {
+        double s = 0;
+        for (int h = 0; h < weight.length; h++) {
+            double a = offset[h];
+            for (int k = 0; k < z.length; k++) {
+                a += direction[h][k] * z[k];
+            }
+            s += cosine ? weight[h] * Math.cos(a) : weight[h] / (1 + Math.exp(-a));
+        }
+        return s;
     }
 
     /** Draws a function of the class {@code kind} over {@code parents} standardised parents. */

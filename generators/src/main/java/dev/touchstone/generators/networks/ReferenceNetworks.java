@@ -2,9 +2,9 @@ package dev.touchstone.generators.networks;
 
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.MutableGraph;
+import dev.touchstone.generators.Registry;
 import dev.touchstone.generators.models.DiscreteNetworkModel;
 
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -48,14 +48,7 @@ public final class ReferenceNetworks {
      * @throws IllegalArgumentException naming the id and listing the known ones
      */
     public static ReferenceNetwork byId(String id) {
-        List<String> known = new ArrayList<>();
-        for (ReferenceNetwork n : all()) {
-            if (n.id().equals(id)) {
-                return n;
-            }
-            known.add(n.id());
-        }
-        throw new IllegalArgumentException("unknown network '" + id + "' (known: " + String.join(", ", known) + ")");
+        return Registry.byId(all(), ReferenceNetwork::id, "network", id);
     }
 
     private static Graph dag(List<String> names, String... arcs) {

@@ -71,16 +71,17 @@ class PerturbationAndChecksTest {
                 .continuous("y", yGauss).build())).get(1);
         FitDiagnostics.Check exp = FitDiagnostics.of(StructureFit.fit(g, DataSet.builder(n).continuous("x", x)
                 .continuous("y", yExp).build())).get(1);
-        assertTrue(gauss.normalityP() > 0.001, "Gaussian p " + gauss.normalityP());
-        assertTrue(exp.normalityP() < 1e-6, "exponential p " + exp.normalityP());
+        assertTrue(gauss.residuals().normalityP() > 0.001, "Gaussian p " + gauss.residuals().normalityP());
+        assertTrue(exp.residuals().normalityP() < 1e-6, "exponential p " + exp.residuals().normalityP());
         // Exponential noise: skewness 2, excess kurtosis 6 (textbook moments).
-        assertEquals(2.0, exp.skewness(), 0.4);
-        assertEquals(6.0, exp.excessKurtosis(), 2.5);
-        double jb = n / 6.0 * (gauss.skewness() * gauss.skewness() + gauss.excessKurtosis() * gauss.excessKurtosis()
-                / 4);
-        assertEquals(1 - new ChiSquaredDistribution(2).cumulativeProbability(jb), gauss.normalityP(), 1e-12);
+        assertEquals(2.0, exp.residuals().skewness(), 0.4);
+        assertEquals(6.0, exp.residuals().excessKurtosis(), 2.5);
+        FitDiagnostics.Residuals gr = gauss.residuals();
+        double jb = n / 6.0 * (gr.skewness() * gr.skewness() + gr.excessKurtosis() * gr.excessKurtosis() / 4);
+        assertEquals(1 - new ChiSquaredDistribution(2).cumulativeProbability(jb), gr.normalityP(), 1e-12);
         assertNull(FitDiagnostics.of(StructureFit.fit(g, DataSet.builder(n).continuous("x", x)
-                .continuous("y", yGauss).build())).get(0).nonlinearityP(), "no parents, no nonlinearity test");
+                .continuous("y", yGauss).build())).get(0).residuals().nonlinearityP(),
+                "no parents, no nonlinearity test");
     }
 
     @Test
@@ -100,8 +101,8 @@ class PerturbationAndChecksTest {
             y[i] = x[i] * x[i] + normal.sample();
         }
         DataSet quadratic = DataSet.builder(x.length).continuous("x", x).continuous("y", y).build();
-        double pLinear = FitDiagnostics.of(StructureFit.fit(g, linear)).get(1).nonlinearityP();
-        double pQuad = FitDiagnostics.of(StructureFit.fit(g, quadratic)).get(1).nonlinearityP();
+        double pLinear = FitDiagnostics.of(StructureFit.fit(g, linear)).get(1).residuals().nonlinearityP();
+        double pQuad = FitDiagnostics.of(StructureFit.fit(g, quadratic)).get(1).residuals().nonlinearityP();
         assertTrue(pLinear > 0.001, "linear p " + pLinear);
         assertTrue(pQuad < 1e-10, "quadratic p " + pQuad);
         assertNotEquals(pLinear, pQuad);

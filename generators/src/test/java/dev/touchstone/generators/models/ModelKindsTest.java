@@ -173,8 +173,10 @@ class ModelKindsTest {
     @DisplayName("multinomial logistic link: P(b = 1 | a) follows the logistic of the standardised parent (worked check)")
     void logisticLink() {
         // Two categories, α = 0 and β = (0, 1): P(b = 1 | z) = 1 / (1 + e^(−z)).
-        MixedMechanisms.Discrete child = new MixedMechanisms.Discrete(1, 2, new int[0], new int[0],
-                new double[][] {{0, 0}}, new int[] {0}, new double[] {0}, new double[] {1}, new double[][] {{0}, {1}});
+        MixedMechanisms.Discrete child = new MixedMechanisms.Discrete(1, 2,
+                new MixedMechanisms.Intercepts(new int[0], new int[0], new double[][] {{0, 0}}),
+                new MixedMechanisms.Standardised(new int[] {0}, new double[] {0}, new double[] {1}),
+                new double[][] {{0}, {1}});
         int n = 200_000;
         double[] a = new double[n];
         var g = org.apache.commons.rng.sampling.distribution.ZigguratSampler.NormalizedGaussian.of(Seeds.random(1));

@@ -123,22 +123,23 @@ public final class CalibrationSummary {
         int normalTests = 0;
         int linearTests = 0;
         for (FitDiagnostics.Check c : checks) {
-            normalTests += c.normalityP() != null ? 1 : 0;
-            linearTests += c.nonlinearityP() != null ? 1 : 0;
+            normalTests += c.residuals().normalityP() != null ? 1 : 0;
+            linearTests += c.residuals().nonlinearityP() != null ? 1 : 0;
         }
         List<String> out = new ArrayList<>();
         for (FitDiagnostics.Check c : checks) {
-            if (c.normalityP() != null && c.normalityP() < FAMILY_ALPHA / normalTests) {
+            FitDiagnostics.Residuals r = c.residuals();
+            if (r.normalityP() != null && r.normalityP() < FAMILY_ALPHA / normalTests) {
                 out.add(String.format(Locale.ROOT, "The residuals of %s do not look Gaussian (Jarque–Bera p = %s,"
                         + " skewness %s, excess kurtosis %s). The simulation draws Gaussian noise, so expectations for"
                         + " learners that rely on or exploit the noise distribution may be off.", c.name(),
-                        Numbers.format(c.normalityP()), Numbers.format(c.skewness()),
-                        Numbers.format(c.excessKurtosis())));
+                        Numbers.format(r.normalityP()), Numbers.format(r.skewness()),
+                        Numbers.format(r.excessKurtosis())));
             }
-            if (c.nonlinearityP() != null && c.nonlinearityP() < FAMILY_ALPHA / linearTests) {
+            if (r.nonlinearityP() != null && r.nonlinearityP() < FAMILY_ALPHA / linearTests) {
                 out.add(String.format(Locale.ROOT, "%s may depend nonlinearly on its parents (RESET-type p = %s)."
                         + " The simulation is linear; learners may do worse on your data than shown here.", c.name(),
-                        Numbers.format(c.nonlinearityP())));
+                        Numbers.format(r.nonlinearityP())));
             }
             if (c.missingRate() > HEAVY_MISSING) {
                 out.add(String.format(Locale.ROOT, "%s is missing in %.0f%% of rows. Heavy missingness weakens"
@@ -152,9 +153,10 @@ public final class CalibrationSummary {
     private static List<CalibrationView.Check> checks(List<FitDiagnostics.Check> checks) {
         List<CalibrationView.Check> out = new ArrayList<>();
         for (FitDiagnostics.Check c : checks) {
+            FitDiagnostics.Residuals r = c.residuals();
             out.add(new CalibrationView.Check(c.name(), c.continuous() ? "continuous" : "discrete", c.rows(),
-                    c.missingRate(), new CalibrationView.Residuals(c.skewness(), c.excessKurtosis(), c.normalityP(),
-                    c.nonlinearityP())));
+                    c.missingRate(), new CalibrationView.Residuals(r.skewness(), r.excessKurtosis(), r.normalityP(),
+                    r.nonlinearityP())));
         }
         return out;
     }

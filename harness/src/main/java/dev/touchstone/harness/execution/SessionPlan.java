@@ -53,7 +53,7 @@ record SessionPlan(Map<Integer, RunResult> kept, List<RunDefinition> todo, int c
             }
         }
         if (shuffle != null) {
-            java.util.Collections.shuffle(todo, new java.util.Random(shuffle));
+            dev.touchstone.core.random.Shuffles.shuffle(dev.touchstone.core.random.Seeds.random(shuffle), todo);
         }
         return new SessionPlan(kept, todo, changed);
     }

@@ -105,10 +105,10 @@ public final class ModelFile {
                     o.put("driver", d.driver());
                 }
                 o.put("rate", d.rate());
-                o.put("intercept", d.intercept());
-                o.put("slope", d.slope());
-                o.put("driver_centre", d.driverCentre());
-                o.put("driver_scale", d.driverScale());
+                o.put("intercept", d.link().intercept());
+                o.put("slope", d.link().slope());
+                o.put("driver_centre", d.link().driverCentre());
+                o.put("driver_scale", d.link().driverScale());
             }
         }
         if (!t.tiers().isEmpty()) {
@@ -321,8 +321,8 @@ public final class ModelFile {
                     }
                     missing.add(new MissingnessDriver(text(o, "variable", place), text(o, "mechanism", place),
                             driver.isNull() ? null : driver.asText(), number(o, "rate", place),
-                            number(o, "intercept", place), number(o, "slope", place),
-                            number(o, "driver_centre", place), number(o, "driver_scale", place)));
+                            new MissingnessDriver.Link(number(o, "intercept", place), number(o, "slope", place),
+                                    number(o, "driver_centre", place), number(o, "driver_scale", place))));
                 }
             }
             List<List<String>> tiers = new ArrayList<>();

@@ -8,6 +8,7 @@ import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.param.Parameter;
+import dev.touchstone.core.random.Shuffles;
 
 import org.apache.commons.rng.UniformRandomProvider;
 
@@ -38,16 +39,7 @@ public final class RandomDagLearner extends DeclaredLearner {
         int p = run.names().size();
         double prob = p > 1 ? Math.min(1.0, run.get(MEAN_DEGREE) / (p - 1)) : 0;
         UniformRandomProvider rng = run.context().random("random-dag");
-        int[] order = new int[p];
-        for (int i = 0; i < p; i++) {
-            order[i] = i;
-        }
-        for (int i = p - 1; i > 0; i--) {
-            int j = rng.nextInt(i + 1);
-            int t = order[i];
-            order[i] = order[j];
-            order[j] = t;
-        }
+        int[] order = Shuffles.permutation(rng, p);
         MutableGraph g = Graph.builder(run.names());
         for (int i = 0; i < p; i++) {
             for (int j = i + 1; j < p; j++) {

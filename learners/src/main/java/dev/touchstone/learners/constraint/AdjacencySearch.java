@@ -1,5 +1,6 @@
 package dev.touchstone.learners.constraint;
 
+import dev.touchstone.core.learner.ParallelLoop;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.independence.FisherZTest;
 import dev.touchstone.learners.independence.IndependenceTest;
@@ -101,7 +102,7 @@ final class AdjacencySearch {
         int[][] above = new int[p][];
         java.util.Queue<long[]> counts = new java.util.concurrent.ConcurrentLinkedQueue<>();
         try {
-            ParallelLoop.run(p, context.threads(), () -> {
+            ParallelLoop.run(context.threads(), p, ParallelLoop.CHUNK, () -> {
                 long[] tests = new long[1];
                 counts.add(tests);
                 int[] buffer = new int[p];
@@ -258,7 +259,7 @@ final class AdjacencySearch {
             final int depth = level;
             java.util.Queue<LevelWorker> workers = new java.util.concurrent.ConcurrentLinkedQueue<>();
             try {
-                ParallelLoop.run(pairs, context.threads(), () -> {
+                ParallelLoop.run(context.threads(), pairs, ParallelLoop.CHUNK, () -> {
                     LevelWorker w = new LevelWorker(nb, xs, ys, found, depth);
                     workers.add(w);
                     return w;

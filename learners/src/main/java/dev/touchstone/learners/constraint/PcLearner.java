@@ -13,10 +13,9 @@ import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.random.Seeds;
+import dev.touchstone.core.random.Shuffles;
 import dev.touchstone.learners.independence.IndependenceTest;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
-
-import org.apache.commons.rng.sampling.PermutationSampler;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -87,8 +86,8 @@ public final class PcLearner extends DeclaredLearner {
         if (orderSeed == 0 || run.input().isOracle()) {
             return searchAndOrient(SearchInputs.read(run), run);
         }
-        int[] order = PermutationSampler.natural(run.names().size());
-        PermutationSampler.shuffle(Seeds.random(Seeds.derive(run.context().seed(), "column-order", orderSeed)), order);
+        int[] order = Shuffles.permutation(Seeds.random(Seeds.derive(run.context().seed(), "column-order", orderSeed)),
+                run.names().size());
         LearnerRun shuffled = new LearnerRun(LearnerInput.of(run.input().data().select(order)), run.knowledge(),
                 run.parameters(), run.context());
         Estimate e = searchAndOrient(SearchInputs.read(shuffled), shuffled);

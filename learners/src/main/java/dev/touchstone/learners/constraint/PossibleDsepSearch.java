@@ -2,6 +2,7 @@ package dev.touchstone.learners.constraint;
 
 import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
+import dev.touchstone.core.learner.ParallelLoop;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.independence.IndependenceTest;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
@@ -106,7 +107,7 @@ final class PossibleDsepSearch {
         int[][] found = new int[pairs][];
         Queue<EdgeWorker> workers = new ConcurrentLinkedQueue<>();
         try {
-            ParallelLoop.run(pairs, context.threads(), () -> {
+            ParallelLoop.run(context.threads(), pairs, ParallelLoop.CHUNK, () -> {
                 EdgeWorker w = new EdgeWorker(s, new Walker(r0), xs, ys, found);
                 workers.add(w);
                 return w;

@@ -192,47 +192,15 @@ public final class DirectLingamLearner extends DeclaredLearner {
     private static double[][] pairRatios(double[][] x, int[] remaining, int left, double[] entropy,
                                          RunContext context) {
         double[][] ratio = new double[left][left];
-        int threads = Math.min(context.threads(), Math.max(1, left - 1));
-        java.util.function.IntConsumer row = a -> {
+        // Row a has left − a − 1 pairs: one row per chunk keeps the threads evenly loaded.
+        dev.touchstone.core.learner.ParallelLoop.run(context.threads(), left, 1, () -> a -> {
             context.checkDeadline();
             int i = remaining[a];
             for (int b = a + 1; b < left; b++) {
                 int j = remaining[b];
                 ratio[a][b] = PairwiseLikelihoodRatio.ratio(x[i], x[j], entropy[i], entropy[j]);
             }
-        };
-        if (threads == 1) {
-            for (int a = 0; a < left; a++) {
-                row.accept(a);
-            }
-            return ratio;
-        }
-        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(threads);
-        try {
-            java.util.List<java.util.concurrent.Future<?>> parts = new java.util.ArrayList<>();
-            for (int t = 0; t < threads; t++) {
-                int first = t;
-                // Rows interleaved: row a has left − a − 1 pairs, so striding balances the work.
-                parts.add(pool.submit(() -> {
-                    for (int a = first; a < left; a += threads) {
-                        row.accept(a);
-                    }
-                }));
-            }
-            for (java.util.concurrent.Future<?> f : parts) {
-                f.get();
-            }
-        } catch (java.util.concurrent.ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException re) {
-                throw re;
-            }
-            throw new IllegalStateException(e.getCause());
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new dev.touchstone.core.learner.DeadlineExceededException("interrupted");
-        } finally {
-            pool.shutdownNow();
-        }
+        });
         return ratio;
     }
 

@@ -10,9 +10,9 @@ import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.core.param.Parameter;
+import dev.touchstone.core.random.Shuffles;
 import dev.touchstone.learners.independence.Hsic;
 
-import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -150,19 +150,9 @@ public final class ResitLearner extends DeclaredLearner {
     /** The columns, restricted to a seeded random subset of {@code maxRows} rows when there are more. */
     private static double[][] columns(DataSet data, int maxRows, RunContext context) {
         int n = data.rows();
-        int[] rows = new int[n];
-        for (int i = 0; i < n; i++) {
-            rows[i] = i;
-        }
+        int[] rows = Shuffles.identity(n);
         if (n > maxRows) {
-            UniformRandomProvider rng = context.random("resit-rows");
-            for (int i = 0; i < maxRows; i++) {
-                int j = i + rng.nextInt(n - i);
-                int t = rows[i];
-                rows[i] = rows[j];
-                rows[j] = t;
-            }
-            rows = Arrays.copyOf(rows, maxRows);
+            rows = Arrays.copyOf(Shuffles.shuffleHead(context.random("resit-rows"), rows, maxRows), maxRows);
             Arrays.sort(rows);
         }
         double[][] x = new double[data.columns()][rows.length];

@@ -7,9 +7,6 @@ import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.numbers.gamma.Erfc;
 
 import java.util.Arrays;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ForkJoinPool;
-import java.util.stream.IntStream;
 
 /**
  * Fisher's z test of zero partial correlation for (approximately) Gaussian data, on a
@@ -176,33 +173,14 @@ public final class FisherZTest implements IndependenceTest {
             }
         }
         Kept[] found = new Kept[tiles];
-        ThreadLocal<double[]> scratch = ThreadLocal.withInitial(() -> new double[TILE_ROWS * TILE_COLUMNS]);
-        ThreadLocal<CentredColumns.TileWorker> workers = ThreadLocal.withInitial(
-                () -> screened == null ? null : screened.columns().tileWorker());
-        java.util.function.IntConsumer tile = k -> {
-            deadline.run();
-            found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, workers.get(), scratch.get());
-        };
-        if (threads <= 1) {
-            for (int k = 0; k < tiles; k++) {
-                tile.accept(k);
-            }
-        } else {
-            ForkJoinPool pool = new ForkJoinPool(threads);
-            try {
-                pool.submit(() -> IntStream.range(0, found.length).parallel().forEach(tile)).get();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted during level 0", e);
-            } catch (ExecutionException e) {
-                if (e.getCause() instanceof RuntimeException re) {
-                    throw re;
-                }
-                throw new IllegalStateException("level 0 failed", e.getCause());
-            } finally {
-                pool.shutdown();
-            }
-        }
+        dev.touchstone.core.learner.ParallelLoop.run(threads, tiles, 1, () -> {
+            double[] scratch = new double[TILE_ROWS * TILE_COLUMNS];
+            CentredColumns.TileWorker worker = screened == null ? null : screened.columns().tileWorker();
+            return k -> {
+                deadline.run();
+                found[k] = screenTile(tileRow[k], tileBlock[k] * TILE_COLUMNS, worker, scratch);
+            };
+        });
         return collect(found);
     }
 

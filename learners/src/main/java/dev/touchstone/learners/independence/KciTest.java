@@ -2,6 +2,7 @@ package dev.touchstone.learners.independence;
 
 import dev.touchstone.core.data.DataSet;
 import dev.touchstone.core.random.Seeds;
+import dev.touchstone.core.random.Shuffles;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.Arrays;
@@ -285,16 +286,9 @@ public final class KciTest implements IndependenceTest {
         if (rows.length <= maxRows) {
             return rows;
         }
-        // Partial Fisher–Yates shuffle: the first maxRows entries are a uniform random subset.
+        // The first maxRows entries become a uniform random subset.
         UniformRandomProvider rng = Seeds.random(Seeds.derive(seed, "kernel-test-rows", rows.length));
-        int[] perm = rows.clone();
-        for (int i = 0; i < maxRows; i++) {
-            int j = i + rng.nextInt(perm.length - i);
-            int t = perm[i];
-            perm[i] = perm[j];
-            perm[j] = t;
-        }
-        int[] subset = Arrays.copyOf(perm, maxRows);
+        int[] subset = Arrays.copyOf(Shuffles.shuffleHead(rng, rows.clone(), maxRows), maxRows);
         Arrays.sort(subset);
         return subset;
     }

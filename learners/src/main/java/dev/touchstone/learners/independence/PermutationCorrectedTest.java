@@ -7,7 +7,7 @@ import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.DecompositionSolver;
 import org.apache.commons.math3.linear.QRDecomposition;
 import org.apache.commons.rng.UniformRandomProvider;
-import org.apache.commons.rng.sampling.PermutationSampler;
+import dev.touchstone.core.random.Shuffles;
 
 import java.util.Arrays;
 import java.util.BitSet;
@@ -129,10 +129,8 @@ public final class PermutationCorrectedTest implements IndependenceTest {
         }
         UniformRandomProvider rng = Seeds.random(Seeds.derive(seed, "missingness-correction", key(tested)));
         int m = fitRows.length;
-        int[] residualOrder = PermutationSampler.natural(m);
-        PermutationSampler.shuffle(rng, residualOrder);
-        int[] sourceOrder = PermutationSampler.natural(sourceRows.length);
-        PermutationSampler.shuffle(rng, sourceOrder);
+        int[] residualOrder = Shuffles.permutation(rng, m);
+        int[] sourceOrder = Shuffles.permutation(rng, sourceRows.length);
         double[][] virtual = new double[q][m];
         double[] wRow = new double[w.length + 1];
         for (int r = 0; r < m; r++) {

@@ -1,9 +1,9 @@
 package dev.touchstone.learners.score;
 
+import dev.touchstone.core.learner.ParallelLoop;
 import dev.touchstone.core.learner.RunContext;
 import org.apache.commons.rng.UniformRandomProvider;
 
-import java.util.concurrent.ForkJoinPool;
 import java.util.function.IntConsumer;
 
 /**
@@ -44,7 +44,9 @@ final class BossSearch {
     private final int p;
     private int passes;
     private int moves;
-    private ForkJoinPool pool;
+    /** Fewer variables than this search on the caller's thread: handing out would cost more than it saves. */
+    private static final int MIN_PARALLEL = 64;
+    private ParallelLoop pool = ParallelLoop.of(1);
 
     BossSearch(OrderScorer scorer, int starts, RunContext context) {
         this.scorer = scorer;
@@ -64,7 +66,7 @@ final class BossSearch {
     /** The best order found over all starts. */
     int[] run() {
         UniformRandomProvider rng = context.random("boss starting orders");
-        pool = context.threads() > 1 && p >= PoolLoop.MIN_PARALLEL ? new ForkJoinPool(context.threads()) : null;
+        pool = ParallelLoop.of(p >= MIN_PARALLEL ? context.threads() : 1);
         try {
             int[] best = null;
             double bestScore = Double.NEGATIVE_INFINITY;
@@ -80,9 +82,7 @@ final class BossSearch {
             }
             return best;
         } finally {
-            if (pool != null) {
-                pool.shutdownNow();
-            }
+            pool.close();
         }
     }
 
@@ -204,6 +204,6 @@ final class BossSearch {
     }
 
     private void parallel(int count, IntConsumer body) {
-        PoolLoop.run(pool, count, body);
+        pool.run(count, 1, body);
     }
 }

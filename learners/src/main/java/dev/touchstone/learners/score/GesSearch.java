@@ -1,5 +1,6 @@
 package dev.touchstone.learners.score;
 
+import dev.touchstone.core.learner.ParallelLoop;
 import dev.touchstone.core.learner.RunContext;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.apache.commons.rng.UniformRandomProvider;
@@ -9,7 +10,6 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.PriorityQueue;
-import java.util.concurrent.ForkJoinPool;
 import java.util.function.IntConsumer;
 import java.util.stream.IntStream;
 
@@ -94,7 +94,7 @@ final class GesSearch {
     private int turningMoves;
     private int startsImproved;
     private Variants variants = Variants.PLAIN;
-    private ForkJoinPool pool;
+    private ParallelLoop pool = ParallelLoop.of(1);
 
     /**
      * The additions to the plain two-phase search, all off in {@link #PLAIN}:
@@ -956,18 +956,16 @@ final class GesSearch {
 
     /** Runs {@code search} with this run's threads, releasing them afterwards. */
     private void withPool(Runnable search) {
-        pool = context.threads() > 1 ? new ForkJoinPool(context.threads()) : null;
+        pool = ParallelLoop.of(context);
         try {
             search.run();
         } finally {
-            if (pool != null) {
-                pool.shutdownNow();
-            }
+            pool.close();
         }
     }
 
     private void parallel(int count, IntConsumer body) {
-        PoolLoop.run(pool, count, body);
+        pool.run(count, ParallelLoop.CHUNK, body);
     }
 
 

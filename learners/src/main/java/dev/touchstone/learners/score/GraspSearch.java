@@ -1,6 +1,7 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.RunContext;
+import dev.touchstone.core.random.Shuffles;
 import org.apache.commons.rng.UniformRandomProvider;
 
 import java.util.Arrays;
@@ -113,7 +114,7 @@ final class GraspSearch {
      */
     private State search(State from, int level, double gain) {
         int[][] edges = from.edges();
-        shuffle(edges);
+        Shuffles.shuffle(edgeRng, edges);
         for (int[] edge : edges) {
             context.checkDeadline();
             int x = edge[0];
@@ -158,15 +159,6 @@ final class GraspSearch {
             }
         }
         return true;
-    }
-
-    private void shuffle(int[][] edges) {
-        for (int i = edges.length - 1; i > 0; i--) {
-            int j = edgeRng.nextInt(i + 1);
-            int[] t = edges[i];
-            edges[i] = edges[j];
-            edges[j] = t;
-        }
     }
 
     /**

@@ -1,6 +1,7 @@
 package dev.touchstone.learners.score;
 
 import dev.touchstone.core.learner.LearnerException;
+import dev.touchstone.core.random.Shuffles;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
 import org.apache.commons.rng.UniformRandomProvider;
 
@@ -134,16 +135,7 @@ final class OrderScorer {
      * @throws LearnerException when the required edges form a cycle
      */
     int[] randomOrder(UniformRandomProvider rng) {
-        int[] shuffled = new int[p];
-        for (int i = 0; i < p; i++) {
-            shuffled[i] = i;
-        }
-        for (int i = p - 1; i > 0; i--) {
-            int j = rng.nextInt(i + 1);
-            int t = shuffled[i];
-            shuffled[i] = shuffled[j];
-            shuffled[j] = t;
-        }
+        int[] shuffled = Shuffles.permutation(rng, p);
         if (knowledge.requiredEdges().isEmpty()) {
             return shuffled;
         }
