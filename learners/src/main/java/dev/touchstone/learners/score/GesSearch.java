@@ -6,7 +6,11 @@ import org.apache.commons.rng.UniformRandomProvider;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import java.util.PriorityQueue;
 import java.util.concurrent.ForkJoinPool;
 import java.util.function.IntConsumer;
@@ -275,39 +279,122 @@ final class GesSearch {
     // ---------------------------------------------------------------- forward phase
 
     private void forward() {
-        int[] version = new int[p * p];
-        Candidate[] rated = new Candidate[p * p];
-        PriorityQueue<Candidate> queue = new PriorityQueue<>(BEST_FIRST);
+        Ratings ratings = new Ratings();
         int[] allY = IntStream.range(0, p).toArray();
-        rateInserts(allY, false, version, rated, queue);
+        ratePairs(allY, null, false, ratings);
         while (true) {
             context.checkDeadline();
-            Candidate best = queue.poll();
+            Candidate best = ratings.queue.poll();
             if (best == null || best.delta <= MIN_IMPROVEMENT) {
-                queue.clear();
-                rateInserts(allY, true, version, rated, queue);
-                best = queue.poll();
+                ratings.queue.clear();
+                ratings.resweepCutPairs();
+                best = ratings.queue.poll();
                 if (best == null || best.delta <= MIN_IMPROVEMENT) {
                     return;
                 }
             }
-            int pair = best.x * p + best.y;
-            if (best.version != version[pair]) {
+            if (!ratings.isCurrent(best)) {
                 continue;
             }
             if (!stillValidInsert(best)) {
                 Candidate again = bestInsert(best.x, best.y, graph.parents(best.y), graph.undirectedNeighbours(best.y), true);
-                version[pair]++;
-                if (again != null) {
-                    again.version = version[pair];
-                    queue.add(again);
-                }
+                ratings.replace(best.x, best.y, again, true);
                 continue;
             }
             Pdag before = graph;
             graph = afterInsert(best);
             forwardMoves++;
-            rerateAfterMove(before, version, rated, queue);
+            rerateAfterMove(before, ratings);
+        }
+    }
+
+    /**
+     * The forward phase's bookkeeping, sparse in p: per y, the queued (improving) rating of each
+     * x, and the pairs whose rating was cut by the semi-directed path condition. A queued
+     * candidate is acted on only while it is still the current rating of its pair.
+     *
+     * <p>Why only the cut pairs are swept again when the queue runs dry: every other pair's
+     * rating is the best over the clique condition alone and is kept up to date after every
+     * move ({@link #rerateAfterMove}); once no such rating improves, no valid Insert of those
+     * pairs can improve either (the path condition only removes candidates). A cut pair's
+     * rating can be stale, because the path condition is global, so those are re-rated with
+     * all conditions. This gives the same operators as re-rating every pair, at the cost of
+     * the cut pairs only.
+     */
+    private final class Ratings {
+        final PriorityQueue<Candidate> queue = new PriorityQueue<>(BEST_FIRST);
+        @SuppressWarnings("unchecked")
+        private final Map<Integer, Candidate>[] queued = new Map[p];
+        @SuppressWarnings("unchecked")
+        private final Set<Integer>[] cut = new Set[p];
+        private int cutCount;
+
+        boolean isCurrent(Candidate c) {
+            return queued[c.y] != null && queued[c.y].get(c.x) == c;
+        }
+
+        /** Forgets every rating of y. */
+        void clear(int y) {
+            if (queued[y] != null) {
+                queued[y].clear();
+            }
+            if (cut[y] != null) {
+                cutCount -= cut[y].size();
+                cut[y].clear();
+            }
+        }
+
+        /** Makes {@code c} (null or not improving: none) the rating of (x, y); {@code cutByPath} as it was rated. */
+        void replace(int x, int y, Candidate c, boolean cutByPath) {
+            if (queued[y] != null) {
+                queued[y].remove(x);
+            }
+            if (cut[y] != null && cut[y].remove(x)) {
+                cutCount--;
+            }
+            if (cutByPath) {
+                if (cut[y] == null) {
+                    cut[y] = new HashSet<>();
+                }
+                cut[y].add(x);
+                cutCount++;
+            }
+            add(c);
+        }
+
+        /** Queues {@code c} as its pair's rating when it improves the score (its pair's old rating already forgotten). */
+        void add(Candidate c) {
+            if (c != null && c.delta > MIN_IMPROVEMENT) {
+                if (queued[c.y] == null) {
+                    queued[c.y] = new HashMap<>();
+                }
+                queued[c.y].put(c.x, c);
+                queue.add(c);
+            }
+        }
+
+        /** Re-rates the pairs cut by the path condition with all conditions, in a fixed order. */
+        void resweepCutPairs() {
+            if (cutCount == 0) {
+                return;
+            }
+            List<int[]> pairs = new ArrayList<>();
+            for (int y = 0; y < p; y++) {
+                if (cut[y] != null) {
+                    int[] xs = cut[y].stream().mapToInt(Integer::intValue).sorted().toArray();
+                    for (int x : xs) {
+                        pairs.add(new int[] {x, y});
+                    }
+                }
+            }
+            Candidate[] rated = new Candidate[pairs.size()];
+            parallel(rated.length, i -> {
+                int[] xy = pairs.get(i);
+                rated[i] = bestInsert(xy[0], xy[1], graph.parents(xy[1]), graph.undirectedNeighbours(xy[1]), true);
+            });
+            for (int i = 0; i < rated.length; i++) {
+                replace(pairs.get(i)[0], pairs.get(i)[1], rated[i], true);
+            }
         }
     }
 
@@ -337,19 +424,16 @@ final class GesSearch {
         return completion.complete(next);
     }
 
-    /** Rates the Inserts (x, y) for every x and the given y, replacing the queued entries. */
-    private void rateInserts(int[] ys, boolean checkPath, int[] version, Candidate[] rated,
-                             PriorityQueue<Candidate> queue) {
-        ratePairs(ys, null, checkPath, version, rated, queue);
-    }
-
     /**
-     * Rates the Inserts (x, y) for the given y and x in {@code xs} (every x when null),
-     * replacing the queued entries of those pairs.
+     * Rates the Inserts (x, y) for the given y and x in {@code xs} (every x when null) over the
+     * clique condition, replacing those pairs' ratings.
      */
-    private void ratePairs(int[] ys, int[] xs, boolean checkPath, int[] version, Candidate[] rated,
-                           PriorityQueue<Candidate> queue) {
+    private void ratePairs(int[] ys, int[] xs, boolean checkPath, Ratings ratings) {
         int count = xs == null ? p : xs.length;
+        List<List<Candidate>> rated = new ArrayList<>(ys.length);
+        for (int i = 0; i < ys.length; i++) {
+            rated.add(null);
+        }
         parallel(ys.length, i -> {
             int y = ys[i];
             if ((i & 15) == 0) {
@@ -357,27 +441,31 @@ final class GesSearch {
             }
             int[] pa = graph.parents(y);
             int[] ne = graph.undirectedNeighbours(y);
+            List<Candidate> improving = new ArrayList<>();
             for (int j = 0; j < count; j++) {
                 int x = xs == null ? j : xs[j];
                 if (x != y) {
-                    rated[x * p + y] = bestInsert(x, y, pa, ne, checkPath);
+                    Candidate c = bestInsert(x, y, pa, ne, checkPath);
+                    if (c != null && c.delta > MIN_IMPROVEMENT) {
+                        improving.add(c);
+                    }
                 }
             }
+            rated.set(i, improving);
         });
-        for (int y : ys) {
-            for (int j = 0; j < count; j++) {
-                int x = xs == null ? j : xs[j];
-                if (x == y) {
-                    continue;
+        for (int i = 0; i < ys.length; i++) {
+            int y = ys[i];
+            if (xs == null) {
+                ratings.clear(y);
+            } else {
+                for (int x : xs) {
+                    if (x != y) {
+                        ratings.replace(x, y, null, false);
+                    }
                 }
-                int pair = x * p + y;
-                version[pair]++;
-                Candidate c = rated[pair];
-                rated[pair] = null;
-                if (c != null && c.delta > MIN_IMPROVEMENT) {
-                    c.version = version[pair];
-                    queue.add(c);
-                }
+            }
+            for (Candidate c : rated.get(i)) {
+                ratings.add(c);
             }
         }
     }
@@ -388,8 +476,10 @@ final class GesSearch {
      * Ne(y). So: every x for a y whose own edges changed, or with two or more changed
      * neighbours; only the changed x for a y with exactly one changed undirected neighbour
      * (an adjacency between x and that neighbour changes only when both are changed nodes).
+     * Finding the changed nodes costs O(p + edges); the pairs re-rated are O(c · p), c the
+     * nodes whose edges changed (plus those next to two of them).
      */
-    private void rerateAfterMove(Pdag before, int[] version, Candidate[] rated, PriorityQueue<Candidate> queue) {
+    private void rerateAfterMove(Pdag before, Ratings ratings) {
         boolean[] changed = new boolean[p];
         int nChanged = 0;
         for (int v = 0; v < p; v++) {
@@ -412,8 +502,7 @@ final class GesSearch {
             }
             int changedNeighbours = 0;
             for (int m = 0; m < graph.degree(v); m++) {
-                int w = graph.neighbour(v, m);
-                if (changed[w] && graph.undirected(v, w)) {
+                if (changed[graph.neighbour(v, m)] && graph.neighbourState(v, m) == Pdag.UNDIRECTED) {
                     changedNeighbours++;
                 }
             }
@@ -423,9 +512,9 @@ final class GesSearch {
                 partial[nPartial++] = v;
             }
         }
-        ratePairs(Arrays.copyOf(full, nFull), null, false, version, rated, queue);
+        ratePairs(Arrays.copyOf(full, nFull), null, false, ratings);
         if (nPartial > 0) {
-            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, false, version, rated, queue);
+            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, false, ratings);
         }
     }
 
@@ -609,7 +698,7 @@ final class GesSearch {
             int u = stack[--top];
             for (int k = 0; k < graph.degree(u); k++) {
                 int w = graph.neighbour(u, k);
-                byte s = graph.state(u, w);
+                byte s = graph.neighbourState(u, k);
                 if (seen[w] || (s != Pdag.OUT && s != Pdag.UNDIRECTED)) {
                     continue;
                 }
@@ -657,8 +746,8 @@ final class GesSearch {
         for (int y = 0; y < p; y++) {
             for (int k = 0; k < graph.degree(y); k++) {
                 int x = graph.neighbour(y, k);
-                byte s = graph.state(x, y);
-                if (s == Pdag.OUT || s == Pdag.UNDIRECTED) {
+                byte s = graph.neighbourState(y, k);
+                if (s == Pdag.IN || s == Pdag.UNDIRECTED) {
                     out[n++] = x * p + y;
                 }
             }
@@ -976,7 +1065,6 @@ final class GesSearch {
         final int x;
         final int y;
         final int[] set;
-        int version;
 
         Candidate(double delta, int x, int y, int[] set) {
             this.delta = delta;
