@@ -45,6 +45,7 @@ public final class GesLearner implements Learner {
                                 + " Journal of Machine Learning Research 3; turning phase after Hauser and"
                                 + " Bühlmann (2012), Journal of Machine Learning Research 13",
                         GraphClass.CPDAG)
+                .takesStartGraph()
                 .assumption("a consistent score and faithfulness for the large-sample guarantee")
                 .parameter(ParameterSpec.bool(REPEAT_PHASES, false,
                         "run the forward and backward phases (and the turning phase, when on) again until a"
@@ -80,7 +81,7 @@ public final class GesLearner implements Learner {
         GesSearch search = new GesSearch(score, index, new CpdagCompletion(names, knowledge),
                 ScoreSettings.maxParents(parameters), context)
                 .variants(variants(parameters));
-        Graph cpdag = search.run().toGraph(names);
+        Graph cpdag = search.run(StartDag.of(input.startGraph(), names, knowledge)).toGraph(names);
         return new Estimate(cpdag, GraphClass.CPDAG, Map.of(
                 "forward-moves", (double) search.forwardMoves(),
                 "backward-moves", (double) search.backwardMoves(),

@@ -34,17 +34,23 @@ import java.util.stream.IntStream;
  * <p><b>Caching</b> (in the manner of the fast GES literature, e.g. Ramsey et al. 2017,
  * "A million variables and more", which we follow only in idea): the forward phase keeps
  * the best Insert of every ordered pair, rated over the T that satisfy the clique
- * condition, in a priority queue with a version number per pair. After a move only the
- * pairs (X, Y) whose rating can have changed are re-rated: every X for a Y whose own edges
- * changed or that has two or more changed undirected neighbours, and only the changed X for
- * a Y with one changed undirected neighbour. The semi-directed path
- * condition, which is global, is checked when an operator reaches the top of the queue;
- * an operator that fails it is re-rated with the condition enforced. When the queue has no
- * improving operator left, a full sweep re-rates every pair with all conditions enforced,
- * so the phase ends exactly when no valid improving Insert exists, as in the paper. The
- * backward phase (few edges) re-rates every adjacent pair after each move. Sweeps are
- * spread over {@link RunContext#threads()} threads; results do not depend on the thread
- * count (the queue is totally ordered by score change, then X, then Y).
+ * condition, in a priority queue; only improving ratings are stored, per y, so the
+ * bookkeeping is sparse in p ({@link Ratings}). After a move only the pairs (X, Y) whose
+ * rating can have changed are re-rated: every X for a Y whose own edges changed or that has
+ * two or more changed undirected neighbours, and only the changed X for a Y with one changed
+ * undirected neighbour. The X adjacent to no undirected neighbour of Y share their candidate
+ * sets and the scores without X, which are computed once per Y ({@link Column}). The
+ * semi-directed path condition, which is global, is checked when an operator reaches the
+ * top of the queue; an operator that fails it is re-rated with the condition enforced, and
+ * its pair is remembered as cut. When the queue has no improving operator left, the cut
+ * pairs are re-rated with all conditions enforced (no other pair can hold a valid improving
+ * Insert, see {@link Ratings}), so the phase ends exactly when no valid improving Insert
+ * exists, as in the paper. The backward phase (few edges) re-rates every adjacent pair after
+ * each move. Sweeps are spread over {@link RunContext#threads()} threads; results do not
+ * depend on the thread count (the queue is totally ordered by score change, then X, then Y).
+ *
+ * <p><b>Start</b>: the class of the required edges, or of a given start graph
+ * ({@link #run(Pdag)}); the operators apply to any class.
  *
  * <p><b>Background knowledge</b>: required edges are in the start graph and never
  * deleted; an Insert or Delete that would create a forbidden orientation (X → Y, T → Y,
@@ -70,10 +76,13 @@ import java.util.stream.IntStream;
  * sweep rates every edge in both directions over the cliques of v's undirected neighbours, so
  * the phase is meant for small and medium p (it is what the exact optimum can judge).
  *
- * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with two local scores each; a
- * forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those next to
- * two of them); Insert enumerates the cliques of T₀ (exponential only in dense graphs,
- * bounded by {@code maxParents}); each move re-completes the PDAG (cost of the completion).
+ * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with one local score each (plus one
+ * per Y); a forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those
+ * next to two of them); Insert enumerates the cliques of T₀ (exponential only in dense
+ * graphs, bounded by {@code maxParents}); each move copies and re-completes the PDAG, O(p +
+ * edges) with the sparse {@link Pdag} (cost of the completion), and finds the changed nodes
+ * in O(p + edges). Nothing per move is quadratic in p; over a run the re-rates add up to
+ * O(moves · p) local scores, which dominates at large p (docs/dev/score.md has the figures).
  */
 final class GesSearch {
 
@@ -144,6 +153,15 @@ final class GesSearch {
         for (int[] e : knowledge.requiredEdges()) {
             start.addDirected(e[0], e[1]);
         }
+        return run(start);
+    }
+
+    /**
+     * As {@link #run()}, from the equivalence class of {@code start} (a DAG or PDAG holding the
+     * required edges, such as {@link StartDag} builds): Chickering's operators apply to any
+     * class, so both phases simply begin there. From the empty graph this is the plain search.
+     */
+    Pdag run(Pdag start) {
         graph = completion.complete(start);
         context.checkDeadline();
         withPool(() -> {
@@ -281,7 +299,7 @@ final class GesSearch {
     private void forward() {
         Ratings ratings = new Ratings();
         int[] allY = IntStream.range(0, p).toArray();
-        ratePairs(allY, null, false, ratings);
+        ratePairs(allY, null, ratings);
         while (true) {
             context.checkDeadline();
             Candidate best = ratings.queue.poll();
@@ -428,7 +446,7 @@ final class GesSearch {
      * Rates the Inserts (x, y) for the given y and x in {@code xs} (every x when null) over the
      * clique condition, replacing those pairs' ratings.
      */
-    private void ratePairs(int[] ys, int[] xs, boolean checkPath, Ratings ratings) {
+    private void ratePairs(int[] ys, int[] xs, Ratings ratings) {
         int count = xs == null ? p : xs.length;
         List<List<Candidate>> rated = new ArrayList<>(ys.length);
         for (int i = 0; i < ys.length; i++) {
@@ -439,13 +457,12 @@ final class GesSearch {
             if ((i & 15) == 0) {
                 context.checkDeadline();
             }
-            int[] pa = graph.parents(y);
-            int[] ne = graph.undirectedNeighbours(y);
+            Column column = new Column(y);
             List<Candidate> improving = new ArrayList<>();
             for (int j = 0; j < count; j++) {
                 int x = xs == null ? j : xs[j];
                 if (x != y) {
-                    Candidate c = bestInsert(x, y, pa, ne, checkPath);
+                    Candidate c = column.bestInsert(x);
                     if (c != null && c.delta > MIN_IMPROVEMENT) {
                         improving.add(c);
                     }
@@ -467,6 +484,88 @@ final class GesSearch {
             for (Candidate c : rated.get(i)) {
                 ratings.add(c);
             }
+        }
+    }
+
+    /**
+     * The clique-condition ratings of the Inserts into one y. Every x adjacent to none of y's
+     * undirected neighbours has NA_{Y,X} = ∅ and the same T₀, so those x share the candidate
+     * sets T and the scores s(Y, Pa(Y) ∪ T) without x: these are enumerated and scored once per
+     * y (in the order {@link #enumerateT} uses, so ties resolve alike), and each such x costs one
+     * local score per T. Any other x takes the general enumeration.
+     */
+    private final class Column {
+        private final int y;
+        private final int[] pa;
+        private final int[] ne;
+        private final List<int[]> sets = new ArrayList<>();
+        private final List<int[]> ts = new ArrayList<>();
+        private final double[] without;
+
+        Column(int y) {
+            this.y = y;
+            this.pa = graph.parents(y);
+            this.ne = graph.undirectedNeighbours(y);
+            if (pa.length + 1 <= maxParents) {
+                int[] t0 = new int[ne.length];
+                int nt0 = 0;
+                for (int z : ne) {
+                    if (!knowledge.isForbidden(z, y)) {
+                        t0[nt0++] = z;
+                    }
+                }
+                int[] base = Arrays.copyOf(pa, pa.length + nt0);
+                collect(base, pa.length, t0, nt0, 0, new int[nt0], 0);
+            }
+            this.without = new double[sets.size()];
+            for (int i = 0; i < without.length; i++) {
+                without[i] = score.localScore(y, sets.get(i));
+            }
+        }
+
+        private void collect(int[] base, int fixed, int[] t0, int nt0, int from, int[] chosen, int nChosen) {
+            int size = fixed + nChosen;
+            sets.add(Arrays.copyOf(base, size));
+            ts.add(Arrays.copyOf(chosen, nChosen));
+            if (size + 2 > maxParents) {
+                return;
+            }
+            for (int i = from; i < nt0; i++) {
+                int t = t0[i];
+                boolean clique = true;
+                for (int k = 0; k < nChosen && clique; k++) {
+                    clique = graph.adjacent(t, chosen[k]);
+                }
+                if (!clique) {
+                    continue;
+                }
+                chosen[nChosen] = t;
+                base[size] = t;
+                collect(base, fixed, t0, nt0, i + 1, chosen, nChosen + 1);
+            }
+        }
+
+        /** The best Insert(x, y, T) over the clique condition, as {@link #bestInsert(int, int, int[], int[], boolean)}. */
+        Candidate bestInsert(int x) {
+            if (graph.adjacent(x, y) || knowledge.isForbidden(x, y)) {
+                return null;
+            }
+            for (int z : ne) {
+                if (graph.adjacent(z, x)) {
+                    return GesSearch.this.bestInsert(x, y, pa, ne, false);
+                }
+            }
+            Candidate best = null;
+            for (int i = 0; i < without.length; i++) {
+                int[] set = sets.get(i);
+                int[] with = Arrays.copyOf(set, set.length + 1);
+                with[set.length] = x;
+                double delta = score.localScore(y, with) - without[i];
+                if (best == null || delta > best.delta) {
+                    best = new Candidate(delta, x, y, ts.get(i));
+                }
+            }
+            return best;
         }
     }
 
@@ -512,9 +611,9 @@ final class GesSearch {
                 partial[nPartial++] = v;
             }
         }
-        ratePairs(Arrays.copyOf(full, nFull), null, false, ratings);
+        ratePairs(Arrays.copyOf(full, nFull), null, ratings);
         if (nPartial > 0) {
-            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, false, ratings);
+            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, ratings);
         }
     }
 

@@ -34,8 +34,9 @@ final class KnowledgeIndex {
     static KnowledgeIndex of(Knowledge knowledge, List<String> names) {
         knowledge.checkVariables(names);
         int p = names.size();
-        boolean[] forbidden = new boolean[p * p];
-        boolean[] required = new boolean[p * p];
+        // no p × p tables without knowledge: at p = 10,000 they would be 200 MB of false
+        boolean[] forbidden = knowledge.isEmpty() ? null : new boolean[p * p];
+        boolean[] required = knowledge.isEmpty() ? null : new boolean[p * p];
         List<int[]> req = new ArrayList<>();
         if (!knowledge.isEmpty()) {
             for (int a = 0; a < p; a++) {
@@ -56,16 +57,16 @@ final class KnowledgeIndex {
     }
 
     boolean isForbidden(int from, int to) {
-        return forbidden[from * p + to];
+        return forbidden != null && forbidden[from * p + to];
     }
 
     boolean isRequired(int from, int to) {
-        return required[from * p + to];
+        return required != null && required[from * p + to];
     }
 
     /** Whether the edge between a and b is required in either direction. */
     boolean isRequiredEitherWay(int a, int b) {
-        return required[a * p + b] || required[b * p + a];
+        return required != null && (required[a * p + b] || required[b * p + a]);
     }
 
     /** The required edges as {from, to} pairs. */
@@ -78,6 +79,9 @@ final class KnowledgeIndex {
     }
 
     private boolean anyForbidden() {
+        if (forbidden == null) {
+            return false;
+        }
         for (boolean f : forbidden) {
             if (f) {
                 return true;
