@@ -545,7 +545,10 @@ final class GesSearch {
             }
         }
 
-        /** The best Insert(x, y, T) over the clique condition, as {@link #bestInsert(int, int, int[], int[], boolean)}. */
+        /**
+         * The best Insert(x, y, T) over the clique condition, as
+         * {@link GesSearch#bestInsert(int, int, int[], int[], boolean)}, or null when it does not improve the score.
+         */
         Candidate bestInsert(int x) {
             if (graph.adjacent(x, y) || knowledge.isForbidden(x, y)) {
                 return null;
@@ -555,17 +558,20 @@ final class GesSearch {
                     return GesSearch.this.bestInsert(x, y, pa, ne, false);
                 }
             }
-            Candidate best = null;
+            int best = -1;
+            double bestDelta = 0;
             for (int i = 0; i < without.length; i++) {
                 int[] set = sets.get(i);
                 int[] with = Arrays.copyOf(set, set.length + 1);
                 with[set.length] = x;
                 double delta = score.localScore(y, with) - without[i];
-                if (best == null || delta > best.delta) {
-                    best = new Candidate(delta, x, y, ts.get(i));
+                if (best < 0 || delta > bestDelta) {
+                    best = i;
+                    bestDelta = delta;
                 }
             }
-            return best;
+            // only improving ratings are kept, so the p(p − 1) others of the first sweep allocate nothing
+            return best < 0 || bestDelta <= MIN_IMPROVEMENT ? null : new Candidate(bestDelta, x, y, ts.get(best));
         }
     }
 
