@@ -39,7 +39,9 @@ import java.util.stream.IntStream;
  * rating can have changed are re-rated: every X for a Y whose own edges changed or that has
  * two or more changed undirected neighbours, and only the changed X for a Y with one changed
  * undirected neighbour. The X adjacent to no undirected neighbour of Y share their candidate
- * sets and the scores without X, which are computed once per Y ({@link Column}). The
+ * sets and the scores without X, which are computed once per Y, and when all X of a Y are
+ * re-rated those X are first screened with batched scores, only the ones that may improve
+ * being rated exactly ({@link Column}). The
  * semi-directed path condition, which is global, is checked when an operator reaches the
  * top of the queue; an operator that fails it is re-rated with the condition enforced, and
  * its pair is remembered as cut. When the queue has no improving operator left, the cut
