@@ -1,8 +1,10 @@
 #!/usr/bin/env bash
 # Scaling of GES with p (linear Gaussian data, Erdős–Rényi DAGs of mean degree 2).
-# Usage: [SCORE=bic|ebic] [PENALTY=c] [GAMMA=g] scripts/scaling/score.sh [threads] [rows] [p ...]
+# Usage: [SCORE=bic|ebic] [PENALTY=c] [GAMMA=g] [HEAP=4g] scripts/scaling/score.sh [threads] [rows] [p ...]
 # SCORE is the local score (default bic); PENALTY the BIC penalty multiplier (default 1, the
-# classical BIC); GAMMA the extended BIC's gamma in [0, 1] (default 0.5; used with SCORE=ebic).
+# classical BIC); GAMMA the extended BIC's gamma in [0, 1] (default 0.5; used with SCORE=ebic);
+# HEAP the JVM's maximum heap (p = 10,000 holds an 800 MB covariance matrix: use 6g or more).
+# The last column is the process's peak resident memory so far, in MB.
 # Builds the benchmarks jar if it is missing; prints CSV (see GesScaling for the columns).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
@@ -17,4 +19,4 @@ jar=benchmarks/target/benchmarks.jar
 if [ ! -f "$jar" ]; then
   mvn -B -q -Pbench package -DskipTests
 fi
-exec java -Xmx4g -Dscore="${SCORE:-bic}" -Dpenalty="${PENALTY:-1}" -Dgamma="${GAMMA:-0.5}" -cp "$jar" dev.touchstone.benchmarks.score.GesScaling "$threads" "$rows" "${sizes[@]}"
+exec java -Xmx"${HEAP:-4g}" -Dscore="${SCORE:-bic}" -Dpenalty="${PENALTY:-1}" -Dgamma="${GAMMA:-0.5}" -cp "$jar" dev.touchstone.benchmarks.score.GesScaling "$threads" "$rows" "${sizes[@]}"

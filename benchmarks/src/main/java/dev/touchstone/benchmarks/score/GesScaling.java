@@ -23,7 +23,7 @@ import java.util.Map;
  * number of local-score evaluations, the moves, the edge counts of estimate and truth, and
  * the run's score (BIC or extended BIC, with the run's penalty and gamma) of a DAG in the
  * estimated class and of the true DAG, so that over-fitting can be told from a search stuck
- * below the truth. Usage: {@code GesScaling threads rows p1 p2 ...}; the system properties
+ * below the truth, and the peak resident memory so far. Usage: {@code GesScaling threads rows p1 p2 ...}; the system properties
  * {@code score} ({@code bic} or {@code ebic}, default bic), {@code penalty} (the BIC penalty
  * multiplier, default 1) and {@code gamma} (the extended BIC's, default 0.5) set the score.
  * {@code turning=true} adds GES's turning phase.
@@ -49,7 +49,7 @@ public final class GesScaling {
         java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
         com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
                 java.lang.management.ManagementFactory.getOperatingSystemMXBean();
-        System.out.println("p,rows,threads,score,penalty,gamma,seconds,process_cpu_seconds,main_thread_cpu_seconds,covariance_seconds,score_evaluations,forward_moves,backward_moves,edges,true_edges,estimate_score,true_score");
+        System.out.println("p,rows,threads,score,penalty,gamma,seconds,process_cpu_seconds,main_thread_cpu_seconds,covariance_seconds,score_evaluations,forward_moves,backward_moves,edges,true_edges,estimate_score,true_score,peak_rss_mb");
         for (int a = 2; a < args.length; a++) {
             int p = Integer.parseInt(args[a]);
             LinearGaussianFixture f = LinearGaussianFixture.of(p, 2.0, rows, 1000 + p);
@@ -65,11 +65,28 @@ public final class GesScaling {
             long pc2 = os.getProcessCpuTime();
             BicScore bic = BicScore.of(f.data.covariance(), penalty);
             LocalScore local = score.equals("ebic") ? EbicScore.of(bic, gamma) : bic;
-            System.out.println(String.format(Locale.ROOT, "%d,%d,%d,%s,%.2f,%.2f,%.3f,%.3f,%.3f,%.3f,%d,%.0f,%.0f,%d,%d,%.1f,%.1f", p,
+            System.out.println(String.format(Locale.ROOT, "%d,%d,%d,%s,%.2f,%.2f,%.3f,%.3f,%.3f,%.3f,%d,%.0f,%.0f,%d,%d,%.1f,%.1f,%d", p,
                     rows, threads, score, penalty, score.equals("ebic") ? gamma : 0.0, (t2 - t0) / 1e9, (pc2 - pc0) / 1e9, (c2 - c0) / 1e9, (t1 - t0) / 1e9, ctx.scores(),
                     e.extras().get("forward-moves"), e.extras().get("backward-moves"), e.graph().edgeCount(),
-                    f.dag.edgeCount(), dagScore(local, DagExtension.of(e.graph())), dagScore(local, f.dag)));
+                    f.dag.edgeCount(), dagScore(local, DagExtension.of(e.graph())), dagScore(local, f.dag), peakRssMegabytes()));
         }
+    }
+
+    /**
+     * The process's peak resident memory so far (VmHWM of /proc/self/status, Linux), in MB, or
+     * −1 where that file is missing; with several p in one run it is the peak up to this p.
+     */
+    private static long peakRssMegabytes() {
+        try {
+            for (String line : java.nio.file.Files.readAllLines(java.nio.file.Path.of("/proc/self/status"))) {
+                if (line.startsWith("VmHWM:")) {
+                    return Long.parseLong(line.replaceAll("[^0-9]", "")) / 1024;
+                }
+            }
+        } catch (java.io.IOException | RuntimeException e) {
+            return -1;
+        }
+        return -1;
     }
 
     /** The decomposable score of a DAG: the sum of its nodes' local scores given their parents. */

@@ -47,6 +47,15 @@ class ComposedEntryTest {
     }
 
     @Test
+    @DisplayName("GES can be given the step before's graph as its start: a study entry pc > start-graph > ges expands")
+    void gesTakesAStartGraph() {
+        Plan p = plan(HEAD + "  - id: pc-ges\n    steps:\n      - {use: pc}\n      - {use: ges, given: start-graph}\n");
+        LearnerConfig c = p.configs().get(0);
+        assertEquals("pc-then-ges", c.use());
+        assertTrue(c.canonical().contains("#pc > start-graph > ges"), c.canonical());
+    }
+
+    @Test
     @DisplayName("the study as written back reads again into the same entries and run keys")
     void roundTrips() {
         String text = HEAD + "  - id: pc-hc\n    knowledge: tiers\n    steps:\n      - {use: pc, with: {alpha: [0.01, 0.05]}}\n"
@@ -79,8 +88,8 @@ class ComposedEntryTest {
                                 + "      - {use: hill-climbing, given: required-edges}\n", "learners[0].steps[1].given", 11,
                         new String[] {"pc returns a cpdag", "only directed edges"}),
                 Arguments.of("start graph to a learner without one", "  - id: x\n    steps:\n      - {use: pc}\n"
-                                + "      - {use: ges, given: start-graph}\n", "learners[0].steps[1].given", 11,
-                        new String[] {"learner ges cannot start from a given graph"}),
+                                + "      - {use: direct-lingam, given: start-graph}\n", "learners[0].steps[1].given", 11,
+                        new String[] {"learner direct-lingam cannot start from a given graph"}),
                 Arguments.of("unknown hand-on", "  - id: x\n    steps:\n      - {use: pc}\n"
                                 + "      - {use: ges, given: skeleton}\n", "learners[0].steps[1].given", 11,
                         new String[] {"unknown hand-on 'skeleton'", "allowed: allowed-edges, required-edges, start-graph"}),

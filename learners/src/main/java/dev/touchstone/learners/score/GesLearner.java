@@ -56,6 +56,7 @@ public final class GesLearner extends DeclaredLearner {
                                 + " Journal of Machine Learning Research 3; turning phase after Hauser and"
                                 + " Bühlmann (2012), Journal of Machine Learning Research 13",
                         GraphClass.CPDAG)
+                .takesStartGraph()
                 .assumption("a consistent score and faithfulness for the large-sample guarantee")
                 .parameter(REPEAT)
                 .parameter(TURNING)
@@ -81,7 +82,7 @@ public final class GesLearner extends DeclaredLearner {
         GesSearch search = new GesSearch(score, index, new CpdagCompletion(names, run.knowledge()),
                 run.get(ScoreSettings.PARENT_LIMIT), run.context())
                 .variants(variants(run.parameters()));
-        Graph cpdag = search.run().toGraph(names);
+        Graph cpdag = search.run(StartDag.of(run.input().startGraph(), names, run.knowledge())).toGraph(names);
         return new Estimate(cpdag, GraphClass.CPDAG, Map.of(
                 "forward-moves", (double) search.forwardMoves(),
                 "backward-moves", (double) search.backwardMoves(),

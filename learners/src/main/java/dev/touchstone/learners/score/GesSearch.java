@@ -8,7 +8,11 @@ import org.apache.commons.rng.UniformRandomProvider;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 import java.util.PriorityQueue;
 import java.util.function.IntConsumer;
 import java.util.stream.IntStream;
@@ -31,17 +35,25 @@ import java.util.stream.IntStream;
  * <p><b>Caching</b> (in the manner of the fast GES literature, e.g. Ramsey et al. 2017,
  * "A million variables and more", which we follow only in idea): the forward phase keeps
  * the best Insert of every ordered pair, rated over the T that satisfy the clique
- * condition, in a priority queue with a version number per pair. After a move only the
- * pairs (X, Y) whose rating can have changed are re-rated: every X for a Y whose own edges
- * changed or that has two or more changed undirected neighbours, and only the changed X for
- * a Y with one changed undirected neighbour. The semi-directed path
- * condition, which is global, is checked when an operator reaches the top of the queue;
- * an operator that fails it is re-rated with the condition enforced. When the queue has no
- * improving operator left, a full sweep re-rates every pair with all conditions enforced,
- * so the phase ends exactly when no valid improving Insert exists, as in the paper. The
- * backward phase (few edges) re-rates every adjacent pair after each move. Sweeps are
- * spread over {@link RunContext#threads()} threads; results do not depend on the thread
- * count (the queue is totally ordered by score change, then X, then Y).
+ * condition, in a priority queue; only improving ratings are stored, per y, so the
+ * bookkeeping is sparse in p ({@link Ratings}). After a move only the pairs (X, Y) whose
+ * rating can have changed are re-rated: every X for a Y whose own edges changed or that has
+ * two or more changed undirected neighbours, and only the changed X for a Y with one changed
+ * undirected neighbour. The X adjacent to no undirected neighbour of Y share their candidate
+ * sets and the scores without X, which are computed once per Y, and when all X of a Y are
+ * re-rated those X are first screened with batched scores, only the ones that may improve
+ * being rated exactly ({@link Column}). The
+ * semi-directed path condition, which is global, is checked when an operator reaches the
+ * top of the queue; an operator that fails it is re-rated with the condition enforced, and
+ * its pair is remembered as cut. When the queue has no improving operator left, the cut
+ * pairs are re-rated with all conditions enforced (no other pair can hold a valid improving
+ * Insert, see {@link Ratings}), so the phase ends exactly when no valid improving Insert
+ * exists, as in the paper. The backward phase (few edges) re-rates every adjacent pair after
+ * each move. Sweeps are spread over {@link RunContext#threads()} threads; results do not
+ * depend on the thread count (the queue is totally ordered by score change, then X, then Y).
+ *
+ * <p><b>Start</b>: the class of the required edges, or of a given start graph
+ * ({@link #run(Pdag)}); the operators apply to any class.
  *
  * <p><b>Background knowledge</b>: required edges are in the start graph and never
  * deleted; an Insert or Delete that would create a forbidden orientation (X → Y, T → Y,
@@ -67,10 +79,13 @@ import java.util.stream.IntStream;
  * sweep rates every edge in both directions over the cliques of v's undirected neighbours, so
  * the phase is meant for small and medium p (it is what the exact optimum can judge).
  *
- * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with two local scores each; a
- * forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those next to
- * two of them); Insert enumerates the cliques of T₀ (exponential only in dense graphs,
- * bounded by {@code maxParents}); each move re-completes the PDAG (cost of the completion).
+ * <p><b>Cost</b>: the first sweep rates p(p − 1) pairs with one local score each (plus one
+ * per Y); a forward move re-rates O(c · p) pairs, c the nodes whose edges changed (plus those
+ * next to two of them); Insert enumerates the cliques of T₀ (exponential only in dense
+ * graphs, bounded by {@code maxParents}); each move copies and re-completes the PDAG, O(p +
+ * edges) with the sparse {@link Pdag} (cost of the completion), and finds the changed nodes
+ * in O(p + edges). Nothing per move is quadratic in p; over a run the re-rates add up to
+ * O(moves · p) local scores, which dominates at large p (docs/dev/score.md has the figures).
  */
 final class GesSearch {
 
@@ -141,6 +156,15 @@ final class GesSearch {
         for (int[] e : knowledge.requiredEdges()) {
             start.addDirected(e[0], e[1]);
         }
+        return run(start);
+    }
+
+    /**
+     * As {@link #run()}, from the equivalence class of {@code start} (a DAG or PDAG holding the
+     * required edges, such as {@link StartDag} builds): Chickering's operators apply to any
+     * class, so both phases simply begin there. From the empty graph this is the plain search.
+     */
+    Pdag run(Pdag start) {
         graph = completion.complete(start);
         context.checkDeadline();
         withPool(() -> {
@@ -276,39 +300,122 @@ final class GesSearch {
     // ---------------------------------------------------------------- forward phase
 
     private void forward() {
-        int[] version = new int[p * p];
-        Candidate[] rated = new Candidate[p * p];
-        PriorityQueue<Candidate> queue = new PriorityQueue<>(BEST_FIRST);
+        Ratings ratings = new Ratings();
         int[] allY = IntStream.range(0, p).toArray();
-        rateInserts(allY, false, version, rated, queue);
+        ratePairs(allY, null, ratings);
         while (true) {
             context.checkDeadline();
-            Candidate best = queue.poll();
+            Candidate best = ratings.queue.poll();
             if (best == null || best.delta <= MIN_IMPROVEMENT) {
-                queue.clear();
-                rateInserts(allY, true, version, rated, queue);
-                best = queue.poll();
+                ratings.queue.clear();
+                ratings.resweepCutPairs();
+                best = ratings.queue.poll();
                 if (best == null || best.delta <= MIN_IMPROVEMENT) {
                     return;
                 }
             }
-            int pair = best.x * p + best.y;
-            if (best.version != version[pair]) {
+            if (!ratings.isCurrent(best)) {
                 continue;
             }
             if (!stillValidInsert(best)) {
                 Candidate again = bestInsert(best.x, best.y, graph.parents(best.y), graph.undirectedNeighbours(best.y), true);
-                version[pair]++;
-                if (again != null) {
-                    again.version = version[pair];
-                    queue.add(again);
-                }
+                ratings.replace(best.x, best.y, again, true);
                 continue;
             }
             Pdag before = graph;
             graph = afterInsert(best);
             forwardMoves++;
-            rerateAfterMove(before, version, rated, queue);
+            rerateAfterMove(before, ratings);
+        }
+    }
+
+    /**
+     * The forward phase's bookkeeping, sparse in p: per y, the queued (improving) rating of each
+     * x, and the pairs whose rating was cut by the semi-directed path condition. A queued
+     * candidate is acted on only while it is still the current rating of its pair.
+     *
+     * <p>Why only the cut pairs are swept again when the queue runs dry: every other pair's
+     * rating is the best over the clique condition alone and is kept up to date after every
+     * move ({@link #rerateAfterMove}); once no such rating improves, no valid Insert of those
+     * pairs can improve either (the path condition only removes candidates). A cut pair's
+     * rating can be stale, because the path condition is global, so those are re-rated with
+     * all conditions. This gives the same operators as re-rating every pair, at the cost of
+     * the cut pairs only.
+     */
+    private final class Ratings {
+        final PriorityQueue<Candidate> queue = new PriorityQueue<>(BEST_FIRST);
+        @SuppressWarnings("unchecked")
+        private final Map<Integer, Candidate>[] queued = new Map[p];
+        @SuppressWarnings("unchecked")
+        private final Set<Integer>[] cut = new Set[p];
+        private int cutCount;
+
+        boolean isCurrent(Candidate c) {
+            return queued[c.y] != null && queued[c.y].get(c.x) == c;
+        }
+
+        /** Forgets every rating of y. */
+        void clear(int y) {
+            if (queued[y] != null) {
+                queued[y].clear();
+            }
+            if (cut[y] != null) {
+                cutCount -= cut[y].size();
+                cut[y].clear();
+            }
+        }
+
+        /** Makes {@code c} (null or not improving: none) the rating of (x, y); {@code cutByPath} as it was rated. */
+        void replace(int x, int y, Candidate c, boolean cutByPath) {
+            if (queued[y] != null) {
+                queued[y].remove(x);
+            }
+            if (cut[y] != null && cut[y].remove(x)) {
+                cutCount--;
+            }
+            if (cutByPath) {
+                if (cut[y] == null) {
+                    cut[y] = new HashSet<>();
+                }
+                cut[y].add(x);
+                cutCount++;
+            }
+            add(c);
+        }
+
+        /** Queues {@code c} as its pair's rating when it improves the score (its pair's old rating already forgotten). */
+        void add(Candidate c) {
+            if (c != null && c.delta > MIN_IMPROVEMENT) {
+                if (queued[c.y] == null) {
+                    queued[c.y] = new HashMap<>();
+                }
+                queued[c.y].put(c.x, c);
+                queue.add(c);
+            }
+        }
+
+        /** Re-rates the pairs cut by the path condition with all conditions, in a fixed order. */
+        void resweepCutPairs() {
+            if (cutCount == 0) {
+                return;
+            }
+            List<int[]> pairs = new ArrayList<>();
+            for (int y = 0; y < p; y++) {
+                if (cut[y] != null) {
+                    int[] xs = cut[y].stream().mapToInt(Integer::intValue).sorted().toArray();
+                    for (int x : xs) {
+                        pairs.add(new int[] {x, y});
+                    }
+                }
+            }
+            Candidate[] rated = new Candidate[pairs.size()];
+            parallel(rated.length, i -> {
+                int[] xy = pairs.get(i);
+                rated[i] = bestInsert(xy[0], xy[1], graph.parents(xy[1]), graph.undirectedNeighbours(xy[1]), true);
+            });
+            for (int i = 0; i < rated.length; i++) {
+                replace(pairs.get(i)[0], pairs.get(i)[1], rated[i], true);
+            }
         }
     }
 
@@ -338,48 +445,192 @@ final class GesSearch {
         return completion.complete(next);
     }
 
-    /** Rates the Inserts (x, y) for every x and the given y, replacing the queued entries. */
-    private void rateInserts(int[] ys, boolean checkPath, int[] version, Candidate[] rated,
-                             PriorityQueue<Candidate> queue) {
-        ratePairs(ys, null, checkPath, version, rated, queue);
-    }
-
     /**
-     * Rates the Inserts (x, y) for the given y and x in {@code xs} (every x when null),
-     * replacing the queued entries of those pairs.
+     * Rates the Inserts (x, y) for the given y and x in {@code xs} (every x when null) over the
+     * clique condition, replacing those pairs' ratings.
      */
-    private void ratePairs(int[] ys, int[] xs, boolean checkPath, int[] version, Candidate[] rated,
-                           PriorityQueue<Candidate> queue) {
+    private void ratePairs(int[] ys, int[] xs, Ratings ratings) {
         int count = xs == null ? p : xs.length;
+        List<List<Candidate>> rated = new ArrayList<>(ys.length);
+        for (int i = 0; i < ys.length; i++) {
+            rated.add(null);
+        }
         parallel(ys.length, i -> {
             int y = ys[i];
             if ((i & 15) == 0) {
                 context.checkDeadline();
             }
-            int[] pa = graph.parents(y);
-            int[] ne = graph.undirectedNeighbours(y);
+            Column column = new Column(y);
+            if (xs == null) {
+                column.screen();
+            }
+            List<Candidate> improving = new ArrayList<>();
             for (int j = 0; j < count; j++) {
                 int x = xs == null ? j : xs[j];
                 if (x != y) {
-                    rated[x * p + y] = bestInsert(x, y, pa, ne, checkPath);
+                    Candidate c = column.bestInsert(x);
+                    if (c != null && c.delta > MIN_IMPROVEMENT) {
+                        improving.add(c);
+                    }
                 }
             }
+            rated.set(i, improving);
         });
-        for (int y : ys) {
-            for (int j = 0; j < count; j++) {
-                int x = xs == null ? j : xs[j];
-                if (x == y) {
+        for (int i = 0; i < ys.length; i++) {
+            int y = ys[i];
+            if (xs == null) {
+                ratings.clear(y);
+            } else {
+                for (int x : xs) {
+                    if (x != y) {
+                        ratings.replace(x, y, null, false);
+                    }
+                }
+            }
+            for (Candidate c : rated.get(i)) {
+                ratings.add(c);
+            }
+        }
+    }
+
+    /**
+     * The clique-condition ratings of the Inserts into one y. Every x adjacent to none of y's
+     * undirected neighbours has NA_{Y,X} = ∅ and the same T₀, so those x share the candidate
+     * sets T and the scores s(Y, Pa(Y) ∪ T) without x: these are enumerated and scored once per
+     * y (in the order {@link #enumerateT} uses, so ties resolve alike), and each such x costs one
+     * local score per T. Any other x takes the general enumeration.
+     */
+    private final class Column {
+        private final int y;
+        private final int[] pa;
+        private final int[] ne;
+        private final List<int[]> sets = new ArrayList<>();
+        private final List<int[]> ts = new ArrayList<>();
+        private final double[] without;
+        /** Per x, the batched best gain over the shared sets (see {@link #screen}); null when not screened. */
+        private double[] bound;
+        private double tolerance;
+
+        Column(int y) {
+            this.y = y;
+            this.pa = graph.parents(y);
+            this.ne = graph.undirectedNeighbours(y);
+            if (pa.length + 1 <= maxParents) {
+                int[] t0 = new int[ne.length];
+                int nt0 = 0;
+                for (int z : ne) {
+                    if (!knowledge.isForbidden(z, y)) {
+                        t0[nt0++] = z;
+                    }
+                }
+                int[] base = Arrays.copyOf(pa, pa.length + nt0);
+                collect(base, pa.length, t0, nt0, 0, new int[nt0], 0);
+            }
+            this.without = new double[sets.size()];
+            for (int i = 0; i < without.length; i++) {
+                without[i] = score.localScore(y, sets.get(i));
+            }
+        }
+
+        /**
+         * Rates every x that takes the shared sets at once with {@link LocalScore#scoreAdditions}
+         * (for the BIC one Cholesky factor per set and O(|S|) per x, instead of a factor per x).
+         * Those batched scores equal the single ones only up to rounding, so they only screen:
+         * an x whose batched best gain is below the improvement threshold by more than a
+         * tolerance far above that rounding (10⁻⁶ of the largest score) cannot improve and is
+         * dropped; every other x is rated exactly as before. Ratings that are kept are therefore
+         * the same numbers as without screening, and no improving one is dropped.
+         */
+        void screen() {
+            if (without.length == 0) {
+                return;
+            }
+            boolean[] shared = new boolean[p];
+            int count = 0;
+            for (int x = 0; x < p; x++) {
+                shared[x] = x != y && !graph.adjacent(x, y) && !knowledge.isForbidden(x, y) && !adjacentToNeighbour(x);
+                count += shared[x] ? 1 : 0;
+            }
+            if (count == 0) {
+                return;
+            }
+            double[] best = new double[p];
+            Arrays.fill(best, Double.NEGATIVE_INFINITY);
+            double[] out = new double[p];
+            double largest = 1.0;
+            for (int i = 0; i < without.length; i++) {
+                score.scoreAdditions(y, sets.get(i), shared, out);
+                largest = Math.max(largest, Math.abs(without[i]));
+                for (int x = 0; x < p; x++) {
+                    if (shared[x]) {
+                        largest = Math.max(largest, Math.abs(out[x]));
+                        best[x] = Math.max(best[x], out[x] - without[i]);
+                    }
+                }
+            }
+            bound = best;
+            tolerance = 1e-6 * largest;
+        }
+
+        private boolean adjacentToNeighbour(int x) {
+            for (int z : ne) {
+                if (graph.adjacent(z, x)) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        private void collect(int[] base, int fixed, int[] t0, int nt0, int from, int[] chosen, int nChosen) {
+            int size = fixed + nChosen;
+            sets.add(Arrays.copyOf(base, size));
+            ts.add(Arrays.copyOf(chosen, nChosen));
+            if (size + 2 > maxParents) {
+                return;
+            }
+            for (int i = from; i < nt0; i++) {
+                int t = t0[i];
+                boolean clique = true;
+                for (int k = 0; k < nChosen && clique; k++) {
+                    clique = graph.adjacent(t, chosen[k]);
+                }
+                if (!clique) {
                     continue;
                 }
-                int pair = x * p + y;
-                version[pair]++;
-                Candidate c = rated[pair];
-                rated[pair] = null;
-                if (c != null && c.delta > MIN_IMPROVEMENT) {
-                    c.version = version[pair];
-                    queue.add(c);
+                chosen[nChosen] = t;
+                base[size] = t;
+                collect(base, fixed, t0, nt0, i + 1, chosen, nChosen + 1);
+            }
+        }
+
+        /**
+         * The best Insert(x, y, T) over the clique condition, as
+         * {@link GesSearch#bestInsert(int, int, int[], int[], boolean)}, or null when it does not improve the score.
+         */
+        Candidate bestInsert(int x) {
+            if (graph.adjacent(x, y) || knowledge.isForbidden(x, y)) {
+                return null;
+            }
+            if (adjacentToNeighbour(x)) {
+                return GesSearch.this.bestInsert(x, y, pa, ne, false);
+            }
+            if (bound != null && !(bound[x] > MIN_IMPROVEMENT - tolerance)) {
+                return null;
+            }
+            int best = -1;
+            double bestDelta = 0;
+            for (int i = 0; i < without.length; i++) {
+                int[] set = sets.get(i);
+                int[] with = Arrays.copyOf(set, set.length + 1);
+                with[set.length] = x;
+                double delta = score.localScore(y, with) - without[i];
+                if (best < 0 || delta > bestDelta) {
+                    best = i;
+                    bestDelta = delta;
                 }
             }
+            // only improving ratings are kept, so the p(p − 1) others of the first sweep allocate nothing
+            return best < 0 || bestDelta <= MIN_IMPROVEMENT ? null : new Candidate(bestDelta, x, y, ts.get(best));
         }
     }
 
@@ -389,8 +640,10 @@ final class GesSearch {
      * Ne(y). So: every x for a y whose own edges changed, or with two or more changed
      * neighbours; only the changed x for a y with exactly one changed undirected neighbour
      * (an adjacency between x and that neighbour changes only when both are changed nodes).
+     * Finding the changed nodes costs O(p + edges); the pairs re-rated are O(c · p), c the
+     * nodes whose edges changed (plus those next to two of them).
      */
-    private void rerateAfterMove(Pdag before, int[] version, Candidate[] rated, PriorityQueue<Candidate> queue) {
+    private void rerateAfterMove(Pdag before, Ratings ratings) {
         boolean[] changed = new boolean[p];
         int nChanged = 0;
         for (int v = 0; v < p; v++) {
@@ -413,8 +666,7 @@ final class GesSearch {
             }
             int changedNeighbours = 0;
             for (int m = 0; m < graph.degree(v); m++) {
-                int w = graph.neighbour(v, m);
-                if (changed[w] && graph.undirected(v, w)) {
+                if (changed[graph.neighbour(v, m)] && graph.neighbourState(v, m) == Pdag.UNDIRECTED) {
                     changedNeighbours++;
                 }
             }
@@ -424,9 +676,9 @@ final class GesSearch {
                 partial[nPartial++] = v;
             }
         }
-        ratePairs(Arrays.copyOf(full, nFull), null, false, version, rated, queue);
+        ratePairs(Arrays.copyOf(full, nFull), null, ratings);
         if (nPartial > 0) {
-            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, false, version, rated, queue);
+            ratePairs(Arrays.copyOf(partial, nPartial), changedNodes, ratings);
         }
     }
 
@@ -610,7 +862,7 @@ final class GesSearch {
             int u = stack[--top];
             for (int k = 0; k < graph.degree(u); k++) {
                 int w = graph.neighbour(u, k);
-                byte s = graph.state(u, w);
+                byte s = graph.neighbourState(u, k);
                 if (seen[w] || (s != Pdag.OUT && s != Pdag.UNDIRECTED)) {
                     continue;
                 }
@@ -658,8 +910,8 @@ final class GesSearch {
         for (int y = 0; y < p; y++) {
             for (int k = 0; k < graph.degree(y); k++) {
                 int x = graph.neighbour(y, k);
-                byte s = graph.state(x, y);
-                if (s == Pdag.OUT || s == Pdag.UNDIRECTED) {
+                byte s = graph.neighbourState(y, k);
+                if (s == Pdag.IN || s == Pdag.UNDIRECTED) {
                     out[n++] = x * p + y;
                 }
             }
@@ -975,7 +1227,6 @@ final class GesSearch {
         final int x;
         final int y;
         final int[] set;
-        int version;
 
         Candidate(double delta, int x, int y, int[] set) {
             this.delta = delta;

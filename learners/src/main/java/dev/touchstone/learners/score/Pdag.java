@@ -10,38 +10,43 @@ import java.util.Arrays;
 import java.util.List;
 
 /**
- * A mutable partially directed graph for the score-based searches: an edge state per
- * ordered pair (O(1) adjacency and orientation tests) plus neighbour lists (O(degree)
- * iteration). Not thread-safe; the searches mutate it from one thread and read it from
- * several only between mutations. Memory O(p²) bytes, which is 1 MB at p = 1,000.
+ * A mutable partially directed graph for the score-based searches, stored sparsely: per node
+ * a list of its neighbours with the state of each edge seen from that node, so memory and a
+ * copy cost O(p + edges) and an adjacency or orientation test O(min degree) of its two ends.
+ * This is what lets the searches run at p = 10,000, where a p × p edge table would be 100 MB
+ * per copy. Not thread-safe; the searches mutate it from one thread and read it from several
+ * only between mutations.
  */
 final class Pdag {
 
     static final byte NONE = 0;
-    /** Row a, column b: a → b. */
+    /** Seen from a towards b: a → b. */
     static final byte OUT = 1;
-    /** Row a, column b: b → a. */
+    /** Seen from a towards b: b → a. */
     static final byte IN = 2;
     static final byte UNDIRECTED = 3;
 
     private final int p;
-    private final byte[] state;
     private final int[][] nbr;
+    private final byte[][] kind;
     private final int[] degree;
 
     Pdag(int p) {
         this.p = p;
-        this.state = new byte[p * p];
-        this.nbr = new int[p][4];
+        this.nbr = new int[p][];
+        this.kind = new byte[p][];
         this.degree = new int[p];
     }
 
     Pdag(Pdag other) {
         this.p = other.p;
-        this.state = other.state.clone();
         this.nbr = new int[p][];
+        this.kind = new byte[p][];
         for (int v = 0; v < p; v++) {
-            nbr[v] = other.nbr[v].clone();
+            if (other.degree[v] > 0) {
+                nbr[v] = Arrays.copyOf(other.nbr[v], other.degree[v]);
+                kind[v] = Arrays.copyOf(other.kind[v], other.degree[v]);
+            }
         }
         this.degree = other.degree.clone();
     }
@@ -70,7 +75,7 @@ final class Pdag {
         for (int a = 0; a < p; a++) {
             for (int k = 0; k < degree[a]; k++) {
                 int b = nbr[a][k];
-                byte s = state[a * p + b];
+                byte s = kind[a][k];
                 if (s == OUT) {
                     g.addDirected(a, b);
                 } else if (s == UNDIRECTED && a < b) {
@@ -85,20 +90,41 @@ final class Pdag {
         return p;
     }
 
+    /** The slot of b in a's list, or −1. */
+    private int slot(int a, int b) {
+        int[] list = nbr[a];
+        for (int k = 0, d = degree[a]; k < d; k++) {
+            if (list[k] == b) {
+                return k;
+            }
+        }
+        return -1;
+    }
+
+    /** The state of the edge between a and b seen from a; scans the shorter of the two lists. */
     byte state(int a, int b) {
-        return state[a * p + b];
+        if (degree[a] <= degree[b]) {
+            int k = slot(a, b);
+            return k < 0 ? NONE : kind[a][k];
+        }
+        int k = slot(b, a);
+        return k < 0 ? NONE : mirror(kind[b][k]);
+    }
+
+    private static byte mirror(byte s) {
+        return s == OUT ? IN : s == IN ? OUT : s;
     }
 
     boolean adjacent(int a, int b) {
-        return state[a * p + b] != NONE;
+        return state(a, b) != NONE;
     }
 
     boolean directed(int from, int to) {
-        return state[from * p + to] == OUT;
+        return state(from, to) == OUT;
     }
 
     boolean undirected(int a, int b) {
-        return state[a * p + b] == UNDIRECTED;
+        return state(a, b) == UNDIRECTED;
     }
 
     int degree(int v) {
@@ -110,63 +136,67 @@ final class Pdag {
         return nbr[v][k];
     }
 
+    /** The state of the edge to v's k-th neighbour, seen from v. */
+    byte neighbourState(int v, int k) {
+        return kind[v][k];
+    }
+
     void addDirected(int from, int to) {
-        link(from, to);
-        state[from * p + to] = OUT;
-        state[to * p + from] = IN;
+        link(from, to, OUT);
     }
 
     void addUndirected(int a, int b) {
-        link(a, b);
-        state[a * p + b] = UNDIRECTED;
-        state[b * p + a] = UNDIRECTED;
+        link(a, b, UNDIRECTED);
     }
 
     /** Directs an existing edge as from → to. */
     void orient(int from, int to) {
-        if (state[from * p + to] == NONE) {
+        int k = slot(from, to);
+        if (k < 0) {
             throw new IllegalStateException("no edge to orient between " + from + " and " + to);
         }
-        state[from * p + to] = OUT;
-        state[to * p + from] = IN;
+        kind[from][k] = OUT;
+        kind[to][slot(to, from)] = IN;
     }
 
     void remove(int a, int b) {
-        if (state[a * p + b] == NONE) {
+        int k = slot(a, b);
+        if (k < 0) {
             return;
         }
-        state[a * p + b] = NONE;
-        state[b * p + a] = NONE;
-        unlinkOne(a, b);
-        unlinkOne(b, a);
+        unlink(a, k);
+        unlink(b, slot(b, a));
     }
 
-    private void link(int a, int b) {
+    private void link(int a, int b, byte seenFromA) {
         if (a == b) {
             throw new IllegalArgumentException("no self loops: " + a);
         }
-        if (state[a * p + b] != NONE) {
+        if (slot(a, b) >= 0) {
             throw new IllegalStateException("already adjacent: " + a + ", " + b);
         }
-        push(a, b);
-        push(b, a);
+        push(a, b, seenFromA);
+        push(b, a, mirror(seenFromA));
     }
 
-    private void push(int a, int b) {
-        if (degree[a] == nbr[a].length) {
-            nbr[a] = Arrays.copyOf(nbr[a], Math.max(4, 2 * degree[a]));
+    private void push(int a, int b, byte s) {
+        if (nbr[a] == null) {
+            nbr[a] = new int[4];
+            kind[a] = new byte[4];
+        } else if (degree[a] == nbr[a].length) {
+            int size = Math.max(4, 2 * degree[a]);
+            nbr[a] = Arrays.copyOf(nbr[a], size);
+            kind[a] = Arrays.copyOf(kind[a], size);
         }
-        nbr[a][degree[a]++] = b;
+        nbr[a][degree[a]] = b;
+        kind[a][degree[a]] = s;
+        degree[a]++;
     }
 
-    private void unlinkOne(int a, int b) {
-        int[] list = nbr[a];
-        for (int k = 0; k < degree[a]; k++) {
-            if (list[k] == b) {
-                list[k] = list[--degree[a]];
-                return;
-            }
-        }
+    private void unlink(int a, int k) {
+        int last = --degree[a];
+        nbr[a][k] = nbr[a][last];
+        kind[a][k] = kind[a][last];
     }
 
     /** The variables u with u → v, ascending. */
@@ -188,9 +218,8 @@ final class Pdag {
         int[] out = new int[degree[v]];
         int n = 0;
         for (int k = 0; k < degree[v]; k++) {
-            int w = nbr[v][k];
-            if (state[v * p + w] == kind) {
-                out[n++] = w;
+            if (this.kind[v][k] == kind) {
+                out[n++] = nbr[v][k];
             }
         }
         out = n == out.length ? out : Arrays.copyOf(out, n);
@@ -198,17 +227,25 @@ final class Pdag {
         return out;
     }
 
-    /** Whether the rows of v (its edges and their orientations) are the same in both. */
+    /** Whether v has the same edges with the same orientations in both. O(degree²), degrees being small. */
     boolean sameNeighbourhood(Pdag other, int v) {
-        return Arrays.equals(state, v * p, v * p + p, other.state, v * p, v * p + p);
+        if (degree[v] != other.degree[v]) {
+            return false;
+        }
+        for (int k = 0; k < degree[v]; k++) {
+            int j = other.slot(v, nbr[v][k]);
+            if (j < 0 || other.kind[v][j] != kind[v][k]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Whether every two of these variables are adjacent. */
     boolean isClique(int[] vars, int count) {
         for (int i = 0; i < count; i++) {
-            int row = vars[i] * p;
             for (int j = i + 1; j < count; j++) {
-                if (state[row + vars[j]] == NONE) {
+                if (!adjacent(vars[i], vars[j])) {
                     return false;
                 }
             }
@@ -233,7 +270,7 @@ final class Pdag {
             int u = stack[--top];
             for (int k = 0; k < degree[u]; k++) {
                 int w = nbr[u][k];
-                if (seen[w] || state[u * p + w] != OUT || (u == skipFrom && w == skipTo)) {
+                if (seen[w] || kind[u][k] != OUT || (u == skipFrom && w == skipTo)) {
                     continue;
                 }
                 if (w == to) {
