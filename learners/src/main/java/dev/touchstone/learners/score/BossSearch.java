@@ -134,23 +134,7 @@ final class BossSearch {
         int to = hi;
         parallel(p, task -> {
             if (task == p - 1) {
-                GrowShrinkTree tree = scorer.tree(v);
-                // asked[x] == stamp: the last query asked whether x precedes v; a prefix that grows by a
-                // variable the query never asked about follows the same path, so the score is reused
-                int[] asked = new int[p];
-                int stamp = 0;
-                for (int i = from; i <= to; i++) {
-                    if (i > from && asked[sigma[i - 1]] != stamp) {
-                        own[i] = own[i - 1];
-                        continue;
-                    }
-                    int at = i;
-                    int query = ++stamp;
-                    own[i] = tree.score(x -> {
-                        asked[x] = query;
-                        return pos[x] < at;
-                    });
-                }
+                scorer.tree(v).scoresAlongOrder(pos, from, to, own);
                 return;
             }
             int w = sigma[task];
