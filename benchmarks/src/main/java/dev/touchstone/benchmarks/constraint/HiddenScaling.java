@@ -1,6 +1,7 @@
 package dev.touchstone.benchmarks.constraint;
 
 import dev.touchstone.core.data.DataSet;
+import dev.touchstone.core.learner.DeadlineExceededException;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.Learner;
@@ -11,6 +12,7 @@ import dev.touchstone.learners.constraint.FciLearner;
 import dev.touchstone.learners.constraint.RfciLearner;
 import dev.touchstone.learners.hybrid.GfciLearner;
 
+import java.time.Duration;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.Locale;
@@ -28,7 +30,8 @@ import java.util.TreeMap;
  * children, so the hidden ones include confounders. One CSV line per run: wall and process CPU
  * seconds, independence tests, score evaluations, edges, then the learner's own counts.
  * Usage: {@code HiddenScaling threads rows hiddenEvery p learner1,learner2,…} (learners among
- * {@code fci}, {@code rfci}, {@code gfci}); Fisher z (and for GFCI the BIC) with α = 0.01.
+ * {@code fci}, {@code rfci}, {@code gfci}); Fisher z (and for GFCI the BIC) with α = 0.01. A run still going after
+ * the minutes of the system property {@code minutes} (default 30) is stopped and reported as such.
  */
 public final class HiddenScaling {
 
@@ -41,6 +44,7 @@ public final class HiddenScaling {
         int every = Integer.parseInt(args[2]);
         int p = Integer.parseInt(args[3]);
         String[] ids = args[4].split(",");
+        long minutes = Long.getLong("minutes", 30);
         double[][] all = SparseLinearData.columns(p, rows, 2.0, 41L + p);
         double[][] observed = Arrays.stream(java.util.stream.IntStream.range(0, p).filter(j -> j % every != 0)
                 .toArray()).mapToObj(j -> all[j]).toArray(double[][]::new);
@@ -59,8 +63,15 @@ public final class HiddenScaling {
             DataSet data = SparseLinearData.dataSet(observed);
             long cpu0 = os.getProcessCpuTime();
             long t0 = System.nanoTime();
-            RunContext ctx = RunContext.of(1, null, threads);
-            Estimate e = learner.learn(LearnerInput.of(data), Knowledge.none(), values, ctx);
+            RunContext ctx = RunContext.of(1, Duration.ofMinutes(minutes), threads);
+            Estimate e;
+            try {
+                e = learner.learn(LearnerInput.of(data), Knowledge.none(), values, ctx);
+            } catch (DeadlineExceededException stopped) {
+                System.out.println(String.format(Locale.ROOT, "%s,%d,%d,%d,%d,%d,stopped after %d minutes,,%d,%d,,",
+                        id, p, observed.length, p - observed.length, rows, threads, minutes, ctx.tests(), ctx.scores()));
+                continue;
+            }
             long t1 = System.nanoTime();
             long cpu1 = os.getProcessCpuTime();
             StringBuilder extras = new StringBuilder();

@@ -139,9 +139,10 @@ public final class BicScore implements LocalScore {
         }
         // c_i[x] for all x at once, row by row of Σ: contiguous reads instead of one row per candidate
         int m = candidates.length;
-        double[][] c = new double[k][];
+        // the rows are per-thread scratch: a permutation search expands hundreds of thousands of nodes
+        double[][] c = scratch.get().rows(k, m);
         for (int i = 0; i < k; i++) {
-            double[] ci = new double[m];
+            double[] ci = c[i];
             System.arraycopy(cov, parents[i] * p, ci, 0, m);
             for (int j = 0; j < i; j++) {
                 double lij = a[i * k + j];
@@ -161,7 +162,6 @@ public final class BicScore implements LocalScore {
                     ci[x] *= inv;
                 }
             }
-            c[i] = ci;
         }
         int rowY = node * p;
         for (int x = 0; x < m; x++) {
@@ -226,12 +226,21 @@ public final class BicScore implements LocalScore {
     private static final class Scratch {
         private double[] block = new double[64];
         private double[] vector = new double[8];
+        private double[][] rows = new double[0][];
 
         double[] block(int k) {
             if (block.length < k * k) {
                 block = new double[k * k];
             }
             return block;
+        }
+
+        /** At least k rows of exactly m entries (their contents are left over from earlier calls). */
+        double[][] rows(int k, int m) {
+            if (rows.length < k || (rows.length > 0 && rows[0].length != m)) {
+                rows = new double[Math.max(k, 2 * rows.length)][m];
+            }
+            return rows;
         }
 
         double[] vector(int k) {

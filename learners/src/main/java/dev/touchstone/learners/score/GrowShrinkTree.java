@@ -248,6 +248,26 @@ final class GrowShrinkTree {
         return a;
     }
 
+    /** Per-thread work arrays of {@code Node.expand}, one set per thread instead of four new arrays of p per node. */
+    private static final ThreadLocal<Scratch> SCRATCH = ThreadLocal.withInitial(Scratch::new);
+
+    private static final class Scratch {
+        boolean[] candidates = new boolean[0];
+        double[] scores = new double[0];
+        int[] vars = new int[0];
+        double[] gains = new double[0];
+
+        Scratch sized(int p) {
+            if (candidates.length != p) {
+                candidates = new boolean[p];
+                scores = new double[p];
+                vars = new int[p];
+                gains = new double[p];
+            }
+            return this;
+        }
+    }
+
     /** A parent set and its local score. */
     private static final class Result {
         final int[] parents;
@@ -285,14 +305,16 @@ final class GrowShrinkTree {
                 return;
             }
             int p = admissible.length;
-            boolean[] candidates = admissible.clone();
+            Scratch scratch = SCRATCH.get().sized(p);
+            boolean[] candidates = scratch.candidates;
+            System.arraycopy(admissible, 0, candidates, 0, p);
             for (int x : parents) {
                 candidates[x] = false;
             }
-            double[] scores = new double[p];
+            double[] scores = scratch.scores;
             GrowShrinkTree.this.score.scoreAdditions(y, parents, candidates, scores);
-            int[] vars = new int[p];
-            double[] gains = new double[p];
+            int[] vars = scratch.vars;
+            double[] gains = scratch.gains;
             int kept = 0;
             double tol = tolerance(score);
             for (int x = 0; x < p; x++) {
