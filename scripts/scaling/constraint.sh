@@ -9,7 +9,7 @@
 #        scripts/scaling/constraint.sh hidden [threads] [rows] [hidden_every] [p] [learners]
 #   The second form runs the PAG learners once each on the same data with every k-th variable
 #   hidden (default: 2 threads, n = 1000, every 10th of p = 500 hidden, fci,rfci); one CSV line per
-#   run (see HiddenScaling); MINUTES (default 30) stops a run that takes longer. The figures in docs/dev/constraint.md and hybrid.md:
+#   run (see HiddenScaling); MINUTES (default 30) stops a run that takes longer; DEGREE (default 2) is the mean degree. The figures in docs/dev/constraint.md and hybrid.md:
 #     scripts/scaling/constraint.sh hidden 2 1000 10 500 rfci,fci
 #     scripts/scaling/constraint.sh hidden 2 1000 10 100 gfci,fci,rfci
 # JMH_JAVA_OPTS is passed to java (e.g. -Djmh.ignoreLock=true while another JMH run holds the lock).
@@ -21,7 +21,7 @@ if [[ ! -f "$jar" ]]; then
 fi
 if [[ "${1:-}" == hidden ]]; then
   echo "load before: $(cut -d' ' -f1-3 /proc/loadavg) (2 cores)"
-  java -Xmx4g -Dminutes="${MINUTES:-30}" -cp "$jar" dev.touchstone.benchmarks.constraint.HiddenScaling "${2:-2}" "${3:-1000}" "${4:-10}" \
+  java -Xmx4g -Dminutes="${MINUTES:-30}" -Ddegree="${DEGREE:-2}" -cp "$jar" dev.touchstone.benchmarks.constraint.HiddenScaling "${2:-2}" "${3:-1000}" "${4:-10}" \
       "${5:-500}" "${6:-fci,rfci}"
   echo "load after: $(cut -d' ' -f1-3 /proc/loadavg)"
   exit 0

@@ -24,7 +24,8 @@ import java.util.TreeMap;
  * with hidden variables, one single-shot run each on the same data, so RFCI's saving over FCI
  * (Colombo, Maathuis, Kalisch and Richardson 2012: no Possible-D-Sep step) and GFCI's cost
  * (Ogarrio, Spirtes and Ramsey 2016: GES, then FCI's tests on GES's adjacencies) are measured
- * side by side. The truth is {@link SparseLinearData}'s DAG over p variables (mean degree 2, weights
+ * side by side. The truth is {@link SparseLinearData}'s DAG over p variables (mean degree 2 or the
+ * system property {@code degree}, weights
  * ±[0.5, 1.5]); every k-th variable from the first on (X1, X1+k, …) is hidden, i.e. its column is
  * dropped, so the learners see about p − p/k of them; the earlier variables of that DAG have more
  * children, so the hidden ones include confounders. One CSV line per run: wall and process CPU
@@ -45,7 +46,8 @@ public final class HiddenScaling {
         int p = Integer.parseInt(args[3]);
         String[] ids = args[4].split(",");
         long minutes = Long.getLong("minutes", 30);
-        double[][] all = SparseLinearData.columns(p, rows, 2.0, 41L + p);
+        double degree = Double.parseDouble(System.getProperty("degree", "2"));
+        double[][] all = SparseLinearData.columns(p, rows, degree, 41L + p);
         double[][] observed = Arrays.stream(java.util.stream.IntStream.range(0, p).filter(j -> j % every != 0)
                 .toArray()).mapToObj(j -> all[j]).toArray(double[][]::new);
         com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
