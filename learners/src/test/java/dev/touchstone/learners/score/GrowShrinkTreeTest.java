@@ -130,6 +130,64 @@ class GrowShrinkTreeTest {
     }
 
     @Test
+    @DisplayName("batched additions after earlier calls on the same thread (rows of shared leading parents reused)"
+            + " equal, to the last bit, those of a fresh score that computes every row")
+    void reusedRowsGiveTheSameBits() {
+        int p = 16;
+        Graph dag = RandomDags.erdosRenyi(p, 3.0, 44);
+        CovarianceMatrix cov = ScoreData.linearGaussian(dag, 400, 45).covariance();
+        BicScore reused = BicScore.of(cov, 1.0);
+        UniformRandomProvider rng = Seeds.random(46);
+        int[] parents = new int[0];
+        int shared = 0;
+        for (int call = 0; call < 400; call++) {
+            // the next set: keep a random number of the current leading parents, then add or change some
+            int keep = parents.length == 0 ? 0 : rng.nextInt(parents.length + 1);
+            boolean[] in = new boolean[p];
+            int[] next = Arrays.copyOf(parents, keep);
+            for (int x : next) {
+                in[x] = true;
+            }
+            int y = rng.nextInt(p);
+            int extra = rng.nextInt(4);
+            while (extra-- > 0) {
+                int x = rng.nextInt(p);
+                if (!in[x] && x != y) {
+                    in[x] = true;
+                    next = Arrays.copyOf(next, next.length + 1);
+                    next[next.length - 1] = x;
+                }
+            }
+            int[] sorted = next.clone();
+            Arrays.sort(sorted);
+            int[] use = rng.nextBoolean() ? sorted : next;
+            if (Arrays.stream(use).anyMatch(x -> x == y)) {
+                continue;
+            }
+            for (int i = 0; i < Math.min(use.length, parents.length) && use[i] == parents[i]; i++) {
+                shared++;
+            }
+            boolean[] candidates = new boolean[p];
+            for (int x = 0; x < p; x++) {
+                int cx = x;
+                candidates[x] = x != y && Arrays.stream(use).noneMatch(v -> v == cx);
+            }
+            double[] got = new double[p];
+            double[] want = new double[p];
+            reused.scoreAdditions(y, use, candidates, got);
+            BicScore.of(cov, 1.0).scoreAdditions(y, use, candidates, want);
+            for (int x = 0; x < p; x++) {
+                if (candidates[x]) {
+                    assertEquals(Double.doubleToLongBits(want[x]), Double.doubleToLongBits(got[x]),
+                            "call " + call + " y=" + y + " S=" + Arrays.toString(use) + " x=" + x);
+                }
+            }
+            parents = use;
+        }
+        assertTrue(shared > 200, "too few reused rows to test anything: " + shared);
+    }
+
+    @Test
     @DisplayName("the tree's answers equal grow-shrink from its definition on 300 random prefixes per variable,"
             + " queried in turn on one tree (so later answers come from the memo)")
     void treeEqualsBruteForceGrowShrink() {
