@@ -136,7 +136,7 @@ final class BossSearch {
         int to = hi;
         parallel(p, task -> {
             if (task == p - 1) {
-                scorer.tree(v).scoresAlongOrder(pos, from, to, own);
+                scorer.tree(v).scoresAlongOrder(pos, from, to, own, pool != null);
                 return;
             }
             int w = sigma[task];

@@ -32,8 +32,8 @@ import java.util.concurrent.atomic.AtomicInteger;
  *
  * <p>Knowledge: forbidden parents are never children; required parents form the root. The
  * optional parent limit stops growth at that many parents. Not thread-safe: one tree is
- * used by one thread at a time, except that {@link #scoresAlongOrder} run inside a fork-join pool
- * hands disjoint subtrees to the pool's threads.
+ * used by one thread at a time, except that {@link #scoresAlongOrder} asked to split, inside a
+ * fork-join pool, hands disjoint subtrees to the pool's threads.
  */
 final class GrowShrinkTree {
 
@@ -102,13 +102,14 @@ final class GrowShrinkTree {
      * some index's path is visited once instead of once per index (the same nodes are expanded
      * as by the separate queries, so the tree and its answers are the same).
      *
-     * <p>Called from a fork-join pool's thread, the subtrees of a node are walked as tasks of
-     * that pool: they share no node and write disjoint parts of {@code out}, and expanding the
+     * <p>With {@code split}, called from a fork-join pool's thread, the subtrees of a node are
+     * walked as tasks of that pool: they share no node and write disjoint parts of {@code out}, and expanding the
      * nodes a variable reaches at every index is most of a move's work, so one tree must not
      * keep one thread busy while the others wait.
      */
-    void scoresAlongOrder(int[] position, int from, int to, double[] out) {
-        walk(root, position, from, to, out, ForkJoinTask.inForkJoinPool());
+    void scoresAlongOrder(int[] position, int from, int to, double[] out, boolean split) {
+        // only the search's own pool: a caller that runs the learner on some other pool gave it one thread
+        walk(root, position, from, to, out, split && ForkJoinTask.inForkJoinPool());
     }
 
     private void walk(Node node, int[] position, int from, int to, double[] out, boolean fork) {

@@ -274,8 +274,8 @@ class GrowShrinkTreeTest {
                     int to = p - 1 - rng.nextInt(p / 2);
                     double[] one = new double[p];
                     double[] split = new double[p];
-                    serial.scoresAlongOrder(pos, from, to, one);
-                    pool.submit(() -> forked.scoresAlongOrder(pos, from, to, split)).get();
+                    serial.scoresAlongOrder(pos, from, to, one, false);
+                    pool.submit(() -> forked.scoresAlongOrder(pos, from, to, split, true)).get();
                     for (int i = from; i <= to; i++) {
                         int at = i;
                         boolean[] prefix = new boolean[p];
