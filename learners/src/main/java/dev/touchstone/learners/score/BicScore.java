@@ -139,9 +139,15 @@ public final class BicScore implements LocalScore {
         }
         // c_i[x] for all x at once, row by row of Σ: contiguous reads instead of one row per candidate
         int m = candidates.length;
-        double[][] c = new double[k][];
-        for (int i = 0; i < k; i++) {
-            double[] ci = new double[m];
+        // the rows are per-thread scratch: a permutation search expands hundreds of thousands of nodes.
+        // Row i depends only on parents[0..i] (and the leading block of the factor, which is computed
+        // from those alone), so rows left by the previous call on this thread for a parent set with
+        // the same first entries are reused as they are: the same numbers, not recomputed
+        Scratch sc = scratch.get();
+        double[][] c = sc.rows(k, m);
+        int reused = sc.sharedPrefix(parents);
+        for (int i = reused; i < k; i++) {
+            double[] ci = c[i];
             System.arraycopy(cov, parents[i] * p, ci, 0, m);
             for (int j = 0; j < i; j++) {
                 double lij = a[i * k + j];
@@ -161,7 +167,6 @@ public final class BicScore implements LocalScore {
                     ci[x] *= inv;
                 }
             }
-            c[i] = ci;
         }
         int rowY = node * p;
         for (int x = 0; x < m; x++) {
@@ -226,12 +231,46 @@ public final class BicScore implements LocalScore {
     private static final class Scratch {
         private double[] block = new double[64];
         private double[] vector = new double[8];
+        private double[][] rows = new double[0][];
 
         double[] block(int k) {
             if (block.length < k * k) {
                 block = new double[k * k];
             }
             return block;
+        }
+
+        /** The parents whose rows {@link #rows} holds, in order. */
+        private int[] rowParents = new int[0];
+
+        /**
+         * At least k rows of exactly m entries, the rows of {@link #rowParents} kept; contents
+         * beyond those are left over from earlier calls.
+         */
+        double[][] rows(int k, int m) {
+            if (rows.length > 0 && rows[0].length != m) {
+                rows = new double[0][];
+                rowParents = new int[0];
+            }
+            if (rows.length < k) {
+                int old = rows.length;
+                rows = Arrays.copyOf(rows, Math.max(k, 2 * old));
+                for (int i = old; i < rows.length; i++) {
+                    rows[i] = new double[m];
+                }
+            }
+            return rows;
+        }
+
+        /** How many leading parents the rows already hold; the rows then stand for {@code parents}. */
+        int sharedPrefix(int[] parents) {
+            int q = 0;
+            int limit = Math.min(rowParents.length, parents.length);
+            while (q < limit && rowParents[q] == parents[q]) {
+                q++;
+            }
+            rowParents = parents.clone();
+            return q;
         }
 
         double[] vector(int k) {

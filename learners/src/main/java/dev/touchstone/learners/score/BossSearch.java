@@ -19,9 +19,9 @@ import java.util.function.IntConsumer;
  * every w is scored twice, with and without v (d_w = with − without), and v once per index;
  * the gain of index i over v's current index c is then
  * s_v(i) − s_v(c) + Σ_{i ≤ j &lt; c} d_σ[j] (for i &lt; c) or − Σ_{c ≤ j &lt; i} d_σ[j] (for i &gt; c),
- * about 3p grow-shrink queries per move; the query with v is skipped when the one without v
- * never asked whether v precedes w (v then cannot change w's path through the tree), and v's
- * own query at index i + 1 reuses the one at i when that never asked about σ[i]. Summing differences rather than totals keeps the
+ * about 2p grow-shrink queries per move and one walk of v's tree that answers for every index at
+ * once ({@link GrowShrinkTree#scoresAlongOrder}); the query with v is skipped when the one without v
+ * never asked whether v precedes w (v then cannot change w's path through the tree). Summing differences rather than totals keeps the
  * comparison exact where nothing changed (d_w is exactly 0 when v does not enter w's
  * parents), which matters with the oracle's scores of order 10⁹. v moves to the best index
  * when its gain exceeds the rounding tolerance; indices that would put a required parent
@@ -33,8 +33,10 @@ import java.util.function.IntConsumer;
  * kept (ties: the earlier start). The grow-shrink trees are shared by all of it.
  *
  * <p><b>Threads.</b> The 2(p − 1) with/without queries of a move touch each w's own tree
- * only, so they run in parallel across {@link RunContext#threads()}; the result does not
- * depend on the thread count (every query is a pure function of its tree).
+ * only, so they run in parallel across {@link RunContext#threads()}; the walk of v's tree, which
+ * expands the nodes v reaches at every index and was about half of a move's work in a profile at
+ * p = 1,000, hands its subtrees to the same pool. The result does not depend on the thread count
+ * (every query is a pure function of its tree).
  */
 final class BossSearch {
 
@@ -134,23 +136,7 @@ final class BossSearch {
         int to = hi;
         parallel(p, task -> {
             if (task == p - 1) {
-                GrowShrinkTree tree = scorer.tree(v);
-                // asked[x] == stamp: the last query asked whether x precedes v; a prefix that grows by a
-                // variable the query never asked about follows the same path, so the score is reused
-                int[] asked = new int[p];
-                int stamp = 0;
-                for (int i = from; i <= to; i++) {
-                    if (i > from && asked[sigma[i - 1]] != stamp) {
-                        own[i] = own[i - 1];
-                        continue;
-                    }
-                    int at = i;
-                    int query = ++stamp;
-                    own[i] = tree.score(x -> {
-                        asked[x] = query;
-                        return pos[x] < at;
-                    });
-                }
+                scorer.tree(v).scoresAlongOrder(pos, from, to, own, pool != null);
                 return;
             }
             int w = sigma[task];

@@ -1,6 +1,11 @@
 package dev.touchstone.learners.score;
 
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
+import java.util.concurrent.ForkJoinTask;
+import java.util.concurrent.RecursiveAction;
+import java.util.concurrent.atomic.AtomicInteger;
 
 /**
  * A grow-shrink tree of one variable (Andrews, Ramsey, Sanchez-Romero, Camchong and
@@ -27,7 +32,8 @@ import java.util.Arrays;
  *
  * <p>Knowledge: forbidden parents are never children; required parents form the root. The
  * optional parent limit stops growth at that many parents. Not thread-safe: one tree is
- * used by one thread at a time.
+ * used by one thread at a time, except that {@link #scoresAlongOrder} asked to split, inside a
+ * fork-join pool, hands disjoint subtrees to the pool's threads.
  */
 final class GrowShrinkTree {
 
@@ -44,7 +50,7 @@ final class GrowShrinkTree {
     private final boolean[] admissible;
     private final int maxParents;
     private final Node root;
-    private int nodes;
+    private final AtomicInteger nodes = new AtomicInteger();
 
     /**
      * @param score      the local score
@@ -64,12 +70,12 @@ final class GrowShrinkTree {
             this.admissible[r] = false;
         }
         this.root = new Node(base, score.localScore(y, base));
-        this.nodes = 1;
+        this.nodes.set(1);
     }
 
     /** Nodes created so far (for the cost figures). */
     int nodeCount() {
-        return nodes;
+        return nodes.get();
     }
 
     /** A membership test for the variables that precede y. */
@@ -86,6 +92,63 @@ final class GrowShrinkTree {
     /** The grow-shrink parents of y within the prefix (sorted) — the required ones included. */
     int[] parents(Prefix prefix) {
         return shrunk(grow(prefix)).parents.clone();
+    }
+
+    /**
+     * The scores of y at every index of an order in one walk of the tree: for each i in
+     * [{@code from}, {@code to}], {@code out[i]} is {@link #score(Prefix)} with the prefix
+     * {x : position[x] &lt; i}. The indices that reach a node form an interval, and at each node
+     * the interval splits among its children by where their variables stand, so every node on
+     * some index's path is visited once instead of once per index (the same nodes are expanded
+     * as by the separate queries, so the tree and its answers are the same).
+     *
+     * <p>With {@code split}, called from a fork-join pool's thread, the subtrees of a node are
+     * walked as tasks of that pool: they share no node and write disjoint parts of {@code out}, and expanding the
+     * nodes a variable reaches at every index is most of a move's work, so one tree must not
+     * keep one thread busy while the others wait.
+     */
+    void scoresAlongOrder(int[] position, int from, int to, double[] out, boolean split) {
+        // only the search's own pool: a caller that runs the learner on some other pool gave it one thread
+        walk(root, position, from, to, out, split && ForkJoinTask.inForkJoinPool());
+    }
+
+    private void walk(Node node, int[] position, int from, int to, double[] out, boolean fork) {
+        node.expand();
+        int open = to;
+        int[] vars = node.childVars;
+        List<RecursiveAction> tasks = null;
+        // child k takes the indices above where its variable stands that no earlier child took
+        for (int k = 0; k < vars.length && open >= from; k++) {
+            int first = Math.max(from, position[vars[k]] + 1);
+            if (first <= open) {
+                Node child = node.child(k);
+                if (fork) {
+                    int a = first;
+                    int b = open;
+                    if (tasks == null) {
+                        tasks = new ArrayList<>();
+                    }
+                    tasks.add(new RecursiveAction() {
+                        @Override
+                        protected void compute() {
+                            walk(child, position, a, b, out, true);
+                        }
+                    });
+                } else {
+                    walk(child, position, first, open, out, false);
+                }
+                open = first - 1;
+            }
+        }
+        if (tasks != null) {
+            ForkJoinTask.invokeAll(tasks);
+        }
+        if (open >= from) {
+            double s = shrunk(node).score;
+            for (int i = from; i <= open; i++) {
+                out[i] = s;
+            }
+        }
     }
 
     private Node grow(Prefix prefix) {
@@ -153,6 +216,59 @@ final class GrowShrinkTree {
         }
     }
 
+    /**
+     * The indices 0 … n−1 sorted by {@code scores} from highest to lowest, equal scores keeping
+     * their order (a merge sort on primitives: the boxed sort it replaces was a visible part of
+     * expanding a node).
+     */
+    static int[] byScoreDescending(double[] scores, int n) {
+        int[] a = new int[n];
+        for (int i = 0; i < n; i++) {
+            a[i] = i;
+        }
+        int[] b = new int[n];
+        for (int width = 1; width < n; width *= 2) {
+            for (int lo = 0; lo < n; lo += 2 * width) {
+                int mid = Math.min(lo + width, n);
+                int hi = Math.min(lo + 2 * width, n);
+                int i = lo;
+                int j = mid;
+                for (int k = lo; k < hi; k++) {
+                    // take from the right run only when strictly higher, which keeps the sort stable
+                    if (j < hi && (i >= mid || Double.compare(scores[a[j]], scores[a[i]]) > 0)) {
+                        b[k] = a[j++];
+                    } else {
+                        b[k] = a[i++];
+                    }
+                }
+            }
+            int[] t = a;
+            a = b;
+            b = t;
+        }
+        return a;
+    }
+
+    /** Per-thread work arrays of {@code Node.expand}, one set per thread instead of four new arrays of p per node. */
+    private static final ThreadLocal<Scratch> SCRATCH = ThreadLocal.withInitial(Scratch::new);
+
+    private static final class Scratch {
+        boolean[] candidates = new boolean[0];
+        double[] scores = new double[0];
+        int[] vars = new int[0];
+        double[] gains = new double[0];
+
+        Scratch sized(int p) {
+            if (candidates.length != p) {
+                candidates = new boolean[p];
+                scores = new double[p];
+                vars = new int[p];
+                gains = new double[p];
+            }
+            return this;
+        }
+    }
+
     /** A parent set and its local score. */
     private static final class Result {
         final int[] parents;
@@ -190,14 +306,16 @@ final class GrowShrinkTree {
                 return;
             }
             int p = admissible.length;
-            boolean[] candidates = admissible.clone();
+            Scratch scratch = SCRATCH.get().sized(p);
+            boolean[] candidates = scratch.candidates;
+            System.arraycopy(admissible, 0, candidates, 0, p);
             for (int x : parents) {
                 candidates[x] = false;
             }
-            double[] scores = new double[p];
+            double[] scores = scratch.scores;
             GrowShrinkTree.this.score.scoreAdditions(y, parents, candidates, scores);
-            int[] vars = new int[p];
-            double[] gains = new double[p];
+            int[] vars = scratch.vars;
+            double[] gains = scratch.gains;
             int kept = 0;
             double tol = tolerance(score);
             for (int x = 0; x < p; x++) {
@@ -207,14 +325,8 @@ final class GrowShrinkTree {
                     kept++;
                 }
             }
-            Integer[] order = new Integer[kept];
-            for (int i = 0; i < kept; i++) {
-                order[i] = i;
-            }
-            Arrays.sort(order, (a, b) -> {
-                int c = Double.compare(gains[b], gains[a]);
-                return c != 0 ? c : Integer.compare(vars[a], vars[b]);
-            });
+            // vars are in increasing order, so a stable sort by score gives the ties' order
+            int[] order = byScoreDescending(gains, kept);
             childVars = new int[kept];
             childScores = new double[kept];
             for (int i = 0; i < kept; i++) {
@@ -226,11 +338,14 @@ final class GrowShrinkTree {
 
         Node child(int i) {
             if (children[i] == null) {
-                int[] grown = Arrays.copyOf(parents, parents.length + 1);
-                grown[parents.length] = childVars[i];
-                Arrays.sort(grown);
+                int x = childVars[i];
+                int at = -Arrays.binarySearch(parents, x) - 1;
+                int[] grown = new int[parents.length + 1];
+                System.arraycopy(parents, 0, grown, 0, at);
+                grown[at] = x;
+                System.arraycopy(parents, at, grown, at + 1, parents.length - at);
                 children[i] = new Node(grown, childScores[i]);
-                nodes++;
+                nodes.incrementAndGet();
             }
             return children[i];
         }

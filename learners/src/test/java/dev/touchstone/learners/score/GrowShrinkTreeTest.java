@@ -10,6 +10,7 @@ import org.junit.jupiter.api.DisplayName;
 import org.junit.jupiter.api.Test;
 
 import java.util.Arrays;
+import java.util.concurrent.ForkJoinPool;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -129,6 +130,64 @@ class GrowShrinkTreeTest {
     }
 
     @Test
+    @DisplayName("batched additions after earlier calls on the same thread (rows of shared leading parents reused)"
+            + " equal, to the last bit, those of a fresh score that computes every row")
+    void reusedRowsGiveTheSameBits() {
+        int p = 16;
+        Graph dag = RandomDags.erdosRenyi(p, 3.0, 44);
+        CovarianceMatrix cov = ScoreData.linearGaussian(dag, 400, 45).covariance();
+        BicScore reused = BicScore.of(cov, 1.0);
+        UniformRandomProvider rng = Seeds.random(46);
+        int[] parents = new int[0];
+        int shared = 0;
+        for (int call = 0; call < 400; call++) {
+            // the next set: keep a random number of the current leading parents, then add or change some
+            int keep = parents.length == 0 ? 0 : rng.nextInt(parents.length + 1);
+            boolean[] in = new boolean[p];
+            int[] next = Arrays.copyOf(parents, keep);
+            for (int x : next) {
+                in[x] = true;
+            }
+            int y = rng.nextInt(p);
+            int extra = rng.nextInt(4);
+            while (extra-- > 0) {
+                int x = rng.nextInt(p);
+                if (!in[x] && x != y) {
+                    in[x] = true;
+                    next = Arrays.copyOf(next, next.length + 1);
+                    next[next.length - 1] = x;
+                }
+            }
+            int[] sorted = next.clone();
+            Arrays.sort(sorted);
+            int[] use = rng.nextBoolean() ? sorted : next;
+            if (Arrays.stream(use).anyMatch(x -> x == y)) {
+                continue;
+            }
+            for (int i = 0; i < Math.min(use.length, parents.length) && use[i] == parents[i]; i++) {
+                shared++;
+            }
+            boolean[] candidates = new boolean[p];
+            for (int x = 0; x < p; x++) {
+                int cx = x;
+                candidates[x] = x != y && Arrays.stream(use).noneMatch(v -> v == cx);
+            }
+            double[] got = new double[p];
+            double[] want = new double[p];
+            reused.scoreAdditions(y, use, candidates, got);
+            BicScore.of(cov, 1.0).scoreAdditions(y, use, candidates, want);
+            for (int x = 0; x < p; x++) {
+                if (candidates[x]) {
+                    assertEquals(Double.doubleToLongBits(want[x]), Double.doubleToLongBits(got[x]),
+                            "call " + call + " y=" + y + " S=" + Arrays.toString(use) + " x=" + x);
+                }
+            }
+            parents = use;
+        }
+        assertTrue(shared > 200, "too few reused rows to test anything: " + shared);
+    }
+
+    @Test
     @DisplayName("the tree's answers equal grow-shrink from its definition on 300 random prefixes per variable,"
             + " queried in turn on one tree (so later answers come from the memo)")
     void treeEqualsBruteForceGrowShrink() {
@@ -173,6 +232,90 @@ class GrowShrinkTreeTest {
                 Arrays.sort(truth);
                 assertArrayEquals(truth, tree.parents(x -> pos[x] < at), "seed " + seed + " y=" + y);
             }
+        }
+    }
+
+    @Test
+    @DisplayName("one walk along an order gives at every index the score of grow-shrink from its definition with the"
+            + " variables before that index, on the caller's thread and split over a fork-join pool of 2 threads")
+    void walkAlongOrderEqualsOneQueryPerIndex() throws Exception {
+        int p = 14;
+        Graph dag = RandomDags.erdosRenyi(p, 4.0, 12);
+        LocalScore s = BicScore.of(ScoreData.linearGaussian(dag, 250, 13).covariance(), 1.0);
+        UniformRandomProvider rng = Seeds.random(31);
+        ForkJoinPool pool = new ForkJoinPool(2);
+        try {
+            for (int y = 0; y < p; y++) {
+                boolean[] admissible = new boolean[p];
+                Arrays.fill(admissible, true);
+                admissible[y] = false;
+                GrowShrinkTree serial = new GrowShrinkTree(s, y, admissible, new int[0], -1);
+                GrowShrinkTree forked = new GrowShrinkTree(s, y, admissible, new int[0], -1);
+                for (int trial = 0; trial < 25; trial++) {
+                    // y out of the order: the others at positions 0 .. p-2, y before all of them
+                    int[] others = new int[p - 1];
+                    for (int x = 0, k = 0; x < p; x++) {
+                        if (x != y) {
+                            others[k++] = x;
+                        }
+                    }
+                    for (int i = others.length - 1; i > 0; i--) {
+                        int j = rng.nextInt(i + 1);
+                        int t = others[i];
+                        others[i] = others[j];
+                        others[j] = t;
+                    }
+                    int[] pos = new int[p];
+                    for (int i = 0; i < others.length; i++) {
+                        pos[others[i]] = i;
+                    }
+                    pos[y] = Integer.MIN_VALUE;
+                    int from = rng.nextInt(p / 2);
+                    int to = p - 1 - rng.nextInt(p / 2);
+                    double[] one = new double[p];
+                    double[] split = new double[p];
+                    serial.scoresAlongOrder(pos, from, to, one, false);
+                    pool.submit(() -> forked.scoresAlongOrder(pos, from, to, split, true)).get();
+                    for (int i = from; i <= to; i++) {
+                        int at = i;
+                        boolean[] prefix = new boolean[p];
+                        for (int x = 0; x < p; x++) {
+                            prefix[x] = x != y && pos[x] < at;
+                        }
+                        double expected = s.localScore(y, bruteForceParents(s, y, prefix));
+                        assertEquals(expected, one[i], 1e-9 * (1 + Math.abs(expected)), "y=" + y + " index " + i);
+                        assertEquals(one[i], split[i], "serial and forked walks differ at y=" + y + " index " + i);
+                    }
+                }
+                assertEquals(serial.nodeCount(), forked.nodeCount(), "the forked walk expands other nodes");
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    @Test
+    @DisplayName("children are sorted best first, equal scores in the order given, as a boxed sort with that comparator"
+            + " does (java.util.Arrays.sort, a general-purpose library)")
+    void primitiveSortMatchesBoxedSort() {
+        UniformRandomProvider rng = Seeds.random(77);
+        for (int trial = 0; trial < 300; trial++) {
+            int n = rng.nextInt(60);
+            double[] scores = new double[n];
+            for (int i = 0; i < n; i++) {
+                // few distinct values, so ties are common
+                scores[i] = rng.nextInt(6) - 2.5;
+            }
+            Integer[] boxed = new Integer[n];
+            for (int i = 0; i < n; i++) {
+                boxed[i] = i;
+            }
+            Arrays.sort(boxed, (a, b) -> {
+                int c = Double.compare(scores[b], scores[a]);
+                return c != 0 ? c : Integer.compare(a, b);
+            });
+            assertArrayEquals(Arrays.stream(boxed).mapToInt(Integer::intValue).toArray(),
+                    GrowShrinkTree.byScoreDescending(scores, n), "n=" + n);
         }
     }
 
