@@ -35,8 +35,8 @@ class PermutationSearchTest {
         }
         System.out.println("permutation-search-quick adjacency means: " + means);
         // Against PC the claim is asserted. Against GES it is not: on this grid BOSS's recall is higher
-        // on 15 of 20 replicates (mean +0.041) but the signed-rank test gives p = 0.084, so the quick
-        // grid does not show the paper's advantage over GES at the 5% level.
+        // on 12 of 20 replicates (mean +0.010) but the signed-rank test gives p = 0.64, so the quick
+        // grid does not show the paper's advantage over GES at the 5% level; only the sign is checked.
         for (String search : List.of("boss", "grasp")) {
             s.assertShift(runs, search, "pc", "adjacency_recall", +1);
         }
