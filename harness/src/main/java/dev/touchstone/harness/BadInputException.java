@@ -1,5 +1,7 @@
 package dev.touchstone.harness;
 
+import dev.touchstone.core.param.ParameterException;
+
 import java.io.UncheckedIOException;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.FileAlreadyExistsException;
@@ -39,13 +41,18 @@ public class BadInputException extends RuntimeException {
 
     /**
      * The bad input behind {@code failure}, or null when it is not bad input (a fault of the
-     * tool): a {@code BadInputException} anywhere in the cause chain, or a file-system refusal
-     * that names the file (no such file, permission denied, exists already, not a folder).
+     * tool): a {@code BadInputException} anywhere in the cause chain, a parameter value refused
+     * by its declaration ({@link ParameterException}: core's own bad-input type, since core
+     * cannot see this one and plug-ins raise it too), or a file-system refusal that names the
+     * file (no such file, permission denied, exists already, not a folder).
      */
     public static BadInputException from(Throwable failure) {
         for (Throwable t = failure; t != null; t = t.getCause()) {
             if (t instanceof BadInputException b) {
                 return b;
+            }
+            if (t instanceof ParameterException p) {
+                return new BadInputException(p.getMessage(), failure);
             }
             Throwable io = t instanceof UncheckedIOException u ? u.getCause() : t;
             if (io instanceof FileSystemException f && f.getFile() != null) {
