@@ -136,7 +136,7 @@ final class BossSearch {
         int to = hi;
         parallel(p, task -> {
             if (task == p - 1) {
-                scorer.tree(v).scoresAlongOrder(pos, from, to, own, pool != null);
+                scorer.tree(v).scoresAlongOrder(pos, from, to, own);
                 return;
             }
             int w = sigma[task];

@@ -1,10 +1,6 @@
 package dev.touchstone.learners.score;
 
-import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.List;
-import java.util.concurrent.ForkJoinTask;
-import java.util.concurrent.RecursiveAction;
 import java.util.concurrent.atomic.AtomicInteger;
 
 /**
@@ -32,8 +28,7 @@ import java.util.concurrent.atomic.AtomicInteger;
  *
  * <p>Knowledge: forbidden parents are never children; required parents form the root. The
  * optional parent limit stops growth at that many parents. Not thread-safe: one tree is
- * used by one thread at a time, except that {@link #scoresAlongOrder} asked to split, inside a
- * fork-join pool, hands disjoint subtrees to the pool's threads.
+ * used by one thread at a time.
  */
 final class GrowShrinkTree {
 
@@ -101,47 +96,22 @@ final class GrowShrinkTree {
      * the interval splits among its children by where their variables stand, so every node on
      * some index's path is visited once instead of once per index (the same nodes are expanded
      * as by the separate queries, so the tree and its answers are the same).
-     *
-     * <p>With {@code split}, called from a fork-join pool's thread, the subtrees of a node are
-     * walked as tasks of that pool: they share no node and write disjoint parts of {@code out}, and expanding the
-     * nodes a variable reaches at every index is most of a move's work, so one tree must not
-     * keep one thread busy while the others wait.
      */
-    void scoresAlongOrder(int[] position, int from, int to, double[] out, boolean split) {
-        // only the search's own pool: a caller that runs the learner on some other pool gave it one thread
-        walk(root, position, from, to, out, split && ForkJoinTask.inForkJoinPool());
+    void scoresAlongOrder(int[] position, int from, int to, double[] out) {
+        walk(root, position, from, to, out);
     }
 
-    private void walk(Node node, int[] position, int from, int to, double[] out, boolean fork) {
+    private void walk(Node node, int[] position, int from, int to, double[] out) {
         node.expand();
         int open = to;
         int[] vars = node.childVars;
-        List<RecursiveAction> tasks = null;
         // child k takes the indices above where its variable stands that no earlier child took
         for (int k = 0; k < vars.length && open >= from; k++) {
             int first = Math.max(from, position[vars[k]] + 1);
             if (first <= open) {
-                Node child = node.child(k);
-                if (fork) {
-                    int a = first;
-                    int b = open;
-                    if (tasks == null) {
-                        tasks = new ArrayList<>();
-                    }
-                    tasks.add(new RecursiveAction() {
-                        @Override
-                        protected void compute() {
-                            walk(child, position, a, b, out, true);
-                        }
-                    });
-                } else {
-                    walk(child, position, first, open, out, false);
-                }
+                walk(node.child(k), position, first, open, out);
                 open = first - 1;
             }
-        }
-        if (tasks != null) {
-            ForkJoinTask.invokeAll(tasks);
         }
         if (open >= from) {
             double s = shrunk(node).score;
