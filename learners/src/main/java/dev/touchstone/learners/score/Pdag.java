@@ -69,6 +69,26 @@ final class Pdag {
         return d;
     }
 
+    /**
+     * The PDAG whose node v has the neighbours {@code neighbours[offsets[v] .. offsets[v + 1])}
+     * with the edge states seen from v in {@code states} (this class's codes), kept in that
+     * order; the caller gives each edge once in both ends' rows. No check, so no O(degree)
+     * adjacency test per edge as {@link #addDirected} makes.
+     */
+    static Pdag ofSortedRows(int[] offsets, int[] neighbours, byte[] states) {
+        Pdag d = new Pdag(offsets.length - 1);
+        for (int v = 0; v < d.p; v++) {
+            int from = offsets[v];
+            int to = offsets[v + 1];
+            if (to > from) {
+                d.nbr[v] = Arrays.copyOfRange(neighbours, from, to);
+                d.kind[v] = Arrays.copyOfRange(states, from, to);
+                d.degree[v] = to - from;
+            }
+        }
+        return d;
+    }
+
     /** This PDAG as an immutable graph over these names. */
     Graph toGraph(List<String> names) {
         MutableGraph g = Graph.builder(names);
