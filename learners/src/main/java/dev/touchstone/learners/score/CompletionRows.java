@@ -128,10 +128,20 @@ final class CompletionRows {
         boolean[] removed = new boolean[p];
         boolean[] queued = new boolean[p];
         int[] queue = new int[p];
+        // Each variable's directed edges out to variables not yet removed: condition (a) is
+        // then a test of one count instead of a scan of the row at every look.
+        int[] outgoing = new int[p];
+        for (int v = 0; v < p; v++) {
+            for (int s = offsets[v], e = offsets[v + 1]; s < e; s++) {
+                if (state[s] == Pdag.OUT) {
+                    outgoing[v]++;
+                }
+            }
+        }
         int head = 0;
         int tail = 0;
         for (int v = 0; v < p; v++) {
-            if (qualifies(v, removed)) {
+            if (qualifies(v, removed, outgoing)) {
                 queued[v] = true;
                 queue[tail++] = v;
             }
@@ -139,15 +149,20 @@ final class CompletionRows {
         while (head < tail) {
             int x = queue[head++];
             for (int s = offsets[x], e = offsets[x + 1]; s < e; s++) {
-                if (!removed[neighbours[s]] && state[s] == Pdag.UNDIRECTED) {
+                if (removed[neighbours[s]]) {
+                    continue;
+                }
+                if (state[s] == Pdag.UNDIRECTED) {
                     state[s] = Pdag.IN;
                     state[twin[s]] = Pdag.OUT;
+                } else if (state[s] == Pdag.IN) {
+                    outgoing[neighbours[s]]--; // that neighbour's edge into x no longer counts
                 }
             }
             removed[x] = true;
             for (int s = offsets[x], e = offsets[x + 1]; s < e; s++) {
                 int w = neighbours[s];
-                if (!removed[w] && !queued[w] && qualifies(w, removed)) {
+                if (!removed[w] && !queued[w] && qualifies(w, removed, outgoing)) {
                     queued[w] = true;
                     queue[tail++] = w;
                 }
@@ -156,14 +171,12 @@ final class CompletionRows {
         return tail == p ? queue : null;
     }
 
-    private boolean qualifies(int x, boolean[] removed) {
+    private boolean qualifies(int x, boolean[] removed, int[] outgoing) {
+        if (outgoing[x] > 0) {
+            return false;
+        }
         int from = offsets[x];
         int to = offsets[x + 1];
-        for (int s = from; s < to; s++) {
-            if (state[s] == Pdag.OUT && !removed[neighbours[s]]) {
-                return false;
-            }
-        }
         for (int s = from; s < to; s++) {
             int y = neighbours[s];
             if (removed[y] || state[s] != Pdag.UNDIRECTED) {
