@@ -15,7 +15,8 @@ import java.util.Arrays;
  *       undirected neighbours are each adjacent to all its other remaining neighbours,
  *       orienting its undirected edges into it. Candidates are kept on a first-in first-out
  *       worklist scanned in the same order as core's {@code DagExtension}, so the extension is
- *       the same DAG, not only one of the same class.</li>
+ *       the same DAG, not only one of the same class. A count per variable of its directed
+ *       edges to variables not yet removed makes the first condition one comparison.</li>
  *   <li>{@link #labelCompelled}: Chickering's labelling of each edge as compelled or
  *       reversible (Chickering 1995, "A transformational characterization of equivalent
  *       Bayesian network structures", UAI, procedures Order-Edges and Find-Compelled), with

@@ -12,10 +12,10 @@ import java.util.List;
  * and the CPDAG of that DAG (Chickering 1995), both computed on the {@link Pdag} itself by
  * {@link CompletionRows}, then — only when there is background knowledge — the orientations
  * the knowledge demands closed under Meek's rules R1–R4 ({@link MeekRules}, Meek 1995), which
- * goes through core's {@link Graph}. Without knowledge no core graph is built: after each of
- * the thousands of moves of a search at p = 1,000 the two conversions and the name index of a
- * new graph cost more than the completion itself. Cost about O(p + |E|·Δ log Δ) on sparse
- * graphs.
+ * goes through core's {@link Graph}. Without knowledge no core graph is built, because a
+ * search at p = 1,000 makes thousands of moves and, through core, most of each completion's
+ * time went into building, freezing and converting graphs (and their name indexes) rather
+ * than into the two algorithms. Cost about O(p + |E|·Δ log Δ) on sparse graphs.
  */
 final class CpdagCompletion implements GesSearch.Completion {
 
