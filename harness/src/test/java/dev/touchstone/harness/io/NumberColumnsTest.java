@@ -63,6 +63,29 @@ class NumberColumnsTest {
         return f;
     }
 
+    /**
+     * The line-feed count that places each range's rows, eight bytes at a time, against a count
+     * byte by byte (common practice as the reference), on seeded random bytes rich in line
+     * feeds and in bytes one bit away from one (0x0B, 0x8A, 0x09), of every length up to 70.
+     */
+    @Test
+    void countsLineFeedsAsAByteByByteLoop() {
+        UniformRandomProvider rng = Seeds.random(22);
+        byte[] near = {'\n', 0x0B, (byte) 0x8A, 0x09, 0x00, (byte) 0xFF, '1', ','};
+        for (int t = 0; t < 2000; t++) {
+            int n = rng.nextInt(71);
+            byte[] b = new byte[n + rng.nextInt(9)];
+            for (int i = 0; i < b.length; i++) {
+                b[i] = rng.nextInt(3) == 0 ? (byte) rng.nextInt(256) : near[rng.nextInt(near.length)];
+            }
+            int expected = 0;
+            for (int i = 0; i < n; i++) {
+                expected += b[i] == '\n' ? 1 : 0;
+            }
+            assertEquals(expected, NumberColumns.lineBreaks(b, n), "trial " + t);
+        }
+    }
+
     @Test
     @DisplayName("random all-number files, cut into up to 64 ranges: the JDK's doubles, bit for bit, for 1 to 16 threads")
     void agreesWithTheJdkOnRandomFiles() throws IOException {
