@@ -39,6 +39,8 @@ final class NumberColumns {
     private static final int BUFFER = 1 << 20;
     private static final VarHandle LITTLE_ENDIAN_LONG =
             MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final long COMMAS = 0x2C2C2C2C2C2C2C2CL;
+    private static final long LINE_FEEDS = 0x0A0A0A0A0A0A0A0AL;
 
     private NumberColumns() {
     }
@@ -134,16 +136,39 @@ final class NumberColumns {
         return count;
     }
 
+    /**
+     * The first {@code i' >= i} below {@code n} with a comma or line feed at {@code b[i']}, or
+     * {@code n}; eight bytes at a time.
+     */
+    static int nextDelimiter(byte[] b, int i, int n) {
+        for (; i + 8 <= n; i += 8) {
+            long v = (long) LITTLE_ENDIAN_LONG.get(b, i);
+            long found = zeroBytes(v ^ COMMAS) | zeroBytes(v ^ LINE_FEEDS);
+            if (found != 0) {
+                // Little-endian: the lowest marked byte is the first in the file.
+                return i + (Long.numberOfTrailingZeros(found) >>> 3);
+            }
+        }
+        while (i < n && b[i] != ',' && b[i] != '\n') {
+            i++;
+        }
+        return i;
+    }
+
+    /**
+     * The high bit of each byte of {@code v} that is zero, exactly: the sum cannot carry out of
+     * a byte, so no byte marks another (Hacker's Delight, section 6-1).
+     */
+    private static long zeroBytes(long v) {
+        return ~(((v & 0x7F7F7F7F7F7F7F7FL) + 0x7F7F7F7F7F7F7F7FL) | v | 0x7F7F7F7F7F7F7F7FL);
+    }
+
     /** The number of line feeds in {@code b[0, n)}, eight bytes at a time. */
     static int lineBreaks(byte[] b, int n) {
         int count = 0;
         int i = 0;
         for (; i + 8 <= n; i += 8) {
-            long v = (long) LITTLE_ENDIAN_LONG.get(b, i) ^ 0x0A0A0A0A0A0A0A0AL;
-            // The high bit of each byte that is zero (a line feed), exactly: the sum cannot carry
-            // out of a byte, so no byte marks another (Hacker's Delight, section 6-1).
-            long zeros = ~(((v & 0x7F7F7F7F7F7F7F7FL) + 0x7F7F7F7F7F7F7F7FL) | v | 0x7F7F7F7F7F7F7F7FL);
-            count += Long.bitCount(zeros);
+            count += Long.bitCount(zeroBytes((long) LITTLE_ENDIAN_LONG.get(b, i) ^ LINE_FEEDS));
         }
         for (; i < n; i++) {
             if (b[i] == '\n') {
@@ -223,9 +248,7 @@ final class NumberColumns {
                 while (true) {
                     byte[] b = buf;
                     int n = limit;
-                    while (i < n && b[i] != ',' && b[i] != '\n') {
-                        i++;
-                    }
+                    i = nextDelimiter(b, i, n);
                     if (i < n || base + n >= size) {
                         break;
                     }

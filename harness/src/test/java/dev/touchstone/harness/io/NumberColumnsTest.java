@@ -64,14 +64,15 @@ class NumberColumnsTest {
     }
 
     /**
-     * The line-feed count that places each range's rows, eight bytes at a time, against a count
-     * byte by byte (common practice as the reference), on seeded random bytes rich in line
-     * feeds and in bytes one bit away from one (0x0B, 0x8A, 0x09), of every length up to 70.
+     * The line-feed count that places each range's rows, and the search for the end of a cell,
+     * eight bytes at a time, against loops byte by byte (common practice as the reference), on
+     * seeded random bytes rich in line feeds, commas and bytes one bit away from them (0x0B,
+     * 0x8A, 0x09, 0x2D, 0xAC), of every length up to 70.
      */
     @Test
-    void countsLineFeedsAsAByteByByteLoop() {
+    void findsLineFeedsAndCommasAsByteByByteLoops() {
         UniformRandomProvider rng = Seeds.random(22);
-        byte[] near = {'\n', 0x0B, (byte) 0x8A, 0x09, 0x00, (byte) 0xFF, '1', ','};
+        byte[] near = {'\n', 0x0B, (byte) 0x8A, 0x09, 0x00, (byte) 0xFF, '1', ',', 0x2D, (byte) 0xAC};
         for (int t = 0; t < 2000; t++) {
             int n = rng.nextInt(71);
             byte[] b = new byte[n + rng.nextInt(9)];
@@ -83,6 +84,12 @@ class NumberColumnsTest {
                 expected += b[i] == '\n' ? 1 : 0;
             }
             assertEquals(expected, NumberColumns.lineBreaks(b, n), "trial " + t);
+            int from = n == 0 ? 0 : rng.nextInt(n + 1);
+            int next = from;
+            while (next < n && b[next] != ',' && b[next] != '\n') {
+                next++;
+            }
+            assertEquals(next, NumberColumns.nextDelimiter(b, from, n), "trial " + t + " from " + from);
         }
     }
 
