@@ -27,6 +27,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.FutureTask;
 
 /** {@code touchstone learn}: runs one learner on one data file and writes the graph it returns. */
 @Command(name = "learn", description = "Run one learner on a data file and write the estimated graph.")
@@ -78,6 +80,42 @@ final class LearnCommand implements Callable<Integer> {
         if (out != null) {
             GraphFormat.of(out);
         }
+        // The data is read on a thread of its own while the learner catalogue loads, since on a
+        // large file both take a while; its result or error is taken where it was read before,
+        // so the messages come in the same order.
+        FutureTask<Loaded> reading = new FutureTask<>(() -> {
+            ColumnKinds.Declared declared = ColumnKinds.declared(data, kinds, discrete, continuous);
+            return new Loaded(declared, DataCsv.read(data, declared.kinds()));
+        });
+        Thread reader = new Thread(reading, "touchstone-learn-read");
+        reader.setDaemon(true);
+        reader.start();
+        try {
+            return learn(reading);
+        } finally {
+            reading.cancel(true);
+        }
+    }
+
+    /** The kinds declared for the data file and the data read with them. */
+    private record Loaded(ColumnKinds.Declared declared, DataCsv.Result read) {
+    }
+
+    private static Loaded await(FutureTask<Loaded> reading) throws Exception {
+        try {
+            return reading.get();
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof Exception cause) {
+                throw cause;
+            }
+            if (e.getCause() instanceof Error error) {
+                throw error;
+            }
+            throw e;
+        }
+    }
+
+    private Integer learn(FutureTask<Loaded> reading) throws Exception {
         LearnerCatalog catalog = sources.toolkit().learners;
         LearnerCatalog.Entry entry = catalog.find(learner);
         if (entry == null) {
@@ -92,8 +130,9 @@ final class LearnCommand implements Callable<Integer> {
         } catch (ParameterException e) {
             throw new UsageException("--set: " + e.getMessage(), e);
         }
-        ColumnKinds.Declared declared = ColumnKinds.declared(data, kinds, discrete, continuous);
-        DataCsv.Result read = DataCsv.read(data, declared.kinds());
+        Loaded loaded = await(reading);
+        ColumnKinds.Declared declared = loaded.declared();
+        DataCsv.Result read = loaded.read();
         String assumed = ColumnKinds.assumption(read, declared);
         String why = assumed == null ? "" : " (" + assumed + ")";
         Knowledge k = knowledge == null ? Knowledge.none() : KnowledgeFile.read(knowledge, read.data().names());

@@ -1,7 +1,7 @@
 package dev.touchstone.harness.io;
 
 import com.fasterxml.jackson.core.JsonParser;
-import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.io.JsonStringEncoder;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
@@ -33,8 +33,15 @@ import java.util.Set;
  */
 public final class GraphJson {
 
-    private static final ObjectMapper MAPPER = new ObjectMapper()
-            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+    /**
+     * The reader's mapper, in a holder so that writing a graph (the last step of every
+     * {@code learn}) does not initialise Jackson's data binding, which loads some 600 classes.
+     */
+    private static final class Reading {
+        static final ObjectMapper MAPPER = new ObjectMapper()
+                .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+    }
+
     private static final Set<String> TOP_FIELDS = Set.of("variables", "hidden", "edges");
     private static final Set<String> EDGE_FIELDS = Set.of("between", "marks");
 
@@ -52,7 +59,7 @@ public final class GraphJson {
      * @throws FileFormatException naming the file and the edge or field at fault
      */
     public static Graph read(Path file, GraphClass expected) throws IOException {
-        JsonNode root = JsonTrees.read(file, MAPPER);
+        JsonNode root = JsonTrees.read(file, Reading.MAPPER);
         if (root == null || root.isMissingNode()) {
             throw new FileFormatException(file, null, "the file is empty (expected a JSON object with variables and edges)");
         }
@@ -146,11 +153,8 @@ public final class GraphJson {
             if (i > 0) {
                 sb.append(", ");
             }
-            try {
-                sb.append(MAPPER.writeValueAsString(items.get(i)));
-            } catch (JsonProcessingException e) {
-                throw new IllegalStateException(e);
-            }
+            // The same escapes as the mapper's writer (quote, backslash, control characters).
+            sb.append('"').append(JsonStringEncoder.getInstance().quoteAsString(items.get(i))).append('"');
         }
         sb.append(']');
     }

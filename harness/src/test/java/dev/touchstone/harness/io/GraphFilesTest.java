@@ -6,6 +6,7 @@ import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.random.Seeds;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -81,6 +82,28 @@ class GraphFilesTest {
                 + "}\n", GraphJson.toJson(sample()));
         assertEquals("{\n  \"variables\": [\"X\"],\n  \"hidden\": [],\n  \"edges\": []\n}\n",
                 GraphJson.toJson(Graph.empty(List.of("X"))));
+    }
+
+    /**
+     * Names are quoted as Jackson's data binding writes a JSON string (the writer no longer
+     * uses it, so that writing a graph does not load it): quote, backslash, control
+     * characters, and non-ASCII text left as it is. The reference is the general-purpose
+     * library's {@code ObjectMapper.writeValueAsString}; the names read back the same.
+     */
+    @Test
+    void jsonQuotesNamesAsTheJacksonMapperDoes() throws IOException {
+        List<String> names = List.of("a\"b", "back\\slash", "tab\tnew\nline", "bell\u0007", "del\u007f",
+                "\u00e9t\u00e9 \u4e2d", "slash/", "\ud83d\ude00");
+        String json = GraphJson.toJson(Graph.empty(names));
+        ObjectMapper mapper = new ObjectMapper();
+        StringBuilder expected = new StringBuilder();
+        for (String n : names) {
+            expected.append(expected.length() == 0 ? "" : ", ").append(mapper.writeValueAsString(n));
+        }
+        assertTrue(json.startsWith("{\n  \"variables\": [" + expected + "],\n"), json);
+        Path f = dir.resolve("quoted.json");
+        Files.writeString(f, json);
+        assertEquals(names, GraphJson.read(f).names());
     }
 
     @Test

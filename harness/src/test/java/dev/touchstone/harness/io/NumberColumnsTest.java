@@ -63,6 +63,36 @@ class NumberColumnsTest {
         return f;
     }
 
+    /**
+     * The line-feed count that places each range's rows, and the search for the end of a cell,
+     * eight bytes at a time, against loops byte by byte (common practice as the reference), on
+     * seeded random bytes rich in line feeds, commas and bytes one bit away from them (0x0B,
+     * 0x8A, 0x09, 0x2D, 0xAC), of every length up to 70.
+     */
+    @Test
+    void findsLineFeedsAndCommasAsByteByByteLoops() {
+        UniformRandomProvider rng = Seeds.random(22);
+        byte[] near = {'\n', 0x0B, (byte) 0x8A, 0x09, 0x00, (byte) 0xFF, '1', ',', 0x2D, (byte) 0xAC};
+        for (int t = 0; t < 2000; t++) {
+            int n = rng.nextInt(71);
+            byte[] b = new byte[n + rng.nextInt(9)];
+            for (int i = 0; i < b.length; i++) {
+                b[i] = rng.nextInt(3) == 0 ? (byte) rng.nextInt(256) : near[rng.nextInt(near.length)];
+            }
+            int expected = 0;
+            for (int i = 0; i < n; i++) {
+                expected += b[i] == '\n' ? 1 : 0;
+            }
+            assertEquals(expected, NumberColumns.lineBreaks(b, n), "trial " + t);
+            int from = n == 0 ? 0 : rng.nextInt(n + 1);
+            int next = from;
+            while (next < n && b[next] != ',' && b[next] != '\n') {
+                next++;
+            }
+            assertEquals(next, NumberColumns.nextDelimiter(b, from, n), "trial " + t + " from " + from);
+        }
+    }
+
     @Test
     @DisplayName("random all-number files, cut into up to 64 ranges: the JDK's doubles, bit for bit, for 1 to 16 threads")
     void agreesWithTheJdkOnRandomFiles() throws IOException {
