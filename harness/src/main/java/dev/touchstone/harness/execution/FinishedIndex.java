@@ -24,8 +24,8 @@ import java.util.TreeMap;
  * resume with nothing to do recognise the study without decoding its journal.
  *
  * <p>It is written (atomically) as the last act of a session that finished every run, and
- * names what that session ended with: the plan's hash (every run key), the normalised study's
- * hash, the versions the session recorded and whether kept runs differed from them, the runs
+ * names what that session ended with: the plan's outline hash (what every run key is made of,
+ * {@link dev.touchstone.harness.study.Plan#outlineHash}), the normalised study's hash, the versions the session recorded and whether kept runs differed from them, the runs
  * by status, and the size and SHA-256 of every file it vouches for (journal, kept estimates,
  * tables, provenance, study copy, learners copy, and once written the report's two pages).
  * It is {@linkplain #matches believed} only while every one of those files has exactly that
@@ -63,15 +63,16 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
     /**
      * What a session runs, as the marker names it.
      *
-     * @param plan     {@code Plan.hash()}: a hash of every run key, in order
+     * @param outline  {@code Plan.outlineHash()}: equal outlines mean the same run keys in the same
+     *                 order (the plan's {@code hash()}), so a resume compares it without building the runs
      * @param study    hash of the normalised study text ({@code study.yaml})
      * @param versions hash of the versions the session records: the tool's and every learner's, in id order
      */
-    public record Hashes(String plan, String study, String versions) {
+    public record Hashes(String outline, String study, String versions) {
 
         /** The hashes of a plan, its normalised study text and the session's versions. */
         public static Hashes of(dev.touchstone.harness.study.Plan plan, String studyText, RunVersions versions) {
-            return new Hashes(plan.hash(), dev.touchstone.harness.study.Canonical.hash(studyText),
+            return new Hashes(plan.outlineHash(), dev.touchstone.harness.study.Canonical.hash(studyText),
                     dev.touchstone.harness.study.Canonical.hash(versions.tool() + "\n"
                             + new TreeMap<>(versions.learners())));
         }
@@ -178,11 +179,11 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
                 files.put(e.getKey(), e.getValue().asText());
             }
             JsonNode changes = root.path("version_changes");
-            if (!root.path("plan").isTextual() || !root.path("study").isTextual() || !root.path("versions").isTextual()
+            if (!root.path("outline").isTextual() || !root.path("study").isTextual() || !root.path("versions").isTextual()
                     || !changes.isBoolean() || files.isEmpty()) {
                 return null;
             }
-            return new FinishedIndex(new Hashes(root.path("plan").asText(), root.path("study").asText(),
+            return new FinishedIndex(new Hashes(root.path("outline").asText(), root.path("study").asText(),
                     root.path("versions").asText()), changes.asBoolean(), counts, files);
         } catch (IOException e) {
             return null;
@@ -192,7 +193,7 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
     /** Writes the marker into {@code out}, whole or not at all. */
     void write(Path out) {
         ObjectNode root = JSON.createObjectNode();
-        root.put("plan", hashes.plan());
+        root.put("outline", hashes.outline());
         root.put("study", hashes.study());
         root.put("versions", hashes.versions());
         root.put("version_changes", versionChanges);
