@@ -110,6 +110,22 @@ final class BlockYaml {
         return PLAIN.matcher(s).matches() && !RESERVED.contains(s.toLowerCase(java.util.Locale.ROOT));
     }
 
+    /**
+     * Whether the char at {@code i} may stand as it is inside double quotes: YAML's printable set
+     * (1.2 §5.1) less the line and paragraph separators and the byte-order mark, which readers
+     * treat specially; a surrogate only as half of a pair.
+     */
+    private static boolean printable(String s, int i) {
+        char c = s.charAt(i);
+        if (Character.isHighSurrogate(c)) {
+            return i + 1 < s.length() && Character.isLowSurrogate(s.charAt(i + 1));
+        }
+        if (Character.isLowSurrogate(c)) {
+            return i > 0 && Character.isHighSurrogate(s.charAt(i - 1));
+        }
+        return c >= 0x20 && c < 0x7F || c >= 0xA0 && c != 0x2028 && c != 0x2029 && c != 0xFEFF && c < 0xFFFE;
+    }
+
     private static String quoted(String s) {
         StringBuilder sb = new StringBuilder(s.length() + 2).append('"');
         for (int i = 0; i < s.length(); i++) {
@@ -121,10 +137,10 @@ final class BlockYaml {
                 case '\t' -> sb.append("\\t");
                 case '\r' -> sb.append("\\r");
                 default -> {
-                    if (c < 0x20 || c == 0x7F || c == 0x85 || c == 0x2028 || c == 0x2029 || c == 0xFEFF) {
-                        sb.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) c));
-                    } else {
+                    if (printable(s, i)) {
                         sb.append(c);
+                    } else {
+                        sb.append(String.format(java.util.Locale.ROOT, "\\u%04x", (int) c));
                     }
                 }
             }

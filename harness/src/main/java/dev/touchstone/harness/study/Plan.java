@@ -57,6 +57,11 @@ public final class Plan {
         return r;
     }
 
+    /** Whether the runs have been built (a resume of a finished study, for one, does not build them). */
+    public boolean runsBuilt() {
+        return runs != null;
+    }
+
     private List<RunDefinition> build() {
         List<RunDefinition> out = new ArrayList<>(runCount());
         for (TruthSetting t : truths) {
