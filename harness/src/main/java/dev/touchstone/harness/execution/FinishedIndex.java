@@ -25,9 +25,10 @@ import java.util.TreeMap;
  *
  * <p>It is written (atomically) as the last act of a session that finished every run, and
  * names what that session ended with: the plan's outline hash (what every run key is made of,
- * {@link dev.touchstone.harness.study.Plan#outlineHash}), the normalised study's hash, the versions the session recorded and whether kept runs differed from them, the runs
- * by status, and the size and SHA-256 of every file it vouches for (journal, kept estimates,
- * tables, provenance, study copy, learners copy, and once written the report's two pages).
+ * {@link dev.touchstone.harness.study.Plan#outlineHash}), the normalised study's hash, the
+ * versions the session recorded and whether kept runs differed from them, the runs by status,
+ * and the size and SHA-256 of every file it vouches for (journal, kept estimates, tables,
+ * provenance, study copy, learners copy, and once written the report's two pages).
  * It is {@linkplain #matches believed} only while every one of those files has exactly that
  * size and digest (a file whose size and modification time are unchanged since the marker was
  * written is not read again, see {@link #matches}): a journal appended to, cut, edited or damaged after the study finished
