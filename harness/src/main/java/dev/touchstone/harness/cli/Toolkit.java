@@ -81,7 +81,7 @@ final class Toolkit {
      */
     boolean reportIsCurrent(Plan plan, Path out) {
         var index = dev.touchstone.harness.execution.FinishedIndex.read(out);
-        if (index == null || index.total() != plan.runs().size()
+        if (index == null || index.total() != plan.runCount()
                 || !index.vouchesFor(dev.touchstone.harness.report.StudyReports.PAGES)
                 || !java.nio.file.Files.isDirectory(out.resolve("figures"))
                 || !java.nio.file.Files.isDirectory(out.resolve("tables"))) {

@@ -1,8 +1,9 @@
 package dev.touchstone.harness.execution;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.node.ObjectNode;
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
 import dev.touchstone.harness.io.AtomicFiles;
 import dev.touchstone.harness.io.Sha256;
 import dev.touchstone.metrics.results.RunStatus;
@@ -13,7 +14,6 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -24,10 +24,11 @@ import java.util.TreeMap;
  * resume with nothing to do recognise the study without decoding its journal.
  *
  * <p>It is written (atomically) as the last act of a session that finished every run, and
- * names what that session ended with: the plan's hash (every run key), the normalised study's
- * hash, the versions the session recorded and whether kept runs differed from them, the runs
- * by status, and the size and SHA-256 of every file it vouches for (journal, kept estimates,
- * tables, provenance, study copy, learners copy, and once written the report's two pages).
+ * names what that session ended with: the plan's outline hash (what every run key is made of,
+ * {@link dev.touchstone.harness.study.Plan#outlineHash}), the normalised study's hash, the
+ * versions the session recorded and whether kept runs differed from them, the runs by status,
+ * and the size and SHA-256 of every file it vouches for (journal, kept estimates, tables,
+ * provenance, study copy, learners copy, and once written the report's two pages).
  * It is {@linkplain #matches believed} only while every one of those files has exactly that
  * size and digest (a file whose size and modification time are unchanged since the marker was
  * written is not read again, see {@link #matches}): a journal appended to, cut, edited or damaged after the study finished
@@ -53,7 +54,7 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
     /** The marker's file name in a study's output folder. */
     public static final String FILE_NAME = "finished.json";
 
-    private static final ObjectMapper JSON = new ObjectMapper();
+    private static final JsonFactory JSON = new JsonFactory();
 
     public FinishedIndex {
         counts = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(counts));
@@ -63,15 +64,16 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
     /**
      * What a session runs, as the marker names it.
      *
-     * @param plan     {@code Plan.hash()}: a hash of every run key, in order
+     * @param outline  {@code Plan.outlineHash()}: equal outlines mean the same run keys in the same
+     *                 order (the plan's {@code hash()}), so a resume compares it without building the runs
      * @param study    hash of the normalised study text ({@code study.yaml})
      * @param versions hash of the versions the session records: the tool's and every learner's, in id order
      */
-    public record Hashes(String plan, String study, String versions) {
+    public record Hashes(String outline, String study, String versions) {
 
         /** The hashes of a plan, its normalised study text and the session's versions. */
         public static Hashes of(dev.touchstone.harness.study.Plan plan, String studyText, RunVersions versions) {
-            return new Hashes(plan.hash(), dev.touchstone.harness.study.Canonical.hash(studyText),
+            return new Hashes(plan.outlineHash(), dev.touchstone.harness.study.Canonical.hash(studyText),
                     dev.touchstone.harness.study.Canonical.hash(versions.tool() + "\n"
                             + new TreeMap<>(versions.learners())));
         }
@@ -159,53 +161,94 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
         return new FinishedIndex(hashes, versionChanges, counts, more);
     }
 
-    /** The marker kept in {@code out}, or null when there is none or it cannot be read (then it is not believed). */
+    /**
+     * The marker kept in {@code out}, or null when there is none or it cannot be read (then it is not believed).
+     * Read with the streaming parser: a resume with nothing to do needs no data-binding mapper.
+     */
     public static FinishedIndex read(Path out) {
         Path file = out.resolve(FILE_NAME);
         if (!Files.isRegularFile(file)) {
             return null;
         }
-        try {
-            JsonNode root = JSON.readTree(file.toFile());
-            Map<String, Integer> counts = new LinkedHashMap<>();
-            for (Iterator<Map.Entry<String, JsonNode>> it = root.path("counts").fields(); it.hasNext(); ) {
-                Map.Entry<String, JsonNode> e = it.next();
-                counts.put(e.getKey(), e.getValue().asInt());
-            }
-            Map<String, String> files = new TreeMap<>();
-            for (Iterator<Map.Entry<String, JsonNode>> it = root.path("files").fields(); it.hasNext(); ) {
-                Map.Entry<String, JsonNode> e = it.next();
-                files.put(e.getKey(), e.getValue().asText());
-            }
-            JsonNode changes = root.path("version_changes");
-            if (!root.path("plan").isTextual() || !root.path("study").isTextual() || !root.path("versions").isTextual()
-                    || !changes.isBoolean() || files.isEmpty()) {
+        try (JsonParser p = JSON.createParser(file.toFile())) {
+            if (p.nextToken() != JsonToken.START_OBJECT) {
                 return null;
             }
-            return new FinishedIndex(new Hashes(root.path("plan").asText(), root.path("study").asText(),
-                    root.path("versions").asText()), changes.asBoolean(), counts, files);
-        } catch (IOException e) {
+            Map<String, String> text = new LinkedHashMap<>();
+            Map<String, Integer> counts = new LinkedHashMap<>();
+            Map<String, String> files = new TreeMap<>();
+            Boolean changes = null;
+            while (p.nextToken() == JsonToken.FIELD_NAME) {
+                String field = p.currentName();
+                JsonToken t = p.nextToken();
+                switch (field) {
+                    case "counts" -> readObject(p, t, () -> counts.put(p.currentName(), p.getValueAsInt()));
+                    case "files" -> readObject(p, t, () -> files.put(p.currentName(), p.getValueAsString()));
+                    case "version_changes" -> changes = t.isBoolean() ? t == JsonToken.VALUE_TRUE : null;
+                    default -> {
+                        if (t == JsonToken.VALUE_STRING) {
+                            text.put(field, p.getText());
+                        } else {
+                            p.skipChildren();
+                        }
+                    }
+                }
+            }
+            if (!text.containsKey("outline") || !text.containsKey("study") || !text.containsKey("versions")
+                    || changes == null || files.isEmpty()) {
+                return null;
+            }
+            return new FinishedIndex(new Hashes(text.get("outline"), text.get("study"), text.get("versions")), changes,
+                    counts, files);
+        } catch (IOException | RuntimeException e) {
             return null;
+        }
+    }
+
+    /** What to do with each scalar field of a nested object. */
+    private interface FieldReader {
+        void read() throws IOException;
+    }
+
+    /** Reads a nested object of scalars (its start token {@code t} just read); anything else in it is skipped. */
+    private static void readObject(JsonParser p, JsonToken t, FieldReader each) throws IOException {
+        if (t != JsonToken.START_OBJECT) {
+            p.skipChildren();
+            return;
+        }
+        while (p.nextToken() == JsonToken.FIELD_NAME) {
+            if (p.nextToken().isScalarValue()) {
+                each.read();
+            } else {
+                p.skipChildren();
+            }
         }
     }
 
     /** Writes the marker into {@code out}, whole or not at all. */
     void write(Path out) {
-        ObjectNode root = JSON.createObjectNode();
-        root.put("plan", hashes.plan());
-        root.put("study", hashes.study());
-        root.put("versions", hashes.versions());
-        root.put("version_changes", versionChanges);
-        ObjectNode c = root.putObject("counts");
-        counts.forEach(c::put);
-        ObjectNode f = root.putObject("files");
-        files.forEach(f::put);
-        try {
-            OutputFiles.write(out.resolve(FILE_NAME), JSON.writerWithDefaultPrettyPrinter().writeValueAsString(root)
-                    + "\n");
-        } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
-            throw new IllegalStateException("the marker is plain JSON", e);
+        java.io.StringWriter text = new java.io.StringWriter();
+        try (JsonGenerator g = JSON.createGenerator(text).useDefaultPrettyPrinter()) {
+            g.writeStartObject();
+            g.writeStringField("outline", hashes.outline());
+            g.writeStringField("study", hashes.study());
+            g.writeStringField("versions", hashes.versions());
+            g.writeBooleanField("version_changes", versionChanges);
+            g.writeObjectFieldStart("counts");
+            for (Map.Entry<String, Integer> c : counts.entrySet()) {
+                g.writeNumberField(c.getKey(), c.getValue());
+            }
+            g.writeEndObject();
+            g.writeObjectFieldStart("files");
+            for (Map.Entry<String, String> f : files.entrySet()) {
+                g.writeStringField(f.getKey(), f.getValue());
+            }
+            g.writeEndObject();
+            g.writeEndObject();
+        } catch (IOException e) {
+            throw new UncheckedIOException("the marker could not be written as JSON", e);
         }
+        OutputFiles.write(out.resolve(FILE_NAME), text + "\n");
     }
 
     /** Removes the marker from {@code out}, before a session changes what it vouches for. */

@@ -1,5 +1,9 @@
 package dev.touchstone.harness.execution;
 
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
+
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
@@ -52,11 +56,32 @@ final class OutputFolder {
         if (!Files.exists(out.resolve(Journal.FILE_NAME)) || !Files.isRegularFile(prov)) {
             return null;
         }
-        try {
-            var node = new com.fasterxml.jackson.databind.ObjectMapper().readTree(prov.toFile()).path("study")
-                    .path("name");
-            return node.isTextual() ? node.asText() : null;
-        } catch (IOException e) {
+        // The streaming parser, not a data-binding mapper: this is on the path of a resume with nothing to do.
+        try (JsonParser p = new JsonFactory().createParser(prov.toFile())) {
+            if (p.nextToken() != JsonToken.START_OBJECT) {
+                return null;
+            }
+            String name = null;
+            while (p.nextToken() == JsonToken.FIELD_NAME) {
+                boolean study = p.currentName().equals("study");
+                if (study) {
+                    name = null;
+                }
+                if (p.nextToken() == JsonToken.START_OBJECT && study) {
+                    while (p.nextToken() == JsonToken.FIELD_NAME) {
+                        boolean isName = p.currentName().equals("name");
+                        JsonToken t = p.nextToken();
+                        if (isName) {
+                            name = t == JsonToken.VALUE_STRING ? p.getText() : null;
+                        }
+                        p.skipChildren();
+                    }
+                } else {
+                    p.skipChildren();
+                }
+            }
+            return name;
+        } catch (IOException | RuntimeException e) {
             return null;
         }
     }

@@ -181,7 +181,7 @@ public final class StudyRunner {
             OutputFiles.write(out.resolve(STUDY_FILE), studyText);
             OutputFolder.keepLearnersFile(out, recipe);
             running = new Provenance(Provenance.Build.current(),
-                    new Provenance.Study(plan.study().name(), hashes.plan(), hashes.study()),
+                    new Provenance.Study(plan.study().name(), plan.hash(), hashes.study()),
                     new Provenance.Session(options.threads(), started, null, Map.of()),
                     new Provenance.Versions(versions, ledger));
             OutputFiles.write(out.resolve(PROVENANCE_FILE), running.json());
@@ -206,7 +206,7 @@ public final class StudyRunner {
      */
     private Outcome alreadyFinished(Plan plan, Path out, FinishedIndex.Hashes hashes) {
         FinishedIndex index = FinishedIndex.read(out);
-        if (index == null || index.total() != plan.runs().size() || index.versionChanges() && !acceptVersionChange
+        if (index == null || index.total() != plan.runCount() || index.versionChanges() && !acceptVersionChange
                 || !index.matches(out, hashes) || !OutputFolder.sameLearnersCopy(out, recipe)) {
             return null;
         }

@@ -15,12 +15,12 @@ import java.util.function.Function;
 
 /**
  * Expands a study into its plan: every truth setting (the product of all truth axes), every
- * learner configuration (the product of each entry's parameter axes), and the runs in a
- * fixed order — truth setting, then replicate, then sample size, then configuration — so a
- * replicate's runs are contiguous and its data can be generated once and dropped soon.
+ * learner configuration (the product of each entry's parameter axes); the {@link Plan} orders
+ * the runs over them (and builds them when first asked for).
  *
  * <p>Expansion is pure: the same study always gives the same plan, keys and seeds. Cost:
- * linear in the number of runs (bounded by {@code limits.max_runs}).
+ * linear in the number of settings and configurations; the runs cost linear in their number
+ * (bounded by {@code limits.max_runs}) when the plan builds them.
  */
 public final class Expansion {
 
@@ -46,19 +46,7 @@ public final class Expansion {
         List<TruthSetting> truths = truths(study, problems);
         List<LearnerConfig> configs = configs(study, learners, problems);
         problems.throwIfAny();
-        List<RunDefinition> runs = new ArrayList<>();
-        for (TruthSetting t : truths) {
-            for (int rep = 0; rep < study.replicates(); rep++) {
-                for (SampleSize n : study.samples()) {
-                    for (LearnerConfig c : configs) {
-                        runs.add(RunDefinition.builder().index(runs.size()).truth(t).replicate(rep).sample(n)
-                                .config(c).studySeed(study.seed()).metrics(study.allMetrics())
-                                .limit(study.limits().perRun()).build());
-                    }
-                }
-            }
-        }
-        return new Plan(study, truths, configs, runs);
+        return new Plan(study, truths, configs);
     }
 
     private List<TruthSetting> truths(Study study, StudyProblems problems) {

@@ -77,8 +77,10 @@ class FinishedIndexTest {
         age(out);
         Map<String, String> before = snapshot(out);
         StringWriter said = new StringWriter();
-        StudyRunner.Outcome again = run(plan, out, said);
+        Plan fresh = TestWorld.plan(StudyRunnerTest.STUDY);
+        StudyRunner.Outcome again = run(fresh, out, said);
         assertTrue(again.alreadyFinished());
+        assertFalse(fresh.runsBuilt(), "recognised by the plan's outline, without building its runs");
         assertEquals(plan.runs().size(), again.reused());
         assertEquals(0, again.performed());
         assertEquals(first.byStatus(), again.byStatus());
@@ -146,6 +148,41 @@ class FinishedIndexTest {
         assertFalse(again.alreadyFinished());
         assertEquals(plan.runs().size(), again.reused());
         assertEquals(more.runs().size() - plan.runs().size(), again.performed());
+    }
+
+    @Test
+    @DisplayName("the same runs under a changed study text (another description): the marker is not believed, the"
+            + " runs are kept and the study copy rewritten")
+    void sameRunsOtherTextIsNotFinished() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("described");
+        run(plan, out);
+        Plan described = TestWorld.plan(StudyRunnerTest.STUDY.replace("seed: 7\n", "seed: 7\ndescription: now said\n"));
+        assertEquals(plan.outlineHash(), described.outlineHash());
+        StudyRunner.Outcome again = run(described, out);
+        assertFalse(again.alreadyFinished());
+        assertEquals(plan.runs().size(), again.reused());
+        assertEquals(0, again.performed());
+        assertTrue(Files.readString(out.resolve(StudyRunner.STUDY_FILE)).contains("now said"));
+        assertTrue(run(described, out).alreadyFinished());
+    }
+
+    @Test
+    @DisplayName("a marker of the earlier layout (the hash of every key instead of the outline) is not believed")
+    void earlierMarkerIsNotBelieved() throws IOException {
+        Plan plan = TestWorld.plan(StudyRunnerTest.STUDY);
+        Path out = tmp.resolve("earlier");
+        run(plan, out);
+        Path marker = out.resolve(FinishedIndex.FILE_NAME);
+        String text = Files.readString(marker);
+        assertTrue(text.contains("\"outline\" : "), text);
+        Files.writeString(marker, text.replace("\"outline\" : \"" + plan.outlineHash() + "\"",
+                "\"plan\" : \"" + plan.hash() + "\""));
+        assertEquals(null, FinishedIndex.read(out));
+        StudyRunner.Outcome again = run(plan, out);
+        assertFalse(again.alreadyFinished());
+        assertEquals(0, again.performed());
+        assertTrue(run(plan, out).alreadyFinished(), "the session wrote a marker of the present layout");
     }
 
     @Test

@@ -130,6 +130,10 @@ class TruthSourcesTest {
         GraphJson.write(dir.resolve("g.json"), chain("rain", "soil", "yield", "slugs"));
         Plan edited = plan(yaml);
         assertNotEquals(p.runs().get(0).key(), edited.runs().get(0).key(), "the file's content is in the key");
+        assertEquals(StudyWriter.yaml(p.study()), StudyWriter.yaml(edited.study()),
+                "the normalised study text names the file, not its content");
+        assertNotEquals(p.outlineHash(), edited.outlineHash(),
+                "so the outline a finished study is recognised by holds the file's digest");
         assertEquals(p.runs().get(p.runs().size() - 1).key(), edited.runs().get(edited.runs().size() - 1).key(),
                 "runs on the unchanged CSV file keep their keys");
     }
