@@ -100,20 +100,9 @@ final class CompletionRows {
 
     /** The slot of w in v's row, or −1. */
     private int slot(int v, int w) {
-        int lo = offsets[v];
-        int hi = offsets[v + 1] - 1;
-        while (lo <= hi) {
-            int mid = (lo + hi) >>> 1;
-            int x = neighbours[mid];
-            if (x < w) {
-                lo = mid + 1;
-            } else if (x > w) {
-                hi = mid - 1;
-            } else {
-                return mid;
-            }
-        }
-        return -1;
+        // rows are sorted and hold each neighbour once
+        int at = Arrays.binarySearch(neighbours, offsets[v], offsets[v + 1], w);
+        return at >= 0 ? at : -1;
     }
 
     private boolean adjacent(int v, int w) {

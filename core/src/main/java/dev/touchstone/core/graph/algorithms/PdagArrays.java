@@ -5,6 +5,8 @@ import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.Mark;
 import dev.touchstone.core.graph.MutableGraph;
 
+import java.util.Arrays;
+
 /**
  * The working form of a partially directed graph for the orientation algorithms: fixed
  * adjacency in compressed rows (neighbours ascending, so an adjacency test is a binary
@@ -88,20 +90,9 @@ final class PdagArrays {
 
     /** The slot of {@code w} in the row of {@code v}, or −1 if they are not adjacent. */
     int slot(int v, int w) {
-        int lo = offsets[v];
-        int hi = offsets[v + 1] - 1;
-        while (lo <= hi) {
-            int mid = (lo + hi) >>> 1;
-            int x = neighbours[mid];
-            if (x < w) {
-                lo = mid + 1;
-            } else if (x > w) {
-                hi = mid - 1;
-            } else {
-                return mid;
-            }
-        }
-        return -1;
+        // rows are sorted and hold each neighbour once
+        int at = Arrays.binarySearch(neighbours, offsets[v], offsets[v + 1], w);
+        return at >= 0 ? at : -1;
     }
 
     boolean adjacent(int v, int w) {
