@@ -76,19 +76,14 @@ public final class SortabilityAudit {
             variance[j] = variance(data.continuous(j));
             defined &= !Double.isNaN(variance[j]);
         }
-        long pairs;
-        double vs = Double.NaN;
-        if (defined) {
-            // One count of the paths gives both the number of pairs and the varsortability.
-            double[] st = scoreAndTotal(dag, node, variance);
-            pairs = (long) st[1];
-            vs = st[0] / st[1];
-        } else {
-            pairs = countPaths(dag, node, null);
-        }
+        // One count of the paths gives both the number of pairs and the varsortability (the
+        // count does not depend on the criterion, so it holds where a variance is undefined).
+        double[] st = scoreAndTotal(dag, node, variance);
+        long pairs = (long) st[1];
         if (pairs == 0) {
             return new SortabilityAudit(Double.NaN, Double.NaN, pairs, false);
         }
+        double vs = defined ? st[0] / st[1] : Double.NaN;
         boolean skip = q > R2_MAX_VARIABLES;
         double r2 = skip ? Double.NaN : sortability(dag, node, rSquared(data.covariance()));
         return new SortabilityAudit(vs, r2, pairs, skip);
