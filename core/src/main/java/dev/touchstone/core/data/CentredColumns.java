@@ -74,8 +74,15 @@ public final class CentredColumns {
         if (i == j) {
             return 1.0;
         }
-        double v = crossProduct(columns[i], columns[j]) / divisor;
-        return v / (sd[i] * sd[j]);
+        return correlation(crossProduct(columns[i], columns[j]), i, j);
+    }
+
+    /**
+     * The correlation of columns i and j from their cross product (1 when i = j): the one
+     * formula of {@link #correlation(int, int)} and of the tiles, so that both agree bitwise.
+     */
+    private double correlation(double crossProduct, int i, int j) {
+        return i == j ? 1.0 : crossProduct / divisor / (sd[i] * sd[j]);
     }
 
     /** A new worker for tiles of correlations, with its own scratch; use one per thread. */
@@ -124,8 +131,7 @@ public final class CentredColumns {
             for (int i = i0; i < i1; i++) {
                 int row = (i - i0) * width;
                 for (int j = j0; j < j1; j++) {
-                    double v = sums[row + j - j0] / divisor;
-                    out[row + j - j0] = i == j ? 1.0 : v / (sd[i] * sd[j]);
+                    out[row + j - j0] = correlation(sums[row + j - j0], i, j);
                 }
             }
         }
