@@ -46,8 +46,7 @@ final class ReportCommand implements Callable<Integer> {
         Plan plan = kit.plan(kit.readStudy(study));
         Path target = to == null ? out : to;
         // A finished study whose index vouches for its report as it is: nothing to re-read.
-        boolean current = target.toAbsolutePath().normalize().equals(out.toAbsolutePath().normalize())
-                && kit.reportIsCurrent(plan, out);
+        boolean current = Toolkit.sameFolder(out, target) && kit.reportIsCurrent(plan, out);
         Path html = current ? out.resolve(dev.touchstone.harness.report.StudyReports.HTML_FILE)
                 : kit.report(plan, out, target);
         PrintWriter w = spec.commandLine().getOut();

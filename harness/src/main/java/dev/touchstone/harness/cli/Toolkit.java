@@ -103,9 +103,14 @@ final class Toolkit {
      * (nothing happens when the study is not finished), so a resume with nothing to do leaves it be.
      */
     static void vouchReport(Path out, Path to) {
-        if (to.toAbsolutePath().normalize().equals(out.toAbsolutePath().normalize())) {
+        if (sameFolder(out, to)) {
             dev.touchstone.harness.execution.FinishedIndex.vouch(out, dev.touchstone.harness.report.StudyReports.PAGES);
         }
+    }
+
+    /** Whether a report written into {@code to} lands in the study's own folder {@code out}. */
+    static boolean sameFolder(Path out, Path to) {
+        return to.toAbsolutePath().normalize().equals(out.toAbsolutePath().normalize());
     }
 
     /**

@@ -82,11 +82,16 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
     /** The marker describing {@code names} in {@code out} as they are now. */
     static FinishedIndex of(Path out, Hashes hashes, boolean versionChanges, Map<String, Integer> counts,
                             List<String> names) {
-        Map<String, String> files = new TreeMap<>();
+        return new FinishedIndex(hashes, versionChanges, counts, fingerprints(out, names, Map.of()));
+    }
+
+    /** {@code kept} with the fingerprints of {@code names} in {@code out} as they are now added. */
+    private static Map<String, String> fingerprints(Path out, List<String> names, Map<String, String> kept) {
+        Map<String, String> files = new TreeMap<>(kept);
         for (String n : names) {
             files.put(n, fingerprint(out.resolve(n)));
         }
-        return new FinishedIndex(hashes, versionChanges, counts, files);
+        return files;
     }
 
     /** The runs by status, as the finishing session counted them. */
@@ -154,11 +159,7 @@ public record FinishedIndex(Hashes hashes, boolean versionChanges, Map<String, I
 
     /** The same marker also vouching for {@code names} in {@code out} as they are now. */
     FinishedIndex with(Path out, List<String> names) {
-        Map<String, String> more = new TreeMap<>(files);
-        for (String n : names) {
-            more.put(n, fingerprint(out.resolve(n)));
-        }
-        return new FinishedIndex(hashes, versionChanges, counts, more);
+        return new FinishedIndex(hashes, versionChanges, counts, fingerprints(out, names, files));
     }
 
     /**

@@ -137,8 +137,7 @@ public final class PilotEstimate {
                     RunDefinition r = firsts.get(pairKey(t, n, c));
                     boolean pilotLimit = studyLimit == null || cap.compareTo(studyLimit) < 0;
                     Duration limit = pilotLimit ? cap : studyLimit;
-                    RunDefinition pilot = r.toBuilder().truth(t).replicate(0).sample(n).config(c).limit(limit)
-                            .build();
+                    RunDefinition pilot = r.toBuilder().limit(limit).build();
                     long r0 = System.nanoTime();
                     RunStatus status = performer.perform(pilot, replicate).status();
                     double took = seconds(System.nanoTime() - r0);
