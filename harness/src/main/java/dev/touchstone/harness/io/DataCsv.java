@@ -210,33 +210,30 @@ public final class DataCsv {
         boolean switchedAfterNumbers;
 
         Pass(Path file, List<String> names, Kind[] kinds) {
-            this.file = file;
-            this.names = names;
-            this.kinds = kinds.clone();
-            int p = names.size();
-            this.firstNonNumber = new String[p];
-            this.numbers = new double[p][];
-            this.codes = new int[p][];
-            for (int j = 0; j < p; j++) {
+            this(file, names, kinds, new double[names.size()][], 0);
+            for (int j = 0; j < names.size(); j++) {
                 if (this.kinds[j] == Kind.DISCRETE) {
                     codes[j] = new int[capacity];
                 } else {
                     numbers[j] = new double[capacity];
                 }
-                labels.add(new LinkedHashMap<>());
             }
         }
 
         /** A pass whose rows are already read, as these columns of numbers (no column discrete). */
         Pass(Path file, List<String> names, Kind[] kinds, double[][] columns) {
+            this(file, names, kinds, columns, columns[0].length);
+        }
+
+        private Pass(Path file, List<String> names, Kind[] kinds, double[][] numbers, int rows) {
             this.file = file;
             this.names = names;
             this.kinds = kinds.clone();
             int p = names.size();
             this.firstNonNumber = new String[p];
-            this.numbers = columns;
+            this.numbers = numbers;
             this.codes = new int[p][];
-            this.rows = columns[0].length;
+            this.rows = rows;
             for (int j = 0; j < p; j++) {
                 labels.add(new LinkedHashMap<>());
             }

@@ -206,7 +206,7 @@ final class NumberColumns {
         }
 
         /** Parses the records that start in [from, to); {@code atRecord} when {@code from} starts one. */
-        Range parse(long from, boolean atRecord, long to) throws IOException {
+        void parse(long from, boolean atRecord, long to) throws IOException {
             base = atRecord ? from : from - 1;
             limit = 0;
             pos = 0;
@@ -222,7 +222,7 @@ final class NumberColumns {
                         break;
                     }
                     if (!fill()) {
-                        return this;
+                        return;
                     }
                 }
             }
@@ -231,10 +231,9 @@ final class NumberColumns {
                 // More records than counted cannot happen; refuse rather than write past the range.
                 if (row == end || !record() || (++checked & 1023) == 0 && failed.get()) {
                     failed.set(true);
-                    return this;
+                    return;
                 }
             }
-            return this;
         }
 
         /**
