@@ -63,7 +63,7 @@ public final class OptimisedScore {
             return Optional.empty();
         }
         return Optional.of(new OptimisedScore(ScoreSettings.build(d.id(), input, values), knowledge,
-                ScoreSettings.maxParents(values), input.variableNames()));
+                values.get(ScoreSettings.PARENT_LIMIT), input.variableNames()));
     }
 
     private static boolean declaresScoreSettings(LearnerDescription d) {

@@ -116,11 +116,6 @@ final class ScoreSettings {
         return name.equals(EBIC) ? EbicScore.of(bic, values.get(GAMMA)) : bic;
     }
 
-    /** The parent-set bound, −1 for none. */
-    static int maxParents(ParameterValues values) {
-        return values.get(PARENT_LIMIT);
-    }
-
     private static void requireKind(String learnerId, String score, DataKind got, DataKind needed) {
         if (got != needed) {
             throw new LearnerException("learner " + learnerId + ": score " + score + " needs " + needed.word()

@@ -3,6 +3,7 @@ package dev.touchstone.learners.score;
 import dev.touchstone.core.graph.Edge;
 import dev.touchstone.core.graph.Graph;
 import dev.touchstone.core.graph.MutableGraph;
+import dev.touchstone.core.graph.algorithms.Ancestry;
 import dev.touchstone.core.graph.algorithms.DagExtension;
 import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.LearnerException;
@@ -54,7 +55,7 @@ final class StartDag {
                             + ", which the knowledge forbids");
                 }
             }
-            if (!knowledge.required().isEmpty() && DagExtension.of(frozen) == null) {
+            if (!knowledge.required().isEmpty() && !Ancestry.isAcyclic(frozen)) {
                 throw new LearnerException("the start graph with the required edges added has a directed cycle");
             }
         }
