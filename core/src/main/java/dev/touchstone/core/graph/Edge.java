@@ -72,6 +72,14 @@ public record Edge(int a, int b, Mark atA, Mark atB) {
         return isDirected() && markAt(from) == Mark.TAIL;
     }
 
+    /**
+     * The end a directed edge leaves: {@code a} when it is {@code a → b}, otherwise {@code b}
+     * (so, for a directed edge, the variable its arrow points away from).
+     */
+    public int tail() {
+        return isDirectedFrom(a) ? a : b;
+    }
+
     /** True for tails at both ends. */
     public boolean isUndirected() {
         return atA == Mark.TAIL && atB == Mark.TAIL;

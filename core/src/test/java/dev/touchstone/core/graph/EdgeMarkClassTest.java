@@ -25,6 +25,14 @@ class EdgeMarkClassTest {
     }
 
     @Test
+    void tailOfADirectedEdgeWhicheverEndIsStoredFirst() {
+        assertEquals(3, Edge.directed(3, 5).tail());
+        assertEquals(5, Edge.directed(5, 3).tail());
+        assertEquals(5, new Edge(3, 5, Mark.ARROW, Mark.TAIL).tail());
+        assertEquals(3, new Edge(3, 5, Mark.TAIL, Mark.ARROW).tail());
+    }
+
+    @Test
     void edgeRefusesBadEnds() {
         assertTrue(assertThrows(IllegalArgumentException.class, () -> Edge.directed(2, 2))
                 .getMessage().contains("2 twice"));

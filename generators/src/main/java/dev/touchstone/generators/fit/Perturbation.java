@@ -69,7 +69,7 @@ public record Perturbation(double dropFraction, double densityLow, double densit
         for (var e : dag.edges()) {
             original++;
             if (rng.nextDouble() >= dropFraction) {
-                int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+                int from = e.tail();
                 g.addDirected(from, e.other(from));
             }
         }
@@ -105,7 +105,7 @@ public record Perturbation(double dropFraction, double densityLow, double densit
         int added = 0;
         int kept = 0;
         for (var e : variant.edges()) {
-            int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+            int from = e.tail();
             if (dag.hasDirected(from, e.other(from))) {
                 kept++;
             } else {

@@ -197,7 +197,7 @@ public final class CalibrationSummary {
                 }
             }
             for (Edge e : truth.edges()) {
-                int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+                int from = e.tail();
                 int to = e.other(from);
                 out.add(new CalibrationView.EdgeRow(learner, truth.name(from), truth.name(to),
                         frequencies(simulated, from, to), frequencies(boot, from, to)));

@@ -45,7 +45,7 @@ public final class TruthGraphs {
                 throw new IllegalArgumentException(source + ": the edge between '" + g.name(e.a()) + "' and '"
                         + g.name(e.b()) + "' is not directed; the truth graph must be a DAG");
             }
-            int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+            int from = e.tail();
             out.addDirected(out.indexOf(g.name(from)), out.indexOf(g.name(e.other(from))));
         }
         Graph dag = out.freeze();
@@ -87,7 +87,7 @@ public final class TruthGraphs {
     public static List<String> edgeLines(Graph dag) {
         java.util.List<String> out = new java.util.ArrayList<>();
         for (Edge e : dag.edges()) {
-            int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+            int from = e.tail();
             out.add(dag.name(from) + " → " + dag.name(e.other(from)));
         }
         return out;

@@ -94,7 +94,7 @@ public enum Handoff implements Worded {
             }
         } else {
             for (Edge e : previous.edges()) {
-                int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+                int from = e.tail();
                 b.require(previous.name(from), previous.name(e.other(from)));
             }
         }

@@ -48,7 +48,7 @@ final class StartDag {
         Graph frozen = dag.freeze();
         if (start.isPresent()) {
             for (Edge e : frozen.edges()) {
-                int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+                int from = e.tail();
                 int to = e.other(from);
                 if (knowledge.isForbidden(frozen.name(from), frozen.name(to))) {
                     throw new LearnerException("the start graph has " + frozen.name(from) + " -> " + frozen.name(to)

@@ -158,7 +158,7 @@ public final class GraphLayout {
         boolean[][] before = new boolean[n][n];
         for (Edge e : g.edges()) {
             if (e.isDirected()) {
-                int from = e.isDirectedFrom(e.a()) ? e.a() : e.b();
+                int from = e.tail();
                 before[from][e.other(from)] = true;
             }
         }
