@@ -19,7 +19,6 @@ import dev.touchstone.learners.independence.IndependenceTest;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -140,8 +139,8 @@ public final class FciFromAdjacencies {
                     if (y < x || !s.adjacent(x, y) || ki.isRequiredEitherWay(x, y)) {
                         continue;
                     }
-                    int[] fromX = without(s.neighbours(x), y);
-                    int[] fromY = without(s.neighbours(y), x);
+                    int[] fromX = AdjacencySearch.without(s.neighbours(x), y);
+                    int[] fromY = AdjacencySearch.without(s.neighbours(y), x);
                     if (fromX.length < level && fromY.length < level) {
                         continue;
                     }
@@ -161,17 +160,6 @@ public final class FciFromAdjacencies {
             }
         }
         return removed;
-    }
-
-    private static int[] without(int[] a, int v) {
-        int[] out = new int[a.length];
-        int k = 0;
-        for (int w : a) {
-            if (w != v) {
-                out[k++] = w;
-            }
-        }
-        return Arrays.copyOf(out, k);
     }
 
     /** The collider answers of steps (2) and (4); see the class comment. */
@@ -236,8 +224,8 @@ public final class FciFromAdjacencies {
         }
 
         private int[] searchNeighbours(int x, int y) {
-            int[] fromX = without(skeleton.neighbours(x), y);
-            int[] fromY = without(skeleton.neighbours(y), x);
+            int[] fromX = AdjacencySearch.without(skeleton.neighbours(x), y);
+            int[] fromY = AdjacencySearch.without(skeleton.neighbours(y), x);
             int top = Math.min(maxDepth, Math.max(fromX.length, fromY.length));
             for (int level = 0; level <= top; level++) {
                 int[] sep = search.find(x, y, fromX, fromX.length, level);
