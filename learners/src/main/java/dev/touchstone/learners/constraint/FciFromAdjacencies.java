@@ -16,6 +16,7 @@ import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.independence.IndependenceTests;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
@@ -84,7 +85,7 @@ public final class FciFromAdjacencies {
             throw new LearnerException("the score search returned a graph with no DAG extension: " + cpdag);
         }
         KnowledgeIndex ki = KnowledgeIndex.of(knowledge, names);
-        IndependenceTest test = ConstraintParameters.test(input, values,
+        IndependenceTest test = IndependenceTests.forInput(input, values,
                 Seeds.derive(context.seed(), "independence-test"));
         int maxDepth = values.get(ConstraintParameters.MAX_DEPTH);
         SubsetSearch search = new SubsetSearch(test);
