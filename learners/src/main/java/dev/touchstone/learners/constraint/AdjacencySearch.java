@@ -339,7 +339,8 @@ final class AdjacencySearch {
         }
     }
 
-    private static int[] without(int[] a, int v) {
+    /** {@code a} without {@code v}, in the same order. */
+    static int[] without(int[] a, int v) {
         int[] out = new int[a.length];
         int k = 0;
         for (int w : a) {

@@ -162,7 +162,7 @@ final class ColliderOrientation {
         for (int side = 0; side < 2; side++) {
             int a = side == 0 ? x : y;
             int b = side == 0 ? y : x;
-            int[] cand = without(skeleton.neighbours(a), b);
+            int[] cand = AdjacencySearch.without(skeleton.neighbours(a), b);
             int top = Math.min(maxDepth, cand.length);
             boolean second = side == 1;
             for (int size = 0; size <= top; size++) {
@@ -240,16 +240,5 @@ final class ColliderOrientation {
             }
         }
         return conflicted.size() / 2;
-    }
-
-    private static int[] without(int[] a, int v) {
-        int[] out = new int[a.length];
-        int k = 0;
-        for (int w : a) {
-            if (w != v) {
-                out[k++] = w;
-            }
-        }
-        return java.util.Arrays.copyOf(out, k);
     }
 }

@@ -5,13 +5,10 @@ import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.learner.KnowledgeUse;
 import dev.touchstone.core.learner.LearnerDescription;
 import dev.touchstone.core.learner.LearnerFamily;
-import dev.touchstone.core.learner.LearnerInput;
 import dev.touchstone.core.learner.MissingValues;
 import dev.touchstone.core.learner.OracleUse;
 import dev.touchstone.core.param.Parameter;
 import dev.touchstone.core.param.ParameterSpec;
-import dev.touchstone.core.param.ParameterValues;
-import dev.touchstone.learners.independence.IndependenceTest;
 import dev.touchstone.learners.independence.IndependenceTests;
 
 import java.util.List;
@@ -75,10 +72,5 @@ public final class ConstraintParameters {
             b.parameter(s);
         }
         return b.build();
-    }
-
-    /** The test the values name; the kernel tests draw their randomness from {@code seed}. */
-    static IndependenceTest test(LearnerInput input, ParameterValues values, long seed) {
-        return IndependenceTests.forInput(input, values, seed);
     }
 }

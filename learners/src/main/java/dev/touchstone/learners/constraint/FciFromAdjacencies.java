@@ -16,10 +16,10 @@ import dev.touchstone.core.param.ParameterSpec;
 import dev.touchstone.core.param.ParameterValues;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.independence.IndependenceTests;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -85,7 +85,7 @@ public final class FciFromAdjacencies {
             throw new LearnerException("the score search returned a graph with no DAG extension: " + cpdag);
         }
         KnowledgeIndex ki = KnowledgeIndex.of(knowledge, names);
-        IndependenceTest test = ConstraintParameters.test(input, values,
+        IndependenceTest test = IndependenceTests.forInput(input, values,
                 Seeds.derive(context.seed(), "independence-test"));
         int maxDepth = values.get(ConstraintParameters.MAX_DEPTH);
         SubsetSearch search = new SubsetSearch(test);
@@ -140,8 +140,8 @@ public final class FciFromAdjacencies {
                     if (y < x || !s.adjacent(x, y) || ki.isRequiredEitherWay(x, y)) {
                         continue;
                     }
-                    int[] fromX = without(s.neighbours(x), y);
-                    int[] fromY = without(s.neighbours(y), x);
+                    int[] fromX = AdjacencySearch.without(s.neighbours(x), y);
+                    int[] fromY = AdjacencySearch.without(s.neighbours(y), x);
                     if (fromX.length < level && fromY.length < level) {
                         continue;
                     }
@@ -161,17 +161,6 @@ public final class FciFromAdjacencies {
             }
         }
         return removed;
-    }
-
-    private static int[] without(int[] a, int v) {
-        int[] out = new int[a.length];
-        int k = 0;
-        for (int w : a) {
-            if (w != v) {
-                out[k++] = w;
-            }
-        }
-        return Arrays.copyOf(out, k);
     }
 
     /** The collider answers of steps (2) and (4); see the class comment. */
@@ -236,8 +225,8 @@ public final class FciFromAdjacencies {
         }
 
         private int[] searchNeighbours(int x, int y) {
-            int[] fromX = without(skeleton.neighbours(x), y);
-            int[] fromY = without(skeleton.neighbours(y), x);
+            int[] fromX = AdjacencySearch.without(skeleton.neighbours(x), y);
+            int[] fromY = AdjacencySearch.without(skeleton.neighbours(y), x);
             int top = Math.min(maxDepth, Math.max(fromX.length, fromY.length));
             for (int level = 0; level <= top; level++) {
                 int[] sep = search.find(x, y, fromX, fromX.length, level);

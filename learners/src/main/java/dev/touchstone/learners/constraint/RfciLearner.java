@@ -3,7 +3,6 @@ package dev.touchstone.learners.constraint;
 import dev.touchstone.core.graph.GraphClass;
 import dev.touchstone.core.graph.MutableGraph;
 import dev.touchstone.core.graph.algorithms.PagRules;
-import dev.touchstone.core.knowledge.Knowledge;
 import dev.touchstone.core.learner.DeclaredLearner;
 import dev.touchstone.core.learner.Estimate;
 import dev.touchstone.core.learner.LearnerDescription;

@@ -3,6 +3,7 @@ package dev.touchstone.learners.constraint;
 import dev.touchstone.core.learner.LearnerRun;
 import dev.touchstone.core.random.Seeds;
 import dev.touchstone.learners.independence.IndependenceTest;
+import dev.touchstone.learners.independence.IndependenceTests;
 import dev.touchstone.learners.knowledge.KnowledgeIndex;
 
 import java.util.List;
@@ -16,7 +17,7 @@ record SearchInputs(List<String> names, KnowledgeIndex knowledge, IndependenceTe
 
     /** Reads the shared parameters of a run whose input the learner accepts. */
     static SearchInputs read(LearnerRun run) {
-        return of(run, ConstraintParameters.test(run.input(), run.parameters(),
+        return of(run, IndependenceTests.forInput(run.input(), run.parameters(),
                 Seeds.derive(run.context().seed(), "independence-test")));
     }
 

@@ -20,7 +20,6 @@ import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
 
 import java.util.Arrays;
-import java.util.List;
 
 /**
  * DirectLiNGAM (Shimizu et al. 2011, "DirectLiNGAM: a direct method for learning a linear
