@@ -53,6 +53,15 @@ public final class Knowledge {
         return new Builder();
     }
 
+    /** A builder holding this knowledge (its required and forbidden edges, then its tiers), to add to. */
+    public Builder toBuilder() {
+        Builder b = new Builder();
+        required().forEach(r -> b.require(r.from(), r.to()));
+        forbidden().forEach(f -> b.forbid(f.from(), f.to()));
+        tiers().forEach(b::tier);
+        return b;
+    }
+
     public boolean isEmpty() {
         return required.isEmpty() && forbidden.isEmpty() && tiers.isEmpty();
     }

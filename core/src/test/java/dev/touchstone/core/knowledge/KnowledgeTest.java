@@ -42,6 +42,20 @@ class KnowledgeTest {
     }
 
     @Test
+    void toBuilderKeepsEveryPartAndAddsToIt() {
+        Knowledge k = Knowledge.builder().tier(List.of("age", "sex")).tier(List.of("diet"))
+                .forbid("diet", "sex").require("age", "diet").build();
+        Knowledge copy = k.toBuilder().build();
+        assertEquals(k.required(), copy.required());
+        assertEquals(k.forbidden(), copy.forbidden());
+        assertEquals(k.tiers(), copy.tiers());
+        Knowledge more = k.toBuilder().forbid("age", "weight").build();
+        assertTrue(more.isForbidden("age", "weight"));
+        assertTrue(more.isRequired("age", "diet"));
+        assertFalse(k.isForbidden("age", "weight"), "the original is unchanged");
+    }
+
+    @Test
     void bothDirectionsForbiddenForbidsTheAdjacency() {
         Knowledge k = Knowledge.builder().forbid("a", "b").forbid("b", "a").build();
         assertTrue(k.isAdjacencyForbidden("a", "b"));

@@ -79,10 +79,7 @@ public enum Handoff implements Worded {
         if (this == START_GRAPH) {
             return base;
         }
-        Knowledge.Builder b = Knowledge.builder();
-        base.required().forEach(r -> b.require(r.from(), r.to()));
-        base.forbidden().forEach(f -> b.forbid(f.from(), f.to()));
-        base.tiers().forEach(b::tier);
+        Knowledge.Builder b = base.toBuilder();
         if (this == ALLOWED_EDGES) {
             for (int x = 0; x < previous.size(); x++) {
                 for (int y = x + 1; y < previous.size(); y++) {

@@ -110,7 +110,7 @@ public final class MmhcLearner extends DeclaredLearner {
             context.countTests(mmpc.tests());
         }
         boolean both = run.get(SKELETON_RULE) == SkeletonRule.AND;
-        Knowledge.Builder restricted = copy(knowledge);
+        Knowledge.Builder restricted = knowledge.toBuilder();
         int edges = 0;
         int oneSided = 0;
         for (int x = 0; x < names.size(); x++) {
@@ -140,19 +140,5 @@ public final class MmhcLearner extends DeclaredLearner {
     /** The candidate parents and children of every variable (before the symmetry correction), for tests. */
     static List<int[]> candidateSets(IndependenceTest test, int maxDepth, RunContext context) {
         return new Mmpc(test, maxDepth, context).all();
-    }
-
-    private static Knowledge.Builder copy(Knowledge k) {
-        Knowledge.Builder b = Knowledge.builder();
-        for (Knowledge.DirectedPair r : k.required()) {
-            b.require(r.from(), r.to());
-        }
-        for (Knowledge.DirectedPair f : k.forbidden()) {
-            b.forbid(f.from(), f.to());
-        }
-        for (List<String> tier : k.tiers()) {
-            b.tier(tier);
-        }
-        return b;
     }
 }
